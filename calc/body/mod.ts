@@ -1,0 +1,8 @@
+/**
+ * Body size: body surface area by five published formulas and indexing to BSA.
+ *
+ * @module
+ */
+export * from "./bsa.ts";
+export * from "./indexing.ts";
+export * from "./uncertainty.ts";

@@ -1,0 +1,352 @@
+/**
+ * Traced endocardial contours: validation and the geometry the method of discs needs (long axis,
+ * disc diameters, enclosed area).
+ *
+ * Convention (documented once, used by every contour-based chamber measurement):
+ * - A contour is an open point list in cm, traced from one annulus hinge point, around the cavity,
+ *   to the other hinge point. The first and last points are the two hinge points; the straight line
+ *   between them (the annulus plane) closes the cavity.
+ * - The long axis runs from the midpoint of the annulus (the midpoint of the first and last points)
+ *   to the apex, taken as the contour point farthest from that midpoint (for the left atrium this
+ *   is the atrial roof).
+ * - Discs are slabs of equal height h = L/N perpendicular to the long axis. Each disc diameter is
+ *   measured at the middle of its slab (axial position (i − ½)·h from the annulus midpoint) as the
+ *   length of the perpendicular line that lies inside the closed contour (the sum of the inside
+ *   chords when the line crosses the contour more than twice). Cavity behind the perpendicular
+ *   through the annulus midpoint is not counted.
+ *
+ * @module
+ */
+
+/** One traced point in cm: an `[x, y]` pair or an `{ x, y }` object. */
+export type ContourPoint = readonly [number, number] | { readonly x: number; readonly y: number };
+
+/** A traced contour: points in cm from one annulus hinge point, around the cavity, to the other. */
+export type Contour = readonly ContourPoint[];
+
+/** A validated contour in cm as two coordinate arrays. */
+export interface ContourCoordinates {
+  /** x coordinates in cm. */
+  readonly x: Float64Array;
+  /** y coordinates in cm. */
+  readonly y: Float64Array;
+}
+
+/** The long axis of a validated contour. */
+export interface LongAxis {
+  /** Midpoint of the annulus (first and last contour points), cm. */
+  readonly annulusMidpoint: readonly [number, number];
+  /** The apex: the contour point farthest from the annulus midpoint, cm. */
+  readonly apex: readonly [number, number];
+  /** Index of the apex point in the contour. */
+  readonly apexIndex: number;
+  /** Long-axis length from the annulus midpoint to the apex, cm. */
+  readonly lengthCm: number;
+  /** Width of the annulus (distance between the hinge points), cm. */
+  readonly annulusWidthCm: number;
+}
+
+/** Largest number of points accepted in one contour. */
+const MAX_POINTS = 20000;
+
+function pointText(x: number, y: number): string {
+  return `(${x}, ${y})`;
+}
+
+/**
+ * Validates a traced contour and returns its coordinates.
+ *
+ * Checks: an array of at least 3 and at most 20000 points, each an `[x, y]` pair or `{ x, y }`
+ * object of finite numbers in cm, no point repeating its predecessor, distinct hinge points, and
+ * no self-intersection of the closed outline (the contour plus the annulus segment from the last
+ * point back to the first), including touching and overlapping segments.
+ *
+ * @param contour The traced points in cm.
+ * @param where Prefix for error messages, e.g. "Biplane method of discs".
+ * @param view Name of the view for error messages, e.g. "apical four-chamber".
+ * @returns The coordinates as typed arrays.
+ * @throws {TypeError} When the contour is not an array or a point is not a pair of numbers.
+ * @throws {RangeError} For fewer than 3 points, a non-finite coordinate, a repeated point, equal
+ * hinge points, or a self-intersecting outline; the message names the view and point index
+ * (0-based).
+ *
+ * @example A triangle is the smallest valid contour
+ * ```ts
+ * import { validateContour } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const c = validateContour([[0, 0], [0.5, 3], [1, 0]], "Demo", "apical four-chamber");
+ * assert.equal(c.x.length, 3);
+ * assert.throws(() => validateContour([[0, 0], [1, 0]], "Demo", "apical four-chamber"), RangeError);
+ * ```
+ */
+export function validateContour(contour: unknown, where: string, view: string): ContourCoordinates {
+  if (!Array.isArray(contour)) {
+    throw new TypeError(
+      `${where}: expected the ${view} contour as an array of [x, y] points in cm, got ${
+        contour === null ? "null" : typeof contour
+      }`,
+    );
+  }
+  const n = contour.length;
+  if (!(n >= 3)) {
+    throw new RangeError(
+      `${where}: expected at least 3 points in the ${view} contour, got ${n}`,
+    );
+  }
+  if (!(n <= MAX_POINTS)) {
+    throw new RangeError(
+      `${where}: expected at most ${MAX_POINTS} points in the ${view} contour, got ${n}`,
+    );
+  }
+  const x = new Float64Array(n);
+  const y = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    const p: unknown = contour[i];
+    let px: unknown;
+    let py: unknown;
+    if (Array.isArray(p) && p.length === 2) {
+      px = p[0];
+      py = p[1];
+    } else if (typeof p === "object" && p !== null && !Array.isArray(p) && "x" in p && "y" in p) {
+      px = (p as { x: unknown }).x;
+      py = (p as { y: unknown }).y;
+    } else {
+      throw new TypeError(
+        `${where}: expected point ${i} of the ${view} contour as [x, y] or { x, y } in cm, got ${
+          JSON.stringify(p) ?? String(p)
+        }`,
+      );
+    }
+    if (typeof px !== "number" || typeof py !== "number") {
+      throw new TypeError(
+        `${where}: expected point ${i} of the ${view} contour to hold numbers in cm, got ${
+          JSON.stringify(p)
+        }`,
+      );
+    }
+    if (!Number.isFinite(px) || !Number.isFinite(py)) {
+      throw new RangeError(
+        `${where}: expected finite coordinates at point ${i} of the ${view} contour, got ${
+          pointText(px, py)
+        }`,
+      );
+    }
+    x[i] = px;
+    y[i] = py;
+    if (i > 0 && px === x[i - 1] && py === y[i - 1]) {
+      throw new RangeError(
+        `${where}: expected point ${i} of the ${view} contour to differ from point ${
+          i - 1
+        }, got the repeated point ${pointText(px, py)}`,
+      );
+    }
+  }
+  if (x[0] === x[n - 1] && y[0] === y[n - 1]) {
+    throw new RangeError(
+      `${where}: expected distinct annulus hinge points (first and last points) in the ${view} contour, got ${
+        pointText(x[0]!, y[0]!)
+      } twice`,
+    );
+  }
+  const crossing = firstSelfIntersection(x, y);
+  if (crossing) {
+    const [i, j] = crossing;
+    const segment = (k: number): string => `${k}–${(k + 1) % n}`;
+    throw new RangeError(
+      `${where}: expected the ${view} contour not to cross itself (the outline is closed by the annulus segment ${
+        n - 1
+      }–0), got segment ${segment(i)} crossing segment ${segment(j)} near point ${i} at ${
+        pointText(x[i]!, y[i]!)
+      }`,
+    );
+  }
+  return { x, y };
+}
+
+/** Orientation of the triangle (a, b, c): positive counter-clockwise, negative clockwise. */
+function orient(ax: number, ay: number, bx: number, by: number, cx: number, cy: number): number {
+  return (bx - ax) * (cy - ay) - (by - ay) * (cx - ax);
+}
+
+/** True when c lies in the bounding box of segment ab (used for collinear cases). */
+function onBox(ax: number, ay: number, bx: number, by: number, cx: number, cy: number): boolean {
+  return Math.min(ax, bx) <= cx && cx <= Math.max(ax, bx) && Math.min(ay, by) <= cy &&
+    cy <= Math.max(ay, by);
+}
+
+/** True when closed segments ab and cd share at least one point. */
+function segmentsIntersect(
+  ax: number,
+  ay: number,
+  bx: number,
+  by: number,
+  cx: number,
+  cy: number,
+  dx: number,
+  dy: number,
+): boolean {
+  const d1 = orient(cx, cy, dx, dy, ax, ay);
+  const d2 = orient(cx, cy, dx, dy, bx, by);
+  const d3 = orient(ax, ay, bx, by, cx, cy);
+  const d4 = orient(ax, ay, bx, by, dx, dy);
+  if (((d1 > 0 && d2 < 0) || (d1 < 0 && d2 > 0)) && ((d3 > 0 && d4 < 0) || (d3 < 0 && d4 > 0))) {
+    return true;
+  }
+  if (d1 === 0 && onBox(cx, cy, dx, dy, ax, ay)) return true;
+  if (d2 === 0 && onBox(cx, cy, dx, dy, bx, by)) return true;
+  if (d3 === 0 && onBox(ax, ay, bx, by, cx, cy)) return true;
+  if (d4 === 0 && onBox(ax, ay, bx, by, dx, dy)) return true;
+  return false;
+}
+
+/**
+ * The first pair of segments (i < j) of the closed outline that intersect, or null. Segment k runs
+ * from point k to point (k + 1) mod n; segment n − 1 is the annulus segment. Adjacent segments may
+ * share their common vertex but must not fold back onto each other.
+ */
+function firstSelfIntersection(x: Float64Array, y: Float64Array): [number, number] | null {
+  const n = x.length;
+  // Adjacent segments k and k+1 (mod n) overlap only when collinear and folding back.
+  for (let k = 0; k < n; k++) {
+    const a = k, b = (k + 1) % n, c = (k + 2) % n;
+    const ax = x[a]!, ay = y[a]!, bx = x[b]!, by = y[b]!, cx = x[c]!, cy = y[c]!;
+    if (orient(ax, ay, bx, by, cx, cy) === 0 && (ax - bx) * (cx - bx) + (ay - by) * (cy - by) > 0) {
+      return k < (k + 1) % n ? [k, (k + 1) % n] : [(k + 1) % n, k];
+    }
+  }
+  if (n === 3) return null;
+  for (let i = 0; i < n; i++) {
+    const ax = x[i]!, ay = y[i]!, bx = x[(i + 1) % n]!, by = y[(i + 1) % n]!;
+    const minX = Math.min(ax, bx), maxX = Math.max(ax, bx);
+    const minY = Math.min(ay, by), maxY = Math.max(ay, by);
+    for (let j = i + 2; j < n; j++) {
+      if (i === 0 && j === n - 1) continue; // adjacent through point 0
+      const cx = x[j]!, cy = y[j]!, dx = x[(j + 1) % n]!, dy = y[(j + 1) % n]!;
+      if (Math.max(cx, dx) < minX || Math.min(cx, dx) > maxX) continue;
+      if (Math.max(cy, dy) < minY || Math.min(cy, dy) > maxY) continue;
+      if (segmentsIntersect(ax, ay, bx, by, cx, cy, dx, dy)) return [i, j];
+    }
+  }
+  return null;
+}
+
+/**
+ * The long axis of a validated contour: from the annulus midpoint (midpoint of the first and last
+ * points) to the apex (the contour point farthest from that midpoint; the first such point when
+ * several are equally far).
+ *
+ * @param c Validated coordinates from {@linkcode validateContour}.
+ * @returns Annulus midpoint, apex, apex index, long-axis length (cm) and annulus width (cm).
+ *
+ * @example Half of an ellipse standing on its minor axis
+ * ```ts
+ * import { contourLongAxis, validateContour } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const c = validateContour([[-2, 0], [-1, 6], [0, 8], [1, 6], [2, 0]], "Demo", "apical");
+ * assert.equal(contourLongAxis(c).lengthCm, 8);
+ * ```
+ */
+export function contourLongAxis(c: ContourCoordinates): LongAxis {
+  const n = c.x.length;
+  const x0 = c.x[0]!, y0 = c.y[0]!, x1 = c.x[n - 1]!, y1 = c.y[n - 1]!;
+  const mx = (x0 + x1) / 2, my = (y0 + y1) / 2;
+  let best = -1, bestIndex = 0;
+  for (let i = 0; i < n; i++) {
+    const d = Math.hypot(c.x[i]! - mx, c.y[i]! - my);
+    if (d > best) {
+      best = d;
+      bestIndex = i;
+    }
+  }
+  return {
+    annulusMidpoint: [mx, my],
+    apex: [c.x[bestIndex]!, c.y[bestIndex]!],
+    apexIndex: bestIndex,
+    lengthCm: best,
+    annulusWidthCm: Math.hypot(x1 - x0, y1 - y0),
+  };
+}
+
+/**
+ * Area enclosed by the contour closed by the annulus segment (shoelace formula), cm².
+ *
+ * Formula: A = ½·|Σ (xᵢ·yᵢ₊₁ − xᵢ₊₁·yᵢ)| over the closed outline.
+ *
+ * @param c Validated coordinates from {@linkcode validateContour}.
+ * @returns The enclosed area in cm².
+ *
+ * @example A right triangle with legs 3 and 4 cm
+ * ```ts
+ * import { contourArea, validateContour } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(contourArea(validateContour([[0, 0], [0, 4], [3, 0]], "Demo", "apical")), 6);
+ * ```
+ */
+export function contourArea(c: ContourCoordinates): number {
+  const n = c.x.length;
+  let twice = 0;
+  for (let i = 0; i < n; i++) {
+    const j = (i + 1) % n;
+    twice += c.x[i]! * c.y[j]! - c.x[j]! * c.y[i]!;
+  }
+  return Math.abs(twice) / 2;
+}
+
+/**
+ * Disc diameters of a validated contour: the cavity width perpendicular to the long axis at the
+ * middle of each of `discCount` slabs of equal height (see the module convention).
+ *
+ * @param c Validated coordinates from {@linkcode validateContour}.
+ * @param axis The long axis from {@linkcode contourLongAxis}.
+ * @param discCount Number of discs (20 in the guideline method).
+ * @returns Diameters in cm, from the annulus towards the apex.
+ *
+ * @example A 2 cm wide chamber with a pointed apex: discs in the straight part are 2 cm wide
+ * ```ts
+ * import { contourLongAxis, discDiameters, validateContour } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const c = validateContour([[-1, 0], [-1, 4], [0, 6], [1, 4], [1, 0]], "Demo", "apical");
+ * const d = discDiameters(c, contourLongAxis(c), 20);
+ * assert.ok(Math.abs(d[5]! - 2) < 1e-12); // disc 5 sits 1.65 cm above the annulus
+ * ```
+ */
+export function discDiameters(
+  c: ContourCoordinates,
+  axis: LongAxis,
+  discCount: number,
+): Float64Array {
+  const n = c.x.length;
+  const [mx, my] = axis.annulusMidpoint;
+  const L = axis.lengthCm;
+  const ux = (axis.apex[0] - mx) / L, uy = (axis.apex[1] - my) / L; // along the long axis
+  const vx = -uy, vy = ux; // perpendicular
+  // Axial (s) and transverse (q) coordinates of every point.
+  const s = new Float64Array(n);
+  const q = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    const dx = c.x[i]! - mx, dy = c.y[i]! - my;
+    s[i] = dx * ux + dy * uy;
+    q[i] = dx * vx + dy * vy;
+  }
+  const h = L / discCount;
+  const out = new Float64Array(discCount);
+  const crossings: number[] = [];
+  for (let k = 0; k < discCount; k++) {
+    const t = (k + 0.5) * h;
+    crossings.length = 0;
+    for (let i = 0; i < n; i++) {
+      const j = (i + 1) % n;
+      const si = s[i]! - t, sj = s[j]! - t;
+      // Half-open rule (a vertex on the line counts as above it): crossings come in pairs.
+      if ((si > 0) !== (sj > 0)) {
+        const f = si / (si - sj);
+        crossings.push(q[i]! + f * (q[j]! - q[i]!));
+      }
+    }
+    crossings.sort((a, b) => a - b);
+    let width = 0;
+    for (let m = 0; m + 1 < crossings.length; m += 2) width += crossings[m + 1]! - crossings[m]!;
+    out[k] = width;
+  }
+  return out;
+}

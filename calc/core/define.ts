@@ -1,0 +1,243 @@
+/**
+ * The one way a calculation is defined, and its validated evaluation.
+ *
+ * @module
+ */
+import * as z from "zod";
+import type {
+  Calculation,
+  CalculationSpec,
+  InputValues,
+  OutputValues,
+  ValueRange,
+} from "./types.ts";
+import { describe, isMathUnit, type QuantityInput, toCanonical } from "./units.ts";
+import { displayEvaluation, JUPYTER_DISPLAY, type MimeBundle } from "./display.ts";
+
+/** The caution shown with every result that could reach a patient decision. */
+export const CLINICAL_CAUTION =
+  "Not a diagnosis: verify against local guidelines and licensed clinical practice before acting on this number";
+
+/**
+ * Declares a calculation once. Everything else (evaluation, validation, uncertainty propagation,
+ * sensitivity curves, reference docs) derives from the returned object.
+ *
+ * @param spec Inputs with canonical units and ranges, outputs, formula, sources and cautions.
+ * @returns The frozen calculation.
+ * @throws {TypeError} When the spec is malformed (no inputs, no outputs, empty range, missing
+ * source).
+ *
+ * @example Simplified Bernoulli pressure gradient
+ * ```ts
+ * import { defineCalculation, evaluate } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ *
+ * const gradient = defineCalculation({
+ *   id: "demoGradient",
+ *   title: "Demo gradient",
+ *   description: "Peak gradient from a peak velocity.",
+ *   inputs: { velocity: { unit: "m/s", description: "Peak velocity", range: { min: 0, max: 10 } } },
+ *   outputs: { gradient: { unit: "mmHg", description: "Peak gradient" } },
+ *   formula: ({ velocity }) => ({ gradient: 4 * velocity ** 2 }),
+ *   formulaText: "ΔP = 4·v²",
+ *   sources: [{ authors: "Hatle L, Angelsen B", year: 1985, title: "Doppler Ultrasound in Cardiology",
+ *     publication: "Lea & Febiger" }],
+ *   cautions: [],
+ * });
+ * assert.equal(evaluate(gradient, { velocity: "400 cm/s" }).outputs.gradient, 64);
+ * ```
+ */
+export function defineCalculation<I extends string, O extends string>(
+  spec: CalculationSpec<I, O>,
+): Calculation<I, O> {
+  const inputNames = Object.keys(spec.inputs) as I[];
+  const outputNames = Object.keys(spec.outputs) as O[];
+  if (inputNames.length === 0) throw new TypeError(`${spec.title}: expected at least one input, got none`);
+  if (outputNames.length === 0) throw new TypeError(`${spec.title}: expected at least one output, got none`);
+  if (spec.sources.length === 0) {
+    throw new TypeError(`${spec.title}: expected at least one published source, got none`);
+  }
+  for (const name of inputNames) {
+    const { range, typical } = spec.inputs[name];
+    for (const r of typical ? [range, typical] : [range]) {
+      if (!(r.min <= r.max)) {
+        throw new TypeError(`${spec.title}: input '${name}' has an empty range ${formatRange(r, "")}`);
+      }
+    }
+  }
+  return Object.freeze({ ...spec, inputNames, outputNames, kind: "sonorigor.calculation" as const });
+}
+
+/** True when `value` is a calculation made by {@linkcode defineCalculation}. */
+export function isCalculation(value: unknown): value is Calculation {
+  return typeof value === "object" && value !== null &&
+    (value as { kind?: unknown }).kind === "sonorigor.calculation";
+}
+
+/** Formats a range in interval notation with its unit, e.g. "(0, 5] cm". */
+export function formatRange(range: ValueRange, unit: string): string {
+  const open = range.minExclusive ? "(" : "[";
+  const close = range.maxExclusive ? ")" : "]";
+  const u = unit === "1" || unit === "" ? "" : ` ${unit}`;
+  return `${open}${range.min}, ${range.max}${close}${u}`;
+}
+
+/** True when `value` lies in `range` (false for NaN). */
+export function inRange(value: number, range: ValueRange): boolean {
+  const aboveMin = range.minExclusive ? value > range.min : value >= range.min;
+  const belowMax = range.maxExclusive ? value < range.max : value <= range.max;
+  return aboveMin && belowMax;
+}
+
+/** Inputs as a caller may give them: numbers in the canonical unit or quantity strings. */
+export type InputArguments<I extends string> = { readonly [K in I]?: QuantityInput };
+
+const quantitySchema = z.custom<QuantityInput>(
+  (v) => typeof v === "number" || typeof v === "string" || isMathUnit(v),
+);
+
+/** Builds the zod schema of a calculation's argument object (shape only; ranges are checked
+ * afterwards so that messages carry the valid range). */
+function argumentSchema(calc: Calculation): z.ZodType {
+  const shape: Record<string, z.ZodType> = {};
+  for (const name of calc.inputNames) {
+    const base = quantitySchema;
+    shape[name] = calc.inputs[name]!.default === undefined ? base : base.optional();
+  }
+  return z.strictObject(shape);
+}
+
+const schemas = new WeakMap<Calculation, z.ZodType>();
+
+/**
+ * Validates and converts a calculation's inputs to canonical numbers.
+ *
+ * @param calc The calculation.
+ * @param args Input values: numbers in canonical units or quantity strings.
+ * @returns Canonical input values and flags for values outside the typical range.
+ * @throws {TypeError} For an unknown or missing input, or a value of the wrong type or unit.
+ * @throws {RangeError} For a value outside the input's valid range (NaN and infinities included).
+ */
+export function validateInputs<I extends string>(
+  calc: Calculation<I, string>,
+  args: InputArguments<I>,
+): { values: InputValues<I>; flags: string[] } {
+  if (typeof args !== "object" || args === null) {
+    throw new TypeError(`${calc.title}: expected an object of inputs, got ${describe(args)}`);
+  }
+  let schema = schemas.get(calc as Calculation);
+  if (!schema) {
+    schema = argumentSchema(calc as Calculation);
+    schemas.set(calc as Calculation, schema);
+  }
+  const parsed = schema.safeParse(args);
+  if (!parsed.success) {
+    const issue = parsed.error.issues[0]!;
+    if (issue.code === "unrecognized_keys") {
+      throw new TypeError(
+        `${calc.title}: unknown input '${issue.keys.join("', '")}'; expected one of ${
+          calc.inputNames.join(", ")
+        }`,
+      );
+    }
+    const field = String(issue.path[0] ?? "");
+    const value = (args as Record<string, unknown>)[field];
+    if (value === undefined) {
+      const def = calc.inputs[field as I];
+      throw new TypeError(
+        `${calc.title}: missing input '${field}' (${def?.description ?? ""}, ${def?.unit ?? ""})`,
+      );
+    }
+    throw new TypeError(
+      `${calc.title}: expected '${field}' as a number or a quantity string, got ${describe(value)}`,
+    );
+  }
+  const values = {} as Record<I, number>;
+  const flags: string[] = [];
+  for (const name of calc.inputNames) {
+    const def = calc.inputs[name];
+    const raw = args[name];
+    const value = raw === undefined ? def.default! : toCanonical(raw, def.unit, `${calc.title}: '${name}'`);
+    if (!inRange(value, def.range)) {
+      throw new RangeError(
+        `${calc.title}: expected '${name}' in ${formatRange(def.range, def.unit)}, got ${value}`,
+      );
+    }
+    if (def.typical && !inRange(value, def.typical)) {
+      flags.push(
+        `'${name}' = ${value} ${def.unit} lies outside the validated range ${
+          formatRange(def.typical, def.unit)
+        }: interpret with care`,
+      );
+    }
+    values[name] = value;
+  }
+  return { values, flags };
+}
+
+/**
+ * Checks formula outputs: every output must be a finite number.
+ *
+ * @throws {RangeError} Naming the output and the inputs that produced a non-finite value.
+ */
+export function checkOutputs<I extends string, O extends string>(
+  calc: Calculation<I, O>,
+  inputs: InputValues<I>,
+  outputs: OutputValues<O>,
+): OutputValues<O> {
+  for (const name of calc.outputNames) {
+    const v = outputs[name];
+    if (typeof v !== "number" || !Number.isFinite(v)) {
+      const shown = calc.inputNames.map((n) => `${n} = ${inputs[n]}`).join(", ");
+      throw new RangeError(`${calc.title}: output '${name}' is not finite for ${shown}, got ${v}`);
+    }
+  }
+  return outputs;
+}
+
+/** The validated result of one evaluation; it displays itself in notebooks. */
+export interface Evaluation<I extends string = string, O extends string = string> {
+  /** The calculation that produced it. */
+  readonly calculation: Calculation<I, O>;
+  /** Inputs in canonical units. */
+  readonly inputs: InputValues<I>;
+  /** Outputs in their units. */
+  readonly outputs: OutputValues<O>;
+  /** Inputs outside their validated range. */
+  readonly flags: readonly string[];
+  /** Cautions of the calculation, with the clinical caution where it applies. */
+  readonly cautions: readonly string[];
+  /** Notebook display: a table of inputs and outputs. */
+  [JUPYTER_DISPLAY](): MimeBundle;
+}
+
+/** The cautions to show with a result of `calc`. */
+export function cautionsOf(calc: Calculation): string[] {
+  return calc.clinical ? [...calc.cautions, CLINICAL_CAUTION] : [...calc.cautions];
+}
+
+/**
+ * Evaluates a calculation on validated inputs.
+ *
+ * @param calc The calculation.
+ * @param args Inputs as numbers in canonical units or quantity strings ("21 mm").
+ * @returns Outputs with flags and cautions.
+ * @throws {TypeError} For unknown, missing or mistyped inputs or wrong units.
+ * @throws {RangeError} For inputs outside their valid range or a non-finite output.
+ */
+export function evaluate<I extends string, O extends string>(
+  calc: Calculation<I, O>,
+  args: InputArguments<I>,
+): Evaluation<I, O> {
+  const { values, flags } = validateInputs(calc, args);
+  const outputs = checkOutputs(calc, values, calc.formula(values));
+  const result: Evaluation<I, O> = {
+    calculation: calc,
+    inputs: values,
+    outputs,
+    flags,
+    cautions: cautionsOf(calc),
+    [JUPYTER_DISPLAY]: () => displayEvaluation(result),
+  };
+  return result;
+}

@@ -1,0 +1,69 @@
+/**
+ * Notebook display helpers: MIME bundles with an HTML table and a text/plain fallback. Plain
+ * strings only; no DOM and no rendering library.
+ *
+ * @module
+ */
+import type { Evaluation } from "./define.ts";
+
+/** A Jupyter MIME bundle: MIME type → content. */
+export type MimeBundle = Record<string, unknown>;
+
+/** The symbol the Deno Jupyter kernel calls to display a value. */
+export const JUPYTER_DISPLAY: unique symbol = Symbol.for("Jupyter.display");
+
+/** Escapes text for HTML. */
+export function escapeHtml(text: string): string {
+  return text.replace(/[&<>"']/g, (c) =>
+    c === "&" ? "&amp;" : c === "<" ? "&lt;" : c === ">" ? "&gt;" : c === '"' ? "&quot;" : "&#39;");
+}
+
+/** An HTML table from a header row and body rows (cells are escaped). */
+export function htmlTable(header: readonly string[], rows: readonly (readonly string[])[]): string {
+  const th = header.map((h) => `<th style="text-align:left;padding:2px 8px">${escapeHtml(h)}</th>`).join("");
+  const body = rows.map((r) =>
+    `<tr>${r.map((c) => `<td style="padding:2px 8px">${escapeHtml(c)}</td>`).join("")}</tr>`
+  ).join("");
+  return `<table style="border-collapse:collapse"><thead><tr>${th}</tr></thead><tbody>${body}</tbody></table>`;
+}
+
+/** A plain-text table with padded columns. */
+export function textTable(header: readonly string[], rows: readonly (readonly string[])[]): string {
+  const widths = header.map((h, i) => Math.max(h.length, ...rows.map((r) => (r[i] ?? "").length)));
+  const line = (r: readonly string[]) => r.map((c, i) => c.padEnd(widths[i]!)).join("  ").trimEnd();
+  return [line(header), widths.map((w) => "-".repeat(w)).join("  "), ...rows.map(line)].join("\n");
+}
+
+/** A list of notes (flags, cautions) as HTML. */
+export function htmlNotes(title: string, notes: readonly string[]): string {
+  if (notes.length === 0) return "";
+  return `<p style="margin:4px 0"><b>${escapeHtml(title)}</b></p><ul style="margin:0">${
+    notes.map((n) => `<li>${escapeHtml(n)}</li>`).join("")
+  }</ul>`;
+}
+
+/** Formats a number for display with up to `digits` significant digits. */
+export function formatNumber(value: number, digits = 4): string {
+  if (!Number.isFinite(value)) return String(value);
+  if (value === 0) return "0";
+  const abs = Math.abs(value);
+  if (abs >= 1e6 || abs < 1e-4) return value.toExponential(digits - 1);
+  return String(Number(value.toPrecision(digits)));
+}
+
+/** The MIME bundle of an evaluation. */
+export function displayEvaluation(result: Evaluation): MimeBundle {
+  const calc = result.calculation;
+  const rows = [
+    ...calc.inputNames.map((n) => ["input", n, formatNumber(result.inputs[n]!, 6), calc.inputs[n]!.unit]),
+    ...calc.outputNames.map((n) => ["output", n, formatNumber(result.outputs[n]!, 6), calc.outputs[n]!.unit]),
+  ];
+  const header = ["", "name", "value", "unit"];
+  const notes = [...result.flags.map((f) => `Flag: ${f}`), ...result.cautions.map((c) => `Caution: ${c}`)];
+  return {
+    "text/plain": [calc.title, textTable(header, rows), ...notes].join("\n"),
+    "text/html": `<div><b>${escapeHtml(calc.title)}</b>${htmlTable(header, rows)}${
+      htmlNotes("Flags", result.flags)
+    }${htmlNotes("Cautions", result.cautions)}</div>`,
+  };
+}

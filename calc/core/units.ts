@@ -1,0 +1,103 @@
+/**
+ * Unit-aware input: a number in the canonical unit, or a quantity string ("21 mm") or mathjs
+ * Unit converted to it. Dimension mismatches are errors.
+ *
+ * @module
+ */
+import { create, all, type MathJsInstance, type Unit } from "mathjs";
+
+/** The project's one mathjs instance (units, expressions, symbolic derivatives). */
+export const math: MathJsInstance = create(all!, {});
+
+const knownUnits = new Map<string, Unit | null>();
+
+/** The mathjs Unit for a canonical unit string, or null when mathjs does not know it (then only
+ * plain numbers or the exact label are accepted). */
+export function mathUnitOf(unit: string): Unit | null {
+  if (knownUnits.has(unit)) return knownUnits.get(unit) ?? null;
+  let parsed: Unit | null = null;
+  if (unit !== "1" && unit !== "") {
+    try {
+      parsed = math.unit(1, unit) as Unit;
+    } catch {
+      parsed = null;
+    }
+  }
+  knownUnits.set(unit, parsed);
+  return parsed;
+}
+
+/** A value as callers may give it: a number in the canonical unit, a quantity string such as
+ * "21 mm", or a mathjs Unit. */
+export type QuantityInput = number | string | Unit;
+
+/** True for a mathjs Unit object. */
+export function isMathUnit(value: unknown): value is Unit {
+  return typeof value === "object" && value !== null &&
+    (value as { type?: unknown }).type === "Unit" &&
+    typeof (value as { toNumber?: unknown }).toNumber === "function";
+}
+
+/**
+ * Converts a quantity to a number in `unit`.
+ *
+ * @param value A number (already in `unit`), a quantity string, or a mathjs Unit.
+ * @param unit The canonical unit.
+ * @param where Prefix for error messages, e.g. "Continuity valve area: lvotDiameterCm".
+ * @returns The value in `unit`.
+ * @throws {TypeError} When the value is neither a number, a string nor a Unit, or its dimension
+ * differs from `unit`.
+ */
+export function toCanonical(value: QuantityInput, unit: string, where: string): number {
+  if (typeof value === "number") return value;
+  const target = mathUnitOf(unit);
+  if (typeof value === "string") {
+    const text = value.trim();
+    if (/^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/.test(text)) return Number(text);
+    if (target === null) {
+      const label = unit === "1" ? "" : unit;
+      if (label !== "" && text.endsWith(label)) {
+        const head = text.slice(0, text.length - label.length).trim();
+        if (/^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/.test(head)) return Number(head);
+      }
+      throw new TypeError(
+        `${where}: expected a number in ${unit === "1" ? "no unit" : unit}, got "${value}"`,
+      );
+    }
+    let parsed: Unit;
+    try {
+      parsed = math.unit(text) as Unit;
+    } catch {
+      throw new TypeError(`${where}: expected a quantity in ${unit} such as "1 ${unit}", got "${value}"`);
+    }
+    return convert(parsed, target, unit, where, `"${value}"`);
+  }
+  if (isMathUnit(value)) {
+    if (target === null) {
+      throw new TypeError(`${where}: expected a plain number in ${unit}, got the unit ${value.toString()}`);
+    }
+    return convert(value, target, unit, where, value.toString());
+  }
+  throw new TypeError(`${where}: expected a number or a quantity string in ${unit}, got ${describe(value)}`);
+}
+
+function convert(parsed: Unit, target: Unit, unit: string, where: string, shown: string): number {
+  if (!parsed.equalBase(target)) {
+    throw new TypeError(`${where}: expected a quantity convertible to ${unit}, got ${shown}`);
+  }
+  return parsed.toNumber(unit);
+}
+
+/** Converts a difference or standard uncertainty (no offset) to `unit`: same as
+ * {@linkcode toCanonical} for all units used in echocardiography. */
+export const uncertaintyToCanonical = toCanonical;
+
+/** Short description of an unexpected value for error messages. */
+export function describe(value: unknown): string {
+  if (value === null) return "null";
+  if (value === undefined) return "undefined";
+  if (typeof value === "string") return `"${value}"`;
+  if (typeof value === "number" || typeof value === "boolean") return String(value);
+  if (Array.isArray(value)) return "an array";
+  return `a value of type ${typeof value}`;
+}

@@ -1,0 +1,186 @@
+/**
+ * Effect of the insonation angle on Doppler velocity, gradient and continuity valve area.
+ *
+ * The cos θ correction itself is defined once in the physics module
+ * ({@linkcode angleCorrectedVelocity}); these calculations compose it with the Bernoulli and
+ * continuity equations. The angle here is signed (−90°, 90°): the sign only says on which side of
+ * the flow the beam lies, which lets an uncertain angle centred on 0° (e.g. normal(0, 10)) be
+ * propagated without out-of-range draws.
+ *
+ * @module
+ */
+import { defineCalculation } from "../core/define.ts";
+import type { Calculation, InputDefinition } from "../core/types.ts";
+import { angleCorrectedVelocity } from "../physics/doppler.ts";
+import { simplifiedBernoulli } from "./bernoulli.ts";
+import { continuityValveAreaPeakVelocity } from "./valve_area.ts";
+import { BAUMGARTNER_2009, HATLE_ANGELSEN_1985 } from "./sources.ts";
+
+/** The cos θ correction, computed by the physics module's single definition. */
+function trueVelocityAt(measuredVelocity: number, angleDeg: number): number {
+  return angleCorrectedVelocity.formula({ measuredVelocity, angleDeg }).trueVelocity;
+}
+
+function signedAngle(description: string): InputDefinition {
+  return {
+    unit: "deg",
+    description,
+    range: { min: -90, max: 90, minExclusive: true, maxExclusive: true },
+    typical: { min: -20, max: 20 },
+    default: 0,
+  };
+}
+
+/**
+ * How an insonation angle θ biases a Doppler velocity and the Bernoulli gradient built on it.
+ *
+ * Formula: v_true = v_measured / cos θ (from {@linkcode angleCorrectedVelocity});
+ * ΔP = 4·v² for both velocities (from {@linkcode simplifiedBernoulli});
+ * velocity underestimation = 100·(1 − v_measured/v_true) % = 100·(1 − cos θ) %;
+ * gradient underestimation = 100·(1 − ΔP_measured/ΔP_true) % = 100·(1 − cos²θ) %.
+ *
+ * Source: Hatle L, Angelsen B. Doppler Ultrasound in Cardiology, 1985, ch. 2 (angle dependence);
+ * Baumgartner H, et al. J Am Soc Echocardiogr 2009;22:1-23 (alignment of the CW beam).
+ *
+ * Throws (through `evaluate`) a RangeError for a velocity outside (0, 10] m/s or an angle outside
+ * (−90, 90) degrees.
+ *
+ * @example
+ * ```ts
+ * import { evaluate, insonationAngleEffect } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * // At 60° the display shows half the velocity and a quarter of the gradient
+ * const r = evaluate(insonationAngleEffect, { measuredVelocity: 2, angleDeg: 60 }).outputs;
+ * assert.ok(Math.abs(r.trueVelocity - 4) < 1e-12);
+ * assert.ok(Math.abs(r.trueGradient - 64) < 1e-9);
+ * assert.ok(Math.abs(r.gradientUnderestimationPercent - 75) < 1e-9);
+ * ```
+ */
+export const insonationAngleEffect: Calculation<
+  "measuredVelocity" | "angleDeg",
+  | "trueVelocity"
+  | "velocityUnderestimationPercent"
+  | "measuredGradient"
+  | "trueGradient"
+  | "gradientUnderestimationPercent"
+> = defineCalculation({
+  id: "insonationAngleEffect",
+  title: "Insonation angle effect on velocity and gradient",
+  description:
+    "True velocity and gradient behind a Doppler reading taken at an angle to the flow, and how much the reading underestimates each.",
+  inputs: {
+    measuredVelocity: {
+      unit: "m/s",
+      description: "Velocity displayed assuming the beam is parallel to the flow",
+      range: { min: 0, max: 10, minExclusive: true },
+      typical: { min: 0.2, max: 7 },
+    },
+    angleDeg: signedAngle("Angle between the beam and the flow (signed; 0 = parallel)"),
+  },
+  outputs: {
+    trueVelocity: { unit: "m/s", description: "Velocity along the flow" },
+    velocityUnderestimationPercent: {
+      unit: "%",
+      description: "Shortfall of the displayed velocity relative to the true velocity",
+    },
+    measuredGradient: { unit: "mmHg", description: "Gradient from the displayed velocity" },
+    trueGradient: { unit: "mmHg", description: "Gradient from the true velocity" },
+    gradientUnderestimationPercent: {
+      unit: "%",
+      description: "Shortfall of the displayed gradient relative to the true gradient",
+    },
+  },
+  formula: ({ measuredVelocity, angleDeg }) => {
+    const trueVelocity = trueVelocityAt(measuredVelocity, angleDeg);
+    const measuredGradient = simplifiedBernoulli.formula({ peakVelocity: measuredVelocity }).gradient;
+    const trueGradient = simplifiedBernoulli.formula({ peakVelocity: trueVelocity }).gradient;
+    return {
+      trueVelocity,
+      velocityUnderestimationPercent: 100 * (1 - measuredVelocity / trueVelocity),
+      measuredGradient,
+      trueGradient,
+      gradientUnderestimationPercent: 100 * (1 - measuredGradient / trueGradient),
+    };
+  },
+  formulaText:
+    "v_true = v/cos θ; ΔP = 4·v²; shortfalls 100·(1 − v/v_true) % and 100·(1 − ΔP/ΔP_true) %",
+  sources: [HATLE_ANGELSEN_1985, BAUMGARTNER_2009],
+  cautions: [...angleCorrectedVelocity.cautions],
+  clinical: true,
+});
+
+/**
+ * Continuity aortic valve area (peak-velocity form) with the LVOT and aortic-jet velocities
+ * corrected for their insonation angles.
+ *
+ * Formula: AVA = π·d²/4 · (V_LVOT/cos θ_LVOT) / (V_AV/cos θ_AV) (angle correction from
+ * {@linkcode angleCorrectedVelocity}, area from {@linkcode continuityValveAreaPeakVelocity});
+ * `avaAssumingAlignmentCm2` is the same with both angles 0, and `areaOverestimationPercent` =
+ * 100·(AVA_aligned/AVA − 1).
+ *
+ * Source: Baumgartner H, et al. J Am Soc Echocardiogr 2009;22:1-23 (continuity equation; a
+ * misaligned jet underestimates velocity and overestimates the area).
+ *
+ * Throws (through `evaluate`) a RangeError for a diameter outside (0, 5] cm, a velocity outside
+ * (0, 10] m/s or an angle outside (−90, 90) degrees.
+ *
+ * @example
+ * ```ts
+ * import { continuityValveAreaWithAngles, evaluate } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * // A 60° jet angle halves the jet velocity: the naive area is twice the true one
+ * const r = evaluate(continuityValveAreaWithAngles, {
+ *   lvotDiameterCm: 2, lvotPeakVelocity: 1, avPeakVelocity: 2.5, avAngleDeg: 60,
+ * }).outputs;
+ * assert.ok(Math.abs(r.avaCm2 - 0.2 * Math.PI) < 1e-12);
+ * assert.ok(Math.abs(r.areaOverestimationPercent - 100) < 1e-9);
+ * ```
+ */
+export const continuityValveAreaWithAngles: Calculation<
+  "lvotDiameterCm" | "lvotPeakVelocity" | "lvotAngleDeg" | "avPeakVelocity" | "avAngleDeg",
+  "avaCm2" | "avaAssumingAlignmentCm2" | "areaOverestimationPercent"
+> = defineCalculation({
+  id: "continuityValveAreaWithAngles",
+  title: "Continuity valve area with insonation angles",
+  description:
+    "Continuity aortic valve area (peak-velocity form) with both velocities corrected for their beam angles.",
+  inputs: {
+    lvotDiameterCm: continuityValveAreaPeakVelocity.inputs.lvotDiameterCm,
+    lvotPeakVelocity: continuityValveAreaPeakVelocity.inputs.lvotPeakVelocity,
+    lvotAngleDeg: signedAngle("Angle between the pulsed-wave beam and LVOT flow (signed)"),
+    avPeakVelocity: continuityValveAreaPeakVelocity.inputs.avPeakVelocity,
+    avAngleDeg: signedAngle("Angle between the continuous-wave beam and the aortic jet (signed)"),
+  },
+  outputs: {
+    avaCm2: { unit: "cm^2", description: "Aortic valve area from angle-corrected velocities" },
+    avaAssumingAlignmentCm2: {
+      unit: "cm^2",
+      description: "Aortic valve area assuming both beams are parallel to flow",
+    },
+    areaOverestimationPercent: {
+      unit: "%",
+      description: "Excess of the aligned-assumption area over the angle-corrected area",
+    },
+  },
+  formula: ({ lvotDiameterCm, lvotPeakVelocity, lvotAngleDeg, avPeakVelocity, avAngleDeg }) => {
+    const avaAssumingAlignmentCm2 = continuityValveAreaPeakVelocity.formula({
+      lvotDiameterCm,
+      lvotPeakVelocity,
+      avPeakVelocity,
+    }).avaCm2;
+    const avaCm2 = continuityValveAreaPeakVelocity.formula({
+      lvotDiameterCm,
+      lvotPeakVelocity: trueVelocityAt(lvotPeakVelocity, lvotAngleDeg),
+      avPeakVelocity: trueVelocityAt(avPeakVelocity, avAngleDeg),
+    }).avaCm2;
+    return {
+      avaCm2,
+      avaAssumingAlignmentCm2,
+      areaOverestimationPercent: 100 * (avaAssumingAlignmentCm2 / avaCm2 - 1),
+    };
+  },
+  formulaText: "AVA = π·d²/4 · (V_LVOT/cos θ_LVOT)/(V_AV/cos θ_AV)",
+  sources: [BAUMGARTNER_2009],
+  cautions: [...continuityValveAreaPeakVelocity.cautions, ...angleCorrectedVelocity.cautions],
+  clinical: true,
+});

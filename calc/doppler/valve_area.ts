@@ -1,0 +1,357 @@
+/**
+ * Valve areas: continuity equation for the aortic valve (VTI and peak-velocity forms), indexed
+ * area, dimensionless index, and mitral valve area by pressure half-time.
+ *
+ * @module
+ */
+import { defineCalculation } from "../core/define.ts";
+import type { Calculation } from "../core/types.ts";
+import { crossSectionalArea, strokeVolume } from "./flow.ts";
+import { BAUMGARTNER_2009, BAUMGARTNER_2017, HATLE_1979 } from "./sources.ts";
+
+const LVOT_DIAMETER = {
+  unit: "cm",
+  description: "LVOT diameter, measured at the level of the pulsed-wave sample",
+  range: { min: 0, max: 5, minExclusive: true },
+  typical: { min: 1.4, max: 3.0 },
+} as const;
+
+const CONTINUITY_CAUTIONS = [
+  "LVOT diameter is squared: a 1 mm error in a 2 cm LVOT changes the area by about 10 %",
+  "Under-aligned aortic jet Doppler underestimates its velocity and overestimates the area",
+] as const;
+
+/**
+ * Continuity-equation aortic valve area, VTI form.
+ *
+ * Formula: AVA [cm²] = CSA_LVOT · VTI_LVOT / VTI_AV = SV_LVOT / VTI_AV, CSA_LVOT = π·d²/4 (stroke
+ * volume from {@linkcode strokeVolume}).
+ *
+ * Source: Baumgartner H, et al. J Am Soc Echocardiogr 2009;22:1-23, continuity equation
+ * (recommended method); Baumgartner H, et al. 2017 focused update.
+ *
+ * Throws (through `evaluate`) a RangeError for an LVOT diameter outside (0, 5] cm or a VTI outside
+ * (0, 300] cm.
+ *
+ * @example
+ * ```ts
+ * import { continuityValveArea, evaluate } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * // d = 2 cm, VTI_LVOT = 20 cm, VTI_AV = 100 cm → π·20/100 = 0.628 cm²
+ * const r = evaluate(continuityValveArea, { lvotDiameterCm: 2, lvotVtiCm: 20, avVtiCm: 100 });
+ * assert.ok(Math.abs(r.outputs.avaCm2 - 0.2 * Math.PI) < 1e-12);
+ * ```
+ */
+export const continuityValveArea: Calculation<
+  "lvotDiameterCm" | "lvotVtiCm" | "avVtiCm",
+  "avaCm2"
+> = defineCalculation({
+  id: "continuityValveArea",
+  title: "Continuity valve area (VTI)",
+  description: "Aortic valve effective orifice area from the continuity equation with VTIs.",
+  inputs: {
+    lvotDiameterCm: LVOT_DIAMETER,
+    lvotVtiCm: {
+      unit: "cm",
+      description: "LVOT pulsed-wave VTI",
+      range: { min: 0, max: 300, minExclusive: true },
+      typical: { min: 8, max: 40 },
+    },
+    avVtiCm: {
+      unit: "cm",
+      description: "Aortic jet continuous-wave VTI",
+      range: { min: 0, max: 300, minExclusive: true },
+      typical: { min: 15, max: 200 },
+    },
+  },
+  outputs: { avaCm2: { unit: "cm^2", description: "Aortic valve area" } },
+  formula: ({ lvotDiameterCm, lvotVtiCm, avVtiCm }) => ({
+    avaCm2: strokeVolume.formula({ diameterCm: lvotDiameterCm, vtiCm: lvotVtiCm }).strokeVolumeMl /
+      avVtiCm,
+  }),
+  formulaText: "AVA = π·d_LVOT²/4 · VTI_LVOT / VTI_AV",
+  sources: [BAUMGARTNER_2009, BAUMGARTNER_2017],
+  cautions: [...CONTINUITY_CAUTIONS],
+  clinical: true,
+});
+
+/**
+ * Continuity-equation aortic valve area, peak-velocity form.
+ *
+ * Formula: AVA [cm²] = CSA_LVOT · V_LVOT / V_AV, CSA_LVOT = π·d²/4 (from
+ * {@linkcode crossSectionalArea}), velocities in m/s.
+ *
+ * Source: Baumgartner H, et al. J Am Soc Echocardiogr 2009;22:1-23 (simplified continuity
+ * equation with peak velocities, from memory).
+ *
+ * Throws (through `evaluate`) a RangeError for an LVOT diameter outside (0, 5] cm or a velocity
+ * outside (0, 10] m/s.
+ *
+ * @example
+ * ```ts
+ * import { continuityValveAreaPeakVelocity, evaluate } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * // d = 2 cm, V_LVOT = 1 m/s, V_AV = 5 m/s → π·0.2 = 0.628 cm²
+ * const r = evaluate(continuityValveAreaPeakVelocity, {
+ *   lvotDiameterCm: 2, lvotPeakVelocity: 1, avPeakVelocity: 5,
+ * });
+ * assert.ok(Math.abs(r.outputs.avaCm2 - 0.2 * Math.PI) < 1e-12);
+ * ```
+ */
+export const continuityValveAreaPeakVelocity: Calculation<
+  "lvotDiameterCm" | "lvotPeakVelocity" | "avPeakVelocity",
+  "avaCm2"
+> = defineCalculation({
+  id: "continuityValveAreaPeakVelocity",
+  title: "Continuity valve area (peak velocity)",
+  description: "Aortic valve area from the continuity equation with peak velocities.",
+  inputs: {
+    lvotDiameterCm: LVOT_DIAMETER,
+    lvotPeakVelocity: {
+      unit: "m/s",
+      description: "LVOT pulsed-wave peak velocity",
+      range: { min: 0, max: 10, minExclusive: true },
+      typical: { min: 0.5, max: 2 },
+    },
+    avPeakVelocity: {
+      unit: "m/s",
+      description: "Aortic jet continuous-wave peak velocity",
+      range: { min: 0, max: 10, minExclusive: true },
+      typical: { min: 1, max: 7 },
+    },
+  },
+  outputs: { avaCm2: { unit: "cm^2", description: "Aortic valve area" } },
+  formula: ({ lvotDiameterCm, lvotPeakVelocity, avPeakVelocity }) => ({
+    avaCm2: crossSectionalArea.formula({ diameterCm: lvotDiameterCm }).areaCm2 *
+      lvotPeakVelocity / avPeakVelocity,
+  }),
+  formulaText: "AVA = π·d_LVOT²/4 · V_LVOT / V_AV",
+  sources: [BAUMGARTNER_2009],
+  cautions: [
+    ...CONTINUITY_CAUTIONS,
+    "Less accurate than the VTI form when the ejection profiles differ in shape",
+  ],
+  clinical: true,
+});
+
+/**
+ * Aortic valve area indexed to body surface area.
+ *
+ * Formula: AVAi [cm²/m²] = AVA [cm²] / BSA [m²].
+ *
+ * Source: Baumgartner H, et al. 2017 focused update, table of AS severity (indexed AVA).
+ *
+ * Throws (through `evaluate`) a RangeError for an area outside (0, 10] cm² or a BSA outside
+ * (0, 4] m².
+ *
+ * @example
+ * ```ts
+ * import { evaluate, indexedValveArea } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(evaluate(indexedValveArea, { avaCm2: 1.2, bsaM2: 2 }).outputs.avaIndexCm2PerM2, 0.6);
+ * ```
+ */
+export const indexedValveArea: Calculation<"avaCm2" | "bsaM2", "avaIndexCm2PerM2"> =
+  defineCalculation({
+    id: "indexedValveArea",
+    title: "Indexed aortic valve area",
+    description: "Aortic valve area divided by body surface area.",
+    inputs: {
+      avaCm2: {
+        unit: "cm^2",
+        description: "Aortic valve area",
+        range: { min: 0, max: 10, minExclusive: true },
+        typical: { min: 0.3, max: 5 },
+      },
+      bsaM2: {
+        unit: "m^2",
+        description: "Body surface area",
+        range: { min: 0, max: 4, minExclusive: true },
+        typical: { min: 1.2, max: 2.6 },
+      },
+    },
+    outputs: { avaIndexCm2PerM2: { unit: "cm^2/m^2", description: "Indexed aortic valve area" } },
+    formula: ({ avaCm2, bsaM2 }) => ({ avaIndexCm2PerM2: avaCm2 / bsaM2 }),
+    formulaText: "AVAi = AVA/BSA",
+    sources: [BAUMGARTNER_2017],
+    cautions: ["Indexing over-corrects in obesity"],
+    clinical: true,
+  });
+
+/**
+ * Dimensionless index (velocity ratio) of the aortic valve: LVOT over aortic jet.
+ *
+ * Formula: DVI = VTI_LVOT / VTI_AV (the same ratio may be formed from peak velocities). It needs
+ * no LVOT diameter, so it avoids the squared diameter error.
+ *
+ * Source: Baumgartner H, et al. J Am Soc Echocardiogr 2009;22:1-23 (velocity ratio); 2017 update.
+ *
+ * Throws (through `evaluate`) a RangeError for a VTI outside (0, 300] cm.
+ *
+ * @example
+ * ```ts
+ * import { dimensionlessIndex, evaluate } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(evaluate(dimensionlessIndex, { lvotVtiCm: 20, avVtiCm: 100 }).outputs.dvi, 0.2);
+ * ```
+ */
+export const dimensionlessIndex: Calculation<"lvotVtiCm" | "avVtiCm", "dvi"> = defineCalculation({
+  id: "dimensionlessIndex",
+  title: "Dimensionless index (velocity ratio)",
+  description: "Ratio of LVOT to aortic jet VTI, independent of the LVOT diameter.",
+  inputs: {
+    lvotVtiCm: {
+      unit: "cm",
+      description: "LVOT pulsed-wave VTI (or peak velocity in the same unit as the jet)",
+      range: { min: 0, max: 300, minExclusive: true },
+      typical: { min: 8, max: 40 },
+    },
+    avVtiCm: {
+      unit: "cm",
+      description: "Aortic jet continuous-wave VTI (or peak velocity)",
+      range: { min: 0, max: 300, minExclusive: true },
+      typical: { min: 15, max: 200 },
+    },
+  },
+  outputs: { dvi: { unit: "1", description: "Dimensionless index" } },
+  formula: ({ lvotVtiCm, avVtiCm }) => ({ dvi: lvotVtiCm / avVtiCm }),
+  formulaText: "DVI = VTI_LVOT / VTI_AV",
+  sources: [BAUMGARTNER_2009, BAUMGARTNER_2017],
+  cautions: ["Depends on LVOT size: a large LVOT lowers the ratio for the same valve area"],
+  clinical: true,
+});
+
+/**
+ * Mitral valve area by pressure half-time.
+ *
+ * Formula: MVA [cm²] = 220 / PHT [ms]. The constant 220 is empirical.
+ *
+ * Source: Hatle L, Angelsen B, Tromsdal A. Circulation 1979;60:1096-1104; Baumgartner H, et al.
+ * J Am Soc Echocardiogr 2009;22:1-23 (mitral stenosis, pressure half-time).
+ *
+ * Throws (through `evaluate`) a RangeError for a PHT outside (0, 1000] ms.
+ *
+ * @example
+ * ```ts
+ * import { evaluate, mitralValveAreaPressureHalfTime } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(evaluate(mitralValveAreaPressureHalfTime, { phtMs: 220 }).outputs.mvaCm2, 1);
+ * ```
+ */
+export const mitralValveAreaPressureHalfTime: Calculation<"phtMs", "mvaCm2"> = defineCalculation({
+  id: "mitralValveAreaPressureHalfTime",
+  title: "Mitral valve area by pressure half-time",
+  description: "Mitral stenosis orifice area from the transmitral pressure half-time.",
+  inputs: {
+    phtMs: {
+      unit: "ms",
+      description: "Pressure half-time of the transmitral E-wave",
+      range: { min: 0, max: 1000, minExclusive: true },
+      typical: { min: 60, max: 500 },
+    },
+  },
+  outputs: { mvaCm2: { unit: "cm^2", description: "Mitral valve area" } },
+  formula: ({ phtMs }) => ({ mvaCm2: 220 / phtMs }),
+  formulaText: "MVA = 220/PHT",
+  sources: [HATLE_1979, BAUMGARTNER_2009],
+  cautions: [
+    "Unreliable immediately after balloon valvotomy, with significant aortic regurgitation and with abnormal left-ventricular compliance",
+    "Not validated in normal valves: short PHT gives meaningless large areas",
+  ],
+  clinical: true,
+});
+
+/**
+ * Pressure half-time from the deceleration time of the transmitral E wave.
+ *
+ * Formula: PHT [ms] = 0.29 · DT [ms] (for a linear deceleration PHT/DT = 1 − 1/√2 ≈ 0.293).
+ *
+ * Source: Baumgartner H, et al. J Am Soc Echocardiogr 2009;22:1-23, mitral stenosis section
+ * (from memory).
+ *
+ * Throws (through `evaluate`) a RangeError for a deceleration time outside (0, 3000] ms.
+ *
+ * @example
+ * ```ts
+ * import { evaluate, pressureHalfTimeFromDecelerationTime } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * // DT 759 ms → PHT 220 ms (MVA 1.0 cm²)
+ * const r = evaluate(pressureHalfTimeFromDecelerationTime, { decelerationTimeMs: 759 });
+ * assert.ok(Math.abs(r.outputs.phtMs - 220.11) < 1e-9);
+ * ```
+ */
+export const pressureHalfTimeFromDecelerationTime: Calculation<"decelerationTimeMs", "phtMs"> =
+  defineCalculation({
+    id: "pressureHalfTimeFromDecelerationTime",
+    title: "Pressure half-time from deceleration time",
+    description:
+      "Pressure half-time of the mitral E wave from the time its velocity takes to reach zero.",
+    inputs: {
+      decelerationTimeMs: {
+        unit: "ms",
+        description: "E-wave deceleration time (peak to zero-velocity intercept of the slope)",
+        range: { min: 0, max: 3000, minExclusive: true },
+        typical: { min: 150, max: 1700 },
+      },
+    },
+    outputs: { phtMs: { unit: "ms", description: "Pressure half-time" } },
+    formula: ({ decelerationTimeMs }) => ({ phtMs: 0.29 * decelerationTimeMs }),
+    formulaText: "PHT = 0.29·DT",
+    sources: [BAUMGARTNER_2009],
+    cautions: ["With a bimodal (non-linear) deceleration use the mid-diastolic slope"],
+    clinical: true,
+  });
+
+/**
+ * Pressure half-time from the E-wave peak velocity and a linear deceleration slope.
+ *
+ * The pressure gradient halves when the velocity falls to v₀/√2 (ΔP ∝ v²). With a linear
+ * deceleration at slope s the time to get there is
+ * PHT [ms] = 1000 · v₀ · (1 − 1/√2) / s, v₀ in m/s and s in m/s².
+ *
+ * Source: Hatle L, Angelsen B, Tromsdal A. Circulation 1979;60:1096-1104 (definition of the
+ * pressure half-time); hand-checkable arithmetic.
+ *
+ * Throws (through `evaluate`) a RangeError for a velocity outside (0, 5] m/s or a slope outside
+ * (0, 100] m/s².
+ *
+ * @example
+ * ```ts
+ * import { evaluate, pressureHalfTimeFromSlope } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * // 2 m/s falling at 2 m/s² reaches zero after 1000 ms; half-pressure after 292.9 ms
+ * const r = evaluate(pressureHalfTimeFromSlope, { peakVelocity: 2, decelerationSlope: 2 });
+ * assert.ok(Math.abs(r.outputs.phtMs - 1000 * (1 - Math.SQRT1_2)) < 1e-9);
+ * ```
+ */
+export const pressureHalfTimeFromSlope: Calculation<
+  "peakVelocity" | "decelerationSlope",
+  "phtMs"
+> = defineCalculation({
+  id: "pressureHalfTimeFromSlope",
+  title: "Pressure half-time from deceleration slope",
+  description:
+    "Time for the transmitral velocity to fall from its peak to peak/√2 along a linear slope.",
+  inputs: {
+    peakVelocity: {
+      unit: "m/s",
+      description: "Peak E-wave velocity where the deceleration starts",
+      range: { min: 0, max: 5, minExclusive: true },
+      typical: { min: 0.8, max: 3.5 },
+    },
+    decelerationSlope: {
+      unit: "m/s^2",
+      description: "Magnitude of the E-wave deceleration slope",
+      range: { min: 0, max: 100, minExclusive: true },
+      typical: { min: 0.5, max: 20 },
+    },
+  },
+  outputs: { phtMs: { unit: "ms", description: "Pressure half-time" } },
+  formula: ({ peakVelocity, decelerationSlope }) => ({
+    phtMs: 1000 * peakVelocity * (1 - Math.SQRT1_2) / decelerationSlope,
+  }),
+  formulaText: "PHT = v₀·(1 − 1/√2)/s",
+  sources: [HATLE_1979],
+  cautions: ["Assumes a linear deceleration from the peak"],
+  clinical: true,
+});

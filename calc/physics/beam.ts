@@ -1,0 +1,146 @@
+/**
+ * Beam geometry: lateral resolution at the focus, near-field (Fresnel) length and far-field
+ * divergence.
+ *
+ * @module
+ */
+import { defineCalculation } from "../core/define.ts";
+import type { Calculation, InputDefinition } from "../core/types.ts";
+import { depthInput, HOSKINS, soundSpeedInput, SZABO, transmitFrequencyInput } from "./shared.ts";
+import { wavelengthAndPeriod } from "./wave.ts";
+
+/** Pulse-echo −6 dB width factor of a uniformly weighted line (one-dimensional) aperture: the
+ * root of sinc²(u) = 1/2 is u = 0.4429, so the full width is 0.8859·λ·F/D. */
+const LINE_APERTURE_WIDTH_FACTOR = 0.8859;
+
+const apertureInput: InputDefinition = {
+  unit: "mm",
+  description: "Active aperture width of the probe in the scan plane",
+  range: { min: 0, max: 200, minExclusive: true },
+  typical: { min: 5, max: 40 },
+};
+
+/**
+ * Lateral resolution: the pulse-echo −6 dB beam width at the focus of a focused aperture.
+ *
+ * Formula: F# = focal depth / aperture; beam width [mm] = 0.886 · λ · F#, the pulse-echo −6 dB
+ * width of a uniformly weighted line aperture (transmit and receive both focused at the same
+ * depth). The common rule of thumb "lateral resolution ≈ λ · F-number" is the same to within
+ * about 12 %.
+ *
+ * Source: Szabo TL. Diagnostic Ultrasound Imaging: Inside Out, 2nd ed. Academic Press 2014,
+ * ch. 6 (focusing, pulse-echo beam width); Hoskins PR, Martin K, Thrush A. Diagnostic Ultrasound:
+ * Physics and Equipment, 3rd ed. 2019, ch. 3.
+ *
+ * Inputs: `transmitFrequencyMHz` (MHz), `apertureMm` (mm, (0, 200], typical [5, 40]),
+ * `focalDepthCm` (cm, (0, 50]), `soundSpeedMps` (m/s, default 1540). Outputs: `beamWidthMm` (mm),
+ * `fNumber`.
+ *
+ * @throws {RangeError} (through `evaluate`) for a frequency, aperture or depth ≤ 0.
+ *
+ * @example 3 MHz, 20 mm aperture focused at 8 cm (F# = 4)
+ * ```ts
+ * import { evaluate, lateralResolution } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const r = evaluate(lateralResolution, { transmitFrequencyMHz: 3, apertureMm: 20, focalDepthCm: 8 });
+ * assert.equal(r.outputs.fNumber, 4);
+ * // 0.8859 · (1540 / 3e3 mm) · 4 = 1.819 mm (hand check)
+ * assert.ok(Math.abs(r.outputs.beamWidthMm - 1.819) < 1e-3);
+ * ```
+ */
+export const lateralResolution: Calculation<
+  "transmitFrequencyMHz" | "apertureMm" | "focalDepthCm" | "soundSpeedMps",
+  "beamWidthMm" | "fNumber"
+> = defineCalculation({
+  id: "lateralResolution",
+  title: "Lateral resolution at the focus",
+  description:
+    "Pulse-echo −6 dB beam width at the focus, the lateral resolution of the image there, from aperture, focal depth and wavelength.",
+  inputs: {
+    transmitFrequencyMHz: transmitFrequencyInput,
+    apertureMm: apertureInput,
+    focalDepthCm: depthInput("Focal depth"),
+    soundSpeedMps: soundSpeedInput,
+  },
+  outputs: {
+    beamWidthMm: { unit: "mm", description: "Pulse-echo −6 dB beam width at the focus" },
+    fNumber: { unit: "1", description: "F-number: focal depth over aperture" },
+  },
+  formula: ({ transmitFrequencyMHz, apertureMm, focalDepthCm, soundSpeedMps }) => {
+    const { wavelengthMm } = wavelengthAndPeriod.formula({ transmitFrequencyMHz, soundSpeedMps });
+    const fNumber = (focalDepthCm * 10) / apertureMm;
+    return { beamWidthMm: LINE_APERTURE_WIDTH_FACTOR * wavelengthMm * fNumber, fNumber };
+  },
+  formulaText: "F# = z_f / D; w = 0.886·λ·F#",
+  sources: [SZABO, HOSKINS],
+  cautions: [
+    "Beyond the focus and in the elevation direction the beam is wider; apodisation widens the main lobe further",
+  ],
+});
+
+/**
+ * Near-field (Fresnel zone) length and far-field divergence of an unfocused circular aperture.
+ *
+ * Formula: N [cm] = D² / (4·λ); far-field divergence half-angle θ = asin(1.22·λ / D) (first zero
+ * of the Airy pattern).
+ *
+ * Source: Kremkau FW. Sonography Principles and Instruments, 9th ed. 2015, ch. 3 (near-zone
+ * length, divergence); Szabo TL. Diagnostic Ultrasound Imaging: Inside Out, 2nd ed. 2014, ch. 6.
+ *
+ * Inputs: `transmitFrequencyMHz` (MHz), `apertureMm` (mm, disc diameter), `soundSpeedMps` (m/s,
+ * default 1540). Outputs: `nearFieldLengthCm` (cm), `divergenceHalfAngleDeg` (deg).
+ *
+ * @throws {RangeError} (through `evaluate`) for a frequency or aperture ≤ 0, or when the aperture
+ * is smaller than 1.22 wavelengths (no far-field main lobe: the divergence is not finite).
+ *
+ * @example A 10 mm disc at 5 MHz: near field about 8.1 cm
+ * ```ts
+ * import { evaluate, nearFieldLength } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const r = evaluate(nearFieldLength, { transmitFrequencyMHz: 5, apertureMm: 10 });
+ * // 10² / (4 · 0.308) mm = 81.17 mm (hand check)
+ * assert.ok(Math.abs(r.outputs.nearFieldLengthCm - 8.117) < 1e-3);
+ * ```
+ */
+export const nearFieldLength: Calculation<
+  "transmitFrequencyMHz" | "apertureMm" | "soundSpeedMps",
+  "nearFieldLengthCm" | "divergenceHalfAngleDeg"
+> = defineCalculation({
+  id: "nearFieldLength",
+  title: "Near-field length and far-field divergence",
+  description:
+    "Length of the near field (Fresnel zone) of an unfocused circular aperture, and the half-angle at which the beam spreads beyond it.",
+  inputs: {
+    transmitFrequencyMHz: transmitFrequencyInput,
+    apertureMm: { ...apertureInput, description: "Diameter of the (unfocused, circular) aperture" },
+    soundSpeedMps: soundSpeedInput,
+  },
+  outputs: {
+    nearFieldLengthCm: { unit: "cm", description: "Near-field (Fresnel zone) length" },
+    divergenceHalfAngleDeg: {
+      unit: "deg",
+      description: "Far-field divergence half-angle (to the first zero)",
+    },
+  },
+  formula: ({ transmitFrequencyMHz, apertureMm, soundSpeedMps }) => {
+    const { wavelengthMm } = wavelengthAndPeriod.formula({ transmitFrequencyMHz, soundSpeedMps });
+    return {
+      nearFieldLengthCm: apertureMm ** 2 / (4 * wavelengthMm) / 10,
+      divergenceHalfAngleDeg: (Math.asin((1.22 * wavelengthMm) / apertureMm) * 180) / Math.PI,
+    };
+  },
+  formulaText: "N = D² / (4λ); sin θ = 1.22·λ / D",
+  sources: [
+    {
+      authors: "Kremkau FW",
+      year: 2015,
+      title: "Sonography Principles and Instruments",
+      publication: "9th ed. Elsevier, St Louis",
+      locator: "ch. 3 (near-zone length and far-zone divergence)",
+    },
+    SZABO,
+  ],
+  cautions: [
+    "Applies to an unfocused disc with D much larger than λ; focused and array probes have their own beam shapes",
+  ],
+});

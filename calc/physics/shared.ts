@@ -1,0 +1,163 @@
+/**
+ * Private building blocks shared by the ultrasound-physics calculations: the default speed of
+ * sound, the common input definitions, the published sources, and the few one-line relations
+ * (cos θ, the Doppler shift per unit velocity, the round-trip time) that several formulas reuse,
+ * so that each relation is written exactly once.
+ *
+ * Not re-exported from the package except {@linkcode DEFAULT_SOUND_SPEED_MPS}.
+ *
+ * @module
+ */
+import type { Calculation, InputDefinition, InputValues, Reference } from "../core/types.ts";
+import { type InputArguments, validateInputs } from "../core/define.ts";
+
+/** Speed of sound assumed by scanners for soft tissue, in m/s (common practice). */
+export const DEFAULT_SOUND_SPEED_MPS = 1540;
+
+/** cos θ for an angle in degrees. The one place the insonation-angle cosine is written. */
+export function cosDeg(angleDeg: number): number {
+  return Math.cos((angleDeg * Math.PI) / 180);
+}
+
+/**
+ * Doppler shift produced by a unit velocity, in Hz per (m/s): 2·f0·cos θ / c.
+ * The Doppler equation Δf = 2·f0·v·cos θ / c is this factor times v; every Doppler calculation
+ * (shift, velocity, Nyquist limit) goes through it.
+ */
+export function dopplerShiftPerVelocity(
+  transmitFrequencyMHz: number,
+  angleDeg: number,
+  soundSpeedMps: number,
+): number {
+  return (2 * transmitFrequencyMHz * 1e6 * cosDeg(angleDeg)) / soundSpeedMps;
+}
+
+/** Pulse round-trip time to a depth, in seconds: 2·d / c (depth in cm). The PRF limit, the frame
+ * time and the range-ambiguity depths all derive from it. */
+export function roundTripTimeS(depthCm: number, soundSpeedMps: number): number {
+  return (2 * depthCm * 1e-2) / soundSpeedMps;
+}
+
+/** Depth in cm reached by a round trip lasting `timeS` seconds: c·t / 2 (inverse of
+ * {@linkcode roundTripTimeS}). */
+export function depthForRoundTripCm(timeS: number, soundSpeedMps: number): number {
+  return ((soundSpeedMps * timeS) / 2) * 1e2;
+}
+
+/** Speed-of-sound input, default 1540 m/s. */
+export const soundSpeedInput: InputDefinition = {
+  unit: "m/s",
+  description: "Speed of sound in the medium (scanner assumption for soft tissue: 1540 m/s)",
+  range: { min: 0, max: 10000, minExclusive: true },
+  typical: { min: 1400, max: 1650 },
+  default: DEFAULT_SOUND_SPEED_MPS,
+};
+
+/** Transmit (carrier) frequency input in MHz. */
+export const transmitFrequencyInput: InputDefinition = {
+  unit: "MHz",
+  description: "Transmit (carrier) frequency of the probe",
+  range: { min: 0, max: 100, minExclusive: true },
+  typical: { min: 1, max: 15 },
+};
+
+/** Insonation angle input: between the beam and the flow direction. */
+export const angleInput: InputDefinition = {
+  unit: "deg",
+  description: "Insonation angle between the ultrasound beam and the flow direction",
+  range: { min: 0, max: 90, maxExclusive: true },
+  typical: { min: 0, max: 20 },
+};
+
+/** Imaging or sample depth in cm. */
+export function depthInput(description: string): InputDefinition {
+  return {
+    unit: "cm",
+    description,
+    range: { min: 0, max: 50, minExclusive: true },
+    typical: { min: 0.5, max: 30 },
+  };
+}
+
+/** Textbook of diagnostic ultrasound physics (wavelength, pulse, beam, timing, attenuation). */
+export const KREMKAU: Reference = {
+  authors: "Kremkau FW",
+  year: 2015,
+  title: "Sonography Principles and Instruments",
+  publication: "9th ed. Elsevier, St Louis",
+  locator: "ch. 2 (ultrasound), ch. 3 (transducers), ch. 5 (Doppler)",
+};
+
+/** Textbook of ultrasound physics and equipment (UK). */
+export const HOSKINS: Reference = {
+  authors: "Hoskins PR, Martin K, Thrush A",
+  year: 2019,
+  title: "Diagnostic Ultrasound: Physics and Equipment",
+  publication: "3rd ed. CRC Press, Boca Raton",
+  locator: "ch. 2 (physics), ch. 3 (transducers and beam forming), ch. 8 (Doppler)",
+};
+
+/** Standard physics text: beam and pulse formulas. */
+export const SZABO: Reference = {
+  authors: "Szabo TL",
+  year: 2014,
+  title: "Diagnostic Ultrasound Imaging: Inside Out",
+  publication: "2nd ed. Academic Press, Oxford",
+  locator: "ch. 6 (beams), ch. 11 (Doppler)",
+};
+
+/** The Doppler equation and its use in cardiology. */
+export const HATLE_ANGELSEN: Reference = {
+  authors: "Hatle L, Angelsen B",
+  year: 1985,
+  title: "Doppler Ultrasound in Cardiology: Physical Principles and Clinical Applications",
+  publication: "2nd ed. Lea & Febiger, Philadelphia",
+  locator: "ch. 2",
+};
+
+/** ASE recommendations on Doppler quantification (angle, aliasing, CW). */
+export const QUINONES_2002: Reference = {
+  authors: "Quiñones MA, Otto CM, Stoddard M, Waggoner A, Zoghbi WA",
+  year: 2002,
+  title:
+    "Recommendations for quantification of Doppler echocardiography: a report from the Doppler Quantification Task Force of the Nomenclature and Standards Committee of the American Society of Echocardiography",
+  publication: "J Am Soc Echocardiogr 15(2):167-184",
+  doi: "10.1067/mje.2002.120202",
+};
+
+/** Bushberg: physics tables (speed of sound, impedance, attenuation). */
+export const BUSHBERG: Reference = {
+  authors: "Bushberg JT, Seibert JA, Leidholdt EM Jr, Boone JM",
+  year: 2012,
+  title: "The Essential Physics of Medical Imaging",
+  publication: "3rd ed. Lippincott Williams & Wilkins, Philadelphia",
+  locator: "ch. 14 (ultrasound), tables of acoustic properties and of attenuation coefficients",
+};
+
+/**
+ * Validates the arguments of a plain (multi-answer) function with the same rules and messages as
+ * a defined calculation's inputs: unknown or missing keys and wrong types are TypeErrors, values
+ * outside the valid range RangeErrors naming the field, the range and the value; values outside
+ * the typical range become flags. Reuses `validateInputs` so the convention lives in one place.
+ */
+export function validateArguments<I extends string>(
+  title: string,
+  inputs: { readonly [K in I]: InputDefinition },
+  args: unknown,
+): { values: InputValues<I>; flags: string[] } {
+  const shape = {
+    id: title,
+    title,
+    inputs,
+    inputNames: Object.keys(inputs) as I[],
+  } as unknown as Calculation<I, string>;
+  return validateInputs(shape, args as InputArguments<I>);
+}
+
+/** Pulse repetition frequency input in Hz. */
+export const prfInput: InputDefinition = {
+  unit: "Hz",
+  description: "Pulse repetition frequency",
+  range: { min: 0, max: 1e6, minExclusive: true },
+  typical: { min: 100, max: 50000 },
+};

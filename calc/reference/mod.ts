@@ -1,0 +1,7 @@
+/**
+ * Reference ranges: adult limits (2015 ASE/EACVI) and pediatric Z-score models.
+ *
+ * @module
+ */
+export * from "./adult.ts";
+export * from "./zscore.ts";

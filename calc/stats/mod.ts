@@ -1,0 +1,6 @@
+/**
+ * Distribution functions shared by the uncertainty engine and the agreement statistics.
+ *
+ * @module
+ */
+export * from "./distributions.ts";

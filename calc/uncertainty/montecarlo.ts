@@ -1,0 +1,547 @@
+/**
+ * Propagation of distributions by the Monte Carlo method (JCGM 101:2008): seeded column-wise
+ * sampling into typed arrays, correlated normal inputs by Cholesky factor, estimate, standard
+ * uncertainty, probabilistically symmetric and shortest coverage intervals, the adaptive
+ * procedure (§7.9), and the validation of a GUM result (§8).
+ *
+ * @module
+ */
+import type { Calculation, InputValues } from "../core/types.ts";
+import { cautionsOf, formatRange, inRange } from "../core/define.ts";
+import { JUPYTER_DISPLAY, type MimeBundle } from "../core/display.ts";
+import type { Correlations } from "./correlation.ts";
+import { choleskySemidefinite } from "./correlation.ts";
+import type { ResolvedInput } from "./inputs.ts";
+import { type PreparedInputs, prepareInputs, type UncertainInputs } from "./prepare.ts";
+import { type RandomStream, randomStream } from "./random.ts";
+import { checkCoverage, type GumResult } from "./gum.ts";
+import { numericalTolerance } from "./rounding.ts";
+import { displayMonteCarlo } from "./display.ts";
+
+/** Default number of Monte Carlo trials (JCGM 101:2008 §7.2.2 suggests 10⁶ for 95 % coverage). */
+export const DEFAULT_TRIALS = 1_000_000;
+/** Default seed, used when none is given, so that every run is reproducible. */
+export const DEFAULT_SEED = 20080101;
+
+/** Options of {@linkcode monteCarlo}. */
+export interface MonteCarloOptions {
+  /** Number of trials M. @default 1_000_000 */
+  readonly trials?: number;
+  /** Seed of the random stream, an integer in [1, 2³² − 1]. @default 20080101 */
+  readonly seed?: number;
+  /** Coverage probability p in (0, 1). @default 0.95 */
+  readonly coverage?: number;
+  /** Correlations between inputs (only between normal inputs, JCGM 101 §6.4.8). */
+  readonly correlations?: Correlations;
+  /** Keep the output samples (sorted) in the result. @default true */
+  readonly keepSamples?: boolean;
+}
+
+/** Monte Carlo result for one output. */
+export interface MonteCarloOutput {
+  /** Output name. */
+  readonly output: string;
+  /** Unit of the output. */
+  readonly unit: string;
+  /** Estimate ỹ: the average of the model values (JCGM 101 eq. (16)). */
+  readonly estimate: number;
+  /** Standard uncertainty u(ỹ): their standard deviation (JCGM 101 eq. (17)). */
+  readonly standardUncertainty: number;
+  /** Probabilistically symmetric coverage interval (JCGM 101 §7.7.1). */
+  readonly symmetricInterval: readonly [number, number];
+  /** Shortest coverage interval (JCGM 101 §7.7.2). */
+  readonly shortestInterval: readonly [number, number];
+  /** Sorted model values (empty when `keepSamples` is false). */
+  readonly samples: Float64Array;
+}
+
+/** Result of {@linkcode monteCarlo}. */
+export interface MonteCarloResult<O extends string = string> {
+  /** Calculation title. */
+  readonly title: string;
+  /** Calculation id. */
+  readonly id: string;
+  /** Number of trials. */
+  readonly trials: number;
+  /** Seed used. */
+  readonly seed: number;
+  /** Coverage probability. */
+  readonly coverage: number;
+  /** Results per output. */
+  readonly outputs: { readonly [K in O]: MonteCarloOutput };
+  /** Output names in order. */
+  readonly outputNames: readonly O[];
+  /** Output correlation matrix estimated from the samples. */
+  readonly correlation: readonly (readonly number[])[];
+  /** Warnings: samples outside valid input ranges, estimates outside validated ranges. */
+  readonly warnings: readonly string[];
+  /** Cautions of the calculation. */
+  readonly cautions: readonly string[];
+  /** Notebook display. */
+  [JUPYTER_DISPLAY](): MimeBundle;
+}
+
+function checkTrials(trials: number, coverage: number, where: string): number {
+  if (!(Number.isInteger(trials) && trials >= 2)) {
+    throw new RangeError(`${where}: expected trials to be an integer >= 2, got ${trials}`);
+  }
+  if (trials < 1 / (1 - coverage)) {
+    throw new RangeError(
+      `${where}: expected at least 1/(1 − p) = ${Math.ceil(1 / (1 - coverage))} trials for coverage ${coverage}, got ${trials}`,
+    );
+  }
+  return trials;
+}
+
+/** Fills one column with draws of an input (JCGM 101:2008 §6.4). */
+function sampleColumn(input: ResolvedInput, out: Float64Array, rng: RandomStream): void {
+  const m = out.length;
+  const { estimate: x, standardUncertainty: u, lower: a, upper: b, mode: c } = input;
+  switch (input.kind) {
+    case "exact":
+      out.fill(x);
+      return;
+    case "normal":
+      for (let r = 0; r < m; r++) out[r] = x + u * rng.normal();
+      return;
+    case "studentT":
+      for (let r = 0; r < m; r++) out[r] = x + u * rng.studentT(input.dof);
+      return;
+    case "rectangular":
+      for (let r = 0; r < m; r++) out[r] = a + (b - a) * rng.uniform();
+      return;
+    case "arcsine": {
+      const mid = (a + b) / 2, half = (b - a) / 2;
+      for (let r = 0; r < m; r++) out[r] = mid + half * Math.sin(2 * Math.PI * rng.uniform());
+      return;
+    }
+    case "triangular": {
+      const w = b - a;
+      const fc = w > 0 ? (c - a) / w : 0.5;
+      for (let r = 0; r < m; r++) {
+        const v = rng.uniform();
+        out[r] = v < fc ? a + Math.sqrt(v * w * (c - a)) : b - Math.sqrt((1 - v) * w * (b - c));
+      }
+      return;
+    }
+  }
+}
+
+/** Draws `m` trials of every input: one Float64Array column per input, in input order. */
+function sampleInputs(prepared: PreparedInputs<string>, m: number, rng: RandomStream, where: string): Float64Array[] {
+  const { inputs, correlation, correlated } = prepared;
+  const columns = inputs.map(() => new Float64Array(m));
+  if (!correlated) {
+    inputs.forEach((input, i) => sampleColumn(input, columns[i]!, rng));
+    return columns;
+  }
+  inputs.forEach((input, i) => {
+    const involved = correlation[i]!.some((v, j) => j !== i && v !== 0);
+    if (involved && input.kind !== "normal") {
+      throw new TypeError(
+        `${where}: Monte Carlo supports correlation only between normal inputs (JCGM 101 §6.4.8), got '${input.name}' with a ${input.kind} distribution`,
+      );
+    }
+  });
+  const l = choleskySemidefinite(correlation, inputs.map((i) => i.name), where);
+  // standard normal columns for normal inputs, in order; then mix with L
+  const z = inputs.map((input, i) => {
+    if (input.kind !== "normal") {
+      sampleColumn(input, columns[i]!, rng);
+      return null;
+    }
+    const col = new Float64Array(m);
+    for (let r = 0; r < m; r++) col[r] = rng.normal();
+    return col;
+  });
+  inputs.forEach((input, i) => {
+    if (input.kind !== "normal") return;
+    const out = columns[i]!;
+    const row = l[i]!;
+    out.fill(0);
+    for (let k = 0; k <= i; k++) {
+      const coef = row[k]!;
+      const zk = z[k];
+      if (coef === 0 || !zk) continue;
+      for (let r = 0; r < m; r++) out[r]! += coef * zk[r]!;
+    }
+    const x = input.estimate, u = input.standardUncertainty;
+    for (let r = 0; r < m; r++) out[r] = x + u * out[r]!;
+  });
+  return columns;
+}
+
+/** Evaluates the formula on every trial; returns one column per output. */
+function evaluateColumns<I extends string, O extends string>(
+  calc: Calculation<I, O>,
+  prepared: PreparedInputs<I>,
+  columns: readonly Float64Array[],
+  m: number,
+): Float64Array[] {
+  const names = calc.inputNames;
+  const outs = calc.outputNames;
+  const results = outs.map(() => new Float64Array(m));
+  const x: Record<string, number> = { ...prepared.estimates };
+  const ni = names.length, no = outs.length;
+  for (let r = 0; r < m; r++) {
+    for (let i = 0; i < ni; i++) x[names[i]!] = columns[i]![r]!;
+    const y = calc.formula(x as InputValues<I>) as Record<string, number>;
+    for (let k = 0; k < no; k++) {
+      const v = y[outs[k]!]!;
+      if (!Number.isFinite(v)) {
+        const shown = names.map((n) => `${n} = ${x[n]}`).join(", ");
+        throw new RangeError(
+          `${calc.title}: output '${outs[k]}' is not finite at Monte Carlo trial ${r} (${shown}), got ${v}; give the inputs distributions that respect the formula's domain (e.g. rectangular bounds)`,
+        );
+      }
+      results[k]![r] = v;
+    }
+  }
+  return results;
+}
+
+/** Warnings for draws outside an input's valid range. */
+function rangeWarnings(calc: Calculation, columns: readonly Float64Array[]): string[] {
+  const warnings: string[] = [];
+  calc.inputNames.forEach((name, i) => {
+    const def = calc.inputs[name]!;
+    const col = columns[i]!;
+    let outside = 0;
+    for (let r = 0; r < col.length; r++) if (!inRange(col[r]!, def.range)) outside++;
+    if (outside > 0) {
+      warnings.push(
+        `${outside} of ${col.length} draws of '${name}' fell outside its valid range ${
+          formatRange(def.range, def.unit)
+        }: its distribution puts mass where the quantity cannot be`,
+      );
+    }
+  });
+  return warnings;
+}
+
+/** Mean and standard deviation (two-pass, JCGM 101 eq. (16)–(17)). */
+export function meanAndStandardDeviation(values: Float64Array): { mean: number; sd: number } {
+  const m = values.length;
+  let s = 0;
+  for (let r = 0; r < m; r++) s += values[r]!;
+  const mean = s / m;
+  let ss = 0, comp = 0;
+  for (let r = 0; r < m; r++) {
+    const d = values[r]! - mean;
+    ss += d * d;
+    comp += d;
+  }
+  return { mean, sd: Math.sqrt(Math.max((ss - (comp * comp) / m) / (m - 1), 0)) };
+}
+
+/**
+ * Coverage intervals from sorted model values (JCGM 101:2008 §7.7): q = pM (or ⌊pM + ½⌋);
+ * probabilistically symmetric [y₍r₎, y₍r+q₎] with r = (M − q)/2 (or (M − q + 1)/2), and the
+ * shortest interval minimising y₍r+q₎ − y₍r₎ over r.
+ */
+export function coverageIntervals(
+  sorted: Float64Array,
+  coverage: number,
+): { symmetric: [number, number]; shortest: [number, number] } {
+  const m = sorted.length;
+  const pm = coverage * m;
+  const q = Number.isInteger(pm) ? pm : Math.floor(pm + 0.5);
+  const r = Number.isInteger((m - q) / 2) ? (m - q) / 2 : (m - q + 1) / 2;
+  // 1-based order statistics y_(r) → sorted[r − 1]
+  const symmetric: [number, number] = [sorted[Math.max(r - 1, 0)]!, sorted[Math.min(r + q - 1, m - 1)]!];
+  let best = Infinity, bestR = 1;
+  for (let s = 1; s + q <= m; s++) {
+    const w = sorted[s + q - 1]! - sorted[s - 1]!;
+    if (w < best) {
+      best = w;
+      bestR = s;
+    }
+  }
+  return { symmetric, shortest: [sorted[bestR - 1]!, sorted[Math.min(bestR + q - 1, m - 1)]!] };
+}
+
+function correlationOf(columns: readonly Float64Array[]): number[][] {
+  const stats = columns.map(meanAndStandardDeviation);
+  return columns.map((a, i) =>
+    columns.map((b, j) => {
+      if (i === j) return 1;
+      const sa = stats[i]!, sb = stats[j]!;
+      if (!(sa.sd > 0 && sb.sd > 0)) return 0;
+      let s = 0;
+      for (let r = 0; r < a.length; r++) s += (a[r]! - sa.mean) * (b[r]! - sb.mean);
+      return s / (a.length - 1) / (sa.sd * sb.sd);
+    })
+  );
+}
+
+function summarise<I extends string, O extends string>(
+  calc: Calculation<I, O>,
+  results: Float64Array[],
+  coverage: number,
+  trials: number,
+  seed: number,
+  warnings: string[],
+  keepSamples: boolean,
+): MonteCarloResult<O> {
+  const correlation = results.length > 1 ? correlationOf(results) : [[1]];
+  const outputs = {} as Record<O, MonteCarloOutput>;
+  calc.outputNames.forEach((o, k) => {
+    const col = results[k]!;
+    const { mean, sd } = meanAndStandardDeviation(col);
+    col.sort();
+    const { symmetric, shortest } = coverageIntervals(col, coverage);
+    outputs[o] = {
+      output: o,
+      unit: calc.outputs[o].unit,
+      estimate: mean,
+      standardUncertainty: sd,
+      symmetricInterval: symmetric,
+      shortestInterval: shortest,
+      samples: keepSamples ? col : new Float64Array(0),
+    };
+  });
+  const result: MonteCarloResult<O> = {
+    title: calc.title,
+    id: calc.id,
+    trials,
+    seed,
+    coverage,
+    outputs,
+    outputNames: calc.outputNames,
+    correlation,
+    warnings,
+    cautions: cautionsOf(calc as unknown as Calculation),
+    [JUPYTER_DISPLAY]: () => displayMonteCarlo(result as MonteCarloResult),
+  };
+  return result;
+}
+
+/**
+ * Propagates the input distributions through a calculation by Monte Carlo (JCGM 101:2008 §7):
+ * M trials drawn column-wise from one seeded stream, model values, their average and standard
+ * deviation, and probabilistically symmetric and shortest coverage intervals.
+ *
+ * @param calc The calculation.
+ * @param inputs Uncertain inputs by name (plain values are exact).
+ * @param options Trials, seed, coverage probability, correlations.
+ * @returns Estimates, uncertainties, intervals and (sorted) samples per output.
+ * @throws {TypeError} For unknown or missing inputs, wrong units, or correlation involving a
+ * non-normal input.
+ * @throws {RangeError} For bad trials, seed, coverage, uncertainties, or a non-finite model value.
+ *
+ * @example Additive model of JCGM 101:2008 §9.2.2: four standard normal inputs
+ * ```ts
+ * import { expressionModel, monteCarlo, normal } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const range = { min: -100, max: 100 };
+ * const model = expressionModel({
+ *   expression: "x1 + x2 + x3 + x4",
+ *   inputs: Object.fromEntries(["x1", "x2", "x3", "x4"].map((n) => [n, { unit: "1", description: n, range }])),
+ *   output: { name: "y", unit: "1", description: "sum" },
+ * });
+ * const r = monteCarlo(model, { x1: normal(0, 1), x2: normal(0, 1), x3: normal(0, 1), x4: normal(0, 1) },
+ *   { trials: 100_000, seed: 1 });
+ * // JCGM 101:2008 Table 2: u(y) = 2.00, 95 % interval [−3.92, 3.92]
+ * assert.ok(Math.abs(r.outputs.y.standardUncertainty - 2) < 0.02);
+ * ```
+ */
+export function monteCarlo<I extends string, O extends string>(
+  calc: Calculation<I, O>,
+  inputs: UncertainInputs<I>,
+  options: MonteCarloOptions = {},
+): MonteCarloResult<O> {
+  const coverage = checkCoverage(options.coverage ?? 0.95, calc.title);
+  const trials = checkTrials(options.trials ?? DEFAULT_TRIALS, coverage, calc.title);
+  const seed = options.seed ?? DEFAULT_SEED;
+  const rng = randomStream(seed);
+  const prepared = prepareInputs(calc, inputs, options.correlations);
+  const columns = sampleInputs(prepared as PreparedInputs<string>, trials, rng, calc.title);
+  const results = evaluateColumns(calc, prepared, columns, trials);
+  const warnings = [...prepared.flags, ...rangeWarnings(calc as unknown as Calculation, columns)];
+  return summarise(calc, results, coverage, trials, seed, warnings, options.keepSamples ?? true);
+}
+
+/** Options of {@linkcode monteCarloAdaptive}. */
+export interface AdaptiveOptions {
+  /** Significant decimal digits n_dig regarded as meaningful in u(y). @default 2 */
+  readonly significantDigits?: number;
+  /** Seed of the random stream. @default 20080101 */
+  readonly seed?: number;
+  /** Coverage probability. @default 0.95 */
+  readonly coverage?: number;
+  /** Correlations between (normal) inputs. */
+  readonly correlations?: Correlations;
+  /** Upper limit on the total number of trials. @default 50_000_000 */
+  readonly maxTrials?: number;
+}
+
+/** Result of {@linkcode monteCarloAdaptive}. */
+export interface AdaptiveResult<O extends string = string> extends MonteCarloResult<O> {
+  /** Number of sequences h of M trials each. */
+  readonly sequences: number;
+  /** Trials per sequence M = max(⌈100/(1 − p)⌉, 10⁴). */
+  readonly trialsPerSequence: number;
+  /** Numerical tolerance δ per output (JCGM 101 §7.9.2). */
+  readonly tolerance: { readonly [K in O]: number };
+  /** True when every result stabilised before `maxTrials`. */
+  readonly stabilized: boolean;
+}
+
+/**
+ * Adaptive Monte Carlo procedure (JCGM 101:2008 §7.9): sequences of M trials until twice the
+ * standard deviation of the sequence averages of y, u(y), y_low and y_high is at most the
+ * numerical tolerance δ = ½·10^l of u(y) at `significantDigits` digits, for every output.
+ *
+ * @param calc The calculation.
+ * @param inputs Uncertain inputs by name.
+ * @param options Significant digits, seed, coverage, correlations, trial limit.
+ * @returns The Monte Carlo result over all trials, with the number of sequences and tolerances.
+ *
+ * @example
+ * ```ts
+ * import { expressionModel, monteCarloAdaptive, normal } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const model = expressionModel({
+ *   expression: "2 * x",
+ *   inputs: { x: { unit: "1", description: "x", range: { min: -10, max: 10 } } },
+ *   output: { name: "y", unit: "1", description: "y" },
+ * });
+ * const r = monteCarloAdaptive(model, { x: normal(0, 1) }, { significantDigits: 1, seed: 3 });
+ * assert.ok(r.stabilized);
+ * ```
+ */
+export function monteCarloAdaptive<I extends string, O extends string>(
+  calc: Calculation<I, O>,
+  inputs: UncertainInputs<I>,
+  options: AdaptiveOptions = {},
+): AdaptiveResult<O> {
+  const coverage = checkCoverage(options.coverage ?? 0.95, calc.title);
+  const digits = options.significantDigits ?? 2;
+  if (!(Number.isInteger(digits) && digits >= 1 && digits <= 4)) {
+    throw new RangeError(`${calc.title}: expected significantDigits as an integer in [1, 4], got ${digits}`);
+  }
+  const maxTrials = options.maxTrials ?? 50_000_000;
+  const seed = options.seed ?? DEFAULT_SEED;
+  const rng = randomStream(seed);
+  const prepared = prepareInputs(calc, inputs, options.correlations);
+  const m = Math.max(Math.ceil(100 / (1 - coverage)), 10_000);
+  const outs = calc.outputNames;
+  const batches: Float64Array[][] = [];
+  const seqStats = outs.map(() => ({ y: [] as number[], u: [] as number[], lo: [] as number[], hi: [] as number[] }));
+  const warnings = [...prepared.flags];
+  const tolerance = {} as Record<O, number>;
+  let stabilized = false;
+  let inputWarnings: string[] = [];
+  while (!stabilized && (batches.length + 1) * m <= maxTrials) {
+    const columns = sampleInputs(prepared as PreparedInputs<string>, m, rng, calc.title);
+    if (batches.length === 0) inputWarnings = rangeWarnings(calc as unknown as Calculation, columns);
+    const results = evaluateColumns(calc, prepared, columns, m);
+    batches.push(results);
+    results.forEach((col, k) => {
+      const { mean, sd } = meanAndStandardDeviation(col);
+      const sorted = col.slice().sort();
+      const { symmetric } = coverageIntervals(sorted, coverage);
+      const s = seqStats[k]!;
+      s.y.push(mean);
+      s.u.push(sd);
+      s.lo.push(symmetric[0]);
+      s.hi.push(symmetric[1]);
+    });
+    const h = batches.length;
+    if (h < 2) continue;
+    stabilized = outs.every((o, k) => {
+      const s = seqStats[k]!;
+      const sdOfMean = (v: number[]) => meanAndStandardDeviation(Float64Array.from(v)).sd / Math.sqrt(v.length);
+      const uAll = s.u.reduce((a, b) => a + b, 0) / h;
+      const delta = numericalTolerance(uAll, digits);
+      tolerance[o] = delta;
+      return [s.y, s.u, s.lo, s.hi].every((v) => 2 * sdOfMean(v) <= delta);
+    });
+  }
+  if (!stabilized) {
+    warnings.push(`Adaptive Monte Carlo did not stabilise within ${maxTrials} trials at ${digits} significant digits`);
+  }
+  warnings.push(...inputWarnings);
+  const total = batches.length * m;
+  const merged = outs.map((_, k) => {
+    const all = new Float64Array(total);
+    batches.forEach((b, h) => all.set(b[k]!, h * m));
+    return all;
+  });
+  const base = summarise(calc, merged, coverage, total, seed, warnings, true);
+  const result: AdaptiveResult<O> = {
+    ...base,
+    sequences: batches.length,
+    trialsPerSequence: m,
+    tolerance,
+    stabilized,
+    [JUPYTER_DISPLAY]: () => displayMonteCarlo(result as MonteCarloResult),
+  };
+  return result;
+}
+
+/** The verdict of {@linkcode validateGumWithMonteCarlo} for one output. */
+export interface GumValidation {
+  /** Output name. */
+  readonly output: string;
+  /** Numerical tolerance δ from u(y) at n_dig digits. */
+  readonly tolerance: number;
+  /** |y − U − y_low| */
+  readonly lowDifference: number;
+  /** |y + U − y_high| */
+  readonly highDifference: number;
+  /** True when both differences are at most δ (JCGM 101 §8.2). */
+  readonly validated: boolean;
+  /** A plain-language verdict. */
+  readonly verdict: string;
+}
+
+/**
+ * Validates a GUM result against a Monte Carlo result (JCGM 101:2008 §8.2): δ = ½·10^l from
+ * u(y) at `significantDigits` digits; the GUM interval is validated when
+ * d_low = |y − U_p − y_low| and d_high = |y + U_p − y_high| are both ≤ δ, with [y_low, y_high]
+ * the probabilistically symmetric Monte Carlo interval.
+ *
+ * @example
+ * ```ts
+ * import { expressionModel, gum, monteCarlo, normal, validateGumWithMonteCarlo } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const model = expressionModel({
+ *   expression: "a + b",
+ *   inputs: { a: { unit: "1", description: "a", range: { min: -9, max: 9 } }, b: { unit: "1", description: "b", range: { min: -9, max: 9 } } },
+ *   output: { name: "y", unit: "1", description: "y" },
+ * });
+ * const inputs = { a: normal(0, 1), b: normal(0, 1) };
+ * const [v] = validateGumWithMonteCarlo(gum(model, inputs), monteCarlo(model, inputs, { seed: 2 }), 1);
+ * assert.ok(v!.validated);
+ * ```
+ */
+export function validateGumWithMonteCarlo(
+  gumResult: GumResult,
+  mcResult: MonteCarloResult,
+  significantDigits = 2,
+): GumValidation[] {
+  if (Math.abs(gumResult.coverage - mcResult.coverage) > 1e-12) {
+    throw new RangeError(
+      `GUM validation: expected equal coverage probabilities, got ${gumResult.coverage} and ${mcResult.coverage}`,
+    );
+  }
+  return gumResult.outputNames.map((name) => {
+    const g = gumResult.outputs[name]!;
+    const m = mcResult.outputs[name];
+    if (!m) throw new TypeError(`GUM validation: output '${name}' is missing from the Monte Carlo result`);
+    const uForTolerance = g.standardUncertainty > 0 ? g.standardUncertainty : m.standardUncertainty;
+    const tolerance = numericalTolerance(uForTolerance, significantDigits);
+    const lowDifference = Math.abs(g.interval[0] - m.symmetricInterval[0]);
+    const highDifference = Math.abs(g.interval[1] - m.symmetricInterval[1]);
+    const validated = lowDifference <= tolerance && highDifference <= tolerance;
+    const verdict = validated
+      ? `The GUM interval for '${name}' is validated by Monte Carlo at ${significantDigits} significant digit(s): endpoint differences ${
+        lowDifference.toPrecision(2)
+      } and ${highDifference.toPrecision(2)} are within δ = ${tolerance}`
+      : `The GUM interval for '${name}' is NOT validated by Monte Carlo at ${significantDigits} significant digit(s): endpoint differences ${
+        lowDifference.toPrecision(2)
+      } and ${highDifference.toPrecision(2)} exceed δ = ${tolerance}; report the Monte Carlo interval`;
+    return { output: name, tolerance, lowDifference, highDifference, validated, verdict };
+  });
+}

@@ -1,0 +1,8 @@
+/**
+ * Charts: vega-lite specs with static SVG rendering, kept apart from the calculations so that
+ * calculations never import rendering code.
+ *
+ * @module
+ */
+export { Chart, type ChartOptions, type VegaLiteSpec } from "./chart.ts";
+export * from "./uncertainty.ts";
