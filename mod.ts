@@ -11,3 +11,8 @@ export * from "./calc/core/mod.ts";
 export * from "./calc/uncertainty/mod.ts";
 export * from "./calc/physics/mod.ts";
 export * from "./calc/stats/mod.ts";
+export * from "./calc/body/mod.ts";
+export * from "./calc/reference/mod.ts";
+export * from "./calc/chamber/mod.ts";
+export * from "./calc/doppler/mod.ts";
+export * from "./calc/agreement/mod.ts";

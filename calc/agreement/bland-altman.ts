@@ -5,14 +5,7 @@
  *
  * @module
  */
-import {
-  checkConfidence,
-  checkPairs,
-  type Interval,
-  mean,
-  shown,
-  sumSquares,
-} from "./checks.ts";
+import { checkConfidence, checkPairs, type Interval, mean, shown, sumSquares } from "./checks.ts";
 import { nonCentralTQuantile, tCdf, tQuantile } from "./distributions.ts";
 
 export type { Interval } from "./checks.ts";
@@ -90,7 +83,11 @@ function checkMultiplier(where: string, multiplier: unknown): number {
 }
 
 /** Ordinary least squares of y on x with slope inference; null when x is constant or n < 3. */
-function regressSlope(x: readonly number[], y: readonly number[], confidence: number): ProportionalBias | null {
+function regressSlope(
+  x: readonly number[],
+  y: readonly number[],
+  confidence: number,
+): ProportionalBias | null {
   const n = x.length;
   if (n < 3) return null;
   const mx = mean(x);
@@ -232,9 +229,17 @@ export interface BlandAltmanRatioResult {
   /** Geometric mean ratio a/b = exp(bias), with its interval. */
   readonly ratio: { readonly value: number; readonly ci: Interval };
   /** Limits of agreement for the ratio a/b, exp of the log limits (with exact intervals). */
-  readonly lowerRatioLimit: { readonly value: number; readonly exactCi: Interval; readonly approximateCi: Interval };
+  readonly lowerRatioLimit: {
+    readonly value: number;
+    readonly exactCi: Interval;
+    readonly approximateCi: Interval;
+  };
   /** Upper ratio limit, as {@linkcode BlandAltmanRatioResult.lowerRatioLimit}. */
-  readonly upperRatioLimit: { readonly value: number; readonly exactCi: Interval; readonly approximateCi: Interval };
+  readonly upperRatioLimit: {
+    readonly value: number;
+    readonly exactCi: Interval;
+    readonly approximateCi: Interval;
+  };
 }
 
 /**
@@ -272,10 +277,14 @@ export function blandAltmanRatio(
   const where = "Bland-Altman ratio analysis";
   const [a, b] = checkPairs(where, ["methodA", "methodB"], methodA, methodB);
   a.forEach((v, i) => {
-    if (!(v > 0)) throw new RangeError(`${where}: expected 'methodA[${i}]' > 0 for logarithms, got ${v}`);
+    if (!(v > 0)) {
+      throw new RangeError(`${where}: expected 'methodA[${i}]' > 0 for logarithms, got ${v}`);
+    }
   });
   b.forEach((v, i) => {
-    if (!(v > 0)) throw new RangeError(`${where}: expected 'methodB[${i}]' > 0 for logarithms, got ${v}`);
+    if (!(v > 0)) {
+      throw new RangeError(`${where}: expected 'methodB[${i}]' > 0 for logarithms, got ${v}`);
+    }
   });
   const log = blandAltman(a.map(Math.log), b.map(Math.log), options);
   const ex = (i: Interval): Interval => ({ lower: Math.exp(i.lower), upper: Math.exp(i.upper) });
@@ -359,13 +368,17 @@ export function blandAltmanRepeated(
   const multiplier = checkMultiplier(where, options.multiplier ?? 1.96);
   if (!Array.isArray(subjectIds) || subjectIds.length !== a.length) {
     throw new TypeError(
-      `${where}: expected 'subjectIds' with one entry per pair (${a.length}), got ${shown(subjectIds)}`,
+      `${where}: expected 'subjectIds' with one entry per pair (${a.length}), got ${
+        shown(subjectIds)
+      }`,
     );
   }
   const groups = new Map<string, number[]>();
   subjectIds.forEach((id, i) => {
     if (typeof id !== "string" && typeof id !== "number") {
-      throw new TypeError(`${where}: expected a string or number at 'subjectIds[${i}]', got ${shown(id)}`);
+      throw new TypeError(
+        `${where}: expected a string or number at 'subjectIds[${i}]', got ${shown(id)}`,
+      );
     }
     const key = String(id);
     const list = groups.get(key) ?? [];

@@ -31,7 +31,9 @@ export function checkNumbers(
   minLength = 2,
 ): readonly number[] {
   if (!Array.isArray(values) && !(values instanceof Float64Array)) {
-    throw new TypeError(`${where}: expected '${name}' as an array of numbers, got ${shown(values)}`);
+    throw new TypeError(
+      `${where}: expected '${name}' as an array of numbers, got ${shown(values)}`,
+    );
   }
   const arr = values as ArrayLike<unknown>;
   if (arr.length < minLength) {
@@ -63,7 +65,9 @@ export function checkPairs(
   const y = checkNumbers(where, names[1], b, minLength);
   if (x.length !== y.length) {
     throw new TypeError(
-      `${where}: expected '${names[0]}' and '${names[1]}' of equal length (paired readings), got ${x.length} and ${y.length}`,
+      `${where}: expected '${names[0]}' and '${
+        names[1]
+      }' of equal length (paired readings), got ${x.length} and ${y.length}`,
     );
   }
   return [x, y];
@@ -72,7 +76,9 @@ export function checkPairs(
 /** Checks a confidence level in (0, 1). */
 export function checkConfidence(where: string, confidence: unknown): number {
   if (typeof confidence !== "number") {
-    throw new TypeError(`${where}: expected 'confidence' as a number in (0, 1), got ${shown(confidence)}`);
+    throw new TypeError(
+      `${where}: expected 'confidence' as a number in (0, 1), got ${shown(confidence)}`,
+    );
   }
   if (!(confidence > 0 && confidence < 1)) {
     throw new RangeError(`${where}: expected 'confidence' in (0, 1), got ${confidence}`);

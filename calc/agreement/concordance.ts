@@ -68,8 +68,12 @@ export function concordanceCorrelation(
   const my = mean(b);
   const sxx = sumSquares(a, mx) / n;
   const syy = sumSquares(b, my) / n;
-  if (!(sxx > 0)) throw new RangeError(`${where}: expected 'x' values that vary, got variance ${sxx}`);
-  if (!(syy > 0)) throw new RangeError(`${where}: expected 'y' values that vary, got variance ${syy}`);
+  if (!(sxx > 0)) {
+    throw new RangeError(`${where}: expected 'x' values that vary, got variance ${sxx}`);
+  }
+  if (!(syy > 0)) {
+    throw new RangeError(`${where}: expected 'y' values that vary, got variance ${syy}`);
+  }
   let sxy = 0;
   for (let i = 0; i < n; i++) sxy += (a[i]! - mx) * (b[i]! - my);
   sxy /= n;

@@ -60,7 +60,9 @@ export function normalQuantile(p: number): number {
  * ```
  */
 export function normalCdf(z: number): number {
-  if (Number.isNaN(z)) throw new RangeError(`Normal distribution function: expected a number 'z', got ${z}`);
+  if (Number.isNaN(z)) {
+    throw new RangeError(`Normal distribution function: expected a number 'z', got ${z}`);
+  }
   return normalCdfStdlib(z, 0, 1);
 }
 
@@ -102,7 +104,9 @@ export function tQuantile(p: number, df: number): number {
  * ```
  */
 export function tCdf(t: number, df: number): number {
-  if (Number.isNaN(t)) throw new RangeError(`Student t distribution function: expected a number 't', got ${t}`);
+  if (Number.isNaN(t)) {
+    throw new RangeError(`Student t distribution function: expected a number 't', got ${t}`);
+  }
   checkDegrees("Student t distribution function", "df", df);
   return tCdfStdlib(t, df);
 }
@@ -225,7 +229,9 @@ export function nonCentralTCdf(t: number, df: number, delta: number): number {
   const where = "Non-central t distribution function";
   if (Number.isNaN(t)) throw new RangeError(`${where}: expected a number 't', got ${t}`);
   checkDegrees(where, "df", df);
-  if (!Number.isFinite(delta)) throw new RangeError(`${where}: expected a finite 'delta', got ${delta}`);
+  if (!Number.isFinite(delta)) {
+    throw new RangeError(`${where}: expected a finite 'delta', got ${delta}`);
+  }
   if (t === Infinity) return 1;
   if (t === -Infinity) return 0;
   const p = t >= 0 ? nonCentralTSeries(t, df, delta) : 1 - nonCentralTSeries(-t, df, -delta);
@@ -256,7 +262,9 @@ export function nonCentralTQuantile(p: number, df: number, delta: number): numbe
   const where = "Non-central t quantile";
   if (!(p > 0 && p < 1)) throw new RangeError(`${where}: expected 'p' in (0, 1), got ${p}`);
   checkDegrees(where, "df", df);
-  if (!Number.isFinite(delta)) throw new RangeError(`${where}: expected a finite 'delta', got ${delta}`);
+  if (!Number.isFinite(delta)) {
+    throw new RangeError(`${where}: expected a finite 'delta', got ${delta}`);
+  }
   const cdf = (t: number) => nonCentralTCdf(t, df, delta);
   let step = 1 + Math.abs(delta) * 0.1;
   let lo = delta - step;

@@ -97,7 +97,9 @@ export function intraclassCorrelations(
 ): IntraclassCorrelationResult {
   const where = "Intraclass correlation";
   if (!Array.isArray(ratings)) {
-    throw new TypeError(`${where}: expected 'ratings' as an array of rows (subjects), got ${shown(ratings)}`);
+    throw new TypeError(
+      `${where}: expected 'ratings' as an array of rows (subjects), got ${shown(ratings)}`,
+    );
   }
   const n = ratings.length;
   if (n < 2) throw new RangeError(`${where}: expected at least 2 subjects, got ${n}`);
@@ -151,7 +153,8 @@ export function intraclassCorrelations(
   const icc21 = (msr - mse) / (msr + (k - 1) * mse + (k * (msc - mse)) / n);
   const fj = msc / mse;
   const vn = (k - 1) * (n - 1) * (k * icc21 * fj + n * (1 + (k - 1) * icc21) - k * icc21) ** 2;
-  const vd = (n - 1) * k * k * icc21 * icc21 * fj * fj + (n * (1 + (k - 1) * icc21) - k * icc21) ** 2;
+  const vd = (n - 1) * k * k * icc21 * icc21 * fj * fj +
+    (n * (1 + (k - 1) * icc21) - k * icc21) ** 2;
   const v = vn / vd;
   const fL2 = q(n - 1, v);
   const fU2 = q(v, n - 1);
@@ -192,30 +195,96 @@ export function intraclassCorrelations(
     meanSquares: { subjects: msr, raters: msc, residual: mse, within: msw },
     confidence,
     forms: [
-      make("ICC(1,1)", "ICC(1)", oneWay, "single", "absolute agreement", (msr - msw) / (msr + (k - 1) * msw), {
-        lower: single(f1L),
-        upper: single(f1U),
-      }, f1, d1a, d1b),
-      make("ICC(2,1)", "ICC(A,1)", twoWayRandom, "single", "absolute agreement", icc21, {
-        lower: l21,
-        upper: u21,
-      }, f3, d3a, d3b),
-      make("ICC(3,1)", "ICC(C,1)", twoWayMixed, "single", "consistency", (msr - mse) / (msr + (k - 1) * mse), {
-        lower: single(f3L),
-        upper: single(f3U),
-      }, f3, d3a, d3b),
-      make("ICC(1,k)", "ICC(k)", oneWay, "average", "absolute agreement", (msr - msw) / msr, {
-        lower: average(f1L),
-        upper: average(f1U),
-      }, f1, d1a, d1b),
-      make("ICC(2,k)", "ICC(A,k)", twoWayRandom, "average", "absolute agreement", (msr - mse) / (msr + (msc - mse) / n), {
-        lower: sb(l21),
-        upper: sb(u21),
-      }, f3, d3a, d3b),
-      make("ICC(3,k)", "ICC(C,k)", twoWayMixed, "average", "consistency", (msr - mse) / msr, {
-        lower: average(f3L),
-        upper: average(f3U),
-      }, f3, d3a, d3b),
+      make(
+        "ICC(1,1)",
+        "ICC(1)",
+        oneWay,
+        "single",
+        "absolute agreement",
+        (msr - msw) / (msr + (k - 1) * msw),
+        {
+          lower: single(f1L),
+          upper: single(f1U),
+        },
+        f1,
+        d1a,
+        d1b,
+      ),
+      make(
+        "ICC(2,1)",
+        "ICC(A,1)",
+        twoWayRandom,
+        "single",
+        "absolute agreement",
+        icc21,
+        {
+          lower: l21,
+          upper: u21,
+        },
+        f3,
+        d3a,
+        d3b,
+      ),
+      make(
+        "ICC(3,1)",
+        "ICC(C,1)",
+        twoWayMixed,
+        "single",
+        "consistency",
+        (msr - mse) / (msr + (k - 1) * mse),
+        {
+          lower: single(f3L),
+          upper: single(f3U),
+        },
+        f3,
+        d3a,
+        d3b,
+      ),
+      make(
+        "ICC(1,k)",
+        "ICC(k)",
+        oneWay,
+        "average",
+        "absolute agreement",
+        (msr - msw) / msr,
+        {
+          lower: average(f1L),
+          upper: average(f1U),
+        },
+        f1,
+        d1a,
+        d1b,
+      ),
+      make(
+        "ICC(2,k)",
+        "ICC(A,k)",
+        twoWayRandom,
+        "average",
+        "absolute agreement",
+        (msr - mse) / (msr + (msc - mse) / n),
+        {
+          lower: sb(l21),
+          upper: sb(u21),
+        },
+        f3,
+        d3a,
+        d3b,
+      ),
+      make(
+        "ICC(3,k)",
+        "ICC(C,k)",
+        twoWayMixed,
+        "average",
+        "consistency",
+        (msr - mse) / msr,
+        {
+          lower: average(f3L),
+          upper: average(f3U),
+        },
+        f3,
+        d3a,
+        d3b,
+      ),
     ],
   };
 }

@@ -4,7 +4,15 @@
  *
  * @module
  */
-import { checkConfidence, checkPairs, type Interval, mean, median, shown, sumSquares } from "./checks.ts";
+import {
+  checkConfidence,
+  checkPairs,
+  type Interval,
+  mean,
+  median,
+  shown,
+  sumSquares,
+} from "./checks.ts";
 import { normalQuantile, tQuantile } from "./distributions.ts";
 
 /** Options of {@linkcode demingRegression}. */
@@ -94,7 +102,9 @@ export function demingRegression(
   const [a, b] = checkPairs(where, ["x", "y"], x, y, 3);
   const lambda = options.errorVarianceRatio ?? 1;
   if (typeof lambda !== "number") {
-    throw new TypeError(`${where}: expected 'errorVarianceRatio' as a number, got ${shown(lambda)}`);
+    throw new TypeError(
+      `${where}: expected 'errorVarianceRatio' as a number, got ${shown(lambda)}`,
+    );
   }
   if (!(lambda > 0 && lambda < Infinity)) {
     throw new RangeError(`${where}: expected 'errorVarianceRatio' in (0, ∞), got ${lambda}`);
@@ -106,7 +116,9 @@ export function demingRegression(
     let sxy = 0;
     for (let i = 0; i < xs.length; i++) sxy += (xs[i]! - mx) * (ys[i]! - my);
     if (!(Math.abs(sxy) > 0)) {
-      throw new RangeError(`${where}: expected a linear association between x and y${what}, got covariance ${sxy}`);
+      throw new RangeError(
+        `${where}: expected a linear association between x and y${what}, got covariance ${sxy}`,
+      );
     }
   };
   check(a, b, "");
@@ -214,13 +226,17 @@ export function passingBablokRegression(
   const at = (i: number) => {
     const v = slopes[i - 1];
     if (v === undefined) {
-      throw new RangeError(`${where}: expected enough usable pairwise slopes for the interval, got ${N}`);
+      throw new RangeError(
+        `${where}: expected enough usable pairwise slopes for the interval, got ${N}`,
+      );
     }
     return v;
   };
   const slope = N % 2 === 1 ? at((N + 1) / 2 + K) : 0.5 * (at(N / 2 + K) + at(N / 2 + 1 + K));
   if (!(slope > 0 && Number.isFinite(slope))) {
-    throw new RangeError(`${where}: expected positively related methods (finite slope > 0), got slope ${slope}`);
+    throw new RangeError(
+      `${where}: expected positively related methods (finite slope > 0), got slope ${slope}`,
+    );
   }
   const intercept = median(a.map((v, i) => b[i]! - slope * v));
   const c = normalQuantile(0.5 + confidence / 2) * Math.sqrt((n * (n - 1) * (2 * n + 5)) / 18);
@@ -238,9 +254,15 @@ export function passingBablokRegression(
   const above = resid.filter((r) => r > 0).length;
   const below = resid.filter((r) => r < 0).length;
   const scores = resid.map((r) =>
-    r > 0 ? Math.sqrt(below / Math.max(above, 1)) : r < 0 ? -Math.sqrt(above / Math.max(below, 1)) : 0
+    r > 0
+      ? Math.sqrt(below / Math.max(above, 1))
+      : r < 0
+      ? -Math.sqrt(above / Math.max(below, 1))
+      : 0
   );
-  const dist = a.map((v, i) => (b[i]! + v / slope - intercept) / Math.sqrt(1 + 1 / (slope * slope)));
+  const dist = a.map((v, i) =>
+    (b[i]! + v / slope - intercept) / Math.sqrt(1 + 1 / (slope * slope))
+  );
   const order = dist.map((_, i) => i).sort((p, q) => dist[p]! - dist[q]!);
   let cusum = 0;
   let maxAbs = 0;

@@ -80,7 +80,9 @@ export function repeatability(
   const where = "Repeatability";
   if (!Array.isArray(readingsBySubject)) {
     throw new TypeError(
-      `${where}: expected 'readingsBySubject' as an array of arrays of readings, got ${shown(readingsBySubject)}`,
+      `${where}: expected 'readingsBySubject' as an array of arrays of readings, got ${
+        shown(readingsBySubject)
+      }`,
     );
   }
   if (readingsBySubject.length < 2) {
@@ -113,7 +115,9 @@ export function repeatability(
   });
   const sw = Math.sqrt(ss / df);
   if (!(sw > 0)) {
-    throw new RangeError(`${where}: expected readings that vary within subjects, got within-subject SD ${sw}`);
+    throw new RangeError(
+      `${where}: expected readings that vary within subjects, got within-subject SD ${sw}`,
+    );
   }
   const alpha = 1 - confidence;
   const swCi = {

@@ -27,5 +27,5 @@ export {
   isCalculation,
   validateInputs,
 } from "./define.ts";
-export { type QuantityInput, toCanonical } from "./units.ts";
+export { math, type QuantityInput, toCanonical } from "./units.ts";
 export { JUPYTER_DISPLAY, type MimeBundle } from "./display.ts";

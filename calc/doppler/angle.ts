@@ -92,7 +92,8 @@ export const insonationAngleEffect: Calculation<
   },
   formula: ({ measuredVelocity, angleDeg }) => {
     const trueVelocity = trueVelocityAt(measuredVelocity, angleDeg);
-    const measuredGradient = simplifiedBernoulli.formula({ peakVelocity: measuredVelocity }).gradient;
+    const measuredGradient =
+      simplifiedBernoulli.formula({ peakVelocity: measuredVelocity }).gradient;
     const trueGradient = simplifiedBernoulli.formula({ peakVelocity: trueVelocity }).gradient;
     return {
       trueVelocity,

@@ -49,7 +49,6 @@ export const simplifiedBernoulli: Calculation<"peakVelocity", "gradient"> = defi
     "Velocity underestimated by a non-parallel beam is squared into the gradient",
   ],
   clinical: true,
-  gradient: ({ peakVelocity }) => ({ gradient: { peakVelocity: 8 * peakVelocity } }),
 });
 
 /**

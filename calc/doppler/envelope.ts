@@ -71,7 +71,9 @@ export function validateEnvelope(
     );
   }
   const { timesMs, velocitiesMPerS } = envelope;
-  for (const [name, field] of [["timesMs", timesMs], ["velocitiesMPerS", velocitiesMPerS]] as const) {
+  for (
+    const [name, field] of [["timesMs", timesMs], ["velocitiesMPerS", velocitiesMPerS]] as const
+  ) {
     if (!isArrayLike(field)) {
       throw new TypeError(
         `${WHERE}: expected '${name}' as an array of numbers, got ${

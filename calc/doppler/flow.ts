@@ -255,8 +255,10 @@ export const pulmonarySystemicFlowRatio: Calculation<
     systemicStrokeVolumeMl: { unit: "mL", description: "LVOT stroke volume (Qs per beat)" },
   },
   formula: ({ rvotDiameterCm, rvotVtiCm, lvotDiameterCm, lvotVtiCm }) => {
-    const qp = strokeVolume.formula({ diameterCm: rvotDiameterCm, vtiCm: rvotVtiCm }).strokeVolumeMl;
-    const qs = strokeVolume.formula({ diameterCm: lvotDiameterCm, vtiCm: lvotVtiCm }).strokeVolumeMl;
+    const qp =
+      strokeVolume.formula({ diameterCm: rvotDiameterCm, vtiCm: rvotVtiCm }).strokeVolumeMl;
+    const qs =
+      strokeVolume.formula({ diameterCm: lvotDiameterCm, vtiCm: lvotVtiCm }).strokeVolumeMl;
     return { qpQs: qp / qs, pulmonaryStrokeVolumeMl: qp, systemicStrokeVolumeMl: qs };
   },
   formulaText: "Qp/Qs = (π·d_RVOT²/4·VTI_RVOT) / (π·d_LVOT²/4·VTI_LVOT)",

@@ -6,7 +6,14 @@
  * @module
  */
 import type { Reference } from "../core/types.ts";
-import { escapeHtml, formatNumber, htmlTable, JUPYTER_DISPLAY, type MimeBundle, textTable } from "../core/display.ts";
+import {
+  escapeHtml,
+  formatNumber,
+  htmlTable,
+  JUPYTER_DISPLAY,
+  type MimeBundle,
+  textTable,
+} from "../core/display.ts";
 
 /** One class of a severity table: a half-open or closed interval of the graded quantity. */
 export interface SeverityBand {
@@ -124,7 +131,9 @@ export function defineSeverityTable(table: SeverityTable): SeverityTable {
   if (table.bands.length === 0) throw new TypeError(`${where}: expected at least one band, got 0`);
   table.bands.forEach((b, i) => {
     if (b.lower !== null && b.upper !== null && !(b.lower < b.upper)) {
-      throw new TypeError(`${where}: band '${b.grade}' has an empty interval ${boundText(b, table.unit)}`);
+      throw new TypeError(
+        `${where}: band '${b.grade}' has an empty interval ${boundText(b, table.unit)}`,
+      );
     }
     const next = table.bands[i + 1];
     if (next === undefined) return;
@@ -141,7 +150,10 @@ export function defineSeverityTable(table: SeverityTable): SeverityTable {
       );
     }
   });
-  return Object.freeze({ ...table, bands: Object.freeze(table.bands.map((b) => Object.freeze({ ...b }))) });
+  return Object.freeze({
+    ...table,
+    bands: Object.freeze(table.bands.map((b) => Object.freeze({ ...b }))),
+  });
 }
 
 function inBand(value: number, b: SeverityBand): boolean {
@@ -153,7 +165,8 @@ function inBand(value: number, b: SeverityBand): boolean {
 function domainText(table: SeverityTable): string {
   const first = table.bands[0]!;
   const last = table.bands[table.bands.length - 1]!;
-  return boundText({ ...first, upper: last.upper, upperInclusive: last.upperInclusive }, table.unit).trim();
+  return boundText({ ...first, upper: last.upper, upperInclusive: last.upperInclusive }, table.unit)
+    .trim();
 }
 
 function bandIndex(table: SeverityTable, value: number, where: string): number {
@@ -200,7 +213,9 @@ export function gradeSeverity(
   const where = `Severity grading (${table.title})`;
   if (typeof value === "number") {
     if (!Number.isFinite(value)) {
-      throw new RangeError(`${where}: expected a finite value in ${domainText(table)}, got ${value}`);
+      throw new RangeError(
+        `${where}: expected a finite value in ${domainText(table)}, got ${value}`,
+      );
     }
     const band = table.bands[bandIndex(table, value, where)]!;
     const result: SeverityGrade = {
@@ -214,7 +229,8 @@ export function gradeSeverity(
   }
   const samples = isArrayLikeOfNumbers(value)
     ? value
-    : typeof value === "object" && value !== null && isArrayLikeOfNumbers((value as { samples?: unknown }).samples)
+    : typeof value === "object" && value !== null &&
+        isArrayLikeOfNumbers((value as { samples?: unknown }).samples)
     ? (value as { samples: ArrayLike<number> }).samples
     : null;
   if (samples === null) {
@@ -264,16 +280,20 @@ function sourceText(b: SeverityBand): string {
 }
 
 function displayGrade(table: SeverityTable, r: SeverityGrade): MimeBundle {
-  const line = `${table.quantity} ${formatNumber(r.value)} ${table.unit}: ${r.grade} (${r.band.printed}; ${
-    sourceText(r.band)
-  })`;
+  const line = `${table.quantity} ${
+    formatNumber(r.value)
+  } ${table.unit}: ${r.grade} (${r.band.printed}; ${sourceText(r.band)})`;
   return { "text/plain": line, "text/html": `<p>${escapeHtml(line)}</p>` };
 }
 
 function displayDistribution(table: SeverityTable, r: SeverityDistribution): MimeBundle {
   const header = ["class", "threshold", "probability"];
-  const rows = r.probabilities.map((p) => [p.grade, `${p.printed} ${table.unit}`, formatNumber(p.probability, 3)]);
-  const title = `${table.title}: median ${formatNumber(r.median)} ${table.unit} → ${r.grade}; most likely ${r.mostLikely} (n = ${r.count})`;
+  const rows = r.probabilities.map((
+    p,
+  ) => [p.grade, `${p.printed} ${table.unit}`, formatNumber(p.probability, 3)]);
+  const title = `${table.title}: median ${
+    formatNumber(r.median)
+  } ${table.unit} → ${r.grade}; most likely ${r.mostLikely} (n = ${r.count})`;
   return {
     "text/plain": [title, textTable(header, rows)].join("\n"),
     "text/html": `<div><b>${escapeHtml(title)}</b>${htmlTable(header, rows)}</div>`,

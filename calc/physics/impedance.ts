@@ -113,5 +113,7 @@ export const interfaceReflection: Calculation<
   },
   formulaText: "r = (Z₂ − Z₁)/(Z₂ + Z₁); R = r²; T = 1 − R",
   sources: [KREMKAU, BUSHBERG],
-  cautions: ["Normal incidence on a flat, smooth interface larger than the beam; oblique and rough interfaces differ"],
+  cautions: [
+    "Normal incidence on a flat, smooth interface larger than the beam; oblique and rough interfaces differ",
+  ],
 });

@@ -11,8 +11,8 @@ import type { Calculation } from "../core/types.ts";
 import {
   depthInput,
   HOSKINS,
-  prfInput,
   KREMKAU,
+  prfInput,
   roundTripTimeS,
   soundSpeedInput,
   validateArguments,

@@ -5,3 +5,4 @@
  */
 export * from "./adult.ts";
 export * from "./zscore.ts";
+export * from "./zscoreUncertainty.ts";

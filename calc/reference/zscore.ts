@@ -12,7 +12,7 @@
 import * as z from "zod";
 import { defineCalculation, evaluate, formatRange, inRange } from "../core/define.ts";
 import type { Calculation, Reference, ValueRange } from "../core/types.ts";
-import type { QuantityInput } from "../core/units.ts";
+import { mathUnitOf, type QuantityInput } from "../core/units.ts";
 import { type BsaMethod, bsaCalculation } from "../body/bsa.ts";
 import { normalCdf } from "../stats/distributions.ts";
 
@@ -758,8 +758,9 @@ export interface ZScoreComparisonRow {
 
 /**
  * Z-scores of one measurement under several models, side by side (each model uses its own BSA
- * formula when height and weight are given). A model that cannot be applied (e.g. a unit that
- * does not match) yields a row with `error` rather than failing the whole comparison.
+ * formula when height and weight are given). A model that cannot be applied (a unit of another
+ * dimension than the first model's, or a value outside its domain) yields a row with `error`
+ * rather than failing the whole comparison.
  *
  * @param models The models to compare (typically of the same measurement).
  * @param args `{ measurement, heightCm, weightKg }` (preferred: each model gets its own BSA) or
@@ -788,8 +789,26 @@ export function compareZScoreModels(
       Array.isArray(models) ? "an empty array" : typeof models
     }`);
   }
+  const first = models[0]!;
+  const firstUnit = mathUnitOf(first.unit);
   return models.map((model) => {
     const source = `${model.source.authors.split(",")[0]} ${model.source.year}`;
+    const unit = mathUnitOf(model.unit);
+    const comparable = model.unit === first.unit ||
+      (unit !== null && firstUnit !== null && unit.equalBase(firstUnit));
+    if (!comparable) {
+      return {
+        modelId: model.id,
+        family: model.family,
+        source,
+        zScore: NaN,
+        percentile: NaN,
+        bsaM2: NaN,
+        flags: [],
+        error:
+          `Z-score comparison: model '${model.id}' measures in ${model.unit}, not comparable with ${first.unit} of '${first.id}', got ${model.unit}`,
+      };
+    }
     try {
       const r = zScore(model, args);
       return {

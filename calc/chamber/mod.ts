@@ -1,0 +1,58 @@
+/**
+ * Chamber quantification: linear LV measurements (fractional shortening, Teichholz, LV mass,
+ * relative wall thickness, geometry), 2D volumes from traced contours (method of discs,
+ * area–length, ejection fraction, left-atrial volume) and ventricular function (TAPSE, MAPSE,
+ * fractional area change, myocardial performance index, global longitudinal strain).
+ *
+ * @module
+ */
+export {
+  type Contour,
+  contourArea,
+  type ContourCoordinates,
+  contourLongAxis,
+  type ContourPoint,
+  discDiameters,
+  type LongAxis,
+  validateContour,
+} from "./contour.ts";
+export {
+  classifyLvGeometry,
+  fractionalShortening,
+  LV_GEOMETRY_LIMITS,
+  lvGeometryMeasures,
+  lvGeometryProbabilities,
+  type LvGeometry,
+  lvMassIndex,
+  lvMassLinear,
+  relativeWallThickness,
+  type Sex,
+  teichholzEjectionFraction,
+  teichholzVolume,
+} from "./linear.ts";
+export {
+  ejectionFraction,
+  fractionalAreaChange,
+  globalLongitudinalStrain,
+  mapse,
+  myocardialPerformanceIndex,
+  myocardialPerformanceIndexFromClosureTime,
+  percentReduction,
+  STRAIN_SEGMENT_MODELS,
+  tapse,
+} from "./function.ts";
+export {
+  areaLengthVolume,
+  areaLengthVolumeFromContour,
+  type BiplaneContours,
+  biplaneAreaLengthVolume,
+  biplaneDiscVolume,
+  biplaneEjectionFraction,
+  type DiscOptions,
+  type DiscVolume,
+  discSummationVolume,
+  GUIDELINE_DISC_COUNT,
+  leftAtrialVolume,
+  singlePlaneDiscVolume,
+  type TracedView,
+} from "./volumes.ts";

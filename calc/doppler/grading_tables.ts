@@ -1,0 +1,573 @@
+/**
+ * Guideline severity tables as data, one table per graded quantity, each row with its source.
+ *
+ * Printed guideline thresholds have gaps at the rounding step (e.g. "2.6–2.9" then "3.0–3.9"); the
+ * bands here close those gaps at the next printed value so that every measurement falls in exactly
+ * one class (e.g. mild AS is 2.5 < Vmax < 3.0). All thresholds were recalled by the authors and
+ * checked against each other, not against a fresh copy of the printed tables: they are marked
+ * "from memory" row by row.
+ *
+ * @module
+ */
+import type { Reference } from "../core/types.ts";
+import { defineSeverityTable, type SeverityBand, type SeverityTable } from "./grading.ts";
+import {
+  BAUMGARTNER_2009,
+  BAUMGARTNER_2017,
+  GALIE_2015,
+  HUMBERT_2022,
+  NISHIMURA_2014,
+  ZOGHBI_2017,
+} from "./sources.ts";
+
+function at(ref: Reference, locator: string): Reference {
+  return { ...ref, locator };
+}
+
+/** A band from printed text; `lower`/`upper` null means unbounded. */
+function band(
+  grade: string,
+  printed: string,
+  lower: number | null,
+  lowerInclusive: boolean,
+  upper: number | null,
+  upperInclusive: boolean,
+  source: Reference,
+): SeverityBand {
+  return { grade, printed, lower, lowerInclusive, upper, upperInclusive, source, fromMemory: true };
+}
+
+// ---------------------------------------------------------------- aortic stenosis
+
+const AS_2009 = at(BAUMGARTNER_2009, "Table 4, classification of AS severity (from memory)");
+const AS_2017 = at(BAUMGARTNER_2017, "Table 3, classification of AS severity (from memory)");
+
+function asValveAreaTables(src: Reference, year: number): {
+  valveArea: SeverityTable;
+  indexedValveArea: SeverityTable;
+  velocityRatio: SeverityTable;
+} {
+  return {
+    valveArea: defineSeverityTable({
+      id: `aorticStenosisValveArea${year}`,
+      title: `Aortic stenosis by valve area (${year})`,
+      quantity: "Aortic valve area",
+      unit: "cm^2",
+      bands: [
+        band("severe", "< 1.0", 0, false, 1.0, false, src),
+        band("moderate", "1.0–1.5", 1.0, true, 1.5, true, src),
+        band("mild", "> 1.5", 1.5, false, null, false, src),
+      ],
+      notes: ["The table does not separate normal valves from mild stenosis by area"],
+    }),
+    indexedValveArea: defineSeverityTable({
+      id: `aorticStenosisIndexedValveArea${year}`,
+      title: `Aortic stenosis by indexed valve area (${year})`,
+      quantity: "Indexed aortic valve area",
+      unit: "cm^2/m^2",
+      bands: [
+        band("severe", "< 0.6", 0, false, 0.6, false, src),
+        band("moderate", "0.60–0.85", 0.6, true, 0.85, true, src),
+        band("mild", "> 0.85", 0.85, false, null, false, src),
+      ],
+      notes: ["Indexing over-corrects in obesity"],
+    }),
+    velocityRatio: defineSeverityTable({
+      id: `aorticStenosisVelocityRatio${year}`,
+      title: `Aortic stenosis by velocity ratio / dimensionless index (${year})`,
+      quantity: "Dimensionless index",
+      unit: "1",
+      bands: [
+        band("severe", "< 0.25", 0, false, 0.25, false, src),
+        band("moderate", "0.25–0.50", 0.25, true, 0.5, true, src),
+        band("mild", "> 0.50", 0.5, false, null, false, src),
+      ],
+      notes: [],
+    }),
+  };
+}
+
+/** Aortic stenosis severity tables of a guideline edition, one per graded quantity. */
+export interface AorticStenosisTables {
+  /** Peak aortic jet velocity, m/s. */
+  readonly peakVelocity: SeverityTable;
+  /** Mean transaortic gradient, mmHg. */
+  readonly meanGradient: SeverityTable;
+  /** Continuity valve area, cm². */
+  readonly valveArea: SeverityTable;
+  /** Valve area indexed to BSA, cm²/m². */
+  readonly indexedValveArea: SeverityTable;
+  /** Velocity ratio (dimensionless index). */
+  readonly velocityRatio: SeverityTable;
+}
+
+/**
+ * Aortic stenosis severity, EAE/ASE 2009 (Baumgartner et al., J Am Soc Echocardiogr
+ * 2009;22:1-23, table of AS classification, from memory): Vmax ≤ 2.5 sclerosis, 2.6–2.9 mild,
+ * 3.0–4.0 moderate, > 4.0 m/s severe; mean gradient < 20, 20–40, > 40 mmHg; AVA > 1.5, 1.0–1.5,
+ * < 1.0 cm²; AVAi > 0.85, 0.60–0.85, < 0.6 cm²/m²; velocity ratio > 0.50, 0.25–0.50, < 0.25.
+ *
+ * @example
+ * ```ts
+ * import { AORTIC_STENOSIS_2009, gradeSeverity } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * // In 2009 exactly 4.0 m/s was still moderate ("3.0–4.0"); severe was "> 4.0"
+ * assert.equal(gradeSeverity(AORTIC_STENOSIS_2009.peakVelocity, 4.0).grade, "moderate");
+ * ```
+ */
+export const AORTIC_STENOSIS_2009: AorticStenosisTables = Object.freeze({
+  peakVelocity: defineSeverityTable({
+    id: "aorticStenosisPeakVelocity2009",
+    title: "Aortic stenosis by peak velocity (2009)",
+    quantity: "Peak aortic jet velocity",
+    unit: "m/s",
+    bands: [
+      band("aortic sclerosis", "≤ 2.5", 0, true, 2.5, true, AS_2009),
+      band("mild", "2.6–2.9", 2.5, false, 3.0, false, AS_2009),
+      band("moderate", "3.0–4.0", 3.0, true, 4.0, true, AS_2009),
+      band("severe", "> 4.0", 4.0, false, null, false, AS_2009),
+    ],
+    notes: ["Printed 2.6–2.9 is taken as 2.5 < Vmax < 3.0"],
+  }),
+  meanGradient: defineSeverityTable({
+    id: "aorticStenosisMeanGradient2009",
+    title: "Aortic stenosis by mean gradient (2009)",
+    quantity: "Mean transaortic gradient",
+    unit: "mmHg",
+    bands: [
+      band("mild", "< 20", 0, true, 20, false, AS_2009),
+      band("moderate", "20–40", 20, true, 40, true, AS_2009),
+      band("severe", "> 40", 40, false, null, false, AS_2009),
+    ],
+    notes: ["The ESC guideline of the time used < 30, 30–50 and > 50 mmHg (from memory)"],
+  }),
+  ...asValveAreaTables(AS_2009, 2009),
+});
+
+/**
+ * Aortic stenosis severity, EACVI/ASE 2017 focused update (Baumgartner et al., J Am Soc
+ * Echocardiogr 2017;30:372-392, table of AS classification, from memory): Vmax ≤ 2.5 sclerosis,
+ * 2.6–2.9 mild, 3.0–3.9 moderate, ≥ 4.0 m/s severe; mean gradient < 20, 20–39, ≥ 40 mmHg; AVA,
+ * AVAi and velocity ratio as in 2009.
+ *
+ * @example
+ * ```ts
+ * import { AORTIC_STENOSIS_2017, gradeSeverity } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(gradeSeverity(AORTIC_STENOSIS_2017.meanGradient, 40).grade, "severe");
+ * assert.equal(gradeSeverity(AORTIC_STENOSIS_2017.velocityRatio, 0.24).grade, "severe");
+ * ```
+ */
+export const AORTIC_STENOSIS_2017: AorticStenosisTables = Object.freeze({
+  peakVelocity: defineSeverityTable({
+    id: "aorticStenosisPeakVelocity2017",
+    title: "Aortic stenosis by peak velocity (2017)",
+    quantity: "Peak aortic jet velocity",
+    unit: "m/s",
+    bands: [
+      band("aortic sclerosis", "≤ 2.5", 0, true, 2.5, true, AS_2017),
+      band("mild", "2.6–2.9", 2.5, false, 3.0, false, AS_2017),
+      band("moderate", "3.0–3.9", 3.0, true, 4.0, false, AS_2017),
+      band("severe", "≥ 4.0", 4.0, true, null, false, AS_2017),
+    ],
+    notes: ["Printed 2.6–2.9 is taken as 2.5 < Vmax < 3.0 and 3.0–3.9 as 3.0 ≤ Vmax < 4.0"],
+  }),
+  meanGradient: defineSeverityTable({
+    id: "aorticStenosisMeanGradient2017",
+    title: "Aortic stenosis by mean gradient (2017)",
+    quantity: "Mean transaortic gradient",
+    unit: "mmHg",
+    bands: [
+      band("mild", "< 20", 0, true, 20, false, AS_2017),
+      band("moderate", "20–39", 20, true, 40, false, AS_2017),
+      band("severe", "≥ 40", 40, true, null, false, AS_2017),
+    ],
+    notes: ["Printed 20–39 is taken as 20 ≤ ΔP < 40"],
+  }),
+  ...asValveAreaTables(AS_2017, 2017),
+});
+
+// ---------------------------------------------------------------- mitral stenosis
+
+const MS_2009 = at(BAUMGARTNER_2009, "Table 8, classification of MS severity (from memory)");
+
+/**
+ * Mitral stenosis by valve area, EAE/ASE 2009 (Baumgartner et al. 2009, from memory): mild
+ * > 1.5 cm², moderate 1.0–1.5 cm², severe < 1.0 cm².
+ *
+ * @example
+ * ```ts
+ * import { gradeSeverity, MITRAL_STENOSIS_AREA_2009 } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(gradeSeverity(MITRAL_STENOSIS_AREA_2009, 1.0).grade, "moderate");
+ * ```
+ */
+export const MITRAL_STENOSIS_AREA_2009: SeverityTable = defineSeverityTable({
+  id: "mitralStenosisArea2009",
+  title: "Mitral stenosis by valve area (EAE/ASE 2009)",
+  quantity: "Mitral valve area",
+  unit: "cm^2",
+  bands: [
+    band("severe", "< 1.0", 0, false, 1.0, false, MS_2009),
+    band("moderate", "1.0–1.5", 1.0, true, 1.5, true, MS_2009),
+    band("mild", "> 1.5", 1.5, false, null, false, MS_2009),
+  ],
+  notes: ["Mean gradient and pulmonary pressure are supportive, heart-rate dependent findings"],
+});
+
+/**
+ * Mitral stenosis by mean gradient, EAE/ASE 2009 (Baumgartner et al. 2009, from memory): mild
+ * < 5 mmHg, moderate 5–10 mmHg, severe > 10 mmHg (supportive; depends on heart rate and flow).
+ *
+ * @example
+ * ```ts
+ * import { gradeSeverity, MITRAL_STENOSIS_MEAN_GRADIENT_2009 } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(gradeSeverity(MITRAL_STENOSIS_MEAN_GRADIENT_2009, 12).grade, "severe");
+ * ```
+ */
+export const MITRAL_STENOSIS_MEAN_GRADIENT_2009: SeverityTable = defineSeverityTable({
+  id: "mitralStenosisMeanGradient2009",
+  title: "Mitral stenosis by mean gradient (EAE/ASE 2009)",
+  quantity: "Mean transmitral gradient",
+  unit: "mmHg",
+  bands: [
+    band("mild", "< 5", 0, true, 5, false, MS_2009),
+    band("moderate", "5–10", 5, true, 10, true, MS_2009),
+    band("severe", "> 10", 10, false, null, false, MS_2009),
+  ],
+  notes: ["Supportive only: the gradient rises with heart rate and transvalvular flow"],
+});
+
+const MS_2014 = at(NISHIMURA_2014, "table of stages of mitral stenosis (from memory)");
+
+/**
+ * Mitral stenosis stages by valve area, AHA/ACC 2014 (Nishimura et al., Circulation 2014, from
+ * memory): progressive (stage B) > 1.5 cm²; severe (stage C/D) ≤ 1.5 cm²; very severe ≤ 1.0 cm².
+ *
+ * @example
+ * ```ts
+ * import { gradeSeverity, MITRAL_STENOSIS_STAGES_2014 } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * // 1.5 cm² is moderate in the 2009 scheme but severe in the 2014 staging
+ * assert.equal(gradeSeverity(MITRAL_STENOSIS_STAGES_2014, 1.5).grade, "severe (stage C/D)");
+ * ```
+ */
+export const MITRAL_STENOSIS_STAGES_2014: SeverityTable = defineSeverityTable({
+  id: "mitralStenosisStages2014",
+  title: "Mitral stenosis stages by valve area (AHA/ACC 2014)",
+  quantity: "Mitral valve area",
+  unit: "cm^2",
+  bands: [
+    band("very severe (stage C/D)", "≤ 1.0", 0, false, 1.0, true, MS_2014),
+    band("severe (stage C/D)", "≤ 1.5", 1.0, false, 1.5, true, MS_2014),
+    band("progressive (stage B)", "> 1.5", 1.5, false, null, false, MS_2014),
+  ],
+  notes: [
+    "Stages C (asymptomatic) and D (symptomatic) share the area threshold; symptoms are not graded here",
+    "Companion thresholds (PHT ≥ 150 ms severe, ≥ 220 ms very severe) are not graded here",
+  ],
+});
+
+/** The selectable mitral stenosis schemes by valve area. */
+export type MitralStenosisScheme = "EAE/ASE 2009" | "AHA/ACC 2014";
+
+/**
+ * The mitral stenosis valve-area table of a scheme: the older three-class grading (EAE/ASE 2009) or
+ * the newer staging (AHA/ACC 2014).
+ *
+ * @param scheme "EAE/ASE 2009" or "AHA/ACC 2014".
+ * @returns The severity table.
+ * @throws {RangeError} For an unknown scheme.
+ *
+ * @example
+ * ```ts
+ * import { gradeSeverity, mitralStenosisAreaTable } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(gradeSeverity(mitralStenosisAreaTable("EAE/ASE 2009"), 1.2).grade, "moderate");
+ * assert.equal(gradeSeverity(mitralStenosisAreaTable("AHA/ACC 2014"), 1.2).grade, "severe (stage C/D)");
+ * ```
+ */
+export function mitralStenosisAreaTable(scheme: MitralStenosisScheme): SeverityTable {
+  if (scheme === "EAE/ASE 2009") return MITRAL_STENOSIS_AREA_2009;
+  if (scheme === "AHA/ACC 2014") return MITRAL_STENOSIS_STAGES_2014;
+  throw new RangeError(
+    `Mitral stenosis grading: expected 'scheme' "EAE/ASE 2009" or "AHA/ACC 2014", got ${
+      JSON.stringify(scheme)
+    }`,
+  );
+}
+
+// ---------------------------------------------------------------- regurgitation
+
+const REGURG_GRADES = [
+  "mild",
+  "moderate (mild-to-moderate)",
+  "moderate (moderate-to-severe)",
+  "severe",
+] as const;
+
+function fourClassTable(
+  id: string,
+  title: string,
+  quantity: string,
+  unit: string,
+  cuts: readonly [number, number, number],
+  printed: readonly [string, string, string, string],
+  src: Reference,
+  notes: readonly string[],
+): SeverityTable {
+  const [a, b, c] = cuts;
+  return defineSeverityTable({
+    id,
+    title,
+    quantity,
+    unit,
+    bands: [
+      band(REGURG_GRADES[0], printed[0], 0, true, a, false, src),
+      band(REGURG_GRADES[1], printed[1], a, true, b, false, src),
+      band(REGURG_GRADES[2], printed[2], b, true, c, false, src),
+      band(REGURG_GRADES[3], printed[3], c, true, null, false, src),
+    ],
+    notes,
+  });
+}
+
+/** Regurgitation severity tables by quantitative parameter. */
+export interface RegurgitationTables {
+  /** Effective regurgitant orifice area, cm². */
+  readonly eroa: SeverityTable;
+  /** Regurgitant volume, mL/beat. */
+  readonly regurgitantVolume: SeverityTable;
+  /** Regurgitant fraction, %. */
+  readonly regurgitantFraction: SeverityTable;
+}
+
+const MR_2017 = at(ZOGHBI_2017, "table grading chronic MR severity (from memory)");
+const AR_2017 = at(ZOGHBI_2017, "table grading chronic AR severity (from memory)");
+const RVOL_PRINTED = ["< 30", "30–44", "45–59", "≥ 60"] as const;
+const RF_PRINTED = ["< 30", "30–39", "40–49", "≥ 50"] as const;
+
+/**
+ * Mitral regurgitation severity, ASE 2017 (Zoghbi et al., J Am Soc Echocardiogr 2017;30:303-371,
+ * from memory): EROA < 0.20, 0.20–0.29, 0.30–0.39, ≥ 0.40 cm²; regurgitant volume < 30, 30–44,
+ * 45–59, ≥ 60 mL; regurgitant fraction < 30, 30–39, 40–49, ≥ 50 %.
+ *
+ * @example
+ * ```ts
+ * import { gradeSeverity, MITRAL_REGURGITATION_2017 } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(gradeSeverity(MITRAL_REGURGITATION_2017.eroa, 0.4).grade, "severe");
+ * ```
+ */
+export const MITRAL_REGURGITATION_2017: RegurgitationTables = Object.freeze({
+  eroa: fourClassTable(
+    "mitralRegurgitationEroa2017",
+    "Mitral regurgitation by EROA (ASE 2017)",
+    "Effective regurgitant orifice area",
+    "cm^2",
+    [0.2, 0.3, 0.4],
+    ["< 0.20", "0.20–0.29", "0.30–0.39", "≥ 0.40"],
+    MR_2017,
+    ["Primary MR thresholds; in secondary MR a smaller EROA may already be severe (elliptical orifice)"],
+  ),
+  regurgitantVolume: fourClassTable(
+    "mitralRegurgitationVolume2017",
+    "Mitral regurgitation by regurgitant volume (ASE 2017)",
+    "Regurgitant volume",
+    "mL",
+    [30, 45, 60],
+    RVOL_PRINTED,
+    MR_2017,
+    ["Low-flow states lower the volume for a given orifice"],
+  ),
+  regurgitantFraction: fourClassTable(
+    "mitralRegurgitationFraction2017",
+    "Mitral regurgitation by regurgitant fraction (ASE 2017)",
+    "Regurgitant fraction",
+    "%",
+    [30, 40, 50],
+    RF_PRINTED,
+    MR_2017,
+    [],
+  ),
+});
+
+/**
+ * Aortic regurgitation severity, ASE 2017 (Zoghbi et al., J Am Soc Echocardiogr 2017;30:303-371,
+ * from memory): EROA < 0.10, 0.10–0.19, 0.20–0.29, ≥ 0.30 cm²; regurgitant volume < 30, 30–44,
+ * 45–59, ≥ 60 mL; regurgitant fraction < 30, 30–39, 40–49, ≥ 50 %.
+ *
+ * @example
+ * ```ts
+ * import { AORTIC_REGURGITATION_2017, gradeSeverity } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(gradeSeverity(AORTIC_REGURGITATION_2017.eroa, 0.3).grade, "severe");
+ * ```
+ */
+export const AORTIC_REGURGITATION_2017: RegurgitationTables = Object.freeze({
+  eroa: fourClassTable(
+    "aorticRegurgitationEroa2017",
+    "Aortic regurgitation by EROA (ASE 2017)",
+    "Effective regurgitant orifice area",
+    "cm^2",
+    [0.1, 0.2, 0.3],
+    ["< 0.10", "0.10–0.19", "0.20–0.29", "≥ 0.30"],
+    AR_2017,
+    [],
+  ),
+  regurgitantVolume: fourClassTable(
+    "aorticRegurgitationVolume2017",
+    "Aortic regurgitation by regurgitant volume (ASE 2017)",
+    "Regurgitant volume",
+    "mL",
+    [30, 45, 60],
+    RVOL_PRINTED,
+    AR_2017,
+    [],
+  ),
+  regurgitantFraction: fourClassTable(
+    "aorticRegurgitationFraction2017",
+    "Aortic regurgitation by regurgitant fraction (ASE 2017)",
+    "Regurgitant fraction",
+    "%",
+    [30, 40, 50],
+    RF_PRINTED,
+    AR_2017,
+    [],
+  ),
+});
+
+// ---------------------------------------------------------------- pulmonary hypertension
+
+function phTable(
+  id: string,
+  title: string,
+  src: Reference,
+  grades: readonly [string, string, string],
+  notes: readonly string[],
+): SeverityTable {
+  return defineSeverityTable({
+    id,
+    title,
+    quantity: "Peak tricuspid regurgitant velocity",
+    unit: "m/s",
+    bands: [
+      band(grades[0], "≤ 2.8 (or not measurable)", 0, true, 2.8, true, src),
+      band(grades[1], "2.9–3.4", 2.8, false, 3.4, true, src),
+      band(grades[2], "> 3.4", 3.4, false, null, false, src),
+    ],
+    notes: ["Printed 2.9–3.4 is taken as 2.8 < v ≤ 3.4", ...notes],
+  });
+}
+
+/** Pulmonary hypertension probability tables by TR velocity, with and without other echo signs. */
+export interface PulmonaryHypertensionTables {
+  /** No other echocardiographic signs of pulmonary hypertension. */
+  readonly withoutOtherSigns: SeverityTable;
+  /** Other echocardiographic signs present (from at least two categories). */
+  readonly withOtherSigns: SeverityTable;
+}
+
+const PH_2015 = at(GALIE_2015, "Table 8, echocardiographic probability (from memory)");
+const PH_2022 = at(HUMBERT_2022, "echocardiographic probability figure (from memory)");
+
+/**
+ * Echocardiographic probability of pulmonary hypertension by peak TR velocity, 2015 ESC/ERS
+ * (Galiè et al., Eur Heart J 2016;37:67-119, Table 8, from memory): ≤ 2.8 m/s low (intermediate
+ * with other signs); 2.9–3.4 m/s intermediate (high with other signs); > 3.4 m/s high.
+ *
+ * @example
+ * ```ts
+ * import { gradeSeverity, PULMONARY_HYPERTENSION_2015 } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(gradeSeverity(PULMONARY_HYPERTENSION_2015.withoutOtherSigns, 3.1).grade, "intermediate");
+ * assert.equal(gradeSeverity(PULMONARY_HYPERTENSION_2015.withOtherSigns, 3.1).grade, "high");
+ * ```
+ */
+export const PULMONARY_HYPERTENSION_2015: PulmonaryHypertensionTables = Object.freeze({
+  withoutOtherSigns: phTable(
+    "pulmonaryHypertension2015",
+    "Pulmonary hypertension probability by TR velocity, no other signs (ESC/ERS 2015)",
+    PH_2015,
+    ["low", "intermediate", "high"],
+    [],
+  ),
+  withOtherSigns: phTable(
+    "pulmonaryHypertension2015OtherSigns",
+    "Pulmonary hypertension probability by TR velocity, with other signs (ESC/ERS 2015)",
+    PH_2015,
+    ["intermediate", "high", "high"],
+    ["Other signs: ventricles, pulmonary artery, IVC and right atrium categories of the guideline"],
+  ),
+});
+
+/**
+ * Echocardiographic probability of pulmonary hypertension by peak TR velocity, 2022 ESC/ERS
+ * (Humbert et al., Eur Heart J 2022;43:3618-3731, from memory): the TR-velocity bands of 2015 were
+ * kept (≤ 2.8, 2.9–3.4, > 3.4 m/s) although the haemodynamic definition changed to mPAP > 20 mmHg.
+ *
+ * @example
+ * ```ts
+ * import { gradeSeverity, PULMONARY_HYPERTENSION_2022 } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(gradeSeverity(PULMONARY_HYPERTENSION_2022.withoutOtherSigns, 3.5).grade, "high");
+ * ```
+ */
+export const PULMONARY_HYPERTENSION_2022: PulmonaryHypertensionTables = Object.freeze({
+  withoutOtherSigns: phTable(
+    "pulmonaryHypertension2022",
+    "Pulmonary hypertension probability by TR velocity, no other signs (ESC/ERS 2022)",
+    PH_2022,
+    ["low", "intermediate", "high"],
+    ["The 2022 definition of pulmonary hypertension is mPAP > 20 mmHg (was ≥ 25 in 2015)"],
+  ),
+  withOtherSigns: phTable(
+    "pulmonaryHypertension2022OtherSigns",
+    "Pulmonary hypertension probability by TR velocity, with other signs (ESC/ERS 2022)",
+    PH_2022,
+    ["intermediate", "high", "high"],
+    ["The 2022 definition of pulmonary hypertension is mPAP > 20 mmHg (was ≥ 25 in 2015)"],
+  ),
+});
+
+/**
+ * The pulmonary hypertension probability table for a guideline edition and the presence of other
+ * echocardiographic signs.
+ *
+ * @param guideline "ESC/ERS 2015" or "ESC/ERS 2022".
+ * @param otherEchoSigns Whether other echocardiographic signs of pulmonary hypertension are present.
+ * @returns The severity table to pass to {@linkcode gradeSeverity}.
+ * @throws {RangeError} For an unknown guideline.
+ * @throws {TypeError} When `otherEchoSigns` is not a boolean.
+ *
+ * @example
+ * ```ts
+ * import { gradeSeverity, pulmonaryHypertensionTable } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(gradeSeverity(pulmonaryHypertensionTable("ESC/ERS 2022", false), 2.5).grade, "low");
+ * ```
+ */
+export function pulmonaryHypertensionTable(
+  guideline: "ESC/ERS 2015" | "ESC/ERS 2022",
+  otherEchoSigns: boolean,
+): SeverityTable {
+  if (typeof otherEchoSigns !== "boolean") {
+    throw new TypeError(
+      `Pulmonary hypertension probability: expected 'otherEchoSigns' as true or false, got ${typeof otherEchoSigns}`,
+    );
+  }
+  const tables = guideline === "ESC/ERS 2015"
+    ? PULMONARY_HYPERTENSION_2015
+    : guideline === "ESC/ERS 2022"
+    ? PULMONARY_HYPERTENSION_2022
+    : null;
+  if (tables === null) {
+    throw new RangeError(
+      `Pulmonary hypertension probability: expected 'guideline' "ESC/ERS 2015" or "ESC/ERS 2022", got ${
+        JSON.stringify(guideline)
+      }`,
+    );
+  }
+  return otherEchoSigns ? tables.withOtherSigns : tables.withoutOtherSigns;
+}

@@ -1,0 +1,72 @@
+/**
+ * Doppler hemodynamics: Bernoulli gradients, envelopes and VTI, volumetric flow, continuity and
+ * pressure-half-time valve areas, PISA and volumetric regurgitation, right-heart pressures, the
+ * effect of the insonation angle, and guideline severity grading (values or Monte Carlo samples).
+ *
+ * @module
+ */
+export { modifiedBernoulli, simplifiedBernoulli } from "./bernoulli.ts";
+export {
+  type EnvelopeGradients,
+  envelopeGradients,
+  validateEnvelope,
+  type VelocityEnvelope,
+  velocityTimeIntegral,
+} from "./envelope.ts";
+export {
+  cardiacIndex,
+  cardiacOutput,
+  crossSectionalArea,
+  pulmonarySystemicFlowRatio,
+  strokeVolume,
+} from "./flow.ts";
+export {
+  continuityValveArea,
+  continuityValveAreaPeakVelocity,
+  dimensionlessIndex,
+  indexedValveArea,
+  mitralValveAreaPressureHalfTime,
+  pressureHalfTimeFromDecelerationTime,
+  pressureHalfTimeFromSlope,
+} from "./valve_area.ts";
+export {
+  effectiveRegurgitantOrificeArea,
+  pisaFlowRate,
+  pisaRegurgitation,
+  regurgitantFraction,
+  regurgitantFractionPisa,
+  regurgitantVolume,
+  volumetricRegurgitation,
+} from "./pisa.ts";
+export {
+  rightAtrialPressureFromIvc,
+  rvSystolicPressure,
+  rvSystolicPressureFromIvc,
+} from "./right_heart.ts";
+export { continuityValveAreaWithAngles, insonationAngleEffect } from "./angle.ts";
+export {
+  type ClassProbability,
+  defineSeverityTable,
+  gradeSeverity,
+  type SeverityBand,
+  type SeverityDistribution,
+  type SeverityGrade,
+  type SeverityTable,
+} from "./grading.ts";
+export {
+  AORTIC_REGURGITATION_2017,
+  AORTIC_STENOSIS_2009,
+  AORTIC_STENOSIS_2017,
+  type AorticStenosisTables,
+  MITRAL_REGURGITATION_2017,
+  MITRAL_STENOSIS_AREA_2009,
+  MITRAL_STENOSIS_MEAN_GRADIENT_2009,
+  MITRAL_STENOSIS_STAGES_2014,
+  mitralStenosisAreaTable,
+  type MitralStenosisScheme,
+  PULMONARY_HYPERTENSION_2015,
+  PULMONARY_HYPERTENSION_2022,
+  pulmonaryHypertensionTable,
+  type PulmonaryHypertensionTables,
+  type RegurgitationTables,
+} from "./grading_tables.ts";

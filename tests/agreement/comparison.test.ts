@@ -1,0 +1,102 @@
+import assert from "node:assert/strict";
+import { concordanceCorrelation, demingRegression, passingBablokRegression } from "../../mod.ts";
+import { MINI1, WRIGHT1 } from "./data.ts";
+
+const close = (actual: number, expected: number, tol: number, what = "") =>
+  assert.ok(Math.abs(actual - expected) <= tol, `${what} expected ${expected} ± ${tol}, got ${actual}`);
+
+Deno.test("Lin's concordance correlation matches R epiR on the peak-flow data", () => {
+  const r = concordanceCorrelation(WRIGHT1, MINI1);
+  // R 4.2.2, epiR 2.0.57: epi.ccc(wright1, mini1, ci = "z-transform")$rho.c:
+  // est 0.942742431427, lower 0.850491873169, upper 0.97872627917
+  close(r.value, 0.942742431427, 1e-11, "rho_c");
+  close(r.ci.lower, 0.850491873169, 1e-11, "lower");
+  close(r.ci.upper, 0.97872627917, 1e-10, "upper");
+  // same call: s.shift 0.972509121336 (epiR reports s_y/s_x... as 1/scaleShift), l.shift 0.0190302500916,
+  // C.b 0.999430693136
+  close(1 / r.scaleShift, 0.972509121336, 1e-11, "scale shift");
+  close(Math.abs(r.locationShift), 0.0190302500916, 1e-12, "location shift");
+  close(r.biasCorrectionFactor, 0.999430693136, 1e-11, "C_b");
+});
+
+Deno.test("concordance rejects constant series and tiny samples", () => {
+  assert.throws(() => concordanceCorrelation([1, 1, 1], [1, 2, 3]), {
+    name: "RangeError",
+    message: /expected 'x' values that vary, got variance 0$/,
+  });
+  assert.throws(() => concordanceCorrelation([1, 2], [1, 2]), {
+    name: "RangeError",
+    message: /expected at least 3 values in 'x', got 2$/,
+  });
+});
+
+Deno.test("Deming regression matches orthogonal distance regression in SciPy", () => {
+  // SciPy 1.17.1 scipy.odr (ODRPACK), model y = b0 + b1·x, sx = 1, sy = √λ, fit_type 0:
+  // λ = 1: slope 0.9708785589989477, intercept 15.232598409483279
+  const r1 = demingRegression(WRIGHT1, MINI1);
+  close(r1.slope, 0.9708785589989477, 1e-5, "slope λ=1"); // ODRPACK stops at its own tolerance
+  close(r1.intercept, 15.232598409483279, 2e-3, "intercept λ=1");
+  // λ = 2.5: slope 0.9466451707413903, intercept 26.146151224494854
+  const r2 = demingRegression(WRIGHT1, MINI1, { errorVarianceRatio: 2.5 });
+  close(r2.slope, 0.9466451707413903, 1e-6, "slope λ=2.5");
+  close(r2.intercept, 26.146151224494854, 1e-3, "intercept λ=2.5");
+  // Jackknife SE from 17 leave-one-out scipy.odr fits, √((n−1)/n Σ(b(i) − b̄)²):
+  // λ = 1: slope 0.13901661379069344, intercept 69.47933992663121
+  close(r1.slopeStandardError, 0.13901661379069344, 1e-5, "jackknife SE slope");
+  close(r1.interceptStandardError, 69.47933992663121, 2e-3, "jackknife SE intercept");
+  // Linnet 1990: interval b ± t(n − 2)·SE; t(0.975, 15) = 2.131 (any t table)
+  close(r1.slopeCi.upper - r1.slope, 2.1314 * r1.slopeStandardError, 1e-4, "CI half-width");
+});
+
+Deno.test("Deming regression: OLS limit and bad input", () => {
+  // Deming 1943: as λ → ∞ (x without error) the slope tends to the least-squares slope of y on x
+  // (hand-checkable: S_xy/S_xx = 1 for y = x + alternating noise centred on x)
+  const x = [1, 2, 3, 4, 5, 6];
+  const y = [1.5, 1.5, 3.5, 3.5, 5.5, 5.5];
+  const sxy = 15.5; // Σ(x − 3.5)(y − 3.5) hand-computed
+  const sxx = 17.5;
+  close(demingRegression(x, y, { errorVarianceRatio: 1e9 }).slope, sxy / sxx, 1e-6);
+  assert.throws(() => demingRegression(x, y, { errorVarianceRatio: -1 }), {
+    name: "RangeError",
+    message: /expected 'errorVarianceRatio' in \(0, ∞\), got -1$/,
+  });
+  assert.throws(() => demingRegression([1, 2, 3], [2, 2, 2]), {
+    name: "RangeError",
+    message: /expected a linear association between x and y, got covariance 0$/,
+  });
+});
+
+Deno.test("Passing-Bablok slope and interval match SciPy's Theil-Sen estimator when no slope is below -1", () => {
+  const x = [1.2, 2.3, 2.9, 4.1, 5.2, 5.9, 7.3, 8.1, 9.0, 10.2, 11.1, 12.4];
+  const y = [1.5, 2.1, 3.4, 4.0, 5.9, 6.1, 7.0, 8.9, 9.3, 10.1, 12.0, 12.2];
+  const r = passingBablokRegression(x, y);
+  // Passing & Bablok 1983 §3: with K = 0 (all 66 slopes > −1, checked) the estimator is the
+  // median of pairwise slopes and the interval uses Kendall's variance n(n−1)(2n+5)/18, as
+  // SciPy 1.17.1 stats.theilslopes(y, x, 0.95, method="joint") (no ties):
+  // slope 1.0063291139240507, low 0.9178082191780822, high 1.0869565217391306,
+  // intercept median(y − b·x) = 0.20284810126582276
+  close(r.slope, 1.0063291139240507, 1e-12, "slope");
+  close(r.slopeCi.lower, 0.9178082191780822, 1e-12, "low");
+  close(r.slopeCi.upper, 1.0869565217391306, 1e-12, "high");
+  close(r.intercept, 0.20284810126582276, 1e-12, "intercept");
+  assert.equal(r.slopesUsed, 66);
+  assert.equal(r.linearity.nonLinear, false);
+});
+
+Deno.test("Passing-Bablok shifted median and cusum check (hand-checkable)", () => {
+  // 4 points, slopes (hand): (0,0)-(1,3)=3, (0,0)-(2,1)=0.5, (0,0)-(3,3)=1, (1,3)-(2,1)=−2,
+  // (1,3)-(3,3)=0, (2,1)-(3,3)=2 → sorted −2, 0, 0.5, 1, 2, 3; K = 1 (one slope < −1), N = 6:
+  // b = mean of S(N/2+K) = S(4) = 1 and S(5) = 2 → 1.5 (Passing & Bablok 1983 §3)
+  const r = passingBablokRegression([0, 1, 2, 3], [0, 3, 1, 3]);
+  close(r.slope, 1.5, 1e-12);
+  // a = median(y − 1.5x) = median(0, 1.5, −2, −1.5) = −0.75
+  close(r.intercept, -0.75, 1e-12);
+  // A clearly curved relation fails the cusum linearity check (Passing & Bablok 1983 §4)
+  const xq = Array.from({ length: 20 }, (_, i) => i + 1);
+  const yq = xq.map((v) => 0.1 * v * v + ((v % 3) - 1) * 0.3);
+  assert.equal(passingBablokRegression(xq, yq).linearity.nonLinear, true);
+  assert.throws(() => passingBablokRegression([1, 2, 3], [3, 2, 1]), {
+    name: "RangeError",
+    message: /positively related methods/,
+  });
+});

@@ -1,0 +1,115 @@
+import assert from "node:assert/strict";
+import {
+  ADULT_REFERENCE_LANG_2015,
+  adultReferenceRow,
+  classifyAdult,
+  classifyAgainstRow,
+  classProbabilities,
+} from "../../mod.ts";
+
+// All limits below: Lang RM et al., J Am Soc Echocardiogr 2015;28:1–39, from memory (the rows
+// carry fromMemory: true); cross-read against secondary summaries of the guideline tables.
+
+Deno.test("Lang 2015 Table 1 LV dimensions and indexed volumes by sex (from memory)", () => {
+  // Table 1: LVIDd men 50.2 ± 4.1 mm (42.0–58.4), women 45.0 ± 3.6 mm (37.8–52.2)
+  const m = adultReferenceRow("lvInternalDiameterDiastole", "male");
+  assert.deepEqual([m.mean, m.sd, m.normal.lower, m.normal.upper], [50.2, 4.1, 42.0, 58.4]);
+  const f = adultReferenceRow("lvInternalDiameterDiastole", "female");
+  assert.deepEqual([f.mean, f.sd, f.normal.lower, f.normal.upper], [45.0, 3.6, 37.8, 52.2]);
+  // The 2-SD range is mean ± 2 SD (guideline's definition of the normal range in Table 1)
+  for (const r of ADULT_REFERENCE_LANG_2015.filter((x) => x.table === "Table 1")) {
+    assert.ok(Math.abs(r.normal.lower! - (r.mean! - 2 * r.sd!)) < 1e-9, r.parameter);
+    assert.ok(Math.abs(r.normal.upper! - (r.mean! + 2 * r.sd!)) < 1e-9, r.parameter);
+  }
+  // Table 1: LVEDV/BSA men 54 ± 10 (34–74), women 45 ± 8 (29–61) mL/m²
+  assert.deepEqual(adultReferenceRow("lvEndDiastolicVolumeIndex", "male").normal, { lower: 34, upper: 74 });
+  assert.deepEqual(adultReferenceRow("lvEndDiastolicVolumeIndex", "female").normal, { lower: 29, upper: 61 });
+  // Table 1: LVESV/BSA men 11–31, women 8–24 mL/m²
+  assert.deepEqual(adultReferenceRow("lvEndSystolicVolumeIndex", "female").normal, { lower: 8, upper: 24 });
+});
+
+Deno.test("Lang 2015 Table 2 LVEF partitions by sex (from memory)", () => {
+  // Table 2: men normal 52–72, mildly abnormal 41–51, moderately 30–40, severely < 30
+  assert.equal(classifyAdult("lvEjectionFraction", "male", 60).class, "normal");
+  assert.equal(classifyAdult("lvEjectionFraction", "male", 52).class, "normal");
+  assert.equal(classifyAdult("lvEjectionFraction", "male", 51).class, "mildly abnormal");
+  assert.equal(classifyAdult("lvEjectionFraction", "male", 41).class, "mildly abnormal");
+  assert.equal(classifyAdult("lvEjectionFraction", "male", 40).class, "moderately abnormal");
+  assert.equal(classifyAdult("lvEjectionFraction", "male", 30).class, "moderately abnormal");
+  assert.equal(classifyAdult("lvEjectionFraction", "male", 29).class, "severely abnormal");
+  // Table 2: women normal 54–74, mildly abnormal 41–53
+  assert.equal(classifyAdult("lvEjectionFraction", "female", 53).class, "mildly abnormal");
+  assert.equal(classifyAdult("lvEjectionFraction", "male", 53).class, "normal");
+  // Above the normal range: not an abnormality class in the partitions (project interpretation)
+  assert.equal(classifyAdult("lvEjectionFraction", "female", 78).class, "above normal range");
+  // Between printed integer bands: 51.5 % in a man lies below 52 → mildly abnormal (project convention)
+  assert.equal(classifyAdult("lvEjectionFraction", "male", 51.5).class, "mildly abnormal");
+});
+
+Deno.test("Lang 2015 Table 2 LA volume index partitions, both sexes (from memory)", () => {
+  // Table 2: normal 16–34, mild 35–41, moderate 42–48, severe > 48 mL/m²
+  const expected: [number, string][] = [
+    [28, "normal"],
+    [34, "normal"],
+    [35, "mildly abnormal"],
+    [41, "mildly abnormal"],
+    [42, "moderately abnormal"],
+    [48, "moderately abnormal"],
+    [49, "severely abnormal"],
+    [12, "below normal range"],
+  ];
+  for (const [value, cls] of expected) {
+    assert.equal(classifyAdult("laVolumeIndex", "male", value).class, cls, `LAVI ${value}`);
+    assert.equal(classifyAdult("laVolumeIndex", "female", value).class, cls, `LAVI ${value}`);
+  }
+});
+
+Deno.test("Lang 2015 Table 6 LV mass index and RWT; RV basal diameter and TAPSE (from memory)", () => {
+  // Table 6 linear method: LV mass/BSA men 49–115, women 43–95 g/m²
+  assert.deepEqual(adultReferenceRow("lvMassIndexLinear", "male").normal, { lower: 49, upper: 115 });
+  assert.equal(classifyAdult("lvMassIndexLinear", "female", 100).class, "above normal range");
+  assert.equal(classifyAdult("lvMassIndexLinear", "male", 100).class, "normal");
+  // Table 6: RWT upper limit 0.42 for both sexes
+  assert.equal(classifyAdult("relativeWallThickness", "male", 0.45).class, "above normal range");
+  // RV basal diameter > 41 mm abnormal; TAPSE < 17 mm abnormal (one-sided threshold)
+  assert.equal(classifyAdult("rvBasalDiameter", "female", 43).class, "above normal range");
+  assert.equal(classifyAdult("tapse", "male", 15).class, "abnormal");
+  assert.equal(classifyAdult("tapse", "male", 30).class, "normal");
+  for (const r of ADULT_REFERENCE_LANG_2015) {
+    assert.equal(r.fromMemory, true);
+    assert.equal(r.source.year, 2015);
+    assert.match(r.table, /^Table \d/);
+  }
+});
+
+Deno.test("adult classification: bad input names the field and value", () => {
+  assert.throws(() => classifyAdult("lvEjectionFraction", "unknown" as never, 55), {
+    name: "TypeError",
+    message: `Adult reference: expected 'sex' "male" or "female", got "unknown"`,
+  });
+  assert.throws(() => classifyAdult("lvEjectionFractio", "male", 55), {
+    name: "TypeError",
+    message: /^Adult reference: expected 'parameter' in lvInternalDiameterDiastole, .*, got "lvEjectionFractio"$/,
+  });
+  assert.throws(() => classifyAgainstRow(adultReferenceRow("tapse", "male"), NaN), {
+    name: "RangeError",
+    message: /expected a finite value in mm, got NaN$/,
+  });
+  assert.ok(classifyAdult("tapse", "male", 20).cautions.some((c) => /from memory/.test(c)));
+});
+
+Deno.test("class probabilities from samples sum to one", () => {
+  const row = adultReferenceRow("lvEjectionFraction", "male");
+  const p = classProbabilities(row, Float64Array.from([28, 35, 45, 55, 60]));
+  // hand count against Table 2 partitions (from memory): 1 severe, 1 moderate, 1 mild, 2 normal
+  assert.deepEqual(p, {
+    "severely abnormal": 0.2,
+    "moderately abnormal": 0.2,
+    "mildly abnormal": 0.2,
+    normal: 0.4,
+  });
+  assert.throws(() => classProbabilities(row, []), {
+    name: "TypeError",
+    message: "Class probabilities (LV ejection fraction): expected at least one sample, got 0",
+  });
+});

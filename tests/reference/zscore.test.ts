@@ -1,0 +1,228 @@
+import assert from "node:assert/strict";
+import fc from "fast-check";
+import {
+  bsaHaycock,
+  compareZScoreModels,
+  defineZScoreModel,
+  evaluate,
+  type LogPolynomialBsaModel,
+  measurementAtZ,
+  normal,
+  normalLimits,
+  percentileFromZ,
+  PHN_2017_MODELS,
+  zScore,
+  zScoreCalculation,
+  zScoreFormula,
+  zScoreWithUncertainty,
+} from "../../mod.ts";
+
+const close = (actual: number, expected: number, tol: number, what: string) =>
+  assert.ok(Math.abs(actual - expected) <= tol, `${what}: expected ${expected} ± ${tol}, got ${actual}`);
+
+// PHN coefficients (α, M, S) as listed in issue 4, attributed to Lopez L et al., Circ Cardiovasc
+// Imaging 2017;10:e006979; the Z definition Z = (X/BSA^α − M)/S is the paper's.
+const ISSUE_4_TABLE: [keyof typeof PHN_2017_MODELS, number, number, number, string][] = [
+  ["aorticAnnulus", 0.5, 1.48, 0.14, "cm"],
+  ["aorticRootSinus", 0.5, 2.06, 0.18, "cm"],
+  ["sinotubularJunction", 0.5, 1.69, 0.16, "cm"],
+  ["ascendingAorta", 0.5, 1.79, 0.18, "cm"],
+  ["mainPulmonaryArtery", 0.5, 1.82, 0.24, "cm"],
+  ["rightPulmonaryArtery", 0.5, 1.07, 0.18, "cm"],
+  ["leftPulmonaryArtery", 0.5, 1.1, 0.18, "cm"],
+  ["mitralAnnulusAp", 0.5, 2.31, 0.24, "cm"],
+  ["tricuspidAnnulusAp", 0.5, 2.36, 0.28, "cm"],
+  ["lvEndDiastolicDimension", 0.45, 3.89, 0.33, "cm"],
+  ["lvPosteriorWallDiastole", 0.4, 0.57, 0.09, "cm"],
+  ["interventricularSeptumDiastole", 0.4, 0.58, 0.09, "cm"],
+  ["lvEndDiastolicVolume", 1.3, 62.02, 11.94, "mL"],
+  ["lvMass", 1.25, 53.02, 9.06, "g"],
+];
+
+Deno.test("PHN 2017 table holds the coefficients of issue 4 exactly, BSA by Haycock", () => {
+  assert.equal(Object.keys(PHN_2017_MODELS).length, ISSUE_4_TABLE.length);
+  for (const [key, alpha, mean, sd, unit] of ISSUE_4_TABLE) {
+    const m = PHN_2017_MODELS[key];
+    assert.deepEqual([m.alpha, m.mean, m.sd, m.unit, m.bsaMethod], [alpha, mean, sd, unit, "haycock"], key);
+    assert.equal(m.source.doi, "10.1161/CIRCIMAGING.117.006979");
+  }
+});
+
+Deno.test("PHN: X = M·BSA^α gives Z = 0 and X = (M + 2S)·BSA^α gives Z = 2 (Lopez 2017 definition)", () => {
+  for (const [key, alpha, mean, sd] of ISSUE_4_TABLE) {
+    const model = PHN_2017_MODELS[key];
+    for (const bsa of [0.3, 0.8, 1.5, 2.1]) {
+      // Lopez 2017: Z = (X/BSA^α − M)/S → exact by construction of X (hand-checkable)
+      close(zScore(model, { measurement: mean * bsa ** alpha, bsaM2: bsa }).zScore, 0, 1e-12, `${key} Z=0`);
+      close(zScore(model, { measurement: (mean + 2 * sd) * bsa ** alpha, bsaM2: bsa }).zScore, 2, 1e-12, `${key} Z=2`);
+      close(zScore(model, { measurement: (mean - 2 * sd) * bsa ** alpha, bsaM2: bsa }).zScore, -2, 1e-12, `${key} Z=-2`);
+    }
+  }
+});
+
+Deno.test("PHN: worked value at BSA 1.44 m² by hand", () => {
+  // LVEDD 4.0 cm at BSA 1.44: 1.44^0.45 = e^(0.45·ln 1.44) = 1.178320; 4/1.178320 = 3.394665;
+  // Z = (3.394665 − 3.89)/0.33 = −1.501016 (hand computation of the Lopez 2017 formula)
+  const r = zScore(PHN_2017_MODELS.lvEndDiastolicDimension, { measurement: "40 mm", bsaM2: 1.44 });
+  close(r.zScore, -1.501016, 1e-5, "Z");
+  // Φ(−1.501016) = 0.066676 → 6.668th percentile (standard normal table)
+  close(r.percentile, 6.668, 0.005, "percentile");
+  // Z = ±2 limits: (3.89 ∓ 0.66)·1.178320 = 3.80597 and 5.36135 cm (hand computation)
+  close(r.normalRange[0], 3.80597, 1e-5, "−2");
+  close(r.normalRange[1], 5.36135, 1e-5, "+2");
+  close(r.expected, 4.58366, 1e-5, "mean");
+});
+
+Deno.test("Z ↔ measurement round trip (property) for every PHN model", () => {
+  fc.assert(
+    fc.property(
+      fc.constantFrom(...Object.values(PHN_2017_MODELS)),
+      fc.double({ min: -3, max: 3, noNaN: true }),
+      fc.double({ min: 0.2, max: 2.3, noNaN: true }),
+      (model, z, bsa) => {
+        const x = measurementAtZ(model, z, bsa);
+        return Math.abs(zScoreFormula(model, x, bsa) - z) < 1e-9;
+      },
+    ),
+  );
+});
+
+Deno.test("percentile uses the normal CDF", () => {
+  // Standard normal table: Φ(0) = 0.5, Φ(1.959964) = 0.975, Φ(−2) = 0.02275
+  assert.equal(percentileFromZ(0), 50);
+  close(percentileFromZ(1.959964), 97.5, 1e-4, "97.5");
+  close(percentileFromZ(-2), 2.275, 1e-3, "2.275");
+  assert.throws(() => percentileFromZ(NaN), {
+    name: "RangeError",
+    message: "Percentile: expected a finite 'zScore', got NaN",
+  });
+});
+
+Deno.test("Z from height and weight uses the Haycock BSA", () => {
+  const model = PHN_2017_MODELS.aorticRootSinus;
+  const body = { heightCm: 120, weightKg: 22 };
+  const bsa = evaluate(bsaHaycock, body).outputs.bsaM2;
+  // Same Z whether BSA (Haycock, J Pediatr 1978) is given or derived from height and weight
+  const a = zScore(model, { measurement: 2.2, ...body });
+  const b = zScore(model, { measurement: 2.2, bsaM2: bsa });
+  close(a.zScore, b.zScore, 1e-12, "Z");
+  close(a.bsaM2, bsa, 1e-15, "bsa");
+});
+
+Deno.test("BSA outside the model's range is flagged, not hidden", () => {
+  const r = zScore(PHN_2017_MODELS.lvMass, { measurement: 250, bsaM2: 2.8 });
+  assert.equal(r.bsaOutsideModelRange, true);
+  assert.equal(r.flags.length, 1, "one clear flag, not the generic typical-range one as well");
+  assert.match(
+    r.flags[0]!,
+    /^BSA 2\.8 m\^2 lies outside the range the model 'phn2017\.lvMass' was built on \[0\.15, 2\.4\] m\^2: the Z-score is an extrapolation$/,
+  );
+  assert.equal(zScore(PHN_2017_MODELS.lvMass, { measurement: 60, bsaM2: 1 }).flags.length, 0);
+  assert.equal(normalLimits(PHN_2017_MODELS.lvMass, 0.1).bsaOutsideModelRange, true);
+});
+
+Deno.test("Z-score bad input: clear errors naming field, range and value", () => {
+  const model = PHN_2017_MODELS.aorticAnnulus;
+  assert.throws(() => zScore(model, { measurement: -1, bsaM2: 1 }), {
+    name: "RangeError",
+    message: "Z-score: Aortic valve annulus (phn2017.aorticAnnulus): expected 'measurement' in (0, 15] cm, got -1",
+  });
+  assert.throws(() => zScore(model, { measurement: 1.5, bsaM2: 0 }), {
+    name: "RangeError",
+    message: /expected 'bsaM2' in \(0, 5\] m\^2, got 0$/,
+  });
+  assert.throws(() => zScore(model, { measurement: "1.5 mL", bsaM2: 1 }), {
+    name: "TypeError",
+    message: /'measurement'.*convertible to cm.*"1\.5 mL"$/,
+  });
+  assert.throws(() => zScore(model, { measurement: 1.5, heightCm: 500, weightKg: 20 }), {
+    name: "RangeError",
+    message: /expected 'heightCm' in \[15, 280\] cm, got 500$/,
+  });
+  assert.throws(() => measurementAtZ(model, 2, -1), {
+    name: "RangeError",
+    message: "Measurement at Z (phn2017.aorticAnnulus): expected 'bsaM2' in (0, 5] m^2, got -1",
+  });
+  assert.throws(() => measurementAtZ(model, -20, 1), {
+    name: "RangeError",
+    message: /gives no positive measurement, got -1\.32\d*$/,
+  });
+});
+
+// A SYNTHETIC model (invented coefficients), used only to test the extensible model table.
+const SYNTHETIC_LOG_MODEL: LogPolynomialBsaModel = defineZScoreModel({
+  id: "synthetic.aorticRootLog",
+  measurement: "Aortic root (synthetic test model)",
+  unit: "cm",
+  bsaMethod: "haycock",
+  bsaRange: { min: 0.2, max: 2 },
+  bsaRangeNote: "synthetic",
+  measurementRange: { min: 0, max: 15, minExclusive: true },
+  source: { authors: "none", year: 2026, title: "Synthetic test model", publication: "not published" },
+  provenance: "SYNTHETIC: invented for a unit test; not a published model",
+  synthetic: true,
+  family: "logPolynomialBsa",
+  meanCoefficients: [0.3, 0.6, -0.1],
+  sdCoefficients: [0.08, 0.01],
+});
+
+Deno.test("extensible models: a synthetic log-polynomial model evaluates and compares side by side", () => {
+  // Hand computation of the family formula at BSA 1: mean ln X = 0.3 + 0.6 − 0.1 = 0.8,
+  // SD = 0.09; X = e^(0.8 + 0.09) = e^0.89 gives Z = 1
+  close(zScoreFormula(SYNTHETIC_LOG_MODEL, Math.exp(0.89), 1), 1, 1e-12, "synthetic Z");
+  close(measurementAtZ(SYNTHETIC_LOG_MODEL, -2, 1), Math.exp(0.8 - 0.18), 1e-12, "synthetic X at −2");
+  const rows = compareZScoreModels(
+    [PHN_2017_MODELS.aorticRootSinus, SYNTHETIC_LOG_MODEL, PHN_2017_MODELS.lvMass],
+    { measurement: 2.2, heightCm: 120, weightKg: 22 },
+  );
+  assert.deepEqual(rows.map((r) => r.modelId), ["phn2017.aorticRootSinus", "synthetic.aorticRootLog", "phn2017.lvMass"]);
+  assert.ok(Number.isFinite(rows[0]!.zScore) && Number.isFinite(rows[1]!.zScore));
+  // The LV mass model is in g: a length cannot be compared; the row says why instead of failing
+  assert.ok(Number.isNaN(rows[2]!.zScore));
+  assert.equal(
+    rows[2]!.error,
+    "Z-score comparison: model 'phn2017.lvMass' measures in g, not comparable with cm of 'phn2017.aorticRootSinus', got g",
+  );
+  assert.ok(zScoreCalculation(SYNTHETIC_LOG_MODEL).cautions[0]!.startsWith("SYNTHETIC"));
+});
+
+Deno.test("defineZScoreModel rejects malformed data naming the field", () => {
+  assert.throws(() => defineZScoreModel({ ...PHN_2017_MODELS.lvMass, sd: 0 }), {
+    name: "TypeError",
+    message: /^Z-score model 'phn2017\.lvMass': field 'sd' expected a finite number > 0, got 0$/,
+  });
+  assert.throws(() => defineZScoreModel({ ...SYNTHETIC_LOG_MODEL, sdCoefficients: [0.1, -1] }), {
+    name: "RangeError",
+    message: /expected a positive SD across the BSA range, got -0\.1\d* at BSA 0\.2 m\^2$/,
+  });
+});
+
+Deno.test("Z with uncertainty: GUM by hand, Monte Carlo agrees, BSA uncertainty enters", () => {
+  const model = PHN_2017_MODELS.aorticAnnulus;
+  // Measurement only: u(Z) = u(X)/(S·BSA^α) = 0.05/0.14 at BSA 1 (JCGM 100 eq. (10), by hand)
+  const g = zScoreWithUncertainty(model, { measurement: normal(1.76, 0.05), bsaM2: 1 });
+  close(g.standardUncertainty, 0.05 / 0.14, 1e-6, "u(Z) measurement");
+  close(g.probabilityAbovePlus2, 0.5, 1e-9, "P(Z>2) at Z=2");
+  // Measurement and BSA: ∂Z/∂BSA = −α·X·BSA^(−α−1)/S = −0.5·1.76/0.14 = −6.285714 at BSA 1;
+  // u(BSA) = 0.03 → contribution 0.188571; u(Z) = √(0.357143² + 0.188571²) = 0.403871 (by hand)
+  const gb = zScoreWithUncertainty(model, { measurement: normal(1.76, 0.05), bsaM2: normal(1, 0.03) });
+  close(gb.standardUncertainty, 0.403871, 1e-4, "u(Z) with BSA");
+  close(gb.shares.bsaM2!, 0.188571 ** 2 / 0.403871 ** 2, 1e-3, "BSA share");
+  // JCGM 101 §8: Monte Carlo agrees with GUM for a nearly linear model
+  const mc = zScoreWithUncertainty(model, { measurement: normal(1.76, 0.05), bsaM2: normal(1, 0.03) }, {
+    method: "monteCarlo",
+    trials: 200_000,
+    seed: 3,
+  });
+  close(mc.standardUncertainty, 0.403871, 0.01, "MC u(Z)");
+  close(mc.probabilityAbovePlus2, 0.5, 0.02, "MC P(Z>2)");
+  // From height and weight with stadiometer and scale error
+  const hw = zScoreWithUncertainty(model, {
+    measurement: normal(1.6, 0.05),
+    heightCm: normal(120, 0.5),
+    weightKg: normal(22, 0.2),
+  });
+  assert.ok(hw.shares.heightCm! > 0 && hw.shares.weightKg! > 0);
+  const big = zScoreWithUncertainty(model, { measurement: normal(2.6, 0.05), bsaM2: normal(2.7, 0.03) });
+  assert.ok(big.flags.some((f) => /outside the range the model 'phn2017\.aorticAnnulus' was built on/.test(f)));
+});

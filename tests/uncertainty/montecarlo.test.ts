@@ -1,0 +1,132 @@
+import assert from "node:assert/strict";
+import {
+  expressionModel,
+  gum,
+  monteCarlo,
+  monteCarloAdaptive,
+  normal,
+  rectangular,
+  validateGumWithMonteCarlo,
+} from "../../mod.ts";
+
+const wide = { min: -1e6, max: 1e6 };
+const additive = expressionModel({
+  expression: "x1 + x2 + x3 + x4",
+  inputs: {
+    x1: { unit: "1", description: "x1", range: wide },
+    x2: { unit: "1", description: "x2", range: wide },
+    x3: { unit: "1", description: "x3", range: wide },
+    x4: { unit: "1", description: "x4", range: wide },
+  },
+  output: { name: "y", unit: "1", description: "sum" },
+});
+
+Deno.test("JCGM 101 §9.2.2 additive model, normal inputs: MC agrees with GUM", () => {
+  const inputs = { x1: normal(0, 1), x2: normal(0, 1), x3: normal(0, 1), x4: normal(0, 1) };
+  const g = gum(additive, inputs);
+  const m = monteCarlo(additive, inputs, { seed: 11 });
+  // JCGM 101:2008 Table 2: GUF and MCM (10⁶ trials): y = 0.00, u(y) = 2.00, interval [−3.92, 3.92]
+  assert.equal(g.outputs.y.standardUncertainty, 2);
+  assert.equal(g.outputs.y.interval[1].toFixed(2), "3.92");
+  // Monte Carlo tolerance: the standard error of a 97.5 % quantile at M = 10⁶ is about 0.005, so
+  // endpoints are checked to ±0.02 (4 standard errors), u and y to ±0.01
+  assert.ok(Math.abs(m.outputs.y.standardUncertainty - 2) < 0.01);
+  assert.ok(Math.abs(m.outputs.y.estimate) < 0.01);
+  assert.ok(Math.abs(m.outputs.y.symmetricInterval[0] + 3.92) < 0.02);
+  assert.ok(Math.abs(m.outputs.y.symmetricInterval[1] - 3.92) < 0.02);
+  // JCGM 101:2008 §9.2.2.4: the GUF is validated (n_dig = 2) by the MCM result
+  const [v] = validateGumWithMonteCarlo(g, m, 2);
+  assert.ok(v!.validated, v!.verdict);
+});
+
+Deno.test("JCGM 101 §9.2.3 additive model, rectangular inputs: MC interval ±3.88 vs GUM ±3.92", () => {
+  const h = Math.sqrt(3); // rectangular with u = 1: half-width √3
+  const inputs = {
+    x1: rectangular(-h, h),
+    x2: rectangular(-h, h),
+    x3: rectangular(-h, h),
+    x4: rectangular(-h, h),
+  };
+  const g = gum(additive, inputs);
+  const m = monteCarlo(additive, inputs, { seed: 12 });
+  // JCGM 101:2008 Table 3: GUF [−3.92, 3.92]; MCM 10⁶: u = 2.00, [−3.88, 3.88]. The exact endpoint
+  // is 2√3·(4 − 2 − 0.6^(1/4)) = 3.8795 from the Irwin–Hall CDF 1 − (4 − s)⁴/24 (analytic).
+  assert.equal(g.outputs.y.interval[1].toFixed(2), "3.92");
+  assert.ok(Math.abs(m.outputs.y.standardUncertainty - 2) < 0.01);
+  const exact = 2 * h * (2 - 0.6 ** 0.25);
+  assert.ok(Math.abs(m.outputs.y.symmetricInterval[1] - exact) < 0.02);
+  assert.ok(Math.abs(m.outputs.y.symmetricInterval[0] + exact) < 0.02);
+});
+
+const comparisonLoss = expressionModel({
+  expression: "x1^2 + x2^2",
+  inputs: {
+    x1: { unit: "1", description: "real part of the reflection coefficient", range: wide },
+    x2: { unit: "1", description: "imaginary part of the reflection coefficient", range: wide },
+  },
+  output: { name: "dY", unit: "1", description: "comparison loss correction" },
+});
+
+Deno.test("JCGM 101 §9.4 comparison loss at x = 0: first order fails, MC and second order do not", () => {
+  const inputs = { x1: normal(0, 0.005), x2: normal(0, 0.005) };
+  const first = gum(comparisonLoss, inputs);
+  // JCGM 101:2008 Table 10 (x1 = 0, from memory): first-order GUF u(δY) = 0
+  assert.equal(first.outputs.dY.standardUncertainty, 0);
+  assert.ok(first.warnings.some((w) => /inadequate/.test(w) && /vanishes/.test(w)), first.warnings.join("\n"));
+  // Second-order GUF: u = 2u² = 5.0 × 10⁻⁵ (JCGM 101 Table 10, GUF with higher-order terms)
+  const second = gum(comparisonLoss, inputs, { secondOrder: true });
+  assert.ok(Math.abs(second.outputs.dY.standardUncertainty - 5e-5) < 1e-12);
+  // MCM: δY/u² ~ χ²₂ (analytic): mean 2u² = 5.0e-5, sd 2u² = 5.0e-5, shortest 95 % interval
+  // [0, −2u²·ln 0.05] = [0, 1.50e-4]; JCGM 101 Table 10 prints 0.000 050, 0.000 050, [0.000 000, 0.000 150]
+  const m = monteCarlo(comparisonLoss, inputs, { seed: 13 });
+  assert.ok(Math.abs(m.outputs.dY.estimate - 5e-5) < 2e-7);
+  assert.ok(Math.abs(m.outputs.dY.standardUncertainty - 5e-5) < 5e-7);
+  assert.ok(m.outputs.dY.shortestInterval[0] < 1e-8);
+  assert.ok(Math.abs(m.outputs.dY.shortestInterval[1] - -2 * 25e-6 * Math.log(0.05)) < 1.5e-6);
+  const [v] = validateGumWithMonteCarlo(first, m, 2);
+  assert.equal(v!.validated, false);
+  assert.match(v!.verdict, /NOT validated/);
+});
+
+Deno.test("Monte Carlo: the same seed gives bit-identical results; another seed differs", () => {
+  const inputs = { x1: normal(1, 0.1), x2: rectangular(0, 1), x3: normal(0, 1), x4: 2 };
+  const a = monteCarlo(additive, inputs, { trials: 20_000, seed: 99 });
+  const b = monteCarlo(additive, inputs, { trials: 20_000, seed: 99 });
+  const c = monteCarlo(additive, inputs, { trials: 20_000, seed: 100 });
+  assert.deepEqual(a.outputs.y.samples, b.outputs.y.samples);
+  assert.notEqual(a.outputs.y.estimate, c.outputs.y.estimate);
+});
+
+Deno.test("Adaptive Monte Carlo (JCGM 101 §7.9) stabilises and agrees with the GUM on a linear model", () => {
+  const inputs = { x1: normal(0, 1), x2: normal(0, 1), x3: normal(0, 1), x4: normal(0, 1) };
+  const r = monteCarloAdaptive(additive, inputs, { significantDigits: 2, seed: 5 });
+  assert.ok(r.stabilized);
+  assert.ok(r.sequences >= 2);
+  // JCGM 101 §7.9.4: M = max(⌈100/(1 − p)⌉, 10⁴) = 10⁴ for p = 0.95
+  assert.equal(r.trialsPerSequence, 10_000);
+  // δ for u = 2.0 at 2 digits is 0.05 (JCGM 101 §7.9.2 rule); the result lies within it of the GUM value
+  assert.equal(r.tolerance.y, 0.05);
+  assert.ok(Math.abs(r.outputs.y.standardUncertainty - 2) < 0.05);
+});
+
+Deno.test("Monte Carlo: non-finite model values are an error naming the output and trial", () => {
+  const inverse = expressionModel({
+    expression: "1 / sqrt(x)",
+    inputs: { x: { unit: "1", description: "x", range: { min: 0, max: 10 } } },
+    output: { name: "y", unit: "1", description: "y" },
+  });
+  assert.throws(() => monteCarlo(inverse, { x: normal(0.01, 1) }, { trials: 1000, seed: 1 }), {
+    name: "RangeError",
+    message: /output 'y' is not finite at Monte Carlo trial \d+/,
+  });
+});
+
+Deno.test("Monte Carlo: draws outside an input's valid range are reported", () => {
+  const sq = expressionModel({
+    expression: "x^2",
+    inputs: { x: { unit: "1", description: "x", range: { min: 0, max: 10 } } },
+    output: { name: "y", unit: "1", description: "y" },
+  });
+  const r = monteCarlo(sq, { x: normal(0.1, 0.1) }, { trials: 10_000, seed: 3 });
+  assert.ok(r.warnings.some((w) => /draws of 'x' fell outside its valid range \[0, 10\]/.test(w)));
+});
