@@ -16,3 +16,4 @@ export * from "./calc/reference/mod.ts";
 export * from "./calc/chamber/mod.ts";
 export * from "./calc/doppler/mod.ts";
 export * from "./calc/agreement/mod.ts";
+export * from "./calc/cohort/mod.ts";

@@ -81,7 +81,10 @@ export class Chart {
   /** A self-contained HTML page with the SVG inlined (no network needed to view). */
   async toHTML(): Promise<string> {
     const svg = await this.toSVG();
-    const title = this.title.replace(/[&<>]/g, (c) => (c === "&" ? "&amp;" : c === "<" ? "&lt;" : "&gt;"));
+    const title = this.title.replace(
+      /[&<>]/g,
+      (c) => (c === "&" ? "&amp;" : c === "<" ? "&lt;" : "&gt;"),
+    );
     return `<!doctype html>\n<html><head><meta charset="utf-8"><title>${title}</title></head>` +
       `<body style="font-family:sans-serif">${svg}</body></html>\n`;
   }

@@ -6,3 +6,4 @@
  */
 export { Chart, type ChartOptions, type VegaLiteSpec } from "./chart.ts";
 export * from "./uncertainty.ts";
+export * from "./agreement.ts";

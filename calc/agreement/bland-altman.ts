@@ -6,7 +6,8 @@
  * @module
  */
 import { checkConfidence, checkPairs, type Interval, mean, shown, sumSquares } from "./checks.ts";
-import { nonCentralTQuantile, tCdf, tQuantile } from "./distributions.ts";
+import { tCdf, tQuantile } from "../stats/distributions.ts";
+import { nonCentralTQuantile } from "./noncentral-t.ts";
 
 export type { Interval } from "./checks.ts";
 

@@ -4,7 +4,7 @@
  * @module
  */
 import { checkConfidence, checkPairs, type Interval, mean, sumSquares } from "./checks.ts";
-import { normalQuantile } from "./distributions.ts";
+import { normalQuantile } from "../stats/distributions.ts";
 
 /** Result of {@linkcode concordanceCorrelation}. */
 export interface ConcordanceResult {

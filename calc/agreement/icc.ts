@@ -5,8 +5,7 @@
  * @module
  */
 import { checkConfidence, checkNumbers, type Interval, mean, shown } from "./checks.ts";
-import { fQuantile } from "./distributions.ts";
-import fCdfStdlib from "@stdlib/stats-base-dists-f-cdf";
+import { fCdf, fQuantile } from "../stats/distributions.ts";
 
 /** One intraclass correlation form. */
 export interface IntraclassCorrelation {
@@ -133,7 +132,7 @@ export function intraclassCorrelations(
   }
   const alpha = 1 - confidence;
   const q = (d1: number, d2: number) => fQuantile(1 - alpha / 2, d1, d2);
-  const upperTail = (f: number, d1: number, d2: number) => 1 - fCdfStdlib(f, d1, d2);
+  const upperTail = (f: number, d1: number, d2: number) => 1 - fCdf(f, d1, d2);
   const single = (f: number) => (f - 1) / (f + k - 1);
   const average = (f: number) => 1 - 1 / f;
 

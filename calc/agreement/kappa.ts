@@ -5,7 +5,7 @@
  * @module
  */
 import { checkConfidence, type Interval, shown } from "./checks.ts";
-import { normalCdf, normalQuantile } from "./distributions.ts";
+import { normalCdf, normalQuantile } from "../stats/distributions.ts";
 
 /** Agreement weights for ordered categories. */
 export type KappaWeights = "none" | "linear" | "quadratic";

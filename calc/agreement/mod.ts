@@ -6,16 +6,7 @@
  * @module
  */
 export type { Interval } from "./checks.ts";
-export {
-  chiSquareQuantile,
-  fQuantile,
-  nonCentralTCdf,
-  nonCentralTQuantile,
-  normalCdf,
-  normalQuantile,
-  tCdf,
-  tQuantile,
-} from "./distributions.ts";
+export { nonCentralTCdf, nonCentralTQuantile } from "./noncentral-t.ts";
 export {
   blandAltman,
   type BlandAltmanOptions,

@@ -13,7 +13,7 @@ import {
   shown,
   sumSquares,
 } from "./checks.ts";
-import { normalQuantile, tQuantile } from "./distributions.ts";
+import { normalQuantile, tQuantile } from "../stats/distributions.ts";
 
 /** Options of {@linkcode demingRegression}. */
 export interface DemingOptions {

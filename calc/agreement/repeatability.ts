@@ -5,7 +5,7 @@
  * @module
  */
 import { checkConfidence, checkNumbers, type Interval, mean, shown, sumSquares } from "./checks.ts";
-import { chiSquareQuantile } from "./distributions.ts";
+import { chiSquareQuantile } from "../stats/distributions.ts";
 
 /** Options of {@linkcode repeatability}. */
 export interface RepeatabilityOptions {

@@ -12,6 +12,8 @@ import { CLINICAL_CAUTION, defineCalculation } from "../core/define.ts";
 import type { Calculation, InputDefinition } from "../core/types.ts";
 import { DEVEREUX_1986, GANAU_1992, LANG_2015, TEICHHOLZ_1976 } from "./sources.ts";
 import { ejectionFraction, percentReduction } from "./function.ts";
+import { monteCarlo, type MonteCarloOptions } from "../uncertainty/montecarlo.ts";
+import type { UncertainInputs } from "../uncertainty/prepare.ts";
 
 // Valid domains are physical limits; typical ranges are the adult span seen in practice
 // (common practice, no source) and only raise a flag.
@@ -337,7 +339,7 @@ export const relativeWallThickness: Calculation<
  * The three numbers of LV geometry from one set of calipers: mass, mass index and relative wall
  * thickness; composes {@linkcode lvMassIndex} and {@linkcode relativeWallThickness}. Computing
  * them together keeps their shared dependence on LVIDd and LVPWd when uncertainty is propagated
- * (Monte Carlo samples of this calculation feed {@linkcode lvGeometryProbabilities}).
+ * (the GUM output covariance, and the joint Monte Carlo of {@linkcode lvGeometryProbabilities}).
  *
  * Formula: LV mass = 0.8·1.04·[(IVSd + LVIDd + LVPWd)³ − LVIDd³] + 0.6; LVMi = LV mass/BSA;
  * RWT = 2·LVPWd/LVIDd
@@ -509,58 +511,126 @@ function checkNumber(
   return v;
 }
 
+/** Internal composition for class probabilities: the geometry class of one trial as a code
+ * (index into the class list), so that counting Monte Carlo samples of this single output gives
+ * the joint class probabilities (sorting a single output does not change its counts). */
+const lvGeometryClassCode: Calculation<
+  | "septalThicknessDiastoleCm"
+  | "lvInternalDiameterDiastoleCm"
+  | "posteriorWallThicknessDiastoleCm"
+  | "bodySurfaceAreaM2"
+  | "lvMassIndexLimitGPerM2",
+  "geometryCode"
+> = defineCalculation({
+  id: "lvGeometryClassCode",
+  title: "LV geometry class",
+  description: "Index of the LV geometry class of one set of linear dimensions.",
+  inputs: {
+    ...lvGeometryMeasures.inputs,
+    lvMassIndexLimitGPerM2: {
+      unit: "g/m^2",
+      description: "Upper normal LV mass index for the patient's sex",
+      range: { min: 0, max: 1000, minExclusive: true },
+    },
+  },
+  outputs: {
+    geometryCode: {
+      unit: "1",
+      description:
+        "0 normal, 1 concentric remodeling, 2 concentric hypertrophy, 3 eccentric hypertrophy",
+    },
+  },
+  formula: (x) => {
+    const m = lvGeometryMeasures.formula(x);
+    return {
+      geometryCode: GEOMETRIES.indexOf(
+        geometryOf(m.relativeWallThickness, m.lvMassIndexGPerM2, x.lvMassIndexLimitGPerM2),
+      ),
+    };
+  },
+  formulaText: "class(RWT > 0.42, LVMi > limit)",
+  sources: [LANG_2015, GANAU_1992],
+  cautions: lvMassLinear.cautions,
+  clinical: true,
+});
+
+/** Inputs of {@linkcode lvGeometryProbabilities}: the linear dimensions and BSA, each exact or
+ * with an uncertainty (`normal(...)`, `rectangular(...)`, ...). */
+export type LvGeometryUncertainInputs = UncertainInputs<
+  | "septalThicknessDiastoleCm"
+  | "lvInternalDiameterDiastoleCm"
+  | "posteriorWallThicknessDiastoleCm"
+  | "bodySurfaceAreaM2"
+>;
+
 /**
- * Probability of each LV geometry class from joint Monte Carlo samples of relative wall
- * thickness and LV mass index (for example the `samples` of a Monte Carlo run of
- * {@linkcode lvGeometryMeasures}). Samples must be paired: sample k of both arrays comes from the
- * same trial, so the correlation through the shared calipers is kept.
+ * Probability of each LV geometry class given the uncertainty of the calipers and BSA, by Monte
+ * Carlo (JCGM 101:2008). Each trial draws one set of dimensions, computes mass index and RWT
+ * together (composing {@linkcode lvGeometryMeasures}) and classifies them with
+ * {@linkcode classifyLvGeometry}'s rule, so the shared dependence of RWT and mass on LVIDd and
+ * LVPWd is kept. The class probabilities are the fractions of trials in each class.
  *
- * @param relativeWallThicknessSamples RWT samples (dimensionless).
- * @param lvMassIndexSamples LV mass-index samples (g/m²), same length.
- * @param sex "male" or "female".
- * @returns The fraction of samples in each class (sums to 1) and the most probable class.
- * @throws {TypeError} For arrays of different or zero length, or an invalid sex.
- * @throws {RangeError} For a non-finite sample, naming its index.
+ * @param inputs Dimensions (cm) and BSA (m²), exact numbers or uncertain inputs.
+ * @param sex "male" or "female" (selects the mass-index limit).
+ * @param options Monte Carlo options (`trials`, default 100000; `seed`; `correlations`).
+ * @returns Class probabilities (sum 1), the most probable class, trials, seed and warnings.
+ * @throws {TypeError} For an invalid sex or malformed inputs.
+ * @throws {RangeError} For input estimates outside their valid ranges.
  *
- * @example Samples straddling the RWT limit
+ * Source: Lang RM et al., J Am Soc Echocardiogr 2015;28:1–39 (limits); JCGM 101:2008 (method).
+ *
+ * @example A borderline patient: several classes are plausible
  * ```ts
- * import { lvGeometryProbabilities } from "@sonorigor/sonorigor";
+ * import { lvGeometryProbabilities, normal } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
- * const p = lvGeometryProbabilities([0.40, 0.41, 0.43, 0.44], [80, 80, 80, 80], "female");
- * assert.equal(p.probabilities["concentric remodeling"], 0.5);
+ * const p = lvGeometryProbabilities({
+ *   septalThicknessDiastoleCm: normal(1.05, 0.05),
+ *   lvInternalDiameterDiastoleCm: normal(5.0, 0.05),
+ *   posteriorWallThicknessDiastoleCm: normal(1.05, 0.05),
+ *   bodySurfaceAreaM2: 1.75,
+ * }, "male", { trials: 20000, seed: 1 });
+ * const total = Object.values(p.probabilities).reduce((a, b) => a + b, 0);
+ * assert.ok(Math.abs(total - 1) < 1e-12);
+ * assert.ok(p.probabilities["concentric hypertrophy"] > 0.05);
  * ```
  */
 export function lvGeometryProbabilities(
-  relativeWallThicknessSamples: ArrayLike<number>,
-  lvMassIndexSamples: ArrayLike<number>,
+  inputs: LvGeometryUncertainInputs,
   sex: Sex,
-): { probabilities: Record<LvGeometry, number>; mostProbable: LvGeometry; trials: number } {
+  options: Omit<MonteCarloOptions, "keepSamples" | "coverage"> = {},
+): {
+  probabilities: Record<LvGeometry, number>;
+  mostProbable: LvGeometry;
+  trials: number;
+  seed: number;
+  warnings: readonly string[];
+  cautions: readonly string[];
+} {
   const where = "LV geometry probabilities";
-  checkSex(sex, where);
-  const n = relativeWallThicknessSamples?.length;
-  if (!(typeof n === "number" && n > 0 && lvMassIndexSamples?.length === n)) {
-    throw new TypeError(
-      `${where}: expected two non-empty sample arrays of equal length, got lengths ${n} and ${lvMassIndexSamples?.length}`,
-    );
+  const limit = LV_GEOMETRY_LIMITS.lvMassIndexGPerM2[checkSex(sex, where)].upperNormal;
+  if (typeof inputs !== "object" || inputs === null) {
+    throw new TypeError(`${where}: expected an object of inputs, got ${String(inputs)}`);
   }
-  const limit = LV_GEOMETRY_LIMITS.lvMassIndexGPerM2[sex].upperNormal;
-  const counts: Record<LvGeometry, number> = {
-    "normal": 0,
-    "concentric remodeling": 0,
-    "concentric hypertrophy": 0,
-    "eccentric hypertrophy": 0,
-  };
-  for (let k = 0; k < n; k++) {
-    const r = relativeWallThicknessSamples[k]!, m = lvMassIndexSamples[k]!;
-    if (!Number.isFinite(r) || !Number.isFinite(m)) {
-      throw new RangeError(`${where}: expected finite samples, got index ${k}: RWT ${r}, LVMi ${m}`);
-    }
-    counts[geometryOf(r, m, limit)]++;
-  }
+  const mc = monteCarlo(lvGeometryClassCode, { ...inputs, lvMassIndexLimitGPerM2: limit }, {
+    trials: 100_000,
+    ...options,
+    keepSamples: true,
+  });
+  const codes = mc.outputs.geometryCode.samples;
+  const counts = [0, 0, 0, 0];
+  for (let k = 0; k < codes.length; k++) counts[codes[k]!]!++;
+  const probabilities = {} as Record<LvGeometry, number>;
   let mostProbable: LvGeometry = "normal";
-  for (const g of GEOMETRIES) {
-    counts[g] /= n;
-    if (counts[g] > counts[mostProbable]) mostProbable = g;
-  }
-  return { probabilities: counts, mostProbable, trials: n };
+  GEOMETRIES.forEach((g, i) => {
+    probabilities[g] = counts[i]! / codes.length;
+    if (probabilities[g] > probabilities[mostProbable]) mostProbable = g;
+  });
+  return {
+    probabilities,
+    mostProbable,
+    trials: mc.trials,
+    seed: mc.seed,
+    warnings: mc.warnings,
+    cautions: mc.cautions,
+  };
 }

@@ -22,6 +22,7 @@ export {
   LV_GEOMETRY_LIMITS,
   lvGeometryMeasures,
   lvGeometryProbabilities,
+  type LvGeometryUncertainInputs,
   type LvGeometry,
   lvMassIndex,
   lvMassLinear,

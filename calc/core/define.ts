@@ -52,8 +52,12 @@ export function defineCalculation<I extends string, O extends string>(
 ): Calculation<I, O> {
   const inputNames = Object.keys(spec.inputs) as I[];
   const outputNames = Object.keys(spec.outputs) as O[];
-  if (inputNames.length === 0) throw new TypeError(`${spec.title}: expected at least one input, got none`);
-  if (outputNames.length === 0) throw new TypeError(`${spec.title}: expected at least one output, got none`);
+  if (inputNames.length === 0) {
+    throw new TypeError(`${spec.title}: expected at least one input, got none`);
+  }
+  if (outputNames.length === 0) {
+    throw new TypeError(`${spec.title}: expected at least one output, got none`);
+  }
   if (spec.sources.length === 0) {
     throw new TypeError(`${spec.title}: expected at least one published source, got none`);
   }
@@ -61,11 +65,18 @@ export function defineCalculation<I extends string, O extends string>(
     const { range, typical } = spec.inputs[name];
     for (const r of typical ? [range, typical] : [range]) {
       if (!(r.min <= r.max)) {
-        throw new TypeError(`${spec.title}: input '${name}' has an empty range ${formatRange(r, "")}`);
+        throw new TypeError(
+          `${spec.title}: input '${name}' has an empty range ${formatRange(r, "")}`,
+        );
       }
     }
   }
-  return Object.freeze({ ...spec, inputNames, outputNames, kind: "sonorigor.calculation" as const });
+  return Object.freeze({
+    ...spec,
+    inputNames,
+    outputNames,
+    kind: "sonorigor.calculation" as const,
+  });
 }
 
 /** True when `value` is a calculation made by {@linkcode defineCalculation}. */
@@ -157,7 +168,9 @@ export function validateInputs<I extends string>(
   for (const name of calc.inputNames) {
     const def = calc.inputs[name];
     const raw = args[name];
-    const value = raw === undefined ? def.default! : toCanonical(raw, def.unit, `${calc.title}: '${name}'`);
+    const value = raw === undefined
+      ? def.default!
+      : toCanonical(raw, def.unit, `${calc.title}: '${name}'`);
     if (!inRange(value, def.range)) {
       throw new RangeError(
         `${calc.title}: expected '${name}' in ${formatRange(def.range, def.unit)}, got ${value}`,

@@ -14,13 +14,25 @@ export const JUPYTER_DISPLAY: unique symbol = Symbol.for("Jupyter.display");
 
 /** Escapes text for HTML. */
 export function escapeHtml(text: string): string {
-  return text.replace(/[&<>"']/g, (c) =>
-    c === "&" ? "&amp;" : c === "<" ? "&lt;" : c === ">" ? "&gt;" : c === '"' ? "&quot;" : "&#39;");
+  return text.replace(
+    /[&<>"']/g,
+    (c) =>
+      c === "&"
+        ? "&amp;"
+        : c === "<"
+        ? "&lt;"
+        : c === ">"
+        ? "&gt;"
+        : c === '"'
+        ? "&quot;"
+        : "&#39;",
+  );
 }
 
 /** An HTML table from a header row and body rows (cells are escaped). */
 export function htmlTable(header: readonly string[], rows: readonly (readonly string[])[]): string {
-  const th = header.map((h) => `<th style="text-align:left;padding:2px 8px">${escapeHtml(h)}</th>`).join("");
+  const th = header.map((h) => `<th style="text-align:left;padding:2px 8px">${escapeHtml(h)}</th>`)
+    .join("");
   const body = rows.map((r) =>
     `<tr>${r.map((c) => `<td style="padding:2px 8px">${escapeHtml(c)}</td>`).join("")}</tr>`
   ).join("");
@@ -55,11 +67,18 @@ export function formatNumber(value: number, digits = 4): string {
 export function displayEvaluation(result: Evaluation): MimeBundle {
   const calc = result.calculation;
   const rows = [
-    ...calc.inputNames.map((n) => ["input", n, formatNumber(result.inputs[n]!, 6), calc.inputs[n]!.unit]),
-    ...calc.outputNames.map((n) => ["output", n, formatNumber(result.outputs[n]!, 6), calc.outputs[n]!.unit]),
+    ...calc.inputNames.map((
+      n,
+    ) => ["input", n, formatNumber(result.inputs[n]!, 6), calc.inputs[n]!.unit]),
+    ...calc.outputNames.map((
+      n,
+    ) => ["output", n, formatNumber(result.outputs[n]!, 6), calc.outputs[n]!.unit]),
   ];
   const header = ["", "name", "value", "unit"];
-  const notes = [...result.flags.map((f) => `Flag: ${f}`), ...result.cautions.map((c) => `Caution: ${c}`)];
+  const notes = [
+    ...result.flags.map((f) => `Flag: ${f}`),
+    ...result.cautions.map((c) => `Caution: ${c}`),
+  ];
   return {
     "text/plain": [calc.title, textTable(header, rows), ...notes].join("\n"),
     "text/html": `<div><b>${escapeHtml(calc.title)}</b>${htmlTable(header, rows)}${

@@ -16,16 +16,24 @@ export type {
   ValueRange,
 } from "./types.ts";
 export {
-  CLINICAL_CAUTION,
   cautionsOf,
+  CLINICAL_CAUTION,
   defineCalculation,
   evaluate,
   type Evaluation,
   formatRange,
-  inRange,
   type InputArguments,
+  inRange,
   isCalculation,
   validateInputs,
 } from "./define.ts";
 export { math, type QuantityInput, toCanonical } from "./units.ts";
 export { JUPYTER_DISPLAY, type MimeBundle } from "./display.ts";
+export {
+  type SensitivityCurve,
+  sensitivityCurve,
+  type SensitivityOptions,
+  type SensitivityPoint,
+} from "./sensitivity.ts";
+export { calculationsOf, formatReference, referenceMarkdown } from "./reference-docs.ts";
+export { escapeHtml, formatNumber, htmlNotes, htmlTable, textTable } from "./display.ts";

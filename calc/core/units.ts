@@ -4,7 +4,7 @@
  *
  * @module
  */
-import { create, all, type MathJsInstance, type Unit } from "mathjs";
+import { all, create, type MathJsInstance, type Unit } from "mathjs";
 
 /** The project's one mathjs instance (units, expressions, symbolic derivatives). */
 export const math: MathJsInstance = create(all!, {});
@@ -68,17 +68,23 @@ export function toCanonical(value: QuantityInput, unit: string, where: string): 
     try {
       parsed = math.unit(text) as Unit;
     } catch {
-      throw new TypeError(`${where}: expected a quantity in ${unit} such as "1 ${unit}", got "${value}"`);
+      throw new TypeError(
+        `${where}: expected a quantity in ${unit} such as "1 ${unit}", got "${value}"`,
+      );
     }
     return convert(parsed, target, unit, where, `"${value}"`);
   }
   if (isMathUnit(value)) {
     if (target === null) {
-      throw new TypeError(`${where}: expected a plain number in ${unit}, got the unit ${value.toString()}`);
+      throw new TypeError(
+        `${where}: expected a plain number in ${unit}, got the unit ${value.toString()}`,
+      );
     }
     return convert(value, target, unit, where, value.toString());
   }
-  throw new TypeError(`${where}: expected a number or a quantity string in ${unit}, got ${describe(value)}`);
+  throw new TypeError(
+    `${where}: expected a number or a quantity string in ${unit}, got ${describe(value)}`,
+  );
 }
 
 function convert(parsed: Unit, target: Unit, unit: string, where: string, shown: string): number {

@@ -14,7 +14,9 @@ import chiSquareQuantileImpl from "@stdlib/stats-base-dists-chisquare-quantile";
 import chiSquareCdfImpl from "@stdlib/stats-base-dists-chisquare-cdf";
 
 function checkProbability(p: number, where: string): void {
-  if (!(p >= 0 && p <= 1)) throw new RangeError(`${where}: expected a probability in [0, 1], got ${p}`);
+  if (!(p >= 0 && p <= 1)) {
+    throw new RangeError(`${where}: expected a probability in [0, 1], got ${p}`);
+  }
 }
 function checkDof(dof: number, where: string): void {
   if (!(dof > 0)) throw new RangeError(`${where}: expected degrees of freedom > 0, got ${dof}`);

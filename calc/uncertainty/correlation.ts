@@ -35,7 +35,11 @@ export function correlationMatrix(
   const r: number[][] = names.map((_, i) => names.map((_, j) => (i === j ? 1 : 0)));
   const index = (name: string) => {
     const i = names.indexOf(name);
-    if (i < 0) throw new TypeError(`${where}: unknown input '${name}' in correlations; expected one of ${names.join(", ")}`);
+    if (i < 0) {
+      throw new TypeError(
+        `${where}: unknown input '${name}' in correlations; expected one of ${names.join(", ")}`,
+      );
+    }
     return i;
   };
   if (correlations === undefined) return r;
@@ -44,19 +48,30 @@ export function correlationMatrix(
       const i = index(a);
       const j = index(b);
       if (!(rho >= -1 && rho <= 1)) {
-        throw new RangeError(`${where}: expected correlation of '${a}' and '${b}' in [-1, 1], got ${rho}`);
+        throw new RangeError(
+          `${where}: expected correlation of '${a}' and '${b}' in [-1, 1], got ${rho}`,
+        );
       }
       if (i === j) {
-        if (rho !== 1) throw new RangeError(`${where}: expected correlation of '${a}' with itself to be 1, got ${rho}`);
+        if (rho !== 1) {
+          throw new RangeError(
+            `${where}: expected correlation of '${a}' with itself to be 1, got ${rho}`,
+          );
+        }
         continue;
       }
       r[i]![j] = rho;
       r[j]![i] = rho;
     }
   } else {
-    const { names: given, matrix } = correlations as { names: readonly string[]; matrix: readonly (readonly number[])[] };
+    const { names: given, matrix } = correlations as {
+      names: readonly string[];
+      matrix: readonly (readonly number[])[];
+    };
     if (matrix.length !== given.length || matrix.some((row) => row.length !== given.length)) {
-      throw new TypeError(`${where}: expected a ${given.length}×${given.length} correlation matrix, got ${matrix.length} rows`);
+      throw new TypeError(
+        `${where}: expected a ${given.length}×${given.length} correlation matrix, got ${matrix.length} rows`,
+      );
     }
     const idx = given.map(index);
     for (let a = 0; a < given.length; a++) {
@@ -66,11 +81,17 @@ export function correlationMatrix(
           throw new RangeError(`${where}: expected a unit diagonal, got ${rho} for '${given[a]}'`);
         }
         if (!(rho >= -1 && rho <= 1)) {
-          throw new RangeError(`${where}: expected correlation of '${given[a]}' and '${given[b]}' in [-1, 1], got ${rho}`);
+          throw new RangeError(
+            `${where}: expected correlation of '${given[a]}' and '${
+              given[b]
+            }' in [-1, 1], got ${rho}`,
+          );
         }
         if (Math.abs(rho - matrix[b]![a]!) > TOLERANCE) {
           throw new RangeError(
-            `${where}: expected a symmetric correlation matrix, got r('${given[a]}', '${given[b]}') = ${rho} and r('${given[b]}', '${given[a]}') = ${matrix[b]![a]}`,
+            `${where}: expected a symmetric correlation matrix, got r('${given[a]}', '${
+              given[b]
+            }') = ${rho} and r('${given[b]}', '${given[a]}') = ${matrix[b]![a]}`,
           );
         }
         r[idx[a]!]![idx[b]!] = a === b ? 1 : rho;
@@ -87,7 +108,11 @@ export function correlationMatrix(
  *
  * @throws {RangeError} When A is not positive semi-definite.
  */
-export function choleskySemidefinite(a: readonly (readonly number[])[], names: readonly string[], where: string): number[][] {
+export function choleskySemidefinite(
+  a: readonly (readonly number[])[],
+  names: readonly string[],
+  where: string,
+): number[][] {
   const n = a.length;
   const l = a.map(() => new Array<number>(n).fill(0));
   for (let j = 0; j < n; j++) {
@@ -95,14 +120,22 @@ export function choleskySemidefinite(a: readonly (readonly number[])[], names: r
     for (let k = 0; k < j; k++) d -= l[j]![k]! ** 2;
     const scale = Math.max(1, Math.abs(a[j]![j]!));
     if (d < -TOLERANCE * scale) {
-      throw new RangeError(`${where}: expected a positive semi-definite correlation matrix, got a negative pivot ${d.toPrecision(3)} at '${names[j]}'`);
+      throw new RangeError(
+        `${where}: expected a positive semi-definite correlation matrix, got a negative pivot ${
+          d.toPrecision(3)
+        } at '${names[j]}'`,
+      );
     }
     if (d <= TOLERANCE * scale) {
       for (let i = j + 1; i < n; i++) {
         let s = a[i]![j]!;
         for (let k = 0; k < j; k++) s -= l[i]![k]! * l[j]![k]!;
         if (Math.abs(s) > 1e-7 * scale) {
-          throw new RangeError(`${where}: expected a positive semi-definite correlation matrix, got an inconsistent row at '${names[i]}'`);
+          throw new RangeError(
+            `${where}: expected a positive semi-definite correlation matrix, got an inconsistent row at '${
+              names[i]
+            }'`,
+          );
         }
       }
       continue;
@@ -137,7 +170,9 @@ export function choleskySemidefinite(a: readonly (readonly number[])[], names: r
  */
 export function correlationFromReadings(a: readonly number[], b: readonly number[]): number {
   if (a.length !== b.length || a.length < 2) {
-    throw new RangeError(`Correlation from readings: expected two equal-length series of at least 2 readings, got ${a.length} and ${b.length}`);
+    throw new RangeError(
+      `Correlation from readings: expected two equal-length series of at least 2 readings, got ${a.length} and ${b.length}`,
+    );
   }
   const n = a.length;
   const ma = a.reduce((s, x) => s + x, 0) / n;
@@ -149,6 +184,10 @@ export function correlationFromReadings(a: readonly number[], b: readonly number
     saa += da * da;
     sbb += db * db;
   }
-  if (!(saa > 0 && sbb > 0)) throw new RangeError(`Correlation from readings: expected non-constant readings, got a variance of 0`);
+  if (!(saa > 0 && sbb > 0)) {
+    throw new RangeError(
+      `Correlation from readings: expected non-constant readings, got a variance of 0`,
+    );
+  }
   return sab / Math.sqrt(saa * sbb);
 }

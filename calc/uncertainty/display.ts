@@ -4,7 +4,14 @@
  *
  * @module
  */
-import { escapeHtml, formatNumber, htmlNotes, htmlTable, type MimeBundle, textTable } from "../core/display.ts";
+import {
+  escapeHtml,
+  formatNumber,
+  htmlNotes,
+  htmlTable,
+  type MimeBundle,
+  textTable,
+} from "../core/display.ts";
 import { roundForReport } from "./rounding.ts";
 import type { GumOutput, GumResult } from "./gum.ts";
 import type { MonteCarloResult } from "./montecarlo.ts";
@@ -13,12 +20,21 @@ import type { MonteCarloResult } from "./montecarlo.ts";
 export function formatGumOutput(o: GumOutput, coverage: number): string {
   const r = roundForReport(o.value, o.expandedUncertainty);
   const unit = o.unit === "1" ? "" : ` ${o.unit}`;
-  return `${o.output} = ${r.value} ± ${r.uncertainty}${unit} (k = ${o.coverageFactor.toFixed(2)}, p = ${
-    formatNumber(coverage * 100, 4)
-  } %)`;
+  return `${o.output} = ${r.value} ± ${r.uncertainty}${unit} (k = ${
+    o.coverageFactor.toFixed(2)
+  }, p = ${formatNumber(coverage * 100, 4)} %)`;
 }
 
-const budgetHeader = ["input", "distribution", "estimate xᵢ", "u(xᵢ)", "νᵢ", "cᵢ", "cᵢ·u(xᵢ)", "share"];
+const budgetHeader = [
+  "input",
+  "distribution",
+  "estimate xᵢ",
+  "u(xᵢ)",
+  "νᵢ",
+  "cᵢ",
+  "cᵢ·u(xᵢ)",
+  "share",
+];
 
 function budgetRows(o: GumOutput): string[][] {
   return o.budget.map((b) => [
@@ -44,10 +60,20 @@ export function displayGum(result: GumResult): MimeBundle {
       Number.isFinite(o.effectiveDof) ? o.effectiveDof.toFixed(1) : "∞"
     }`;
     text.push(line, extra, textTable(budgetHeader, budgetRows(o)));
-    html.push(`<p><b>${escapeHtml(line)}</b><br>${escapeHtml(extra)}</p>`, htmlTable(budgetHeader, budgetRows(o)));
+    html.push(
+      `<p><b>${escapeHtml(line)}</b><br>${escapeHtml(extra)}</p>`,
+      htmlTable(budgetHeader, budgetRows(o)),
+    );
   }
-  text.push(...result.warnings.map((w) => `Warning: ${w}`), ...result.cautions.map((c) => `Caution: ${c}`));
-  html.push(htmlNotes("Warnings", result.warnings), htmlNotes("Cautions", result.cautions), "</div>");
+  text.push(
+    ...result.warnings.map((w) => `Warning: ${w}`),
+    ...result.cautions.map((c) => `Caution: ${c}`),
+  );
+  html.push(
+    htmlNotes("Warnings", result.warnings),
+    htmlNotes("Cautions", result.cautions),
+    "</div>",
+  );
   return { "text/plain": text.join("\n"), "text/html": html.join("") };
 }
 
@@ -68,10 +94,14 @@ export function displayMonteCarlo(result: MonteCarloResult): MimeBundle {
     formatNumber(result.coverage * 100, 4)
   } %)`;
   return {
-    "text/plain": [head, textTable(header, rows), ...result.warnings.map((w) => `Warning: ${w}`),
-      ...result.cautions.map((c) => `Caution: ${c}`)].join("\n"),
-    "text/html": `<div><b>${escapeHtml(head)}</b>${htmlTable(header, rows)}${htmlNotes("Warnings", result.warnings)}${
-      htmlNotes("Cautions", result.cautions)
-    }</div>`,
+    "text/plain": [
+      head,
+      textTable(header, rows),
+      ...result.warnings.map((w) => `Warning: ${w}`),
+      ...result.cautions.map((c) => `Caution: ${c}`),
+    ].join("\n"),
+    "text/html": `<div><b>${escapeHtml(head)}</b>${htmlTable(header, rows)}${
+      htmlNotes("Warnings", result.warnings)
+    }${htmlNotes("Cautions", result.cautions)}</div>`,
   };
 }

@@ -77,12 +77,18 @@ export function expressionModel<I extends string, O extends string>(
   try {
     node = math.parse(spec.expression);
   } catch (e) {
-    throw new TypeError(`${title}: the expression does not parse (${(e as Error).message}), got "${spec.expression}"`);
+    throw new TypeError(
+      `${title}: the expression does not parse (${(e as Error).message}), got "${spec.expression}"`,
+    );
   }
   const inputNames = Object.keys(spec.inputs);
   const unknown = symbolsOf(node).filter((s) => !inputNames.includes(s) && !(s in math));
   if (unknown.length > 0) {
-    throw new TypeError(`${title}: unknown symbol '${unknown.join("', '")}'; expected inputs ${inputNames.join(", ")}`);
+    throw new TypeError(
+      `${title}: unknown symbol '${unknown.join("', '")}'; expected inputs ${
+        inputNames.join(", ")
+      }`,
+    );
   }
   const compiled = node.compile();
   const cache = new Map<string, (x: InputValues<I>) => number>();

@@ -98,7 +98,9 @@ export interface GumResult<O extends string = string> {
 
 /** Checks a coverage probability. */
 export function checkCoverage(p: number, where: string): number {
-  if (!(p > 0 && p < 1)) throw new RangeError(`${where}: expected coverage probability in (0, 1), got ${p}`);
+  if (!(p > 0 && p < 1)) {
+    throw new RangeError(`${where}: expected coverage probability in (0, 1), got ${p}`);
+  }
   return p;
 }
 
@@ -161,14 +163,18 @@ export function gum<I extends string, O extends string>(
       const d = partialDerivative(c, o, [name], x as Record<string, number>, steps);
       if (!Number.isFinite(d)) {
         if (u[i] === 0) return 0;
-        throw new RangeError(`${calc.title}: sensitivity of '${o}' to '${name}' is not finite at the estimates, got ${d}`);
+        throw new RangeError(
+          `${calc.title}: sensitivity of '${o}' to '${name}' is not finite at the estimates, got ${d}`,
+        );
       }
       return d;
     })
   );
 
   if (options.secondOrder && prepared.correlated) {
-    warnings.push("Second-order terms assume uncorrelated inputs; the correlated inputs' second-order cross terms are omitted");
+    warnings.push(
+      "Second-order terms assume uncorrelated inputs; the correlated inputs' second-order cross terms are omitted",
+    );
   }
   const outputs = {} as Record<O, GumOutput>;
   calc.outputNames.forEach((o, index) => {
@@ -176,7 +182,9 @@ export function gum<I extends string, O extends string>(
     let firstOrder = 0;
     let diagonal = 0;
     for (let i = 0; i < n; i++) {
-      for (let j = 0; j < n; j++) firstOrder += cRow[i]! * cRow[j]! * u[i]! * u[j]! * correlation[i]![j]!;
+      for (let j = 0; j < n; j++) {
+        firstOrder += cRow[i]! * cRow[j]! * u[i]! * u[j]! * correlation[i]![j]!;
+      }
       diagonal += (cRow[i]! * u[i]!) ** 2;
     }
     let second = 0;
@@ -202,7 +210,9 @@ export function gum<I extends string, O extends string>(
       if (ci > 0) denominator += ci / resolved[i]!.dof;
     }
     const effectiveDof = denominator > 0 ? variance ** 2 / denominator : Infinity;
-    const dofForK = Number.isFinite(effectiveDof) ? Math.max(1, Math.floor(effectiveDof)) : Infinity;
+    const dofForK = Number.isFinite(effectiveDof)
+      ? Math.max(1, Math.floor(effectiveDof))
+      : Infinity;
     const k = tQuantile((1 + coverage) / 2, dofForK);
     const U = k * uc;
     const value = y[o];
@@ -230,10 +240,23 @@ export function gum<I extends string, O extends string>(
       interval: [value - U, value + U],
       budget,
     };
-    warnings.push(...linearityWarnings(calc, o, x, resolved.map((r) => r.name), u, uc, cRow, Boolean(options.secondOrder)));
+    warnings.push(
+      ...linearityWarnings(
+        calc,
+        o,
+        x,
+        resolved.map((r) => r.name),
+        u,
+        uc,
+        cRow,
+        Boolean(options.secondOrder),
+      ),
+    );
   });
   if (prepared.correlated) {
-    warnings.push("Welch–Satterthwaite effective degrees of freedom assume independent inputs; with correlated inputs treat ν_eff as approximate");
+    warnings.push(
+      "Welch–Satterthwaite effective degrees of freedom assume independent inputs; with correlated inputs treat ν_eff as approximate",
+    );
   }
 
   const m = calc.outputNames.length;
@@ -243,7 +266,9 @@ export function gum<I extends string, O extends string>(
     for (let b = 0; b < m; b++) {
       let s = 0;
       for (let i = 0; i < n; i++) {
-        for (let j = 0; j < n; j++) s += jacobian[a]![i]! * jacobian[b]![j]! * u[i]! * u[j]! * correlation[i]![j]!;
+        for (let j = 0; j < n; j++) {
+          s += jacobian[a]![i]! * jacobian[b]![j]! * u[i]! * u[j]! * correlation[i]![j]!;
+        }
       }
       covariance[a]!.push(s);
     }
@@ -285,18 +310,31 @@ function linearityWarnings<I extends string, O extends string>(
   names.forEach((name, i) => {
     const ui = u[i]!;
     if (!(ui > 0)) return;
-    const plus = (calc.formula({ ...x, [name]: (x as Record<string, number>)[name]! + ui }) as Record<string, number>)[output]!;
-    const minus = (calc.formula({ ...x, [name]: (x as Record<string, number>)[name]! - ui }) as Record<string, number>)[output]!;
+    const plus =
+      (calc.formula({ ...x, [name]: (x as Record<string, number>)[name]! + ui }) as Record<
+        string,
+        number
+      >)[output]!;
+    const minus =
+      (calc.formula({ ...x, [name]: (x as Record<string, number>)[name]! - ui }) as Record<
+        string,
+        number
+      >)[output]!;
     if (!Number.isFinite(plus) || !Number.isFinite(minus)) return;
     const curvature = Math.abs(plus + minus - 2 * y0) / 2; // ≈ ½|f''|u²
     const linear = Math.abs(cRow[i]! * ui);
-    if (curvature > 0.1 * Math.max(linear, 1e-300) && curvature > 1e-3 * Math.max(uc, 1e-300) && curvature > 1e-12 * Math.abs(y0)) {
+    if (
+      curvature > 0.1 * Math.max(linear, 1e-300) && curvature > 1e-3 * Math.max(uc, 1e-300) &&
+      curvature > 1e-12 * Math.abs(y0)
+    ) {
       warnings.push(
         `First-order propagation is inadequate for '${output}' with respect to '${name}': over ±u the output moves by ${
           curvature.toPrecision(2)
         } from curvature against a first-order contribution of ${linear.toPrecision(2)}${
           linear < 1e-12 ? " (the sensitivity vanishes at the estimate)" : ""
-        }; ${secondOrder ? "second-order terms are included, but " : ""}use monteCarlo() for an honest uncertainty and interval`,
+        }; ${
+          secondOrder ? "second-order terms are included, but " : ""
+        }use monteCarlo() for an honest uncertainty and interval`,
       );
     }
   });

@@ -85,7 +85,11 @@ export type InputEstimate = UncertainInput | QuantityInput;
  * assert.deepEqual(normal(2.1, 0.05), { kind: "normal", value: 2.1, standardUncertainty: 0.05 });
  * ```
  */
-export function normal(value: Amount, standardUncertainty: Amount, options: { dof?: number } = {}): NormalInput {
+export function normal(
+  value: Amount,
+  standardUncertainty: Amount,
+  options: { dof?: number } = {},
+): NormalInput {
   return options.dof === undefined
     ? { kind: "normal", value, standardUncertainty }
     : { kind: "normal", value, standardUncertainty, dof: options.dof };
@@ -117,7 +121,9 @@ export function rectangular(lower: Amount, upper: Amount): RectangularInput {
  * ```
  */
 export function rectangularHalfWidth(center: number, halfWidth: number): RectangularInput {
-  if (!(halfWidth >= 0)) throw new RangeError(`Rectangular input: expected halfWidth >= 0, got ${halfWidth}`);
+  if (!(halfWidth >= 0)) {
+    throw new RangeError(`Rectangular input: expected halfWidth >= 0, got ${halfWidth}`);
+  }
   return { kind: "rectangular", lower: center - halfWidth, upper: center + halfWidth };
 }
 
@@ -133,7 +139,9 @@ export function rectangularHalfWidth(center: number, halfWidth: number): Rectang
  * ```
  */
 export function triangular(lower: Amount, upper: Amount, mode?: Amount): TriangularInput {
-  return mode === undefined ? { kind: "triangular", lower, upper } : { kind: "triangular", lower, upper, mode };
+  return mode === undefined
+    ? { kind: "triangular", lower, upper }
+    : { kind: "triangular", lower, upper, mode };
 }
 
 /**
@@ -187,10 +195,14 @@ export function studentT(value: Amount, standardUncertainty: Amount, dof: number
  */
 export function typeA(readings: readonly number[]): StudentTInput {
   if (!Array.isArray(readings) || readings.length < 2) {
-    throw new RangeError(`Type A input: expected at least 2 readings, got ${readings?.length ?? describe(readings)}`);
+    throw new RangeError(
+      `Type A input: expected at least 2 readings, got ${readings?.length ?? describe(readings)}`,
+    );
   }
   readings.forEach((r, i) => {
-    if (!Number.isFinite(r)) throw new RangeError(`Type A input: expected finite readings, got reading ${i} = ${r}`);
+    if (!Number.isFinite(r)) {
+      throw new RangeError(`Type A input: expected finite readings, got reading ${i} = ${r}`);
+    }
   });
   const n = readings.length;
   const mean = readings.reduce((a, b) => a + b, 0) / n;
@@ -244,7 +256,12 @@ export interface ResolvedInput {
  * @throws {TypeError} For an unrecognised input shape or a wrong unit.
  * @throws {RangeError} For a negative or non-finite uncertainty, reversed bounds or dof ≤ 0.
  */
-export function resolveInput(name: string, unit: string, input: InputEstimate, where: string): ResolvedInput {
+export function resolveInput(
+  name: string,
+  unit: string,
+  input: InputEstimate,
+  where: string,
+): ResolvedInput {
   const at = `${where}: '${name}'`;
   const num = (v: Amount, field: string) => {
     const x = toCanonical(v, unit, `${at} ${field}`);
@@ -258,12 +275,30 @@ export function resolveInput(name: string, unit: string, input: InputEstimate, w
   };
   if (!isUncertainInput(input)) {
     const value = num(input as QuantityInput as Amount, "value");
-    return { name, kind: "exact", estimate: value, standardUncertainty: 0, dof: Infinity, lower: value, upper: value, mode: value };
+    return {
+      name,
+      kind: "exact",
+      estimate: value,
+      standardUncertainty: 0,
+      dof: Infinity,
+      lower: value,
+      upper: value,
+      mode: value,
+    };
   }
   switch (input.kind) {
     case "exact": {
       const v = num(input.value, "value");
-      return { name, kind: "exact", estimate: v, standardUncertainty: 0, dof: Infinity, lower: v, upper: v, mode: v };
+      return {
+        name,
+        kind: "exact",
+        estimate: v,
+        standardUncertainty: 0,
+        dof: Infinity,
+        lower: v,
+        upper: v,
+        mode: v,
+      };
     }
     case "normal":
     case "studentT": {
@@ -273,25 +308,65 @@ export function resolveInput(name: string, unit: string, input: InputEstimate, w
         throw new RangeError(`${at}: expected a standard uncertainty >= 0, got ${u}`);
       }
       const dof = dofOf(input.dof);
-      return { name, kind: input.kind, estimate: v, standardUncertainty: u, dof, lower: v, upper: v, mode: v };
+      return {
+        name,
+        kind: input.kind,
+        estimate: v,
+        standardUncertainty: u,
+        dof,
+        lower: v,
+        upper: v,
+        mode: v,
+      };
     }
     case "rectangular":
     case "arcsine":
     case "triangular": {
       const a = num(input.lower, "lower bound");
       const b = num(input.upper, "upper bound");
-      if (!(b >= a)) throw new RangeError(`${at}: expected upper bound >= lower bound ${a}, got ${b}`);
+      if (!(b >= a)) {
+        throw new RangeError(`${at}: expected upper bound >= lower bound ${a}, got ${b}`);
+      }
       const dof = dofOf(input.dof);
       if (input.kind === "rectangular") {
-        return { name, kind: "rectangular", estimate: (a + b) / 2, standardUncertainty: (b - a) / Math.sqrt(12), dof, lower: a, upper: b, mode: (a + b) / 2 };
+        return {
+          name,
+          kind: "rectangular",
+          estimate: (a + b) / 2,
+          standardUncertainty: (b - a) / Math.sqrt(12),
+          dof,
+          lower: a,
+          upper: b,
+          mode: (a + b) / 2,
+        };
       }
       if (input.kind === "arcsine") {
-        return { name, kind: "arcsine", estimate: (a + b) / 2, standardUncertainty: (b - a) / (2 * Math.SQRT2), dof, lower: a, upper: b, mode: (a + b) / 2 };
+        return {
+          name,
+          kind: "arcsine",
+          estimate: (a + b) / 2,
+          standardUncertainty: (b - a) / (2 * Math.SQRT2),
+          dof,
+          lower: a,
+          upper: b,
+          mode: (a + b) / 2,
+        };
       }
       const c = input.mode === undefined ? (a + b) / 2 : num(input.mode, "mode");
-      if (!(c >= a && c <= b)) throw new RangeError(`${at}: expected the mode in [${a}, ${b}], got ${c}`);
+      if (!(c >= a && c <= b)) {
+        throw new RangeError(`${at}: expected the mode in [${a}, ${b}], got ${c}`);
+      }
       const variance = (a * a + b * b + c * c - a * b - a * c - b * c) / 18;
-      return { name, kind: "triangular", estimate: (a + b + c) / 3, standardUncertainty: Math.sqrt(variance), dof, lower: a, upper: b, mode: c };
+      return {
+        name,
+        kind: "triangular",
+        estimate: (a + b + c) / 3,
+        standardUncertainty: Math.sqrt(variance),
+        dof,
+        lower: a,
+        upper: b,
+        mode: c,
+      };
     }
   }
 }

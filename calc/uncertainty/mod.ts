@@ -5,7 +5,7 @@
  * @module
  */
 export * from "./inputs.ts";
-export { type CorrelationPair, correlationFromReadings, type Correlations } from "./correlation.ts";
+export { correlationFromReadings, type CorrelationPair, type Correlations } from "./correlation.ts";
 export { type UncertainInputs } from "./prepare.ts";
 export { type BudgetRow, gum, type GumOptions, type GumOutput, type GumResult } from "./gum.ts";
 export {
@@ -25,4 +25,4 @@ export {
 export { expressionModel, type ExpressionModelSpec } from "./expression.ts";
 export { numericalTolerance, roundForReport } from "./rounding.ts";
 export { formatGumOutput } from "./display.ts";
-export { randomStream, type RandomStream } from "./random.ts";
+export { type RandomStream, randomStream } from "./random.ts";

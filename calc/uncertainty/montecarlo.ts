@@ -87,7 +87,9 @@ function checkTrials(trials: number, coverage: number, where: string): number {
   }
   if (trials < 1 / (1 - coverage)) {
     throw new RangeError(
-      `${where}: expected at least 1/(1 − p) = ${Math.ceil(1 / (1 - coverage))} trials for coverage ${coverage}, got ${trials}`,
+      `${where}: expected at least 1/(1 − p) = ${
+        Math.ceil(1 / (1 - coverage))
+      } trials for coverage ${coverage}, got ${trials}`,
     );
   }
   return trials;
@@ -128,7 +130,12 @@ function sampleColumn(input: ResolvedInput, out: Float64Array, rng: RandomStream
 }
 
 /** Draws `m` trials of every input: one Float64Array column per input, in input order. */
-function sampleInputs(prepared: PreparedInputs<string>, m: number, rng: RandomStream, where: string): Float64Array[] {
+function sampleInputs(
+  prepared: PreparedInputs<string>,
+  m: number,
+  rng: RandomStream,
+  where: string,
+): Float64Array[] {
   const { inputs, correlation, correlated } = prepared;
   const columns = inputs.map(() => new Float64Array(m));
   if (!correlated) {
@@ -191,7 +198,9 @@ function evaluateColumns<I extends string, O extends string>(
       if (!Number.isFinite(v)) {
         const shown = names.map((n) => `${n} = ${x[n]}`).join(", ");
         throw new RangeError(
-          `${calc.title}: output '${outs[k]}' is not finite at Monte Carlo trial ${r} (${shown}), got ${v}; give the inputs distributions that respect the formula's domain (e.g. rectangular bounds)`,
+          `${calc.title}: output '${
+            outs[k]
+          }' is not finite at Monte Carlo trial ${r} (${shown}), got ${v}; give the inputs distributions that respect the formula's domain (e.g. rectangular bounds)`,
         );
       }
       results[k]![r] = v;
@@ -248,7 +257,10 @@ export function coverageIntervals(
   const q = Number.isInteger(pm) ? pm : Math.floor(pm + 0.5);
   const r = Number.isInteger((m - q) / 2) ? (m - q) / 2 : (m - q + 1) / 2;
   // 1-based order statistics y_(r) → sorted[r − 1]
-  const symmetric: [number, number] = [sorted[Math.max(r - 1, 0)]!, sorted[Math.min(r + q - 1, m - 1)]!];
+  const symmetric: [number, number] = [
+    sorted[Math.max(r - 1, 0)]!,
+    sorted[Math.min(r + q - 1, m - 1)]!,
+  ];
   let best = Infinity, bestR = 1;
   for (let s = 1; s + q <= m; s++) {
     const w = sorted[s + q - 1]! - sorted[s - 1]!;
@@ -418,7 +430,9 @@ export function monteCarloAdaptive<I extends string, O extends string>(
   const coverage = checkCoverage(options.coverage ?? 0.95, calc.title);
   const digits = options.significantDigits ?? 2;
   if (!(Number.isInteger(digits) && digits >= 1 && digits <= 4)) {
-    throw new RangeError(`${calc.title}: expected significantDigits as an integer in [1, 4], got ${digits}`);
+    throw new RangeError(
+      `${calc.title}: expected significantDigits as an integer in [1, 4], got ${digits}`,
+    );
   }
   const maxTrials = options.maxTrials ?? 50_000_000;
   const seed = options.seed ?? DEFAULT_SEED;
@@ -427,14 +441,21 @@ export function monteCarloAdaptive<I extends string, O extends string>(
   const m = Math.max(Math.ceil(100 / (1 - coverage)), 10_000);
   const outs = calc.outputNames;
   const batches: Float64Array[][] = [];
-  const seqStats = outs.map(() => ({ y: [] as number[], u: [] as number[], lo: [] as number[], hi: [] as number[] }));
+  const seqStats = outs.map(() => ({
+    y: [] as number[],
+    u: [] as number[],
+    lo: [] as number[],
+    hi: [] as number[],
+  }));
   const warnings = [...prepared.flags];
   const tolerance = {} as Record<O, number>;
   let stabilized = false;
   let inputWarnings: string[] = [];
   while (!stabilized && (batches.length + 1) * m <= maxTrials) {
     const columns = sampleInputs(prepared as PreparedInputs<string>, m, rng, calc.title);
-    if (batches.length === 0) inputWarnings = rangeWarnings(calc as unknown as Calculation, columns);
+    if (batches.length === 0) {
+      inputWarnings = rangeWarnings(calc as unknown as Calculation, columns);
+    }
     const results = evaluateColumns(calc, prepared, columns, m);
     batches.push(results);
     results.forEach((col, k) => {
@@ -451,7 +472,8 @@ export function monteCarloAdaptive<I extends string, O extends string>(
     if (h < 2) continue;
     stabilized = outs.every((o, k) => {
       const s = seqStats[k]!;
-      const sdOfMean = (v: number[]) => meanAndStandardDeviation(Float64Array.from(v)).sd / Math.sqrt(v.length);
+      const sdOfMean = (v: number[]) =>
+        meanAndStandardDeviation(Float64Array.from(v)).sd / Math.sqrt(v.length);
       const uAll = s.u.reduce((a, b) => a + b, 0) / h;
       const delta = numericalTolerance(uAll, digits);
       tolerance[o] = delta;
@@ -459,7 +481,9 @@ export function monteCarloAdaptive<I extends string, O extends string>(
     });
   }
   if (!stabilized) {
-    warnings.push(`Adaptive Monte Carlo did not stabilise within ${maxTrials} trials at ${digits} significant digits`);
+    warnings.push(
+      `Adaptive Monte Carlo did not stabilise within ${maxTrials} trials at ${digits} significant digits`,
+    );
   }
   warnings.push(...inputWarnings);
   const total = batches.length * m;
@@ -529,7 +553,11 @@ export function validateGumWithMonteCarlo(
   return gumResult.outputNames.map((name) => {
     const g = gumResult.outputs[name]!;
     const m = mcResult.outputs[name];
-    if (!m) throw new TypeError(`GUM validation: output '${name}' is missing from the Monte Carlo result`);
+    if (!m) {
+      throw new TypeError(
+        `GUM validation: output '${name}' is missing from the Monte Carlo result`,
+      );
+    }
     const uForTolerance = g.standardUncertainty > 0 ? g.standardUncertainty : m.standardUncertainty;
     const tolerance = numericalTolerance(uForTolerance, significantDigits);
     const lowDifference = Math.abs(g.interval[0] - m.symmetricInterval[0]);
@@ -541,7 +569,9 @@ export function validateGumWithMonteCarlo(
       } and ${highDifference.toPrecision(2)} are within δ = ${tolerance}`
       : `The GUM interval for '${name}' is NOT validated by Monte Carlo at ${significantDigits} significant digit(s): endpoint differences ${
         lowDifference.toPrecision(2)
-      } and ${highDifference.toPrecision(2)} exceed δ = ${tolerance}; report the Monte Carlo interval`;
+      } and ${
+        highDifference.toPrecision(2)
+      } exceed δ = ${tolerance}; report the Monte Carlo interval`;
     return { output: name, tolerance, lowDifference, highDifference, validated, verdict };
   });
 }

@@ -38,11 +38,15 @@ export function prepareInputs<I extends string>(
   correlations: Correlations | undefined,
 ): PreparedInputs<I> {
   if (typeof given !== "object" || given === null) {
-    throw new TypeError(`${calc.title}: expected an object of uncertain inputs, got ${describe(given)}`);
+    throw new TypeError(
+      `${calc.title}: expected an object of uncertain inputs, got ${describe(given)}`,
+    );
   }
   for (const key of Object.keys(given)) {
     if (!(calc.inputNames as readonly string[]).includes(key)) {
-      throw new TypeError(`${calc.title}: unknown input '${key}'; expected one of ${calc.inputNames.join(", ")}`);
+      throw new TypeError(
+        `${calc.title}: unknown input '${key}'; expected one of ${calc.inputNames.join(", ")}`,
+      );
     }
   }
   const flags: string[] = [];
@@ -52,16 +56,26 @@ export function prepareInputs<I extends string>(
     let g = given[name];
     if (g === undefined) {
       if (def.default === undefined) {
-        throw new TypeError(`${calc.title}: missing input '${name}' (${def.description}, ${def.unit})`);
+        throw new TypeError(
+          `${calc.title}: missing input '${name}' (${def.description}, ${def.unit})`,
+        );
       }
       g = def.default;
     }
     const r = resolveInput(name, def.unit, g, calc.title);
     if (!inRange(r.estimate, def.range)) {
-      throw new RangeError(`${calc.title}: expected '${name}' in ${formatRange(def.range, def.unit)}, got ${r.estimate}`);
+      throw new RangeError(
+        `${calc.title}: expected '${name}' in ${
+          formatRange(def.range, def.unit)
+        }, got ${r.estimate}`,
+      );
     }
     if (def.typical && !inRange(r.estimate, def.typical)) {
-      flags.push(`'${name}' = ${r.estimate} ${def.unit} lies outside the validated range ${formatRange(def.typical, def.unit)}: interpret with care`);
+      flags.push(
+        `'${name}' = ${r.estimate} ${def.unit} lies outside the validated range ${
+          formatRange(def.typical, def.unit)
+        }: interpret with care`,
+      );
     }
     estimates[name] = r.estimate;
     return r;

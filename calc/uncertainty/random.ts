@@ -37,7 +37,9 @@ export interface RandomStream {
  */
 export function randomStream(seed: number): RandomStream {
   if (!(Number.isInteger(seed) && seed > 0 && seed < 2 ** 32)) {
-    throw new RangeError(`Random stream: expected a seed that is an integer in [1, 2^32 - 1], got ${seed}`);
+    throw new RangeError(
+      `Random stream: expected a seed that is an integer in [1, 2^32 - 1], got ${seed}`,
+    );
   }
   const base = mt19937.factory({ seed });
   const uniform = (base as unknown as { normalized: () => number }).normalized;

@@ -53,7 +53,11 @@ function fixed(value: number, l: number): string {
  * assert.deepEqual(roundForReport(100.02147, 0.00035), { value: "100.02147", uncertainty: "0.00035" });
  * ```
  */
-export function roundForReport(value: number, uncertainty: number, digits = 2): { value: string; uncertainty: string } {
+export function roundForReport(
+  value: number,
+  uncertainty: number,
+  digits = 2,
+): { value: string; uncertainty: string } {
   if (!(uncertainty > 0) || !Number.isFinite(uncertainty)) {
     return { value: String(value), uncertainty: String(uncertainty) };
   }

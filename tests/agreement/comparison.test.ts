@@ -3,7 +3,10 @@ import { concordanceCorrelation, demingRegression, passingBablokRegression } fro
 import { MINI1, WRIGHT1 } from "./data.ts";
 
 const close = (actual: number, expected: number, tol: number, what = "") =>
-  assert.ok(Math.abs(actual - expected) <= tol, `${what} expected ${expected} ± ${tol}, got ${actual}`);
+  assert.ok(
+    Math.abs(actual - expected) <= tol,
+    `${what} expected ${expected} ± ${tol}, got ${actual}`,
+  );
 
 Deno.test("Lin's concordance correlation matches R epiR on the peak-flow data", () => {
   const r = concordanceCorrelation(WRIGHT1, MINI1);
@@ -53,9 +56,9 @@ Deno.test("Deming regression: OLS limit and bad input", () => {
   // (hand-checkable: S_xy/S_xx = 1 for y = x + alternating noise centred on x)
   const x = [1, 2, 3, 4, 5, 6];
   const y = [1.5, 1.5, 3.5, 3.5, 5.5, 5.5];
-  const sxy = 15.5; // Σ(x − 3.5)(y − 3.5) hand-computed
-  const sxx = 17.5;
-  close(demingRegression(x, y, { errorVarianceRatio: 1e9 }).slope, sxy / sxx, 1e-6);
+  const sxy = 16; // Σ(x − 3.5)(y − 3.5) = 5 + 3 + 0 + 0 + 3 + 5, hand-computed
+  const sxx = 17.5; // Σ(x − 3.5)²
+  close(demingRegression(x, y, { errorVarianceRatio: 1e6 }).slope, sxy / sxx, 1e-5);
   assert.throws(() => demingRegression(x, y, { errorVarianceRatio: -1 }), {
     name: "RangeError",
     message: /expected 'errorVarianceRatio' in \(0, ∞\), got -1$/,
@@ -84,19 +87,27 @@ Deno.test("Passing-Bablok slope and interval match SciPy's Theil-Sen estimator w
 });
 
 Deno.test("Passing-Bablok shifted median and cusum check (hand-checkable)", () => {
-  // 4 points, slopes (hand): (0,0)-(1,3)=3, (0,0)-(2,1)=0.5, (0,0)-(3,3)=1, (1,3)-(2,1)=−2,
-  // (1,3)-(3,3)=0, (2,1)-(3,3)=2 → sorted −2, 0, 0.5, 1, 2, 3; K = 1 (one slope < −1), N = 6:
-  // b = mean of S(N/2+K) = S(4) = 1 and S(5) = 2 → 1.5 (Passing & Bablok 1983 §3)
-  const r = passingBablokRegression([0, 1, 2, 3], [0, 3, 1, 3]);
-  close(r.slope, 1.5, 1e-12);
-  // a = median(y − 1.5x) = median(0, 1.5, −2, −1.5) = −0.75
-  close(r.intercept, -0.75, 1e-12);
+  // Passing & Bablok 1983 §3, by hand for x = 0..5, y = 0, 3, 1, 3, 4, 6: the 15 pairwise slopes
+  // sorted are −2, 0, 1/3, 0.5, 0.75, 1, 1, 1, 1.2, 1.5, 1.5, 5/3, 2, 2, 3; K = 1 slope < −1;
+  // N = 15 odd → b = S((N + 1)/2 + K) = S(9) = 1.2 (the unshifted median S(8) would be 1)
+  const r = passingBablokRegression([0, 1, 2, 3, 4, 5], [0, 3, 1, 3, 4, 6]);
+  close(r.slope, 1.2, 1e-12);
+  // a = median(y − 1.2x) = median(0, 1.8, −1.4, −0.6, −0.8, 0) = −0.3
+  close(r.intercept, -0.3, 1e-12);
+  // C = 1.96·√(6·5·17/18) = 10.43, M1 = round((15 − 10.43)/2) = 2, M2 = 15 − 2 + 1 = 14:
+  // slope interval [S(M1 + K), S(M2 + K)] = [S(3), S(15)] = [1/3, 3]
+  close(r.slopeCi.lower, 1 / 3, 1e-12);
+  close(r.slopeCi.upper, 3, 1e-12);
   // A clearly curved relation fails the cusum linearity check (Passing & Bablok 1983 §4)
   const xq = Array.from({ length: 20 }, (_, i) => i + 1);
   const yq = xq.map((v) => 0.1 * v * v + ((v % 3) - 1) * 0.3);
   assert.equal(passingBablokRegression(xq, yq).linearity.nonLinear, true);
-  assert.throws(() => passingBablokRegression([1, 2, 3], [3, 2, 1]), {
+  assert.throws(() => passingBablokRegression([1, 2, 3, 4, 5, 6], [6, 5, 4, 3, 2, 1.5]), {
     name: "RangeError",
-    message: /positively related methods/,
+    message: /positively related methods \(finite slope > 0\), got slope -/,
+  });
+  assert.throws(() => passingBablokRegression([0, 1, 2, 3], [0, 3, 1, 3]), {
+    name: "RangeError",
+    message: /expected enough pairs for a 0.95 interval, got 4$/,
   });
 });

@@ -3,7 +3,10 @@ import { intraclassCorrelations, repeatability } from "../../mod.ts";
 import { PEAK_FLOW, SHROUT_FLEISS } from "./data.ts";
 
 const close = (actual: number, expected: number, tol: number, what = "") =>
-  assert.ok(Math.abs(actual - expected) <= tol, `${what} expected ${expected} ± ${tol}, got ${actual}`);
+  assert.ok(
+    Math.abs(actual - expected) <= tol,
+    `${what} expected ${expected} ± ${tol}, got ${actual}`,
+  );
 
 Deno.test("repeatability coefficients of the 1986 peak-flow meters", () => {
   const wright = repeatability(PEAK_FLOW.map((r) => [r[0], r[1]]), { multiplier: 2 });

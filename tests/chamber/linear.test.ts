@@ -5,7 +5,6 @@ import {
   fractionalShortening,
   LV_GEOMETRY_LIMITS,
   lvGeometryMeasures,
-  lvGeometryProbabilities,
   lvMassIndex,
   lvMassLinear,
   relativeWallThickness,
@@ -134,27 +133,6 @@ Deno.test("LV geometry measures compose mass, index and RWT", () => {
   close(r.lvMassIndexGPerM2, 232.2496 / 1.9, 1e-9);
   close(r.relativeWallThickness, 0.5, 1e-15);
   assert.equal(classifyLvGeometry({ ...r, sex: "male" }).geometry, "concentric hypertrophy");
-});
-
-Deno.test("geometry probabilities count paired samples", () => {
-  // Hand-countable: 4 samples, women (limit 95): (0.40, 80) normal, (0.45, 80) remodeling,
-  // (0.45, 100) concentric hypertrophy, (0.40, 100) eccentric hypertrophy.
-  const p = lvGeometryProbabilities([0.4, 0.45, 0.45, 0.4], [80, 80, 100, 100], "female");
-  assert.deepEqual(p.probabilities, {
-    "normal": 0.25,
-    "concentric remodeling": 0.25,
-    "concentric hypertrophy": 0.25,
-    "eccentric hypertrophy": 0.25,
-  });
-  assert.equal(p.trials, 4);
-  assert.throws(() => lvGeometryProbabilities([0.4], [80, 90], "female"), {
-    name: "TypeError",
-    message: /equal length, got lengths 1 and 2/,
-  });
-  assert.throws(() => lvGeometryProbabilities([0.4, NaN], [80, 90], "male"), {
-    name: "RangeError",
-    message: /finite samples, got index 1: RWT NaN, LVMi 90/,
-  });
 });
 
 Deno.test("bad input: negative or missing dimensions, LVIDs above LVIDd, bad sex", () => {

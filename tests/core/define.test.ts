@@ -14,15 +14,28 @@ const area = defineCalculation({
       range: { min: 0, max: 5, minExclusive: true },
       typical: { min: 1.6, max: 3 },
     },
-    lvotVtiCm: { unit: "cm", description: "LVOT VTI", range: { min: 0, max: 100, minExclusive: true } },
-    valveVtiCm: { unit: "cm", description: "Valve VTI", range: { min: 0, max: 300, minExclusive: true } },
+    lvotVtiCm: {
+      unit: "cm",
+      description: "LVOT VTI",
+      range: { min: 0, max: 100, minExclusive: true },
+    },
+    valveVtiCm: {
+      unit: "cm",
+      description: "Valve VTI",
+      range: { min: 0, max: 300, minExclusive: true },
+    },
   },
   outputs: { areaCm2: { unit: "cm^2", description: "valve area" } },
   formula: ({ lvotDiameterCm, lvotVtiCm, valveVtiCm }) => ({
     areaCm2: Math.PI * (lvotDiameterCm / 2) ** 2 * lvotVtiCm / valveVtiCm,
   }),
   formulaText: "AVA = π(D/2)²·VTI_LVOT/VTI_AV",
-  sources: [{ authors: "Baumgartner H, et al.", year: 2009, title: "Echocardiographic assessment of valve stenosis", publication: "J Am Soc Echocardiogr 22:1–23" }],
+  sources: [{
+    authors: "Baumgartner H, et al.",
+    year: 2009,
+    title: "Echocardiographic assessment of valve stenosis",
+    publication: "J Am Soc Echocardiogr 22:1–23",
+  }],
   cautions: ["LVOT diameter error is squared"],
   clinical: true,
 });
@@ -39,14 +52,18 @@ Deno.test("evaluate converts quantity strings and mathjs units to the canonical 
 Deno.test("evaluate carries the clinical caution and flags values outside the typical range", () => {
   const r = evaluate(area, { lvotDiameterCm: 3.5, lvotVtiCm: 20, valveVtiCm: 80 });
   assert.ok(r.cautions.includes(CLINICAL_CAUTION));
-  assert.match(r.flags[0]!, /'lvotDiameterCm' = 3.5 cm lies outside the validated range \[1.6, 3\] cm/);
+  assert.match(
+    r.flags[0]!,
+    /'lvotDiameterCm' = 3.5 cm lies outside the validated range \[1.6, 3\] cm/,
+  );
 });
 
 Deno.test("bad input: wrong unit, unknown and missing inputs, out of range, NaN, Infinity", () => {
   const ok = { lvotDiameterCm: 2, lvotVtiCm: 20, valveVtiCm: 80 };
   assert.throws(() => evaluate(area, { ...ok, lvotDiameterCm: "21 mmHg" }), {
     name: "TypeError",
-    message: "Test continuity area: 'lvotDiameterCm': expected a quantity convertible to cm, got \"21 mmHg\"",
+    message:
+      "Test continuity area: 'lvotDiameterCm': expected a quantity convertible to cm, got \"21 mmHg\"",
   });
   assert.throws(() => evaluate(area, { ...ok, lvotDiameter: 2 } as never), {
     name: "TypeError",
@@ -72,7 +89,10 @@ Deno.test("bad input: wrong unit, unknown and missing inputs, out of range, NaN,
     name: "TypeError",
     message: /expected 'lvotVtiCm' as a number or a quantity string, got true/,
   });
-  assert.throws(() => evaluate(area, { ...ok, lvotVtiCm: "twenty cm" }), { name: "TypeError", message: /lvotVtiCm/ });
+  assert.throws(() => evaluate(area, { ...ok, lvotVtiCm: "twenty cm" }), {
+    name: "TypeError",
+    message: /lvotVtiCm/,
+  });
 });
 
 Deno.test("evaluate does not mutate its arguments", () => {
@@ -127,7 +147,9 @@ Deno.test("a non-finite output is an error, never a silent NaN", () => {
 
 Deno.test("display: an evaluation offers HTML and text/plain", () => {
   const r = evaluate(area, { lvotDiameterCm: 2, lvotVtiCm: 20, valveVtiCm: 80 });
-  const bundle = (r as unknown as Record<symbol, () => Record<string, string>>)[Symbol.for("Jupyter.display")]!();
+  const bundle = (r as unknown as Record<symbol, () => Record<string, string>>)[
+    Symbol.for("Jupyter.display")
+  ]!();
   assert.match(bundle["text/html"]!, /<table/);
   assert.match(bundle["text/plain"]!, /areaCm2\s+0\.785398/);
 });

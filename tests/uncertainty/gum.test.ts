@@ -21,7 +21,11 @@ const endGauge = expressionModel({
   inputs: {
     ls: { unit: "1", description: "length of the reference standard (nm)", range: wide },
     d: { unit: "1", description: "measured difference (nm)", range: wide },
-    alphas: { unit: "1", description: "thermal expansion coefficient of the standard (1/°C)", range: wide },
+    alphas: {
+      unit: "1",
+      description: "thermal expansion coefficient of the standard (1/°C)",
+      range: wide,
+    },
     theta: { unit: "1", description: "deviation of temperature from 20 °C (°C)", range: wide },
     dalpha: { unit: "1", description: "difference of expansion coefficients (1/°C)", range: wide },
     dtheta: { unit: "1", description: "difference in temperatures (°C)", range: wide },
@@ -113,9 +117,19 @@ Deno.test("GUM H.2 multi-output: R, X, Z, their uncertainties and correlations (
       X: { unit: "1", description: "reactance (Ω)" },
       Z: { unit: "1", description: "impedance magnitude (Ω)" },
     },
-    formula: ({ v, i, phi }) => ({ R: (v / i) * Math.cos(phi), X: (v / i) * Math.sin(phi), Z: v / i }),
+    formula: ({ v, i, phi }) => ({
+      R: (v / i) * Math.cos(phi),
+      X: (v / i) * Math.sin(phi),
+      Z: v / i,
+    }),
     formulaText: "R = V/I·cos φ, X = V/I·sin φ, Z = V/I",
-    sources: [{ authors: "JCGM", year: 2008, title: "Evaluation of measurement data — GUM", publication: "JCGM 100:2008", locator: "H.2" }],
+    sources: [{
+      authors: "JCGM",
+      year: 2008,
+      title: "Evaluation of measurement data — GUM",
+      publication: "JCGM 100:2008",
+      locator: "H.2",
+    }],
     cautions: [],
   });
   const inputs = { v: typeA(V), i: typeA(I), phi: typeA(PHI) };

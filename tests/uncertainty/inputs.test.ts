@@ -17,7 +17,10 @@ import {
 const wide = { min: -1e6, max: 1e6 };
 const twoInputs = expressionModel({
   expression: "a + 2 * b",
-  inputs: { a: { unit: "mm", description: "a", range: wide }, b: { unit: "mm", description: "b", range: wide } },
+  inputs: {
+    a: { unit: "mm", description: "a", range: wide },
+    b: { unit: "mm", description: "b", range: wide },
+  },
   output: { name: "y", unit: "mm", description: "y" },
 });
 
@@ -57,7 +60,10 @@ Deno.test("bad input to propagation: negative u, NaN, unknown and missing names,
     name: "TypeError",
     message: /unknown input 'c'; expected one of a, b/,
   });
-  assert.throws(() => gum(twoInputs, { a: 1 }), { name: "TypeError", message: /missing input 'b'/ });
+  assert.throws(() => gum(twoInputs, { a: 1 }), {
+    name: "TypeError",
+    message: /missing input 'b'/,
+  });
   assert.throws(() => gum(twoInputs, { a: normal("1 mmHg", 0.1), b: 0 }), {
     name: "TypeError",
     message: /expected a quantity convertible to mm, got "1 mmHg"/,
@@ -65,14 +71,18 @@ Deno.test("bad input to propagation: negative u, NaN, unknown and missing names,
   for (const coverage of [0, 1, 1.5, NaN]) {
     assert.throws(() => gum(twoInputs, { a: 1, b: 0 }, { coverage }), {
       name: "RangeError",
-      message: `Expression model: a + 2 * b: expected coverage probability in (0, 1), got ${coverage}`,
+      message:
+        `Expression model: a + 2 * b: expected coverage probability in (0, 1), got ${coverage}`,
     });
   }
   assert.throws(() => gum(twoInputs, { a: rectangular(2, 1), b: 0 }), {
     name: "RangeError",
     message: /expected upper bound >= lower bound 2, got 1/,
   });
-  assert.throws(() => typeA([1]), { name: "RangeError", message: "Type A input: expected at least 2 readings, got 1" });
+  assert.throws(() => typeA([1]), {
+    name: "RangeError",
+    message: "Type A input: expected at least 2 readings, got 1",
+  });
   assert.throws(() => monteCarlo(twoInputs, { a: 1, b: 0 }, { trials: 10 }), {
     name: "RangeError",
     message: /expected at least 1\/\(1 − p\) = 20 trials for coverage 0.95, got 10/,
@@ -103,26 +113,45 @@ Deno.test("bad correlations: not symmetric, not unit diagonal, out of range, not
     message: /unknown input 'z' in correlations/,
   });
   const names = ["a", "b", "c"];
-  assert.throws(() => gum(three, inputs, { correlations: { names, matrix: [[1, 0.5, 0], [0.4, 1, 0], [0, 0, 1]] } }), {
-    name: "RangeError",
-    message: /expected a symmetric correlation matrix/,
-  });
-  assert.throws(() => gum(three, inputs, { correlations: { names, matrix: [[2, 0, 0], [0, 1, 0], [0, 0, 1]] } }), {
-    name: "RangeError",
-    message: /expected a unit diagonal, got 2 for 'a'/,
-  });
+  assert.throws(
+    () =>
+      gum(three, inputs, {
+        correlations: { names, matrix: [[1, 0.5, 0], [0.4, 1, 0], [0, 0, 1]] },
+      }),
+    {
+      name: "RangeError",
+      message: /expected a symmetric correlation matrix/,
+    },
+  );
+  assert.throws(
+    () =>
+      gum(three, inputs, { correlations: { names, matrix: [[2, 0, 0], [0, 1, 0], [0, 0, 1]] } }),
+    {
+      name: "RangeError",
+      message: /expected a unit diagonal, got 2 for 'a'/,
+    },
+  );
   // r(a,b) = r(b,c) = 0.9, r(a,c) = −0.9 has a negative eigenvalue (hand-checkable determinant < 0)
   assert.throws(
-    () => gum(three, inputs, { correlations: [["a", "b", 0.9], ["b", "c", 0.9], ["a", "c", -0.9]] }),
+    () =>
+      gum(three, inputs, { correlations: [["a", "b", 0.9], ["b", "c", 0.9], ["a", "c", -0.9]] }),
     { name: "RangeError", message: /expected a positive semi-definite correlation matrix/ },
   );
   // perfectly correlated inputs are semi-definite and allowed: u(a + b) = 2 when r = 1
   const g = gum(three, { ...inputs, c: 0 }, { correlations: [["a", "b", 1]] });
   assert.ok(Math.abs(g.outputs.y.standardUncertainty - 2) < 1e-12);
-  assert.throws(() => monteCarlo(three, { a: rectangular(0, 1), b: normal(0, 1), c: 0 }, { correlations: [["a", "b", 0.5]], trials: 100 }), {
-    name: "TypeError",
-    message: /Monte Carlo supports correlation only between normal inputs \(JCGM 101 §6.4.8\), got 'a' with a rectangular distribution/,
-  });
+  assert.throws(
+    () =>
+      monteCarlo(three, { a: rectangular(0, 1), b: normal(0, 1), c: 0 }, {
+        correlations: [["a", "b", 0.5]],
+        trials: 100,
+      }),
+    {
+      name: "TypeError",
+      message:
+        /Monte Carlo supports correlation only between normal inputs \(JCGM 101 §6.4.8\), got 'a' with a rectangular distribution/,
+    },
+  );
 });
 
 Deno.test("correlated Monte Carlo reproduces the GUM covariance for a linear model", () => {
@@ -166,7 +195,8 @@ Deno.test("property: an exact input contributes nothing; scaling an input's u sc
         const scaled = gum(twoInputs, { a: normal(x, u * scale), b: exact(x) }).outputs.y;
         const exactRow = base.budget.find((r) => r.input === "b")!;
         return exactRow.contribution === 0 && exactRow.share === 0 &&
-          Math.abs(scaled.budget[0]!.contribution / base.budget[0]!.contribution - scale) < 1e-9 * scale;
+          Math.abs(scaled.budget[0]!.contribution / base.budget[0]!.contribution - scale) <
+            1e-9 * scale;
       },
     ),
     { numRuns: 100, seed: 7 },

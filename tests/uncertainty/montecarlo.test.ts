@@ -72,7 +72,10 @@ Deno.test("JCGM 101 §9.4 comparison loss at x = 0: first order fails, MC and se
   const first = gum(comparisonLoss, inputs);
   // JCGM 101:2008 Table 10 (x1 = 0, from memory): first-order GUF u(δY) = 0
   assert.equal(first.outputs.dY.standardUncertainty, 0);
-  assert.ok(first.warnings.some((w) => /inadequate/.test(w) && /vanishes/.test(w)), first.warnings.join("\n"));
+  assert.ok(
+    first.warnings.some((w) => /inadequate/.test(w) && /vanishes/.test(w)),
+    first.warnings.join("\n"),
+  );
   // Second-order GUF: u = 2u² = 5.0 × 10⁻⁵ (JCGM 101 Table 10, GUF with higher-order terms)
   const second = gum(comparisonLoss, inputs, { secondOrder: true });
   assert.ok(Math.abs(second.outputs.dY.standardUncertainty - 5e-5) < 1e-12);

@@ -1,160 +1,19 @@
 /**
- * Probability distributions used by the agreement statistics. Central t, F, χ² and normal come
- * from the pinned @stdlib packages; the non-central t (needed for exact confidence limits of
- * limits of agreement) is built on the stdlib F distribution function, which supplies the
- * regularized incomplete beta function.
+ * The non-central t distribution, needed for exact confidence limits of Bland–Altman limits of
+ * agreement (Carkeet 2015). No pinned library provides it; it is built on the project's F
+ * distribution function (stdlib), which supplies the regularized incomplete beta function, and
+ * on the normal distribution function from calc/stats.
  *
  * @module
  */
-import tQuantileStdlib from "@stdlib/stats-base-dists-t-quantile";
-import tCdfStdlib from "@stdlib/stats-base-dists-t-cdf";
-import fQuantileStdlib from "@stdlib/stats-base-dists-f-quantile";
-import fCdfStdlib from "@stdlib/stats-base-dists-f-cdf";
-import chisquareQuantileStdlib from "@stdlib/stats-base-dists-chisquare-quantile";
-import normalQuantileStdlib from "@stdlib/stats-base-dists-normal-quantile";
-import normalCdfStdlib from "@stdlib/stats-base-dists-normal-cdf";
+import { fCdf, normalCdf } from "../stats/distributions.ts";
 import { math } from "../core/units.ts";
 
 /** ln Γ(x) from the project's mathjs instance. */
 const logGamma = (x: number): number => math.lgamma(x) as number;
 
-function checkProbability(where: string, p: number): void {
-  if (!(p >= 0 && p <= 1)) throw new RangeError(`${where}: expected 'p' in [0, 1], got ${p}`);
-}
-
 function checkDegrees(where: string, name: string, v: number): void {
   if (!(v > 0)) throw new RangeError(`${where}: expected '${name}' in (0, ∞), got ${v}`);
-}
-
-/**
- * Quantile of the standard normal distribution (stdlib).
- *
- * @param p Probability in [0, 1].
- * @returns z with Φ(z) = p.
- * @throws {RangeError} When p is outside [0, 1] or NaN.
- *
- * @example
- * ```ts
- * import { normalQuantile } from "@sonorigor/sonorigor";
- * import assert from "node:assert/strict";
- * assert.ok(Math.abs(normalQuantile(0.975) - 1.959964) < 1e-6);
- * ```
- */
-export function normalQuantile(p: number): number {
-  checkProbability("Normal quantile", p);
-  return normalQuantileStdlib(p, 0, 1);
-}
-
-/**
- * Distribution function Φ of the standard normal distribution (stdlib).
- *
- * @param z Standard normal deviate.
- * @returns Φ(z).
- * @throws {RangeError} When z is NaN.
- *
- * @example
- * ```ts
- * import { normalCdf } from "@sonorigor/sonorigor";
- * import assert from "node:assert/strict";
- * assert.equal(normalCdf(0), 0.5);
- * ```
- */
-export function normalCdf(z: number): number {
-  if (Number.isNaN(z)) {
-    throw new RangeError(`Normal distribution function: expected a number 'z', got ${z}`);
-  }
-  return normalCdfStdlib(z, 0, 1);
-}
-
-/**
- * Quantile of Student's t distribution (stdlib).
- *
- * @param p Probability in [0, 1].
- * @param df Degrees of freedom, > 0.
- * @returns t with P(T ≤ t) = p.
- * @throws {RangeError} For p outside [0, 1] or df ≤ 0.
- *
- * @example
- * ```ts
- * import { tQuantile } from "@sonorigor/sonorigor";
- * import assert from "node:assert/strict";
- * // 2.120 for 16 degrees of freedom: any t table, e.g. Fisher & Yates Table III
- * assert.ok(Math.abs(tQuantile(0.975, 16) - 2.1199) < 1e-4);
- * ```
- */
-export function tQuantile(p: number, df: number): number {
-  checkProbability("Student t quantile", p);
-  checkDegrees("Student t quantile", "df", df);
-  return tQuantileStdlib(p, df);
-}
-
-/**
- * Distribution function of Student's t distribution (stdlib).
- *
- * @param t Value.
- * @param df Degrees of freedom, > 0.
- * @returns P(T ≤ t).
- * @throws {RangeError} For df ≤ 0 or NaN t.
- *
- * @example
- * ```ts
- * import { tCdf } from "@sonorigor/sonorigor";
- * import assert from "node:assert/strict";
- * assert.equal(tCdf(0, 5), 0.5);
- * ```
- */
-export function tCdf(t: number, df: number): number {
-  if (Number.isNaN(t)) {
-    throw new RangeError(`Student t distribution function: expected a number 't', got ${t}`);
-  }
-  checkDegrees("Student t distribution function", "df", df);
-  return tCdfStdlib(t, df);
-}
-
-/**
- * Quantile of the F distribution (stdlib).
- *
- * @param p Probability in [0, 1].
- * @param df1 Numerator degrees of freedom, > 0.
- * @param df2 Denominator degrees of freedom, > 0.
- * @returns F with P(X ≤ F) = p.
- * @throws {RangeError} For p outside [0, 1] or non-positive degrees of freedom.
- *
- * @example
- * ```ts
- * import { fQuantile } from "@sonorigor/sonorigor";
- * import assert from "node:assert/strict";
- * // F(0.95; 5, 10) = 3.33 in any F table
- * assert.ok(Math.abs(fQuantile(0.95, 5, 10) - 3.3258) < 1e-4);
- * ```
- */
-export function fQuantile(p: number, df1: number, df2: number): number {
-  checkProbability("F quantile", p);
-  checkDegrees("F quantile", "df1", df1);
-  checkDegrees("F quantile", "df2", df2);
-  return fQuantileStdlib(p, df1, df2);
-}
-
-/**
- * Quantile of the χ² distribution (stdlib).
- *
- * @param p Probability in [0, 1].
- * @param df Degrees of freedom, > 0.
- * @returns x with P(X ≤ x) = p.
- * @throws {RangeError} For p outside [0, 1] or df ≤ 0.
- *
- * @example
- * ```ts
- * import { chiSquareQuantile } from "@sonorigor/sonorigor";
- * import assert from "node:assert/strict";
- * // 3.841 for 1 degree of freedom in any χ² table
- * assert.ok(Math.abs(chiSquareQuantile(0.95, 1) - 3.8415) < 1e-4);
- * ```
- */
-export function chiSquareQuantile(p: number, df: number): number {
-  checkProbability("Chi-square quantile", p);
-  checkDegrees("Chi-square quantile", "df", df);
-  return chisquareQuantileStdlib(p, df);
 }
 
 /** Regularized incomplete beta I_x(a, b) through the stdlib F distribution function:
@@ -162,7 +21,7 @@ export function chiSquareQuantile(p: number, df: number): number {
 function incompleteBeta(x: number, a: number, b: number): number {
   if (x <= 0) return 0;
   if (x >= 1) return 1;
-  return fCdfStdlib((b * x) / (a * (1 - x)), 2 * a, 2 * b);
+  return fCdf((b * x) / (a * (1 - x)), 2 * a, 2 * b);
 }
 
 /** Series for P(T ≤ t) with t ≥ 0 (Lenth 1989, AS 243, written with Poisson weights in log

@@ -1,0 +1,145 @@
+import assert from "node:assert/strict";
+import { CLINICAL_CAUTION, evaluate } from "../../calc/core/mod.ts";
+import {
+  ejectionFraction,
+  fractionalAreaChange,
+  globalLongitudinalStrain,
+  mapse,
+  myocardialPerformanceIndex,
+  myocardialPerformanceIndexFromClosureTime,
+  tapse,
+} from "../../calc/chamber/mod.ts";
+
+const close = (actual: number, expected: number, tol = 1e-12): void =>
+  assert.ok(Math.abs(actual - expected) <= tol, `expected ${expected}, got ${actual}`);
+
+Deno.test("ejection fraction and stroke volume from volumes", () => {
+  // Hand-checkable from the published formula (Lang 2015): EDV 120, ESV 48 → SV 72 mL,
+  // EF 72/120 = 60 %.
+  const r = evaluate(ejectionFraction, { endDiastolicVolumeMl: 120, endSystolicVolumeMl: 48 });
+  close(r.outputs.ejectionFractionPercent, 60);
+  close(r.outputs.strokeVolumeMl, 72);
+  assert.ok(r.cautions.includes(CLINICAL_CAUTION));
+  // Hand-checkable: EDV 0.15 L and ESV 90 cm³ (unit conversion) → EF 40 %, SV 60 mL.
+  const s = evaluate(ejectionFraction, { endDiastolicVolumeMl: "0.15 L", endSystolicVolumeMl: "90 cm^3" });
+  close(s.outputs.ejectionFractionPercent, 40, 1e-9);
+  close(s.outputs.strokeVolumeMl, 60, 1e-9);
+  // ESV = EDV is allowed (EF 0 %); ESV above EDV is rejected naming both volumes.
+  close(evaluate(ejectionFraction, { endDiastolicVolumeMl: 80, endSystolicVolumeMl: 80 }).outputs.ejectionFractionPercent, 0);
+  assert.throws(() => evaluate(ejectionFraction, { endDiastolicVolumeMl: 50, endSystolicVolumeMl: 60 }), {
+    name: "RangeError",
+    message:
+      /^Ejection fraction: output 'ejectionFractionPercent' is not finite for endDiastolicVolumeMl = 50, endSystolicVolumeMl = 60, got NaN$/,
+  });
+  assert.throws(() => evaluate(ejectionFraction, { endDiastolicVolumeMl: -5, endSystolicVolumeMl: 2 }), {
+    name: "RangeError",
+    message: /^Ejection fraction: expected 'endDiastolicVolumeMl' in \(0, 2000\] mL, got -5$/,
+  });
+  assert.throws(() => evaluate(ejectionFraction, { endDiastolicVolumeMl: 120 }), {
+    name: "TypeError",
+    message: /missing input 'endSystolicVolumeMl'/,
+  });
+});
+
+Deno.test("RV fractional area change", () => {
+  // Hand-checkable from the formula (Rudski 2010): (24 − 14)/24 = 41.67 %.
+  close(
+    evaluate(fractionalAreaChange, { endDiastolicAreaCm2: 24, endSystolicAreaCm2: 14 }).outputs
+      .fractionalAreaChangePercent,
+    1000 / 24,
+  );
+  assert.throws(() => evaluate(fractionalAreaChange, { endDiastolicAreaCm2: 14, endSystolicAreaCm2: 24 }), {
+    name: "RangeError",
+    message: /output 'fractionalAreaChangePercent' is not finite for endDiastolicAreaCm2 = 14, endSystolicAreaCm2 = 24, got NaN$/,
+  });
+});
+
+Deno.test("TAPSE and MAPSE from M-mode annular depths", () => {
+  // Hand-checkable (Kaul 1984 definition): 128 − 106 mm = 22 mm.
+  close(evaluate(tapse, { annulusDepthEndDiastoleMm: 128, annulusDepthPeakSystoleMm: 106 }).outputs.tapseMm, 22);
+  // Values in cm through the unit layer: 12.8 cm and 10.6 cm → 22 mm.
+  close(
+    evaluate(tapse, { annulusDepthEndDiastoleMm: "12.8 cm", annulusDepthPeakSystoleMm: "10.6 cm" }).outputs.tapseMm,
+    22,
+    1e-9,
+  );
+  assert.throws(() => evaluate(tapse, { annulusDepthEndDiastoleMm: 100, annulusDepthPeakSystoleMm: 110 }), {
+    name: "RangeError",
+    message: /output 'tapseMm' is not finite for annulusDepthEndDiastoleMm = 100, annulusDepthPeakSystoleMm = 110, got NaN$/,
+  });
+  // Hand-checkable (Hu 2013: mean of sites): septal 120 − 108 = 12, lateral 125 − 111 = 14 → 13 mm.
+  const m = evaluate(mapse, {
+    septalDepthEndDiastoleMm: 120,
+    septalDepthPeakSystoleMm: 108,
+    lateralDepthEndDiastoleMm: 125,
+    lateralDepthPeakSystoleMm: 111,
+  }).outputs;
+  assert.deepEqual(m, { septalExcursionMm: 12, lateralExcursionMm: 14, mapseMm: 13 });
+});
+
+Deno.test("myocardial performance index: both forms agree", () => {
+  // Hand-checkable (Tei 1995): (60 + 80)/280 = 0.5; with a = 60 + 280 + 80 = 420 ms,
+  // (a − b)/b = 140/280 = 0.5.
+  close(
+    evaluate(myocardialPerformanceIndex, {
+      isovolumicContractionTimeMs: 60,
+      isovolumicRelaxationTimeMs: 80,
+      ejectionTimeMs: 280,
+    }).outputs.myocardialPerformanceIndex,
+    0.5,
+  );
+  close(
+    evaluate(myocardialPerformanceIndexFromClosureTime, { closureToOpeningTimeMs: 420, ejectionTimeMs: 280 })
+      .outputs.myocardialPerformanceIndex,
+    0.5,
+  );
+  // Hand-checkable: 0.42 s and 0.3 s in seconds → (420 − 300)/300 = 0.4.
+  close(
+    evaluate(myocardialPerformanceIndexFromClosureTime, { closureToOpeningTimeMs: "0.42 s", ejectionTimeMs: "0.3 s" })
+      .outputs.myocardialPerformanceIndex,
+    0.4,
+    1e-12,
+  );
+  assert.throws(
+    () => evaluate(myocardialPerformanceIndexFromClosureTime, { closureToOpeningTimeMs: 250, ejectionTimeMs: 280 }),
+    { name: "RangeError", message: /closureToOpeningTimeMs = 250, ejectionTimeMs = 280, got NaN$/ },
+  );
+  assert.throws(
+    () =>
+      evaluate(myocardialPerformanceIndex, {
+        isovolumicContractionTimeMs: 60,
+        isovolumicRelaxationTimeMs: 80,
+        ejectionTimeMs: 0,
+      }),
+    { name: "RangeError", message: /expected 'ejectionTimeMs' in \(0, 1000\] ms, got 0$/ },
+  );
+});
+
+Deno.test("global longitudinal strain: mean of 16, 17 or 18 segment peaks", () => {
+  // Hand-checkable mean (Voigt 2015 segment-average definition): 6×(−17), 6×(−19), 6×(−24)
+  // sum to −360 over 18 segments → −20 %.
+  const s18 = [...Array(6).fill(-17), ...Array(6).fill(-19), ...Array(6).fill(-24)];
+  const r = globalLongitudinalStrain(s18);
+  close(r.glsPercent, -20);
+  assert.equal(r.segmentCount, 18);
+  // 17 segments: 16 at −18 and an apical cap of −35 → (−288 − 35)/17 = −19 %.
+  close(globalLongitudinalStrain([...Array(16).fill(-18), -35]).glsPercent, -19);
+  // 16 segments with a dyskinetic segment (+4): (15·(−20) + 4)/16 = −18.5 %.
+  close(globalLongitudinalStrain([...Array(15).fill(-20), 4]).glsPercent, -18.5);
+  assert.throws(() => globalLongitudinalStrain(Array(15).fill(-20)), {
+    name: "TypeError",
+    message: /^Global longitudinal strain: expected 16, 17 or 18 segment strains \(one per segment of the model\), got 15$/,
+  });
+  const withNaN = Array(17).fill(-20);
+  withNaN[3] = NaN;
+  assert.throws(() => globalLongitudinalStrain(withNaN), {
+    name: "RangeError",
+    message: /^Global longitudinal strain: expected segment 3 in \(-100, 100\) %, got NaN$/,
+  });
+  const withNull = Array(16).fill(-20);
+  withNull[5] = null;
+  assert.throws(() => globalLongitudinalStrain(withNull), {
+    name: "TypeError",
+    message: /expected segment 5 as a number in %, got null$/,
+  });
+});
