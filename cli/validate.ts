@@ -198,7 +198,11 @@ async function main(): Promise<void> {
   const fields = parsed.meta.fields ?? [];
   const errors: string[] = [];
   // papaparse rows are data lines: line number = row index + 2 (header is line 1)
+  const isBlank = (row: Record<string, string> | undefined) =>
+    row !== undefined && Object.values(row).every((v) => typeof v !== "string" || v.trim() === "");
   for (const e of parsed.errors) {
+    // blank lines are reported (not errors); papaparse flags them as short rows
+    if (e.row !== undefined && isBlank(parsed.data[e.row])) continue;
     errors.push(`line ${(e.row ?? 0) + 2}: ${e.message}`);
   }
   const subjectCol = pickColumn(
@@ -259,11 +263,8 @@ async function main(): Promise<void> {
   const seen = new Map<string, number>();
   parsed.data.forEach((row, i) => {
     const line = i + 2;
-    const cells = Object.values(row).filter((v) => typeof v === "string");
-    if (cells.every((c) => c.trim() === "")) {
-      if (i < parsed.data.length - 1 || text.trimEnd().split(/\r?\n/).length >= line) {
-        blank.push(line);
-      }
+    if (isBlank(row)) {
+      blank.push(line);
       return;
     }
     const result = rowSchema.safeParse(row);

@@ -6,7 +6,7 @@
  * @module
  */
 import { CLINICAL_CAUTION, defineCalculation } from "../core/define.ts";
-import type { Calculation, InputDefinition } from "../core/types.ts";
+import type { Calculation, InputDefinition, Reference } from "../core/types.ts";
 import {
   HU_2013,
   KAUL_1984,
@@ -274,7 +274,11 @@ export const mapse: Calculation<
   formula: (x) => {
     const septal = annularExcursionMm(x.septalDepthEndDiastoleMm, x.septalDepthPeakSystoleMm);
     const lateral = annularExcursionMm(x.lateralDepthEndDiastoleMm, x.lateralDepthPeakSystoleMm);
-    return { septalExcursionMm: septal, lateralExcursionMm: lateral, mapseMm: (septal + lateral) / 2 };
+    return {
+      septalExcursionMm: septal,
+      lateralExcursionMm: lateral,
+      mapseMm: (septal + lateral) / 2,
+    };
   },
   formulaText: "MAPSE = ½·[(depth ED − depth PS)septal + (depth ED − depth PS)lateral]",
   sources: [HU_2013],
@@ -329,7 +333,9 @@ export const myocardialPerformanceIndex: Calculation<
       range: { min: 0, max: 1000, minExclusive: true },
     },
   },
-  outputs: { myocardialPerformanceIndex: { unit: "1", description: "Myocardial performance index" } },
+  outputs: {
+    myocardialPerformanceIndex: { unit: "1", description: "Myocardial performance index" },
+  },
   formula: ({ isovolumicContractionTimeMs, isovolumicRelaxationTimeMs, ejectionTimeMs }) => ({
     myocardialPerformanceIndex: (isovolumicContractionTimeMs + isovolumicRelaxationTimeMs) /
       ejectionTimeMs,
@@ -420,7 +426,7 @@ export const STRAIN_SEGMENT_MODELS: Readonly<Record<16 | 17 | 18, string>> = Obj
  * Soc Echocardiogr 2015;28:1–39 (segment models, GLS).
  *
  * @param segmentPeakStrainsPercent Peak systolic longitudinal strain of each segment, in %.
- * @returns GLS in %, the segment count and the model description.
+ * @returns GLS in %, the segment count, the model description and the sources.
  * @throws {TypeError} When the input is not an array of 16, 17 or 18 numbers.
  * @throws {RangeError} For a segment value that is not finite or outside (−100, 100) %, naming
  * its index.
@@ -437,6 +443,7 @@ export function globalLongitudinalStrain(segmentPeakStrainsPercent: readonly num
   glsPercent: number;
   segmentCount: 16 | 17 | 18;
   model: string;
+  sources: readonly Reference[];
   cautions: string[];
 } {
   const where = "Global longitudinal strain";
@@ -455,7 +462,9 @@ export function globalLongitudinalStrain(segmentPeakStrainsPercent: readonly num
   for (let i = 0; i < n; i++) {
     const v: unknown = segmentPeakStrainsPercent[i];
     if (typeof v !== "number") {
-      throw new TypeError(`${where}: expected segment ${i} as a number in %, got ${JSON.stringify(v)}`);
+      throw new TypeError(
+        `${where}: expected segment ${i} as a number in %, got ${JSON.stringify(v)}`,
+      );
     }
     if (!(v > -100 && v < 100)) {
       throw new RangeError(`${where}: expected segment ${i} in (-100, 100) %, got ${v}`);
@@ -466,6 +475,7 @@ export function globalLongitudinalStrain(segmentPeakStrainsPercent: readonly num
     glsPercent: sum / n,
     segmentCount: n,
     model: STRAIN_SEGMENT_MODELS[n],
+    sources: [VOIGT_2015, LANG_2015],
     cautions: [
       "Mean of segment peaks approximates the global-trace definition; values differ between vendors and software versions",
       CLINICAL_CAUTION,

@@ -79,7 +79,8 @@ export const fractionalShortening: Calculation<
 > = defineCalculation({
   id: "fractionalShortening",
   title: "LV fractional shortening",
-  description: "Percentage shortening of the LV internal diameter from end-diastole to end-systole.",
+  description:
+    "Percentage shortening of the LV internal diameter from end-diastole to end-systole.",
   inputs: {
     lvInternalDiameterDiastoleCm: lvidDiastole,
     lvInternalDiameterSystoleCm: lvidSystole,
@@ -196,7 +197,8 @@ export const teichholzEjectionFraction: Calculation<
       strokeVolumeMl: ef.strokeVolumeMl,
     };
   },
-  formulaText: "EDV = 7/(2.4 + LVIDd)·LVIDd³; ESV = 7/(2.4 + LVIDs)·LVIDs³; EF = 100·(EDV − ESV)/EDV",
+  formulaText:
+    "EDV = 7/(2.4 + LVIDd)·LVIDd³; ESV = 7/(2.4 + LVIDs)·LVIDs³; EF = 100·(EDV − ESV)/EDV",
   sources: [TEICHHOLZ_1976, LANG_2015],
   cautions: teichholzVolume.cautions,
   clinical: true,
@@ -428,7 +430,9 @@ const GEOMETRIES: readonly LvGeometry[] = [
 
 function checkSex(sex: unknown, where: string): Sex {
   if (sex !== "male" && sex !== "female") {
-    throw new TypeError(`${where}: expected 'sex' as "male" or "female", got ${JSON.stringify(sex)}`);
+    throw new TypeError(
+      `${where}: expected 'sex' as "male" or "female", got ${JSON.stringify(sex)}`,
+    );
   }
   return sex;
 }

@@ -39,7 +39,8 @@ export const DEVEREUX_1986: Reference = {
 export const GANAU_1992: Reference = {
   authors: "Ganau A, Devereux RB, Roman MJ, de Simone G, Pickering TG, Saba PS, et al.",
   year: 1992,
-  title: "Patterns of left ventricular hypertrophy and geometric remodeling in essential hypertension",
+  title:
+    "Patterns of left ventricular hypertrophy and geometric remodeling in essential hypertension",
   publication: "J Am Coll Cardiol 1992;19:1550–1558",
   doi: "10.1016/0735-1097(92)90617-v",
 };

@@ -14,8 +14,8 @@ import type { Calculation } from "../core/types.ts";
 import {
   type Contour,
   contourArea,
-  contourLongAxis,
   type ContourCoordinates,
+  contourLongAxis,
   discDiameters,
   type LongAxis,
   validateContour,
@@ -246,7 +246,12 @@ function traceView(contour: unknown, view: string, where: string, discCount: num
       `${where}: expected a ${view} long axis longer than 0 cm, got ${longAxis.lengthCm}`,
     );
   }
-  return { view, longAxis, areaCm2: contourArea(c), diameters: discDiameters(c, longAxis, discCount) };
+  return {
+    view,
+    longAxis,
+    areaCm2: contourArea(c),
+    diameters: discDiameters(c, longAxis, discCount),
+  };
 }
 
 function mismatchFlag(a: TracedView, b: TracedView): string[] {

@@ -180,6 +180,11 @@ export function computeCohort(table: CohortTable, options: CohortComputeOptions 
   return { table, bsaMethod, bsaM2, indexed, zScores, bsaOutsideModel, models, flags };
 }
 
+/** A text cell quoted per RFC 4180 when it holds a comma, quote or line break. */
+function csvText(text: string): string {
+  return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
+}
+
 /** Text of a number for CSV: full precision, empty for NaN (the flags column says why). */
 function cell(v: number): string {
   return v === v ? String(v) : "";
@@ -211,11 +216,11 @@ export function cohortToCsv(result: CohortResult): string {
   const getters: ((i: number) => string)[] = [];
   if (table.ids) {
     fields.push("id");
-    getters.push((i) => table.ids![i]!);
+    getters.push((i) => csvText(table.ids![i]!));
   }
   if (table.sex) {
     fields.push("sex");
-    getters.push((i) => table.sex![i]!);
+    getters.push((i) => csvText(table.sex![i]!));
   }
   fields.push("height [cm]", "weight [kg]", `bsa_${result.bsaMethod} [m^2]`);
   getters.push((i) => cell(table.heightCm.values[i]!), (i) => cell(table.weightKg.values[i]!), (i) =>
@@ -246,8 +251,9 @@ export function cohortToCsv(result: CohortResult): string {
     issuesByRow.set(issue.row, list);
   }
   getters.push((i) => {
-    const notes = [...(issuesByRow.get(i) ?? [])];
     const f = result.flags[i]!;
+    if (f === 0) return "";
+    const notes = [...(issuesByRow.get(i) ?? [])];
     if (f & FLAG_BODY_SIZE_ATYPICAL) notes.push("height or weight outside the typical range of the BSA formula");
     if (f & FLAG_BSA_OUTSIDE_MODEL) {
       for (const [name, outside] of Object.entries(result.bsaOutsideModel)) {
@@ -257,11 +263,19 @@ export function cohortToCsv(result: CohortResult): string {
         }
       }
     }
-    return notes.join("; ");
+    return csvText(notes.join("; "));
   });
-  const data = new Array<string[]>(n);
-  for (let i = 0; i < n; i++) data[i] = getters.map((g) => g(i));
-  return Papa.unparse({ fields, data }, { newline: "\n" }) + "\n";
+  // Header through papaparse's quoting; rows joined directly (numbers never need quoting, text
+  // cells are quoted per RFC 4180 by csvText) to keep the 10^6-row path fast.
+  const parts = new Array<string>(n + 1);
+  parts[0] = Papa.unparse([fields], { newline: "\n" });
+  const k = getters.length;
+  const values = new Array<string>(k);
+  for (let i = 0; i < n; i++) {
+    for (let c = 0; c < k; c++) values[c] = getters[c]!(i);
+    parts[i + 1] = values.join(",");
+  }
+  return parts.join("\n") + "\n";
 }
 
 /**

@@ -31,7 +31,6 @@ export function correlationMatrix(
   correlations: Correlations | undefined,
   where: string,
 ): number[][] {
-  const n = names.length;
   const r: number[][] = names.map((_, i) => names.map((_, j) => (i === j ? 1 : 0)));
   const index = (name: string) => {
     const i = names.indexOf(name);

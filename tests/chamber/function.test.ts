@@ -21,20 +21,33 @@ Deno.test("ejection fraction and stroke volume from volumes", () => {
   close(r.outputs.strokeVolumeMl, 72);
   assert.ok(r.cautions.includes(CLINICAL_CAUTION));
   // Hand-checkable: EDV 0.15 L and ESV 90 cm³ (unit conversion) → EF 40 %, SV 60 mL.
-  const s = evaluate(ejectionFraction, { endDiastolicVolumeMl: "0.15 L", endSystolicVolumeMl: "90 cm^3" });
+  const s = evaluate(ejectionFraction, {
+    endDiastolicVolumeMl: "0.15 L",
+    endSystolicVolumeMl: "90 cm^3",
+  });
   close(s.outputs.ejectionFractionPercent, 40, 1e-9);
   close(s.outputs.strokeVolumeMl, 60, 1e-9);
   // ESV = EDV is allowed (EF 0 %); ESV above EDV is rejected naming both volumes.
-  close(evaluate(ejectionFraction, { endDiastolicVolumeMl: 80, endSystolicVolumeMl: 80 }).outputs.ejectionFractionPercent, 0);
-  assert.throws(() => evaluate(ejectionFraction, { endDiastolicVolumeMl: 50, endSystolicVolumeMl: 60 }), {
-    name: "RangeError",
-    message:
-      /^Ejection fraction: output 'ejectionFractionPercent' is not finite for endDiastolicVolumeMl = 50, endSystolicVolumeMl = 60, got NaN$/,
-  });
-  assert.throws(() => evaluate(ejectionFraction, { endDiastolicVolumeMl: -5, endSystolicVolumeMl: 2 }), {
-    name: "RangeError",
-    message: /^Ejection fraction: expected 'endDiastolicVolumeMl' in \(0, 2000\] mL, got -5$/,
-  });
+  close(
+    evaluate(ejectionFraction, { endDiastolicVolumeMl: 80, endSystolicVolumeMl: 80 }).outputs
+      .ejectionFractionPercent,
+    0,
+  );
+  assert.throws(
+    () => evaluate(ejectionFraction, { endDiastolicVolumeMl: 50, endSystolicVolumeMl: 60 }),
+    {
+      name: "RangeError",
+      message:
+        /^Ejection fraction: output 'ejectionFractionPercent' is not finite for endDiastolicVolumeMl = 50, endSystolicVolumeMl = 60, got NaN$/,
+    },
+  );
+  assert.throws(
+    () => evaluate(ejectionFraction, { endDiastolicVolumeMl: -5, endSystolicVolumeMl: 2 }),
+    {
+      name: "RangeError",
+      message: /^Ejection fraction: expected 'endDiastolicVolumeMl' in \(0, 2000\] mL, got -5$/,
+    },
+  );
   assert.throws(() => evaluate(ejectionFraction, { endDiastolicVolumeMl: 120 }), {
     name: "TypeError",
     message: /missing input 'endSystolicVolumeMl'/,
@@ -48,25 +61,38 @@ Deno.test("RV fractional area change", () => {
       .fractionalAreaChangePercent,
     1000 / 24,
   );
-  assert.throws(() => evaluate(fractionalAreaChange, { endDiastolicAreaCm2: 14, endSystolicAreaCm2: 24 }), {
-    name: "RangeError",
-    message: /output 'fractionalAreaChangePercent' is not finite for endDiastolicAreaCm2 = 14, endSystolicAreaCm2 = 24, got NaN$/,
-  });
+  assert.throws(
+    () => evaluate(fractionalAreaChange, { endDiastolicAreaCm2: 14, endSystolicAreaCm2: 24 }),
+    {
+      name: "RangeError",
+      message:
+        /output 'fractionalAreaChangePercent' is not finite for endDiastolicAreaCm2 = 14, endSystolicAreaCm2 = 24, got NaN$/,
+    },
+  );
 });
 
 Deno.test("TAPSE and MAPSE from M-mode annular depths", () => {
   // Hand-checkable (Kaul 1984 definition): 128 − 106 mm = 22 mm.
-  close(evaluate(tapse, { annulusDepthEndDiastoleMm: 128, annulusDepthPeakSystoleMm: 106 }).outputs.tapseMm, 22);
+  close(
+    evaluate(tapse, { annulusDepthEndDiastoleMm: 128, annulusDepthPeakSystoleMm: 106 }).outputs
+      .tapseMm,
+    22,
+  );
   // Values in cm through the unit layer: 12.8 cm and 10.6 cm → 22 mm.
   close(
-    evaluate(tapse, { annulusDepthEndDiastoleMm: "12.8 cm", annulusDepthPeakSystoleMm: "10.6 cm" }).outputs.tapseMm,
+    evaluate(tapse, { annulusDepthEndDiastoleMm: "12.8 cm", annulusDepthPeakSystoleMm: "10.6 cm" })
+      .outputs.tapseMm,
     22,
     1e-9,
   );
-  assert.throws(() => evaluate(tapse, { annulusDepthEndDiastoleMm: 100, annulusDepthPeakSystoleMm: 110 }), {
-    name: "RangeError",
-    message: /output 'tapseMm' is not finite for annulusDepthEndDiastoleMm = 100, annulusDepthPeakSystoleMm = 110, got NaN$/,
-  });
+  assert.throws(
+    () => evaluate(tapse, { annulusDepthEndDiastoleMm: 100, annulusDepthPeakSystoleMm: 110 }),
+    {
+      name: "RangeError",
+      message:
+        /output 'tapseMm' is not finite for annulusDepthEndDiastoleMm = 100, annulusDepthPeakSystoleMm = 110, got NaN$/,
+    },
+  );
   // Hand-checkable (Hu 2013: mean of sites): septal 120 − 108 = 12, lateral 125 − 111 = 14 → 13 mm.
   const m = evaluate(mapse, {
     septalDepthEndDiastoleMm: 120,
@@ -89,19 +115,29 @@ Deno.test("myocardial performance index: both forms agree", () => {
     0.5,
   );
   close(
-    evaluate(myocardialPerformanceIndexFromClosureTime, { closureToOpeningTimeMs: 420, ejectionTimeMs: 280 })
+    evaluate(myocardialPerformanceIndexFromClosureTime, {
+      closureToOpeningTimeMs: 420,
+      ejectionTimeMs: 280,
+    })
       .outputs.myocardialPerformanceIndex,
     0.5,
   );
   // Hand-checkable: 0.42 s and 0.3 s in seconds → (420 − 300)/300 = 0.4.
   close(
-    evaluate(myocardialPerformanceIndexFromClosureTime, { closureToOpeningTimeMs: "0.42 s", ejectionTimeMs: "0.3 s" })
+    evaluate(myocardialPerformanceIndexFromClosureTime, {
+      closureToOpeningTimeMs: "0.42 s",
+      ejectionTimeMs: "0.3 s",
+    })
       .outputs.myocardialPerformanceIndex,
     0.4,
     1e-12,
   );
   assert.throws(
-    () => evaluate(myocardialPerformanceIndexFromClosureTime, { closureToOpeningTimeMs: 250, ejectionTimeMs: 280 }),
+    () =>
+      evaluate(myocardialPerformanceIndexFromClosureTime, {
+        closureToOpeningTimeMs: 250,
+        ejectionTimeMs: 280,
+      }),
     { name: "RangeError", message: /closureToOpeningTimeMs = 250, ejectionTimeMs = 280, got NaN$/ },
   );
   assert.throws(
@@ -128,7 +164,8 @@ Deno.test("global longitudinal strain: mean of 16, 17 or 18 segment peaks", () =
   close(globalLongitudinalStrain([...Array(15).fill(-20), 4]).glsPercent, -18.5);
   assert.throws(() => globalLongitudinalStrain(Array(15).fill(-20)), {
     name: "TypeError",
-    message: /^Global longitudinal strain: expected 16, 17 or 18 segment strains \(one per segment of the model\), got 15$/,
+    message:
+      /^Global longitudinal strain: expected 16, 17 or 18 segment strains \(one per segment of the model\), got 15$/,
   });
   const withNaN = Array(17).fill(-20);
   withNaN[3] = NaN;

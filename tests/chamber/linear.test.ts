@@ -40,7 +40,11 @@ Deno.test("Teichholz volume V = 7/(2.4 + D)·D³ at hand-checkable diameters", (
   // D = 6 cm → 7·216/8.4 = 180 mL exactly.
   close(evaluate(teichholzVolume, { lvInternalDiameterCm: 6 }).outputs.volumeMl, 180);
   // D = 5 cm → 7·125/7.4 = 118.2432… mL.
-  close(evaluate(teichholzVolume, { lvInternalDiameterCm: 5 }).outputs.volumeMl, 118.24324324324, 1e-9);
+  close(
+    evaluate(teichholzVolume, { lvInternalDiameterCm: 5 }).outputs.volumeMl,
+    118.24324324324,
+    1e-9,
+  );
 });
 
 Deno.test("Teichholz EF composes the volume and EF calculations", () => {
@@ -145,7 +149,8 @@ Deno.test("bad input: negative or missing dimensions, LVIDs above LVIDd, bad sex
       }),
     {
       name: "RangeError",
-      message: /LV mass \(linear cube formula\): expected 'septalThicknessDiastoleCm' in \(0, 5\] cm, got -1$/,
+      message:
+        /LV mass \(linear cube formula\): expected 'septalThicknessDiastoleCm' in \(0, 5\] cm, got -1$/,
     },
   );
   assert.throws(() => evaluate(teichholzVolume, { lvInternalDiameterCm: 0 }), {

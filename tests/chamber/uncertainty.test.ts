@@ -76,41 +76,56 @@ Deno.test("geometry class probabilities from a joint Monte Carlo of one set of c
   // Exact inputs: every trial gives the same class as the deterministic rule (Lang 2015 limits):
   // IVSd 1.3, LVIDd 4.8, LVPWd 1.2 cm, BSA 1.9 m² → LVMi 122.2 g/m², RWT 0.5 → concentric
   // hypertrophy for a man (hand-checked in linear.test.ts).
-  const exact = lvGeometryProbabilities({
-    septalThicknessDiastoleCm: 1.3,
-    lvInternalDiameterDiastoleCm: 4.8,
-    posteriorWallThicknessDiastoleCm: 1.2,
-    bodySurfaceAreaM2: 1.9,
-  }, "male", { trials: 1000, seed: 5 });
+  const exact = lvGeometryProbabilities(
+    {
+      septalThicknessDiastoleCm: 1.3,
+      lvInternalDiameterDiastoleCm: 4.8,
+      posteriorWallThicknessDiastoleCm: 1.2,
+      bodySurfaceAreaM2: 1.9,
+    },
+    "male",
+    { trials: 1000, seed: 5 },
+  );
   assert.equal(exact.probabilities["concentric hypertrophy"], 1);
   assert.equal(exact.mostProbable, "concentric hypertrophy");
   // RWT-only uncertainty check with a closed form: LVPWd ~ N(1.05, 0.05) with IVSd and LVIDd exact
   // and a large BSA (mass index far below 115 g/m²): the class is concentric remodeling exactly
   // when 2·LVPWd/5 > 0.42, i.e. LVPWd > 1.05, so P = 0.5 (normal distribution symmetry); Monte
   // Carlo with 10⁵ trials: binomial standard error 0.0016, tolerance 0.01.
-  const rwtOnly = lvGeometryProbabilities({
-    septalThicknessDiastoleCm: 1.0,
-    lvInternalDiameterDiastoleCm: 5.0,
-    posteriorWallThicknessDiastoleCm: normal(1.05, 0.05),
-    bodySurfaceAreaM2: 4.0,
-  }, "female", { seed: 9 });
+  const rwtOnly = lvGeometryProbabilities(
+    {
+      septalThicknessDiastoleCm: 1.0,
+      lvInternalDiameterDiastoleCm: 5.0,
+      posteriorWallThicknessDiastoleCm: normal(1.05, 0.05),
+      bodySurfaceAreaM2: 4.0,
+    },
+    "female",
+    { seed: 9 },
+  );
   assert.ok(Math.abs(rwtOnly.probabilities["concentric remodeling"] - 0.5) < 0.01);
   assert.ok(Math.abs(rwtOnly.probabilities["normal"] - 0.5) < 0.01);
   assert.equal(rwtOnly.probabilities["concentric hypertrophy"], 0);
-  // Joint case: mass index ≈ 114 g/m², RWT = 0.42 at the estimates; the four probabilities sum to 1
+  // Joint case: mass index ≈ 111 g/m² (0.832·(7.1³ − 125) + 0.6 = 194.4 g over 1.75 m²), RWT = 0.42 at the estimates; the four probabilities sum to 1
   // and the two hypertrophy classes are both plausible.
-  const borderline = lvGeometryProbabilities({
-    septalThicknessDiastoleCm: normal(1.05, 0.05),
-    lvInternalDiameterDiastoleCm: normal(5.0, 0.05),
-    posteriorWallThicknessDiastoleCm: normal(1.05, 0.05),
-    bodySurfaceAreaM2: 1.75,
-  }, "male", { trials: 50_000, seed: 3 });
+  const borderline = lvGeometryProbabilities(
+    {
+      septalThicknessDiastoleCm: normal(1.05, 0.05),
+      lvInternalDiameterDiastoleCm: normal(5.0, 0.05),
+      posteriorWallThicknessDiastoleCm: normal(1.05, 0.05),
+      bodySurfaceAreaM2: 1.75,
+    },
+    "male",
+    { trials: 50_000, seed: 3 },
+  );
   const total = Object.values(borderline.probabilities).reduce((a, b) => a + b, 0);
   assert.ok(Math.abs(total - 1) < 1e-12);
   assert.ok(borderline.probabilities["concentric hypertrophy"] > 0.05);
   assert.ok(borderline.probabilities["normal"] > 0.05);
-  assert.throws(() => lvGeometryProbabilities({ bodySurfaceAreaM2: 1.8 } as never, "other" as never), {
-    name: "TypeError",
-    message: /^LV geometry probabilities: expected 'sex' as "male" or "female", got "other"$/,
-  });
+  assert.throws(
+    () => lvGeometryProbabilities({ bodySurfaceAreaM2: 1.8 } as never, "other" as never),
+    {
+      name: "TypeError",
+      message: /^LV geometry probabilities: expected 'sex' as "male" or "female", got "other"$/,
+    },
+  );
 });

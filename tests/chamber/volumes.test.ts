@@ -51,7 +51,10 @@ Deno.test("discs converge to (π/6)·L·D² as the disc count grows (second orde
   assert.ok(Math.abs(e20 / e40 - 4) < 0.05, `ratio ${e20 / e40}`);
   // A non-guideline disc count is flagged.
   const flagged = biplaneDiscVolume({ fourChamber: c, twoChamber: c }, { discCount: 40 });
-  assert.match(flagged.flags.join(" "), /'discCount' = 40\b.* lies outside the validated range \[20, 20\]/);
+  assert.match(
+    flagged.flags.join(" "),
+    /'discCount' = 40\b.* lies outside the validated range \[20, 20\]/,
+  );
 });
 
 Deno.test("discs: triaxial half-ellipsoid, rotation and translation do not change the volume", () => {
@@ -111,7 +114,10 @@ Deno.test("area–length: 0.85·A²/L against the exact ellipsoid volume", () =>
   }).outputs.volumeMl;
   assert.ok(Math.abs(b - v) < 1e-12);
   // Hand-checkable: A = 30 cm², L = 8.5 cm → 0.85·900/8.5 = 90 mL.
-  assert.ok(Math.abs(evaluate(areaLengthVolume, { areaCm2: 30, lengthCm: 8.5 }).outputs.volumeMl - 90) < 1e-12);
+  assert.ok(
+    Math.abs(evaluate(areaLengthVolume, { areaCm2: 30, lengthCm: 8.5 }).outputs.volumeMl - 90) <
+      1e-12,
+  );
 });
 
 Deno.test("contour geometry: long axis, apex, area", () => {
@@ -174,12 +180,18 @@ Deno.test("left atrial volume: area–length uses the shorter axis, discs the lo
   // Hand-checkable indexing: V/BSA.
   assert.ok(Math.abs(r.discsIndexMlPerM2! - r.discsMl / 1.8) < 1e-12);
   assert.ok(Math.abs(r.areaLengthIndexMlPerM2! - r.areaLengthMl / 1.8) < 1e-12);
-  assert.throws(() => leftAtrialVolume({ fourChamber: a, twoChamber: b }, { bodySurfaceAreaM2: 0 }), {
-    name: "RangeError",
-    message: /^Left atrial volume: expected 'bodySurfaceAreaM2' in \(0, 5\] m\^2, got 0$/,
-  });
-  assert.throws(() => leftAtrialVolume({ fourChamber: a, twoChamber: [[0, 0], [1, 2], [1, 0], [0, 2]] }), {
-    name: "RangeError",
-    message: /^Left atrial volume: expected the apical two-chamber contour not to cross itself/,
-  });
+  assert.throws(
+    () => leftAtrialVolume({ fourChamber: a, twoChamber: b }, { bodySurfaceAreaM2: 0 }),
+    {
+      name: "RangeError",
+      message: /^Left atrial volume: expected 'bodySurfaceAreaM2' in \(0, 5\] m\^2, got 0$/,
+    },
+  );
+  assert.throws(
+    () => leftAtrialVolume({ fourChamber: a, twoChamber: [[0, 0], [1, 2], [1, 0], [0, 2]] }),
+    {
+      name: "RangeError",
+      message: /^Left atrial volume: expected the apical two-chamber contour not to cross itself/,
+    },
+  );
 });

@@ -6,7 +6,6 @@ import {
   gum,
   normal,
   rectangular,
-  studentT,
   typeA,
 } from "../../mod.ts";
 
