@@ -16,7 +16,11 @@ const OPTIONS = {
     { column: "lv mass", name: "lvMass", canonicalUnit: MASS.unit, range: MASS.measurementRange },
   ],
 } as const;
-const COMPUTE = { bsaMethod: "haycock", index: ["lvMass"], zScores: { lvedd: LVEDD, lvMass: MASS } } as const;
+const COMPUTE = {
+  bsaMethod: "haycock",
+  index: ["lvMass"],
+  zScores: { lvedd: LVEDD, lvMass: MASS },
+} as const;
 
 /** Invented registry rows from a fixed linear congruential stream (demo data only). */
 function syntheticRegistry(rows: number): string {
@@ -33,7 +37,9 @@ function syntheticRegistry(rows: number): string {
   return lines.join("\n") + "\n";
 }
 
-const clinic = await Deno.readTextFile(new URL("../examples/data/pediatric-clinic.csv", import.meta.url));
+const clinic = await Deno.readTextFile(
+  new URL("../examples/data/pediatric-clinic.csv", import.meta.url),
+);
 const registry = syntheticRegistry(1_000_000);
 const registryTable = readCohortCsv(registry, OPTIONS);
 const registryResult = computeCohort(registryTable, COMPUTE);
@@ -42,7 +48,11 @@ Deno.bench("clinic list, 20 rows: read + compute + write", { group: "clinic" }, 
   cohortToCsv(computeCohort(readCohortCsv(clinic, { ...OPTIONS, sex: "sex" }), COMPUTE));
 });
 
-Deno.bench("registry, 10^6 rows: read CSV (papaparse + zod cell checks)", { group: "registry", n: 3, warmup: 1 }, () => {
+Deno.bench("registry, 10^6 rows: read CSV (papaparse + zod cell checks)", {
+  group: "registry",
+  n: 3,
+  warmup: 1,
+}, () => {
   readCohortCsv(registry, OPTIONS);
 });
 
@@ -54,6 +64,10 @@ Deno.bench("registry, 10^6 rows: compute BSA, index, 2 Z-scores (columnar)", {
   computeCohort(registryTable, COMPUTE);
 });
 
-Deno.bench("registry, 10^6 rows: write CSV with flags", { group: "registry", n: 3, warmup: 1 }, () => {
-  cohortToCsv(registryResult);
-});
+Deno.bench(
+  "registry, 10^6 rows: write CSV with flags",
+  { group: "registry", n: 3, warmup: 1 },
+  () => {
+    cohortToCsv(registryResult);
+  },
+);

@@ -245,8 +245,8 @@ async function main(): Promise<void> {
     "expected a number",
   );
   const rowSchema = z.object({
-    [subjectCol]: z.string().trim().min(1, "expected a subject identifier, got an empty cell"),
-    [raterCol]: z.string().trim().min(1, "expected an observer or method name, got an empty cell"),
+    [subjectCol]: z.string().trim().min(1, "expected a subject identifier"),
+    [raterCol]: z.string().trim().min(1, "expected an observer or method name"),
     ...(replicateCol
       ? {
         [replicateCol]: z.string().trim().regex(
@@ -309,6 +309,13 @@ async function main(): Promise<void> {
   const trailing = blank.length > 0 && blank[blank.length - 1] === parsed.data.length + 1;
   if (trailing) blank.pop();
   if (errors.length > 0) {
+    const lineOf = (e: string) => Number(/^line (\d+)/.exec(e)?.[1] ?? 0);
+    errors.sort((p, q) => lineOf(p) - lineOf(q));
+    errors.push(
+      ...missing.map((m) =>
+        `${m}: empty value cell (would be left out under the missing-cell policy)`
+      ),
+    );
     fail([
       `error: ${errors.length} problem(s) in ${path}; nothing was computed:`,
       ...errors.map((e) => `  ${e}`),
@@ -380,7 +387,7 @@ async function main(): Promise<void> {
   const maxReplicate = Math.max(...readings.map((r) => r.replicate));
 
   if (opt.graded) {
-    await gradedAnalysis();
+    gradedAnalysis();
   } else {
     for (const r of readings) {
       const v = Number(r.value);
@@ -692,7 +699,7 @@ async function main(): Promise<void> {
     );
   }
 
-  async function gradedAnalysis() {
+  function gradedAnalysis() {
     const order = opt.categories
       ? opt.categories.split(",").map((c) => c.trim())
       : [...new Set(readings.map((r) => r.value))];

@@ -7,3 +7,6 @@
 export { Chart, type ChartOptions, type VegaLiteSpec } from "./chart.ts";
 export * from "./uncertainty.ts";
 export * from "./agreement.ts";
+export * from "./doppler.ts";
+export * from "./physics.ts";
+export * from "./reference.ts";

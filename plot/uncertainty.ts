@@ -5,7 +5,7 @@
  * @module
  */
 import type { GumResult } from "../calc/uncertainty/gum.ts";
-import type { MonteCarloResult } from "../calc/uncertainty/montecarlo.ts";
+import { coverageIntervals, type MonteCarloResult } from "../calc/uncertainty/montecarlo.ts";
 import type { SensitivityCurve } from "../calc/core/sensitivity.ts";
 import { Chart } from "./chart.ts";
 
@@ -64,9 +64,10 @@ export function histogramChart(mc: MonteCarloResult, options: HistogramOptions =
     );
   }
   const bins = options.bins ?? 60;
-  // samples are sorted: use the 0.05 % and 99.95 % order statistics as the plotting range
-  const lo = s[Math.floor(s.length * 0.0005)]!;
-  const hi = s[Math.min(s.length - 1, Math.ceil(s.length * 0.9995))]!;
+  // plotting range: the 99.9 % probabilistically symmetric interval, widened to show both intervals
+  const wide = coverageIntervals(s, 0.999).symmetric;
+  const lo = Math.min(wide[0], o.symmetricInterval[0], o.shortestInterval[0]);
+  const hi = Math.max(wide[1], o.symmetricInterval[1], o.shortestInterval[1]);
   const width = (hi - lo) / bins || 1;
   const counts = new Array<number>(bins).fill(0);
   for (let i = 0; i < s.length; i++) {

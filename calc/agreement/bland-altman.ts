@@ -354,7 +354,8 @@ export interface BlandAltmanRepeatedResult {
  *
  * const r = blandAltmanRepeated(["p1", "p1", "p2", "p2", "p3", "p3"],
  *   [10, 11, 20, 21, 30, 33], [9, 11, 19, 19, 30, 30]);
- * assert.equal(r.bias, 1.5);
+ * // differences 1, 0, 1, 2, 0, 3: mean 7/6
+ * assert.ok(Math.abs(r.bias - 7 / 6) < 1e-12);
  * assert.ok(r.upperLimit > r.bias && r.lowerLimit < r.bias);
  * ```
  */

@@ -32,8 +32,9 @@ function nonCentralTSeries(t: number, df: number, delta: number): number {
   const b = df / 2;
   const logLambda = lambda > 0 ? Math.log(lambda) : -Infinity;
   // log weights: p_j = e^{-λ} λ^j / j!; q_j = δ e^{-λ} λ^j / (√2 Γ(j + 3/2))
-  const logP = (j: number) => -lambda + j * logLambda - logGamma(j + 1);
-  const logQ = (j: number) => -lambda + j * logLambda - 0.5 * Math.LN2 - logGamma(j + 1.5);
+  const powLambda = (j: number) => (j === 0 ? 0 : j * logLambda);
+  const logP = (j: number) => -lambda + powLambda(j) - logGamma(j + 1);
+  const logQ = (j: number) => -lambda + powLambda(j) - 0.5 * Math.LN2 - logGamma(j + 1.5);
   const term = (j: number) => {
     const p = lambda > 0 || j === 0 ? Math.exp(logP(j)) : 0;
     const q = delta === 0 ? 0 : Math.sign(delta) * Math.abs(delta) *

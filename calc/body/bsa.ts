@@ -247,12 +247,14 @@ export const bsaBoyd: Calculation<"heightCm" | "weightKg", "bsaM2"> = defineCalc
     const grams = 1000 * weightKg;
     return { bsaM2: 0.0003207 * heightCm ** 0.3 * grams ** (0.7285 - 0.0188 * Math.log10(grams)) };
   },
-  formulaText: "BSA = 0.0003207 · H^0.3 · Wg^(0.7285 − 0.0188·log10 Wg)  (H in cm, Wg in g, BSA in m²)",
+  formulaText:
+    "BSA = 0.0003207 · H^0.3 · Wg^(0.7285 − 0.0188·log10 Wg)  (H in cm, Wg in g, BSA in m²)",
   sources: [{
     authors: "Boyd E",
     year: 1935,
     title: "The Growth of the Surface Area of the Human Body",
-    publication: "University of Minnesota Press, Minneapolis (Institute of Child Welfare Monograph 10)",
+    publication:
+      "University of Minnesota Press, Minneapolis (Institute of Child Welfare Monograph 10)",
   }],
   cautions: BSA_CAUTIONS,
   clinical: true,
@@ -262,14 +264,15 @@ export const bsaBoyd: Calculation<"heightCm" | "weightKg", "bsaM2"> = defineCalc
 export type BsaMethod = "mosteller" | "duBois" | "haycock" | "gehanGeorge" | "boyd";
 
 /** The BSA calculations by method name. Each entry is the one definition of that formula. */
-export const BSA_METHODS: Readonly<Record<BsaMethod, Calculation<"heightCm" | "weightKg", "bsaM2">>> =
-  Object.freeze({
-    mosteller: bsaMosteller,
-    duBois: bsaDuBois,
-    haycock: bsaHaycock,
-    gehanGeorge: bsaGehanGeorge,
-    boyd: bsaBoyd,
-  });
+export const BSA_METHODS: Readonly<
+  Record<BsaMethod, Calculation<"heightCm" | "weightKg", "bsaM2">>
+> = Object.freeze({
+  mosteller: bsaMosteller,
+  duBois: bsaDuBois,
+  haycock: bsaHaycock,
+  gehanGeorge: bsaGehanGeorge,
+  boyd: bsaBoyd,
+});
 
 /**
  * The BSA calculation for a method name.

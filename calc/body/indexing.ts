@@ -6,7 +6,7 @@
  */
 import { defineCalculation, evaluate } from "../core/define.ts";
 import type { Calculation } from "../core/types.ts";
-import { type BsaMethod, bsaCalculation } from "./bsa.ts";
+import { bsaCalculation, type BsaMethod } from "./bsa.ts";
 
 /** Valid domain of a measurement to be indexed, in its own unit (non-negative, finite). */
 const MEASUREMENT_RANGE = { min: 0, max: 1e6 } as const;

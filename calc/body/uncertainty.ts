@@ -6,7 +6,7 @@
  */
 import { gum, type GumOptions, type GumResult } from "../uncertainty/gum.ts";
 import { type InputEstimate, normal, type NormalInput } from "../uncertainty/inputs.ts";
-import { type BsaMethod, bsaCalculation } from "./bsa.ts";
+import { bsaCalculation, type BsaMethod } from "./bsa.ts";
 import { bodySizeIndexCalculation } from "./indexing.ts";
 
 /** Standard uncertainties of the body-size measurements. */

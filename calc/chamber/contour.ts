@@ -200,34 +200,52 @@ function segmentsIntersect(
 }
 
 /**
- * The first pair of segments (i < j) of the closed outline that intersect, or null. Segment k runs
- * from point k to point (k + 1) mod n; segment n − 1 is the annulus segment. Adjacent segments may
- * share their common vertex but must not fold back onto each other.
+ * The lexicographically first pair of segments (i < j) of the closed outline that intersect, or
+ * null. Segment k runs from point k to point (k + 1) mod n; segment n − 1 is the annulus segment.
+ * Adjacent segments may share their common vertex but must not fold back onto each other.
+ * Candidate pairs come from a sweep over segments sorted by their smallest x, so traced contours
+ * of thousands of points are checked in near-linear time.
  */
 function firstSelfIntersection(x: Float64Array, y: Float64Array): [number, number] | null {
   const n = x.length;
+  let best: [number, number] | null = null;
+  const consider = (i: number, j: number): void => {
+    const a = Math.min(i, j), b = Math.max(i, j);
+    if (!best || a < best[0] || (a === best[0] && b < best[1])) best = [a, b];
+  };
   // Adjacent segments k and k+1 (mod n) overlap only when collinear and folding back.
   for (let k = 0; k < n; k++) {
     const a = k, b = (k + 1) % n, c = (k + 2) % n;
     const ax = x[a]!, ay = y[a]!, bx = x[b]!, by = y[b]!, cx = x[c]!, cy = y[c]!;
     if (orient(ax, ay, bx, by, cx, cy) === 0 && (ax - bx) * (cx - bx) + (ay - by) * (cy - by) > 0) {
-      return k < (k + 1) % n ? [k, (k + 1) % n] : [(k + 1) % n, k];
+      consider(k, (k + 1) % n);
     }
   }
-  if (n === 3) return null;
-  for (let i = 0; i < n; i++) {
+  if (n === 3) return best;
+  const minX = new Float64Array(n), maxX = new Float64Array(n);
+  const minY = new Float64Array(n), maxY = new Float64Array(n);
+  for (let k = 0; k < n; k++) {
+    const j = (k + 1) % n;
+    minX[k] = Math.min(x[k]!, x[j]!);
+    maxX[k] = Math.max(x[k]!, x[j]!);
+    minY[k] = Math.min(y[k]!, y[j]!);
+    maxY[k] = Math.max(y[k]!, y[j]!);
+  }
+  const order = Array.from({ length: n }, (_, k) => k).sort((a, b) => minX[a]! - minX[b]!);
+  for (let p = 0; p < n; p++) {
+    const i = order[p]!;
     const ax = x[i]!, ay = y[i]!, bx = x[(i + 1) % n]!, by = y[(i + 1) % n]!;
-    const minX = Math.min(ax, bx), maxX = Math.max(ax, bx);
-    const minY = Math.min(ay, by), maxY = Math.max(ay, by);
-    for (let j = i + 2; j < n; j++) {
-      if (i === 0 && j === n - 1) continue; // adjacent through point 0
+    for (let r = p + 1; r < n; r++) {
+      const j = order[r]!;
+      if (minX[j]! > maxX[i]!) break;
+      const d = Math.abs(i - j);
+      if (d === 1 || d === n - 1) continue; // adjacent (including through point 0)
+      if (maxY[j]! < minY[i]! || minY[j]! > maxY[i]!) continue;
       const cx = x[j]!, cy = y[j]!, dx = x[(j + 1) % n]!, dy = y[(j + 1) % n]!;
-      if (Math.max(cx, dx) < minX || Math.min(cx, dx) > maxX) continue;
-      if (Math.max(cy, dy) < minY || Math.min(cy, dy) > maxY) continue;
-      if (segmentsIntersect(ax, ay, bx, by, cx, cy, dx, dy)) return [i, j];
+      if (segmentsIntersect(ax, ay, bx, by, cx, cy, dx, dy)) consider(i, j);
     }
   }
-  return null;
+  return best;
 }
 
 /**
@@ -292,9 +310,117 @@ export function contourArea(c: ContourCoordinates): number {
   return Math.abs(twice) / 2;
 }
 
+/** Contour points in the long-axis frame: `axialCm` from the annulus midpoint towards the apex,
+ * `transverseCm` perpendicular to it (positive to the left of the axis direction). */
+export interface AxisFrame {
+  /** Axial coordinate of each point, cm. */
+  readonly axialCm: Float64Array;
+  /** Transverse coordinate of each point, cm. */
+  readonly transverseCm: Float64Array;
+}
+
+/**
+ * Expresses a validated contour in its long-axis frame (origin at the annulus midpoint, axial
+ * direction towards the apex).
+ *
+ * @param c Validated coordinates from {@linkcode validateContour}.
+ * @param axis The long axis from {@linkcode contourLongAxis}.
+ * @returns Axial and transverse coordinates of every point, cm.
+ *
+ * @example The apex lies on the axis at distance L
+ * ```ts
+ * import { contourAxisFrame, contourLongAxis, validateContour } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const c = validateContour([[1, 1], [4, 5], [1, 3]], "Demo", "apical");
+ * const axis = contourLongAxis(c);
+ * const f = contourAxisFrame(c, axis);
+ * assert.ok(Math.abs(f.axialCm[axis.apexIndex]! - axis.lengthCm) < 1e-12);
+ * assert.ok(Math.abs(f.transverseCm[axis.apexIndex]!) < 1e-12);
+ * ```
+ */
+export function contourAxisFrame(c: ContourCoordinates, axis: LongAxis): AxisFrame {
+  const n = c.x.length;
+  const [mx, my] = axis.annulusMidpoint;
+  const L = axis.lengthCm;
+  const ux = (axis.apex[0] - mx) / L, uy = (axis.apex[1] - my) / L; // along the long axis
+  const vx = -uy, vy = ux; // perpendicular
+  const axialCm = new Float64Array(n);
+  const transverseCm = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    const dx = c.x[i]! - mx, dy = c.y[i]! - my;
+    axialCm[i] = dx * ux + dy * uy;
+    transverseCm[i] = dx * vx + dy * vy;
+  }
+  return { axialCm, transverseCm };
+}
+
+/** The chords of one disc: where the perpendicular at mid-slab lies inside the cavity. */
+export interface DiscChord {
+  /** Axial position of the disc's measuring line, cm from the annulus midpoint. */
+  readonly axialCm: number;
+  /** Inside intervals along the perpendicular, as [from, to] transverse coordinates in cm. */
+  readonly intervals: readonly (readonly [number, number])[];
+  /** Disc diameter: the summed length of the inside intervals, cm. */
+  readonly diameterCm: number;
+}
+
+/**
+ * The disc chords of a validated contour: for each of `discCount` slabs of equal height, the
+ * perpendicular to the long axis at mid-slab and the intervals of it that lie inside the contour
+ * closed by the annulus segment (see the module convention).
+ *
+ * @param c Validated coordinates from {@linkcode validateContour}.
+ * @param axis The long axis from {@linkcode contourLongAxis}.
+ * @param discCount Number of discs (20 in the guideline method).
+ * @returns One chord set per disc, from the annulus towards the apex.
+ *
+ * @example A triangle 4 cm wide and 8 cm long: the first disc (at 0.2 cm) is 3.9 cm wide
+ * ```ts
+ * import { contourDiscChords, contourLongAxis, validateContour } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const c = validateContour([[-2, 0], [0, 8], [2, 0]], "Demo", "apical");
+ * const chords = contourDiscChords(c, contourLongAxis(c), 20);
+ * assert.ok(Math.abs(chords[0]!.diameterCm - 3.9) < 1e-12);
+ * ```
+ */
+export function contourDiscChords(
+  c: ContourCoordinates,
+  axis: LongAxis,
+  discCount: number,
+): DiscChord[] {
+  const n = c.x.length;
+  const { axialCm: s, transverseCm: q } = contourAxisFrame(c, axis);
+  const h = axis.lengthCm / discCount;
+  const out: DiscChord[] = [];
+  const crossings: number[] = [];
+  for (let k = 0; k < discCount; k++) {
+    const t = (k + 0.5) * h;
+    crossings.length = 0;
+    for (let i = 0; i < n; i++) {
+      const j = (i + 1) % n;
+      const si = s[i]! - t, sj = s[j]! - t;
+      // Half-open rule (a vertex on the line counts as above it): crossings come in pairs.
+      if ((si > 0) !== (sj > 0)) {
+        const f = si / (si - sj);
+        crossings.push(q[i]! + f * (q[j]! - q[i]!));
+      }
+    }
+    crossings.sort((a, b) => a - b);
+    const intervals: [number, number][] = [];
+    let width = 0;
+    for (let m = 0; m + 1 < crossings.length; m += 2) {
+      intervals.push([crossings[m]!, crossings[m + 1]!]);
+      width += crossings[m + 1]! - crossings[m]!;
+    }
+    out.push({ axialCm: t, intervals, diameterCm: width });
+  }
+  return out;
+}
+
 /**
  * Disc diameters of a validated contour: the cavity width perpendicular to the long axis at the
- * middle of each of `discCount` slabs of equal height (see the module convention).
+ * middle of each of `discCount` slabs of equal height (see the module convention); the
+ * `diameterCm` of {@linkcode contourDiscChords}.
  *
  * @param c Validated coordinates from {@linkcode validateContour}.
  * @param axis The long axis from {@linkcode contourLongAxis}.
@@ -315,38 +441,5 @@ export function discDiameters(
   axis: LongAxis,
   discCount: number,
 ): Float64Array {
-  const n = c.x.length;
-  const [mx, my] = axis.annulusMidpoint;
-  const L = axis.lengthCm;
-  const ux = (axis.apex[0] - mx) / L, uy = (axis.apex[1] - my) / L; // along the long axis
-  const vx = -uy, vy = ux; // perpendicular
-  // Axial (s) and transverse (q) coordinates of every point.
-  const s = new Float64Array(n);
-  const q = new Float64Array(n);
-  for (let i = 0; i < n; i++) {
-    const dx = c.x[i]! - mx, dy = c.y[i]! - my;
-    s[i] = dx * ux + dy * uy;
-    q[i] = dx * vx + dy * vy;
-  }
-  const h = L / discCount;
-  const out = new Float64Array(discCount);
-  const crossings: number[] = [];
-  for (let k = 0; k < discCount; k++) {
-    const t = (k + 0.5) * h;
-    crossings.length = 0;
-    for (let i = 0; i < n; i++) {
-      const j = (i + 1) % n;
-      const si = s[i]! - t, sj = s[j]! - t;
-      // Half-open rule (a vertex on the line counts as above it): crossings come in pairs.
-      if ((si > 0) !== (sj > 0)) {
-        const f = si / (si - sj);
-        crossings.push(q[i]! + f * (q[j]! - q[i]!));
-      }
-    }
-    crossings.sort((a, b) => a - b);
-    let width = 0;
-    for (let m = 0; m + 1 < crossings.length; m += 2) width += crossings[m + 1]! - crossings[m]!;
-    out[k] = width;
-  }
-  return out;
+  return Float64Array.from(contourDiscChords(c, axis, discCount), (d) => d.diameterCm);
 }

@@ -7,11 +7,15 @@
  * @module
  */
 export {
+  type AxisFrame,
   type Contour,
   contourArea,
+  contourAxisFrame,
   type ContourCoordinates,
+  contourDiscChords,
   contourLongAxis,
   type ContourPoint,
+  type DiscChord,
   discDiameters,
   type LongAxis,
   validateContour,

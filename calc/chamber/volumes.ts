@@ -197,6 +197,10 @@ export interface TracedView {
   readonly areaCm2: number;
   /** Disc diameters from the annulus towards the apex, cm. */
   readonly diameters: Float64Array;
+  /** The disc chords (position and inside intervals of each measuring line). */
+  readonly chords: readonly DiscChord[];
+  /** The validated contour. */
+  readonly contour: ContourCoordinates;
 }
 
 /** Result of a method-of-discs volume. */

@@ -7,7 +7,7 @@
  */
 import Papa from "papaparse";
 import { formatRange, inRange } from "../core/define.ts";
-import { type BsaMethod, bsaCalculation } from "../body/bsa.ts";
+import { bsaCalculation, type BsaMethod } from "../body/bsa.ts";
 import { bsaIndexCalculation } from "../body/indexing.ts";
 import { percentileFromZ, zScoreCalculation, type ZScoreModel } from "../reference/zscore.ts";
 import {
@@ -86,7 +86,10 @@ export interface CohortResult {
  * assert.ok(Number.isFinite(r.zScores.lvedd![0]!));
  * ```
  */
-export function computeCohort(table: CohortTable, options: CohortComputeOptions = {}): CohortResult {
+export function computeCohort(
+  table: CohortTable,
+  options: CohortComputeOptions = {},
+): CohortResult {
   const bsaMethod = options.bsaMethod ?? "haycock";
   const n = table.rowCount;
   const h = table.heightCm.values;
@@ -94,7 +97,8 @@ export function computeCohort(table: CohortTable, options: CohortComputeOptions 
   const flags = new Uint8Array(n);
   for (let i = 0; i < n; i++) {
     const s = table.rowStatus[i]!;
-    flags[i] = (s & ROW_INVALID ? FLAG_INVALID_INPUT : 0) | (s & ROW_MISSING ? FLAG_MISSING_MEASUREMENT : 0);
+    flags[i] = (s & ROW_INVALID ? FLAG_INVALID_INPUT : 0) |
+      (s & ROW_MISSING ? FLAG_MISSING_MEASUREMENT : 0);
   }
 
   // BSA by each needed method, once per method.
@@ -128,7 +132,9 @@ export function computeCohort(table: CohortTable, options: CohortComputeOptions 
     const col = table.measurements[name];
     if (col === undefined) {
       throw new TypeError(
-        `Cohort: expected a measurement in ${Object.keys(table.measurements).join(", ") || "(none)"}, got '${name}'`,
+        `Cohort: expected a measurement in ${
+          Object.keys(table.measurements).join(", ") || "(none)"
+        }, got '${name}'`,
       );
     }
     return col;
@@ -223,8 +229,11 @@ export function cohortToCsv(result: CohortResult): string {
     getters.push((i) => csvText(table.sex![i]!));
   }
   fields.push("height [cm]", "weight [kg]", `bsa_${result.bsaMethod} [m^2]`);
-  getters.push((i) => cell(table.heightCm.values[i]!), (i) => cell(table.weightKg.values[i]!), (i) =>
-    cell(result.bsaM2[i]!));
+  getters.push(
+    (i) => cell(table.heightCm.values[i]!),
+    (i) => cell(table.weightKg.values[i]!),
+    (i) => cell(result.bsaM2[i]!),
+  );
   for (const [name, col] of Object.entries(table.measurements)) {
     fields.push(`${name} [${col.unit}]`);
     getters.push((i) => cell(col.values[i]!));
@@ -236,7 +245,10 @@ export function cohortToCsv(result: CohortResult): string {
     const z = result.zScores[name];
     if (z) {
       fields.push(`${name}_z`, `${name}_percentile`);
-      getters.push((i) => cell(z[i]!), (i) => (z[i]! === z[i]! ? String(percentileFromZ(z[i]!)) : ""));
+      getters.push(
+        (i) => cell(z[i]!),
+        (i) => (z[i]! === z[i]! ? String(percentileFromZ(z[i]!)) : ""),
+      );
     }
   }
   fields.push("flags");
@@ -246,7 +258,9 @@ export function cohortToCsv(result: CohortResult): string {
     list.push(
       issue.kind === "missing"
         ? `${issue.column} not measured`
-        : `invalid ${issue.column} at line ${issue.line}: ${issue.message.replace(/^.*?: (expected)/, "$1")}`,
+        : `invalid ${issue.column} at line ${issue.line}: ${
+          issue.message.replace(/^.*?: (expected)/, "$1")
+        }`,
     );
     issuesByRow.set(issue.row, list);
   }
@@ -254,12 +268,18 @@ export function cohortToCsv(result: CohortResult): string {
     const f = result.flags[i]!;
     if (f === 0) return "";
     const notes = [...(issuesByRow.get(i) ?? [])];
-    if (f & FLAG_BODY_SIZE_ATYPICAL) notes.push("height or weight outside the typical range of the BSA formula");
+    if (f & FLAG_BODY_SIZE_ATYPICAL) {
+      notes.push("height or weight outside the typical range of the BSA formula");
+    }
     if (f & FLAG_BSA_OUTSIDE_MODEL) {
       for (const [name, outside] of Object.entries(result.bsaOutsideModel)) {
         if (outside[i]) {
           const m = result.models[name]!;
-          notes.push(`${name}: BSA outside the range of model ${m.id} ${formatRange(m.bsaRange, "m^2")} (extrapolated Z)`);
+          notes.push(
+            `${name}: BSA outside the range of model ${m.id} ${
+              formatRange(m.bsaRange, "m^2")
+            } (extrapolated Z)`,
+          );
         }
       }
     }

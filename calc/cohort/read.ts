@@ -155,7 +155,9 @@ function conversionFactor(from: string, to: string, header: string): number {
   const a = mathUnitOf(from);
   const b = mathUnitOf(to);
   if (a === null || b === null || !a.equalBase(b)) {
-    throw new TypeError(`Cohort CSV: column '${header}' must be in a unit convertible to ${to}, got "${from}"`);
+    throw new TypeError(
+      `Cohort CSV: column '${header}' must be in a unit convertible to ${to}, got "${from}"`,
+    );
   }
   return a.toNumber(to);
 }
@@ -217,10 +219,14 @@ export function readCohortCsv(text: string, options: CohortReadOptions): CohortT
   if (!parsedOptions.success) {
     const issue = parsedOptions.error.issues[0]!;
     throw new TypeError(
-      `Cohort CSV: option '${issue.path.join(".") || "(options)"}' ${issue.message.toLowerCase()}, got ${
+      `Cohort CSV: option '${
+        issue.path.join(".") || "(options)"
+      }' ${issue.message.toLowerCase()}, got ${
         JSON.stringify(
           issue.path.reduce<unknown>(
-            (v, k) => (typeof v === "object" && v !== null ? (v as Record<PropertyKey, unknown>)[k as PropertyKey] : v),
+            (v, k) => (typeof v === "object" && v !== null
+              ? (v as Record<PropertyKey, unknown>)[k as PropertyKey]
+              : v),
             options,
           ),
         )
@@ -231,7 +237,9 @@ export function readCohortCsv(text: string, options: CohortReadOptions): CohortT
     data: string[][];
     errors: { code: string; message: string; row?: number }[];
   };
-  const quoteError = parsed.errors.find((e) => e.code === "MissingQuotes" || e.code === "InvalidQuotes");
+  const quoteError = parsed.errors.find((e) =>
+    e.code === "MissingQuotes" || e.code === "InvalidQuotes"
+  );
   const rows = parsed.data;
   const headerRow = rows[0];
   if (headerRow === undefined || (headerRow.length === 1 && headerRow[0]!.trim() === "")) {
@@ -239,7 +247,9 @@ export function readCohortCsv(text: string, options: CohortReadOptions): CohortT
   }
   if (quoteError) {
     throw new TypeError(
-      `Cohort CSV: malformed quotes (${quoteError.message}) in data row ${quoteError.row ?? "?"}, got ${quoteError.code}`,
+      `Cohort CSV: malformed quotes (${quoteError.message}) in data row ${
+        quoteError.row ?? "?"
+      }, got ${quoteError.code}`,
     );
   }
   const headers = headerRow.map((h) => h.trim());
@@ -255,7 +265,9 @@ export function readCohortCsv(text: string, options: CohortReadOptions): CohortT
     const i = byName.get(column);
     if (i === undefined) {
       throw new TypeError(
-        `Cohort CSV: expected a column '${column}' in the header, got ${headers.map((h) => `'${h}'`).join(", ")}`,
+        `Cohort CSV: expected a column '${column}' in the header, got ${
+          headers.map((h) => `'${h}'`).join(", ")
+        }`,
       );
     }
     return i;
@@ -270,14 +282,25 @@ export function readCohortCsv(text: string, options: CohortReadOptions): CohortT
     const column = typeof spec === "string" ? spec : spec.column;
     const index = find(column);
     const header = headers[index]!;
-    const sourceUnit = (typeof spec === "string" ? undefined : spec.unit) ?? splitHeader(header).unit;
+    const sourceUnit = (typeof spec === "string" ? undefined : spec.unit) ??
+      splitHeader(header).unit;
     if (sourceUnit === undefined) {
       throw new TypeError(
         `Cohort CSV: column '${header}' has no unit; declare it in the header as '${column} [${unit}]' or in the options, got no unit`,
       );
     }
     const factor = conversionFactor(sourceUnit, unit, header);
-    return { key, header, index, sourceUnit, unit, factor, range, schema: rangeSchemaFor(range), optional };
+    return {
+      key,
+      header,
+      index,
+      sourceUnit,
+      unit,
+      factor,
+      range,
+      schema: rangeSchemaFor(range),
+      optional,
+    };
   };
   const plans: Plan[] = [
     plan("heightCm", options.height, "cm", bsaMosteller.inputs.heightCm.range, false),
@@ -337,7 +360,9 @@ export function readCohortCsv(text: string, options: CohortReadOptions): CohortT
         col[i] = NaN;
         if (p.optional) {
           rowStatus[i]! |= ROW_MISSING;
-          issues.push(issue(lineOf[i]!, i, p, "missing", "TypeError", `not measured (empty cell)`, cell));
+          issues.push(
+            issue(lineOf[i]!, i, p, "missing", "TypeError", `not measured (empty cell)`, cell),
+          );
         } else {
           rowStatus[i]! |= ROW_INVALID;
           issues.push(issue(lineOf[i]!, i, p, "invalid", "TypeError", expected(p), cell));
@@ -366,7 +391,11 @@ export function readCohortCsv(text: string, options: CohortReadOptions): CohortT
     const prefix = invalid.length === 1
       ? "Cohort CSV"
       : `Cohort CSV (${invalid.length} invalid cells, first shown; see .issues)`;
-    throw new CohortCsvError(first.errorName, first.message.replace(/^Cohort CSV/, prefix), invalid);
+    throw new CohortCsvError(
+      first.errorName,
+      first.message.replace(/^Cohort CSV/, prefix),
+      invalid,
+    );
   }
   const numeric = (c: number): CohortNumericColumn => {
     const p = plans[c]!;
@@ -397,7 +426,9 @@ function countNewlines(fields: readonly string[]): number {
 }
 
 function expected(p: Plan): string {
-  const domain = p.factor === 1 ? formatRange(p.range, p.unit) : `${formatRange(p.range, p.unit)} after conversion from ${p.sourceUnit}`;
+  const domain = p.factor === 1
+    ? formatRange(p.range, p.unit)
+    : `${formatRange(p.range, p.unit)} after conversion from ${p.sourceUnit}`;
   return `expected a number in ${domain}`;
 }
 

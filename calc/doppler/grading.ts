@@ -202,6 +202,23 @@ function isArrayLikeOfNumbers(value: unknown): value is ArrayLike<number> {
  * ```
  */
 export function gradeSeverity(table: SeverityTable, value: number): SeverityGrade;
+/**
+ * Grades Monte Carlo samples (an array, a typed array or an object with `samples`) against a
+ * severity table: the probability of each class, the most likely class and the class of the median.
+ *
+ * @param table A severity table.
+ * @param value Samples in the table's unit, or an object with `samples` (a Monte Carlo output).
+ * @returns The grade distribution.
+ * @throws {TypeError} For empty samples. @throws {RangeError} For a non-finite or out-of-domain sample.
+ *
+ * @example
+ * ```ts
+ * import { gradeSeverity, MITRAL_REGURGITATION_2017 } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const d = gradeSeverity(MITRAL_REGURGITATION_2017.eroa, { samples: new Float64Array([0.35, 0.45]) });
+ * assert.equal(d.probabilities.at(-1)?.probability, 0.5);
+ * ```
+ */
 export function gradeSeverity(
   table: SeverityTable,
   value: ArrayLike<number> | { readonly samples: ArrayLike<number> },

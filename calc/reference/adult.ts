@@ -96,87 +96,206 @@ const row = (r: Omit<AdultReferenceRow, "source" | "fromMemory">): AdultReferenc
 export const ADULT_REFERENCE_LANG_2015: readonly AdultReferenceRow[] = Object.freeze([
   // Table 1: 2D LV size and function by sex, mean ± SD and 2-SD range
   row({
-    parameter: "lvInternalDiameterDiastole", label: "LV internal diameter, end-diastole", unit: "mm",
-    sex: "male", method: "2D linear", mean: 50.2, sd: 4.1, normal: { lower: 42.0, upper: 58.4 }, table: "Table 1",
+    parameter: "lvInternalDiameterDiastole",
+    label: "LV internal diameter, end-diastole",
+    unit: "mm",
+    sex: "male",
+    method: "2D linear",
+    mean: 50.2,
+    sd: 4.1,
+    normal: { lower: 42.0, upper: 58.4 },
+    table: "Table 1",
   }),
   row({
-    parameter: "lvInternalDiameterDiastole", label: "LV internal diameter, end-diastole", unit: "mm",
-    sex: "female", method: "2D linear", mean: 45.0, sd: 3.6, normal: { lower: 37.8, upper: 52.2 }, table: "Table 1",
+    parameter: "lvInternalDiameterDiastole",
+    label: "LV internal diameter, end-diastole",
+    unit: "mm",
+    sex: "female",
+    method: "2D linear",
+    mean: 45.0,
+    sd: 3.6,
+    normal: { lower: 37.8, upper: 52.2 },
+    table: "Table 1",
   }),
   row({
-    parameter: "lvInternalDiameterSystole", label: "LV internal diameter, end-systole", unit: "mm",
-    sex: "male", method: "2D linear", mean: 32.4, sd: 3.7, normal: { lower: 25.0, upper: 39.8 }, table: "Table 1",
+    parameter: "lvInternalDiameterSystole",
+    label: "LV internal diameter, end-systole",
+    unit: "mm",
+    sex: "male",
+    method: "2D linear",
+    mean: 32.4,
+    sd: 3.7,
+    normal: { lower: 25.0, upper: 39.8 },
+    table: "Table 1",
   }),
   row({
-    parameter: "lvInternalDiameterSystole", label: "LV internal diameter, end-systole", unit: "mm",
-    sex: "female", method: "2D linear", mean: 28.2, sd: 3.3, normal: { lower: 21.6, upper: 34.8 }, table: "Table 1",
+    parameter: "lvInternalDiameterSystole",
+    label: "LV internal diameter, end-systole",
+    unit: "mm",
+    sex: "female",
+    method: "2D linear",
+    mean: 28.2,
+    sd: 3.3,
+    normal: { lower: 21.6, upper: 34.8 },
+    table: "Table 1",
   }),
   row({
-    parameter: "lvEndDiastolicVolumeIndex", label: "LV end-diastolic volume / BSA", unit: "mL/m^2",
-    sex: "male", method: "2D biplane discs", mean: 54, sd: 10, normal: { lower: 34, upper: 74 }, table: "Table 1",
+    parameter: "lvEndDiastolicVolumeIndex",
+    label: "LV end-diastolic volume / BSA",
+    unit: "mL/m^2",
+    sex: "male",
+    method: "2D biplane discs",
+    mean: 54,
+    sd: 10,
+    normal: { lower: 34, upper: 74 },
+    table: "Table 1",
   }),
   row({
-    parameter: "lvEndDiastolicVolumeIndex", label: "LV end-diastolic volume / BSA", unit: "mL/m^2",
-    sex: "female", method: "2D biplane discs", mean: 45, sd: 8, normal: { lower: 29, upper: 61 }, table: "Table 1",
+    parameter: "lvEndDiastolicVolumeIndex",
+    label: "LV end-diastolic volume / BSA",
+    unit: "mL/m^2",
+    sex: "female",
+    method: "2D biplane discs",
+    mean: 45,
+    sd: 8,
+    normal: { lower: 29, upper: 61 },
+    table: "Table 1",
   }),
   row({
-    parameter: "lvEndSystolicVolumeIndex", label: "LV end-systolic volume / BSA", unit: "mL/m^2",
-    sex: "male", method: "2D biplane discs", mean: 21, sd: 5, normal: { lower: 11, upper: 31 }, table: "Table 1",
+    parameter: "lvEndSystolicVolumeIndex",
+    label: "LV end-systolic volume / BSA",
+    unit: "mL/m^2",
+    sex: "male",
+    method: "2D biplane discs",
+    mean: 21,
+    sd: 5,
+    normal: { lower: 11, upper: 31 },
+    table: "Table 1",
   }),
   row({
-    parameter: "lvEndSystolicVolumeIndex", label: "LV end-systolic volume / BSA", unit: "mL/m^2",
-    sex: "female", method: "2D biplane discs", mean: 16, sd: 4, normal: { lower: 8, upper: 24 }, table: "Table 1",
+    parameter: "lvEndSystolicVolumeIndex",
+    label: "LV end-systolic volume / BSA",
+    unit: "mL/m^2",
+    sex: "female",
+    method: "2D biplane discs",
+    mean: 16,
+    sd: 4,
+    normal: { lower: 8, upper: 24 },
+    table: "Table 1",
   }),
   // Table 2: LVEF and LA volume, normal ranges and severity partitions
   row({
-    parameter: "lvEjectionFraction", label: "LV ejection fraction", unit: "%", sex: "male",
-    method: "2D biplane discs", mean: 62, sd: 5, normal: { lower: 52, upper: 72 },
-    partitions: { direction: "low", mild: [41, 51], moderate: [30, 40], severe: 30 }, table: "Table 2",
+    parameter: "lvEjectionFraction",
+    label: "LV ejection fraction",
+    unit: "%",
+    sex: "male",
+    method: "2D biplane discs",
+    mean: 62,
+    sd: 5,
+    normal: { lower: 52, upper: 72 },
+    partitions: { direction: "low", mild: [41, 51], moderate: [30, 40], severe: 30 },
+    table: "Table 2",
   }),
   row({
-    parameter: "lvEjectionFraction", label: "LV ejection fraction", unit: "%", sex: "female",
-    method: "2D biplane discs", mean: 64, sd: 5, normal: { lower: 54, upper: 74 },
-    partitions: { direction: "low", mild: [41, 53], moderate: [30, 40], severe: 30 }, table: "Table 2",
+    parameter: "lvEjectionFraction",
+    label: "LV ejection fraction",
+    unit: "%",
+    sex: "female",
+    method: "2D biplane discs",
+    mean: 64,
+    sd: 5,
+    normal: { lower: 54, upper: 74 },
+    partitions: { direction: "low", mild: [41, 53], moderate: [30, 40], severe: 30 },
+    table: "Table 2",
   }),
   row({
-    parameter: "laVolumeIndex", label: "Maximum LA volume / BSA", unit: "mL/m^2", sex: "any",
-    method: "2D biplane", normal: { lower: 16, upper: 34 },
-    partitions: { direction: "high", mild: [35, 41], moderate: [42, 48], severe: 48 }, table: "Table 2",
+    parameter: "laVolumeIndex",
+    label: "Maximum LA volume / BSA",
+    unit: "mL/m^2",
+    sex: "any",
+    method: "2D biplane",
+    normal: { lower: 16, upper: 34 },
+    partitions: { direction: "high", mild: [35, 41], moderate: [42, 48], severe: 48 },
+    table: "Table 2",
   }),
   // Table 6: LV mass indices (normal ranges only in this table)
   row({
-    parameter: "lvMassIndexLinear", label: "LV mass / BSA (linear method)", unit: "g/m^2", sex: "male",
-    method: "linear (cube) formula", normal: { lower: 49, upper: 115 }, table: "Table 6",
+    parameter: "lvMassIndexLinear",
+    label: "LV mass / BSA (linear method)",
+    unit: "g/m^2",
+    sex: "male",
+    method: "linear (cube) formula",
+    normal: { lower: 49, upper: 115 },
+    table: "Table 6",
   }),
   row({
-    parameter: "lvMassIndexLinear", label: "LV mass / BSA (linear method)", unit: "g/m^2", sex: "female",
-    method: "linear (cube) formula", normal: { lower: 43, upper: 95 }, table: "Table 6",
+    parameter: "lvMassIndexLinear",
+    label: "LV mass / BSA (linear method)",
+    unit: "g/m^2",
+    sex: "female",
+    method: "linear (cube) formula",
+    normal: { lower: 43, upper: 95 },
+    table: "Table 6",
   }),
   row({
-    parameter: "lvMassIndex2d", label: "LV mass / BSA (2D method)", unit: "g/m^2", sex: "male",
-    method: "2D (area–length or truncated ellipsoid)", normal: { lower: 50, upper: 102 }, table: "Table 6",
+    parameter: "lvMassIndex2d",
+    label: "LV mass / BSA (2D method)",
+    unit: "g/m^2",
+    sex: "male",
+    method: "2D (area–length or truncated ellipsoid)",
+    normal: { lower: 50, upper: 102 },
+    table: "Table 6",
   }),
   row({
-    parameter: "lvMassIndex2d", label: "LV mass / BSA (2D method)", unit: "g/m^2", sex: "female",
-    method: "2D (area–length or truncated ellipsoid)", normal: { lower: 44, upper: 88 }, table: "Table 6",
+    parameter: "lvMassIndex2d",
+    label: "LV mass / BSA (2D method)",
+    unit: "g/m^2",
+    sex: "female",
+    method: "2D (area–length or truncated ellipsoid)",
+    normal: { lower: 44, upper: 88 },
+    table: "Table 6",
   }),
   row({
-    parameter: "relativeWallThickness", label: "Relative wall thickness", unit: "1", sex: "male",
-    method: "linear", normal: { lower: 0.24, upper: 0.42 }, table: "Table 6",
+    parameter: "relativeWallThickness",
+    label: "Relative wall thickness",
+    unit: "1",
+    sex: "male",
+    method: "linear",
+    normal: { lower: 0.24, upper: 0.42 },
+    table: "Table 6",
   }),
   row({
-    parameter: "relativeWallThickness", label: "Relative wall thickness", unit: "1", sex: "female",
-    method: "linear", normal: { lower: 0.22, upper: 0.42 }, table: "Table 6",
-    note: "The lower limit for women (0.22) is from memory and less certain than the shared upper limit 0.42",
+    parameter: "relativeWallThickness",
+    label: "Relative wall thickness",
+    unit: "1",
+    sex: "female",
+    method: "linear",
+    normal: { lower: 0.22, upper: 0.42 },
+    table: "Table 6",
+    note:
+      "The lower limit for women (0.22) is from memory and less certain than the shared upper limit 0.42",
   }),
   // RV size and function tables: one range for both sexes, upper or lower abnormality threshold
   row({
-    parameter: "rvBasalDiameter", label: "RV basal diameter", unit: "mm", sex: "any", method: "2D RV-focused apical view",
-    mean: 33, sd: 4, normal: { lower: 25, upper: 41 }, table: "Table 8 (RV chamber size; table number from memory)",
+    parameter: "rvBasalDiameter",
+    label: "RV basal diameter",
+    unit: "mm",
+    sex: "any",
+    method: "2D RV-focused apical view",
+    mean: 33,
+    sd: 4,
+    normal: { lower: 25, upper: 41 },
+    table: "Table 8 (RV chamber size; table number from memory)",
   }),
   row({
-    parameter: "tapse", label: "Tricuspid annular plane systolic excursion (TAPSE)", unit: "mm", sex: "any",
-    method: "M-mode", mean: 24, sd: 3.5, normal: { lower: 17 },
+    parameter: "tapse",
+    label: "Tricuspid annular plane systolic excursion (TAPSE)",
+    unit: "mm",
+    sex: "any",
+    method: "M-mode",
+    mean: 24,
+    sd: 3.5,
+    normal: { lower: 17 },
     table: "Table 9 (RV function; table number from memory)",
     note: "The guideline gives TAPSE < 17 mm as the abnormality threshold; no upper limit",
   }),
@@ -204,12 +323,16 @@ export function adultReferenceRow(
   table: readonly AdultReferenceRow[] = ADULT_REFERENCE_LANG_2015,
 ): AdultReferenceRow {
   if (sex !== "male" && sex !== "female") {
-    throw new TypeError(`Adult reference: expected 'sex' "male" or "female", got ${JSON.stringify(sex)}`);
+    throw new TypeError(
+      `Adult reference: expected 'sex' "male" or "female", got ${JSON.stringify(sex)}`,
+    );
   }
   const found = table.find((r) => r.parameter === parameter && (r.sex === sex || r.sex === "any"));
   if (found === undefined) {
     const known = [...new Set(table.map((r) => r.parameter))].join(", ");
-    throw new TypeError(`Adult reference: expected 'parameter' in ${known}, got ${JSON.stringify(parameter)}`);
+    throw new TypeError(
+      `Adult reference: expected 'parameter' in ${known}, got ${JSON.stringify(parameter)}`,
+    );
   }
   return found;
 }
@@ -241,7 +364,9 @@ export function adultReferenceRow(
  */
 export function classifyAgainstRow(row: AdultReferenceRow, value: number): SeverityClass {
   if (typeof value !== "number" || !Number.isFinite(value)) {
-    throw new RangeError(`Classification (${row.label}): expected a finite value in ${row.unit}, got ${value}`);
+    throw new RangeError(
+      `Classification (${row.label}): expected a finite value in ${row.unit}, got ${value}`,
+    );
   }
   const { lower, upper } = row.normal;
   const p = row.partitions;
@@ -305,7 +430,9 @@ export function classifyAdult(
     row: r,
     value,
     cautions: [
-      ...(r.fromMemory ? [`Reference limits of ${r.label} entered from memory of Lang 2015 ${r.table}: verify`] : []),
+      ...(r.fromMemory
+        ? [`Reference limits of ${r.label} entered from memory of Lang 2015 ${r.table}: verify`]
+        : []),
       "Not a diagnosis: verify against local guidelines and licensed clinical practice before acting on this number",
     ],
   };
@@ -334,13 +461,17 @@ export function classProbabilities(
   samples: ArrayLike<number>,
 ): Partial<Record<SeverityClass, number>> {
   if (!(samples.length > 0)) {
-    throw new TypeError(`Class probabilities (${row.label}): expected at least one sample, got ${samples.length}`);
+    throw new TypeError(
+      `Class probabilities (${row.label}): expected at least one sample, got ${samples.length}`,
+    );
   }
   const counts: Partial<Record<SeverityClass, number>> = {};
   for (let i = 0; i < samples.length; i++) {
     const c = classifyAgainstRow(row, samples[i]!);
     counts[c] = (counts[c] ?? 0) + 1;
   }
-  for (const key of Object.keys(counts) as SeverityClass[]) counts[key] = counts[key]! / samples.length;
+  for (const key of Object.keys(counts) as SeverityClass[]) {
+    counts[key] = counts[key]! / samples.length;
+  }
   return counts;
 }

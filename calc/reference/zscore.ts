@@ -13,7 +13,7 @@ import * as z from "zod";
 import { defineCalculation, evaluate, formatRange, inRange } from "../core/define.ts";
 import type { Calculation, Reference, ValueRange } from "../core/types.ts";
 import { mathUnitOf, type QuantityInput } from "../core/units.ts";
-import { type BsaMethod, bsaCalculation } from "../body/bsa.ts";
+import { bsaCalculation, type BsaMethod } from "../body/bsa.ts";
 import { normalCdf } from "../stats/distributions.ts";
 
 /** Fields shared by every Z-score model. */
@@ -81,7 +81,10 @@ export interface AllometricModelledSdModel extends ZScoreModelBase {
 }
 
 /** Any Z-score model. */
-export type ZScoreModel = AllometricConstantSdModel | LogPolynomialBsaModel | AllometricModelledSdModel;
+export type ZScoreModel =
+  | AllometricConstantSdModel
+  | LogPolynomialBsaModel
+  | AllometricModelledSdModel;
 
 /** The names of the model families. */
 export type ZScoreFamilyName = ZScoreModel["family"];
@@ -229,10 +232,19 @@ const baseShape = {
   synthetic: z.boolean().optional(),
 };
 const finite = z.number().refine(Number.isFinite, "expected a finite number");
-const positive = z.number().refine((v) => v > 0 && Number.isFinite(v), "expected a finite number > 0");
+const positive = z.number().refine(
+  (v) => v > 0 && Number.isFinite(v),
+  "expected a finite number > 0",
+);
 
 const modelSchema = z.discriminatedUnion("family", [
-  z.object({ ...baseShape, family: z.literal("allometricConstantSd"), alpha: finite, mean: finite, sd: positive }),
+  z.object({
+    ...baseShape,
+    family: z.literal("allometricConstantSd"),
+    alpha: finite,
+    mean: finite,
+    sd: positive,
+  }),
   z.object({
     ...baseShape,
     family: z.literal("logPolynomialBsa"),
@@ -287,7 +299,9 @@ export function defineZScoreModel<M extends ZScoreModel>(model: M): M {
         ? (value as Record<PropertyKey, unknown>)[key as PropertyKey]
         : undefined;
     }
-    const id = typeof (model as { id?: unknown })?.id === "string" ? (model as { id: string }).id : "?";
+    const id = typeof (model as { id?: unknown })?.id === "string"
+      ? (model as { id: string }).id
+      : "?";
     throw new TypeError(
       `Z-score model '${id}': field '${path}' ${issue.message.toLowerCase()}, got ${
         JSON.stringify(value) ?? "undefined"
@@ -295,7 +309,13 @@ export function defineZScoreModel<M extends ZScoreModel>(model: M): M {
     );
   }
   const f = familyOf(model);
-  for (const bsa of [model.bsaRange.min, (model.bsaRange.min + model.bsaRange.max) / 2, model.bsaRange.max]) {
+  for (
+    const bsa of [
+      model.bsaRange.min,
+      (model.bsaRange.min + model.bsaRange.max) / 2,
+      model.bsaRange.max,
+    ]
+  ) {
     if (bsa > 0 && !(f.sd(model, bsa) > 0)) {
       throw new RangeError(
         `Z-score model '${model.id}': expected a positive SD across the BSA range, got ${
@@ -388,10 +408,34 @@ export const PHN_2017_MODELS: {
   mainPulmonaryArtery: phn("mainPulmonaryArtery", "Main pulmonary artery", 0.5, 1.82, 0.24),
   rightPulmonaryArtery: phn("rightPulmonaryArtery", "Right pulmonary artery", 0.5, 1.07, 0.18),
   leftPulmonaryArtery: phn("leftPulmonaryArtery", "Left pulmonary artery", 0.5, 1.1, 0.18),
-  mitralAnnulusAp: phn("mitralAnnulusAp", "Mitral valve annulus (anteroposterior)", 0.5, 2.31, 0.24),
-  tricuspidAnnulusAp: phn("tricuspidAnnulusAp", "Tricuspid valve annulus (anteroposterior)", 0.5, 2.36, 0.28),
-  lvEndDiastolicDimension: phn("lvEndDiastolicDimension", "LV end-diastolic dimension", 0.45, 3.89, 0.33),
-  lvPosteriorWallDiastole: phn("lvPosteriorWallDiastole", "LV posterior wall thickness (diastole)", 0.4, 0.57, 0.09),
+  mitralAnnulusAp: phn(
+    "mitralAnnulusAp",
+    "Mitral valve annulus (anteroposterior)",
+    0.5,
+    2.31,
+    0.24,
+  ),
+  tricuspidAnnulusAp: phn(
+    "tricuspidAnnulusAp",
+    "Tricuspid valve annulus (anteroposterior)",
+    0.5,
+    2.36,
+    0.28,
+  ),
+  lvEndDiastolicDimension: phn(
+    "lvEndDiastolicDimension",
+    "LV end-diastolic dimension",
+    0.45,
+    3.89,
+    0.33,
+  ),
+  lvPosteriorWallDiastole: phn(
+    "lvPosteriorWallDiastole",
+    "LV posterior wall thickness (diastole)",
+    0.4,
+    0.57,
+    0.09,
+  ),
   interventricularSeptumDiastole: phn(
     "interventricularSeptumDiastole",
     "Interventricular septal thickness (diastole)",
@@ -399,7 +443,14 @@ export const PHN_2017_MODELS: {
     0.58,
     0.09,
   ),
-  lvEndDiastolicVolume: phn("lvEndDiastolicVolume", "LV end-diastolic volume", 1.3, 62.02, 11.94, "mL"),
+  lvEndDiastolicVolume: phn(
+    "lvEndDiastolicVolume",
+    "LV end-diastolic volume",
+    1.3,
+    62.02,
+    11.94,
+    "mL",
+  ),
   lvMass: phn("lvMass", "LV mass", 1.25, 53.02, 9.06, "g"),
 });
 
@@ -435,7 +486,9 @@ const Z_CAUTIONS = [
  * assert.ok(Math.abs(z - 2) < 1e-12);
  * ```
  */
-export function zScoreCalculation(model: ZScoreModel): Calculation<"measurement" | "bsaM2", "zScore"> {
+export function zScoreCalculation(
+  model: ZScoreModel,
+): Calculation<"measurement" | "bsaM2", "zScore"> {
   let calc = fromBsaCache.get(model);
   if (calc === undefined) {
     calc = defineCalculation({
@@ -460,7 +513,10 @@ export function zScoreCalculation(model: ZScoreModel): Calculation<"measurement"
       formulaText: familyOf(model).formulaText,
       sources: [model.source],
       cautions: model.synthetic
-        ? ["SYNTHETIC model: invented coefficients for tests and demos, not for patients", ...Z_CAUTIONS]
+        ? [
+          "SYNTHETIC model: invented coefficients for tests and demos, not for patients",
+          ...Z_CAUTIONS,
+        ]
         : Z_CAUTIONS,
       clinical: true,
     });
@@ -497,7 +553,8 @@ export function zScoreFromBodySizeCalculation(
     calc = defineCalculation({
       id: `zScoreFromBodySize(${model.id})`,
       title: `Z-score from height and weight: ${model.measurement} (${model.id})`,
-      description: `BSA by ${bsa.title}, then the Z-score of the ${model.measurement.toLowerCase()}.`,
+      description:
+        `BSA by ${bsa.title}, then the Z-score of the ${model.measurement.toLowerCase()}.`,
       inputs: {
         measurement: zCalc.inputs.measurement,
         heightCm: bsa.inputs.heightCm,
@@ -549,7 +606,11 @@ export function percentileFromZ(zScore: number): number {
 /** A measurement with its BSA, or with the height and weight that give the BSA. */
 export type ZScoreArguments =
   | { readonly measurement: QuantityInput; readonly bsaM2: QuantityInput }
-  | { readonly measurement: QuantityInput; readonly heightCm: QuantityInput; readonly weightKg: QuantityInput };
+  | {
+    readonly measurement: QuantityInput;
+    readonly heightCm: QuantityInput;
+    readonly weightKg: QuantityInput;
+  };
 
 /** The result of {@linkcode zScore}. */
 export interface ZScoreResult {
@@ -683,7 +744,9 @@ export function measurementAtZ(model: ZScoreModel, zScore: number, bsaM2: number
   if (typeof zScore !== "number") {
     throw new TypeError(`${where}: expected 'zScore' as a number, got ${typeof zScore}`);
   }
-  if (!Number.isFinite(zScore)) throw new RangeError(`${where}: expected a finite 'zScore', got ${zScore}`);
+  if (!Number.isFinite(zScore)) {
+    throw new RangeError(`${where}: expected a finite 'zScore', got ${zScore}`);
+  }
   checkBsa(where, bsaM2);
   const x = measurementFormula(model, zScore, bsaM2);
   if (!(x > 0 && Number.isFinite(x))) {
@@ -785,9 +848,11 @@ export function compareZScoreModels(
   args: ZScoreArguments,
 ): ZScoreComparisonRow[] {
   if (!Array.isArray(models) || models.length === 0) {
-    throw new TypeError(`Z-score comparison: expected a non-empty array of models, got ${
-      Array.isArray(models) ? "an empty array" : typeof models
-    }`);
+    throw new TypeError(
+      `Z-score comparison: expected a non-empty array of models, got ${
+        Array.isArray(models) ? "an empty array" : typeof models
+      }`,
+    );
   }
   const first = models[0]!;
   const firstUnit = mathUnitOf(first.unit);

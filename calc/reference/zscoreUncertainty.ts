@@ -107,12 +107,16 @@ export function zScoreWithUncertainty(
   options: ZScoreUncertaintyOptions = {},
 ): ZScoreUncertaintyResult {
   if (typeof inputs !== "object" || inputs === null) {
-    throw new TypeError(`Z-score with uncertainty (${model.id}): expected an object of inputs, got ${String(inputs)}`);
+    throw new TypeError(
+      `Z-score with uncertainty (${model.id}): expected an object of inputs, got ${String(inputs)}`,
+    );
   }
   const method = options.method ?? "gum";
   if (method !== "gum" && method !== "monteCarlo") {
     throw new TypeError(
-      `Z-score with uncertainty (${model.id}): expected 'method' "gum" or "monteCarlo", got ${JSON.stringify(method)}`,
+      `Z-score with uncertainty (${model.id}): expected 'method' "gum" or "monteCarlo", got ${
+        JSON.stringify(method)
+      }`,
     );
   }
   const coverage = options.coverage ?? 0.95;

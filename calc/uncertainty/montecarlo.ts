@@ -33,7 +33,7 @@ export interface MonteCarloOptions {
   readonly coverage?: number;
   /** Correlations between inputs (only between normal inputs, JCGM 101 §6.4.8). */
   readonly correlations?: Correlations;
-  /** Keep the output samples (sorted) in the result. @default true */
+  /** Keep the output samples (in trial order) in the result. @default true */
   readonly keepSamples?: boolean;
 }
 
@@ -51,7 +51,8 @@ export interface MonteCarloOutput {
   readonly symmetricInterval: readonly [number, number];
   /** Shortest coverage interval (JCGM 101 §7.7.2). */
   readonly shortestInterval: readonly [number, number];
-  /** Sorted model values (empty when `keepSamples` is false). */
+  /** Model values in trial order, so that samples of several outputs stay paired (empty when
+   * `keepSamples` is false). */
   readonly samples: Float64Array;
 }
 
@@ -244,32 +245,80 @@ export function meanAndStandardDeviation(values: Float64Array): { mean: number; 
 }
 
 /**
- * Coverage intervals from sorted model values (JCGM 101:2008 §7.7): q = pM (or ⌊pM + ½⌋);
- * probabilistically symmetric [y₍r₎, y₍r+q₎] with r = (M − q)/2 (or (M − q + 1)/2), and the
- * shortest interval minimising y₍r+q₎ − y₍r₎ over r.
+ * The `count` smallest (`upper` false) or largest (`upper` true) values of `values`, sorted
+ * ascending, without sorting the whole array: a value histogram locates the tail, only the tail
+ * is copied and sorted. Exact for any data (ties and heavy tails only enlarge the copied part).
+ */
+export function sortedTail(values: Float64Array, count: number, upper: boolean): Float64Array {
+  const m = values.length;
+  if (count >= m) return values.slice().sort();
+  let min = Infinity, max = -Infinity;
+  for (let r = 0; r < m; r++) {
+    const v = values[r]!;
+    if (v < min) min = v;
+    if (v > max) max = v;
+  }
+  if (min === max) return new Float64Array(count).fill(min);
+  const bins = 4096;
+  const scale = bins / (max - min);
+  const counts = new Uint32Array(bins);
+  for (let r = 0; r < m; r++) {
+    const b = Math.min(bins - 1, Math.floor((values[r]! - min) * scale));
+    counts[b]!++;
+  }
+  let cut = 0, total = 0;
+  if (upper) {
+    for (cut = bins - 1; cut >= 0; cut--) if ((total += counts[cut]!) >= count) break;
+  } else {
+    for (cut = 0; cut < bins; cut++) if ((total += counts[cut]!) >= count) break;
+  }
+  const tail = new Float64Array(total);
+  let n = 0;
+  for (let r = 0; r < m; r++) {
+    const v = values[r]!;
+    const b = Math.min(bins - 1, Math.floor((v - min) * scale));
+    if (upper ? b >= cut : b <= cut) tail[n++] = v;
+  }
+  tail.sort();
+  return upper ? tail.subarray(total - count) : tail.subarray(0, count);
+}
+
+/**
+ * Coverage intervals from model values in any order (JCGM 101:2008 §7.7): q = pM (or
+ * ⌊pM + ½⌋); probabilistically symmetric [y₍r₎, y₍r+q₎] with r = (M − q)/2 (or (M − q + 1)/2),
+ * and the shortest interval minimising y₍r+q₎ − y₍r₎ over r = 1, …, M − q. Only the M − q
+ * smallest and largest values are sorted: every order statistic needed lies there.
+ *
+ * @example
+ * ```ts
+ * import { coverageIntervals } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const values = Float64Array.from({ length: 100 }, (_, i) => 99 - i); // 0 … 99, reversed
+ * // M = 100, p = 0.9: q = 90, r = 5 → [y₍5₎, y₍95₎] = [4, 94]
+ * assert.deepEqual(coverageIntervals(values, 0.9).symmetric, [4, 94]);
+ * ```
  */
 export function coverageIntervals(
-  sorted: Float64Array,
+  values: Float64Array,
   coverage: number,
 ): { symmetric: [number, number]; shortest: [number, number] } {
-  const m = sorted.length;
+  const m = values.length;
   const pm = coverage * m;
-  const q = Number.isInteger(pm) ? pm : Math.floor(pm + 0.5);
+  const q = Math.min(m - 1, Number.isInteger(pm) ? pm : Math.floor(pm + 0.5));
   const r = Number.isInteger((m - q) / 2) ? (m - q) / 2 : (m - q + 1) / 2;
-  // 1-based order statistics y_(r) → sorted[r − 1]
-  const symmetric: [number, number] = [
-    sorted[Math.max(r - 1, 0)]!,
-    sorted[Math.min(r + q - 1, m - 1)]!,
-  ];
-  let best = Infinity, bestR = 1;
-  for (let s = 1; s + q <= m; s++) {
-    const w = sorted[s + q - 1]! - sorted[s - 1]!;
+  const tailSize = m - q; // order statistics 1 … m − q and q + 1 … m
+  const low = sortedTail(values, tailSize, false); // low[j] = y_(j+1)
+  const high = sortedTail(values, tailSize, true); // high[j] = y_(q+1+j)
+  const symmetric: [number, number] = [low[r - 1]!, high[r - 1]!];
+  let best = Infinity, bestJ = 0;
+  for (let j = 0; j < tailSize; j++) {
+    const w = high[j]! - low[j]!; // y_(j+1+q) − y_(j+1)
     if (w < best) {
       best = w;
-      bestR = s;
+      bestJ = j;
     }
   }
-  return { symmetric, shortest: [sorted[bestR - 1]!, sorted[Math.min(bestR + q - 1, m - 1)]!] };
+  return { symmetric, shortest: [low[bestJ]!, high[bestJ]!] };
 }
 
 function correlationOf(columns: readonly Float64Array[]): number[][] {
@@ -300,7 +349,6 @@ function summarise<I extends string, O extends string>(
   calc.outputNames.forEach((o, k) => {
     const col = results[k]!;
     const { mean, sd } = meanAndStandardDeviation(col);
-    col.sort();
     const { symmetric, shortest } = coverageIntervals(col, coverage);
     outputs[o] = {
       output: o,
@@ -460,8 +508,7 @@ export function monteCarloAdaptive<I extends string, O extends string>(
     batches.push(results);
     results.forEach((col, k) => {
       const { mean, sd } = meanAndStandardDeviation(col);
-      const sorted = col.slice().sort();
-      const { symmetric } = coverageIntervals(sorted, coverage);
+      const { symmetric } = coverageIntervals(col, coverage);
       const s = seqStats[k]!;
       s.y.push(mean);
       s.u.push(sd);

@@ -1,5 +1,7 @@
 import assert from "node:assert/strict";
 import {
+  bodySizeIndexCalculation,
+  bodySizeInputs,
   BSA_METHODS,
   bsaBoyd,
   bsaCalculation,
@@ -8,8 +10,6 @@ import {
   bsaHaycock,
   bsaMosteller,
   bsaWithUncertainty,
-  bodySizeIndexCalculation,
-  bodySizeInputs,
   evaluate,
   indexedWithUncertainty,
   indexToBsa,
@@ -18,7 +18,10 @@ import {
 } from "../../mod.ts";
 
 const close = (actual: number, expected: number, tol: number, what: string) =>
-  assert.ok(Math.abs(actual - expected) <= tol, `${what}: expected ${expected} ± ${tol}, got ${actual}`);
+  assert.ok(
+    Math.abs(actual - expected) <= tol,
+    `${what}: expected ${expected} ± ${tol}, got ${actual}`,
+  );
 
 Deno.test("BSA formulas at 180 cm, 80 kg match the published formulas", () => {
   const args = { heightCm: 180, weightKg: 80 };
@@ -50,7 +53,12 @@ Deno.test("BSA formulas in a newborn (50 cm, 3.5 kg) agree with hand computation
 
 Deno.test("BSA accepts unit strings and rejects the wrong dimension", () => {
   // 1.8 m = 180 cm and 80000 g = 80 kg → Mosteller 2 m² (Mosteller 1987, hand-checkable)
-  close(evaluate(bsaMosteller, { heightCm: "1.8 m", weightKg: "80000 g" }).outputs.bsaM2, 2, 1e-12, "units");
+  close(
+    evaluate(bsaMosteller, { heightCm: "1.8 m", weightKg: "80000 g" }).outputs.bsaM2,
+    2,
+    1e-12,
+    "units",
+  );
   assert.throws(() => evaluate(bsaMosteller, { heightCm: "180 kg", weightKg: 80 }), {
     name: "TypeError",
     message: /'heightCm'.*convertible to cm.*"180 kg"$/,
@@ -112,7 +120,11 @@ Deno.test("indexing from height and weight reuses the BSA formula", () => {
   // Haycock 2.00656 m² (hand computation, J Pediatr 1978) → 120 / 2.00656 = 59.8038 mL/m²
   close(r.outputs.bsaM2, 2.00656, 1e-5, "bsa");
   close(r.outputs.indexed, 59.8038, 1e-3, "indexed");
-  assert.equal(bodySizeIndexCalculation("mL", "haycock"), calc, "cached: one definition per unit and method");
+  assert.equal(
+    bodySizeIndexCalculation("mL", "haycock"),
+    calc,
+    "cached: one definition per unit and method",
+  );
 });
 
 Deno.test("BSA uncertainty by GUM matches the power-law formula of JCGM 100 eq. (12)", () => {
@@ -131,7 +143,11 @@ Deno.test("BSA uncertainty by GUM matches the power-law formula of JCGM 100 eq. 
 });
 
 Deno.test("indexed value carries measurement and BSA uncertainty (GUM and Monte Carlo agree)", () => {
-  const inputs = { measurement: normal(120, 6), heightCm: normal(180, 1), weightKg: normal(80, 0.5) };
+  const inputs = {
+    measurement: normal(120, 6),
+    heightCm: normal(180, 1),
+    weightKg: normal(80, 0.5),
+  };
   const g = indexedWithUncertainty(inputs, { unit: "mL" });
   // (u/60)² = 0.05² + 0.0041818² → u = 3.01047 mL/m² (JCGM 100:2008 eq. (12), hand computation)
   close(g.outputs.indexed.standardUncertainty, 3.01047, 1e-3, "GUM u indexed");

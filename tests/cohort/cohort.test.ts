@@ -16,7 +16,10 @@ import {
 } from "../../mod.ts";
 
 const close = (actual: number, expected: number, tol: number, what: string) =>
-  assert.ok(Math.abs(actual - expected) <= tol, `${what}: expected ${expected} ± ${tol}, got ${actual}`);
+  assert.ok(
+    Math.abs(actual - expected) <= tol,
+    `${what}: expected ${expected} ± ${tol}, got ${actual}`,
+  );
 
 const LVEDD = PHN_2017_MODELS.lvEndDiastolicDimension;
 const ROOT = PHN_2017_MODELS.aorticRootSinus;
@@ -28,7 +31,12 @@ const PEDIATRIC_OPTIONS = {
   weight: "weight",
   measurements: [
     { column: "lvedd", canonicalUnit: LVEDD.unit, range: LVEDD.measurementRange },
-    { column: "aortic root", name: "aorticRoot", canonicalUnit: ROOT.unit, range: ROOT.measurementRange },
+    {
+      column: "aortic root",
+      name: "aorticRoot",
+      canonicalUnit: ROOT.unit,
+      range: ROOT.measurementRange,
+    },
     { column: "lv mass", name: "lvMass", canonicalUnit: MASS.unit, range: MASS.measurementRange },
   ],
 } as const;
@@ -36,7 +44,9 @@ const PEDIATRIC_OPTIONS = {
 Deno.test("demo pediatric clinic list: every row computed, matching the per-patient path", async () => {
   // examples/data/pediatric-clinic.csv is INVENTED demo data; the check is that the columnar path
   // gives exactly what the validated one-patient path gives (same formulas, one definition each).
-  const text = await Deno.readTextFile(new URL("../../examples/data/pediatric-clinic.csv", import.meta.url));
+  const text = await Deno.readTextFile(
+    new URL("../../examples/data/pediatric-clinic.csv", import.meta.url),
+  );
   const table = readCohortCsv(text, PEDIATRIC_OPTIONS);
   assert.equal(table.rowCount, 20);
   const result = computeCohort(table, {
@@ -49,13 +59,19 @@ Deno.test("demo pediatric clinic list: every row computed, matching the per-pati
     const w = table.weightKg.values[i]!;
     assert.equal(result.bsaM2[i], evaluate(bsaHaycock, { heightCm: h, weightKg: w }).outputs.bsaM2);
     const lvedd = table.measurements.lvedd!.values[i]!;
-    assert.equal(result.zScores.lvedd![i], zScore(LVEDD, { measurement: lvedd, heightCm: h, weightKg: w }).zScore);
+    assert.equal(
+      result.zScores.lvedd![i],
+      zScore(LVEDD, { measurement: lvedd, heightCm: h, weightKg: w }).zScore,
+    );
   }
   // mm → cm conversion of the declared header unit: 24 mm = 2.4 cm
   close(table.measurements.lvedd!.values[0]!, 2.4, 1e-12, "mm to cm");
   // Two empty LV mass cells: flagged as not measured, never dropped
   const missing = table.issues.filter((x) => x.kind === "missing");
-  assert.deepEqual(missing.map((x) => [x.line, x.column]), [[2, "lv mass [g]"], [20, "lv mass [g]"]]);
+  assert.deepEqual(missing.map((x) => [x.line, x.column]), [[2, "lv mass [g]"], [
+    20,
+    "lv mass [g]",
+  ]]);
   assert.ok(result.flags[0]! & FLAG_MISSING_MEASUREMENT);
   assert.ok(Number.isNaN(result.zScores.lvMass![0]!));
   // Round trip through CSV: one output line per input row, flags explain the NaN
@@ -77,16 +93,28 @@ Deno.test("column units: header brackets or options, converted to canonical unit
   close(t.weightKg.values[0]!, 176.37 * 0.45359237, 1e-9, "lb → kg");
   const r = computeCohort(t, { bsaMethod: "mosteller" });
   // ≈ 180 cm, 80 kg → Mosteller ≈ 2.00 m² (Mosteller 1987, hand-checkable)
-  close(r.bsaM2[0]!, evaluate(bsaMosteller, { heightCm: 180.000, weightKg: 80.000 }).outputs.bsaM2, 1e-4, "bsa");
-  assert.throws(() => readCohortCsv("height,weight [kg]\n180,80\n", { height: "height", weight: "weight" }), {
-    name: "TypeError",
-    message:
-      "Cohort CSV: column 'height' has no unit; declare it in the header as 'height [cm]' or in the options, got no unit",
-  });
-  assert.throws(() => readCohortCsv("height [mmHg],weight [kg]\n180,80\n", { height: "height", weight: "weight" }), {
-    name: "TypeError",
-    message: `Cohort CSV: column 'height [mmHg]' must be in a unit convertible to cm, got "mmHg"`,
-  });
+  close(
+    r.bsaM2[0]!,
+    evaluate(bsaMosteller, { heightCm: 180.000, weightKg: 80.000 }).outputs.bsaM2,
+    1e-4,
+    "bsa",
+  );
+  assert.throws(
+    () => readCohortCsv("height,weight [kg]\n180,80\n", { height: "height", weight: "weight" }),
+    {
+      name: "TypeError",
+      message:
+        "Cohort CSV: column 'height' has no unit; declare it in the header as 'height [cm]' or in the options, got no unit",
+    },
+  );
+  assert.throws(
+    () =>
+      readCohortCsv("height [mmHg],weight [kg]\n180,80\n", { height: "height", weight: "weight" }),
+    {
+      name: "TypeError",
+      message: `Cohort CSV: column 'height [mmHg]' must be in a unit convertible to cm, got "mmHg"`,
+    },
+  );
 });
 
 Deno.test("bad cells: line-numbered errors naming the column, by class", () => {
@@ -99,17 +127,23 @@ Deno.test("bad cells: line-numbered errors naming the column, by class", () => {
   });
   assert.throws(() => readCohortCsv("id,height [cm],weight [kg]\nC,900,70\n", options), {
     name: "RangeError",
-    message: `Cohort CSV: line 2, column 'height [cm]': expected a number in [15, 280] cm, got "900"`,
+    message:
+      `Cohort CSV: line 2, column 'height [cm]': expected a number in [15, 280] cm, got "900"`,
   });
   assert.throws(() => readCohortCsv("id,height [cm],weight [kg]\nC,180,\n", options), {
     name: "TypeError",
     message: `Cohort CSV: line 2, column 'weight [kg]': expected a number in [0.2, 650] kg, got ""`,
   });
   // Converted units are checked after conversion: 2000 lb = 907 kg is outside the human range
-  assert.throws(() => readCohortCsv("height [cm],weight [lb]\n180,2000\n", { height: "height", weight: "weight" }), {
-    name: "RangeError",
-    message: `Cohort CSV: line 2, column 'weight [lb]': expected a number in [0.2, 650] kg after conversion from lb, got "2000"`,
-  });
+  assert.throws(
+    () =>
+      readCohortCsv("height [cm],weight [lb]\n180,2000\n", { height: "height", weight: "weight" }),
+    {
+      name: "RangeError",
+      message:
+        `Cohort CSV: line 2, column 'weight [lb]': expected a number in [0.2, 650] kg after conversion from lb, got "2000"`,
+    },
+  );
   assert.throws(() => readCohortCsv("id,height [cm],weight [kg]\nA,180\n", options), {
     name: "TypeError",
     message: "Cohort CSV: line 2: expected 3 fields as in the header, got 2",
@@ -118,10 +152,17 @@ Deno.test("bad cells: line-numbered errors naming the column, by class", () => {
     name: "TypeError",
     message: "Cohort CSV: expected a column 'weight' in the header, got 'id', 'height [cm]'",
   });
-  assert.throws(() => readCohortCsv("h [cm],w [kg]\n1,2\n", { height: "h", weight: "w", onInvalid: "drop" } as never), {
-    name: "TypeError",
-    message: /^Cohort CSV: option 'onInvalid' .*, got "drop"$/,
-  });
+  assert.throws(
+    () =>
+      readCohortCsv(
+        "h [cm],w [kg]\n1,2\n",
+        { height: "h", weight: "w", onInvalid: "drop" } as never,
+      ),
+    {
+      name: "TypeError",
+      message: /^Cohort CSV: option 'onInvalid' .*, got "drop"$/,
+    },
+  );
 });
 
 Deno.test("flag policy: invalid rows kept with NaN and a flag; blank and quoted multi-line cells keep line numbers", () => {
@@ -138,7 +179,7 @@ Deno.test("flag policy: invalid rows kept with NaN and a flag; blank and quoted 
   // Mosteller √(180·80/3600) = 2 (hand-checkable)
   assert.equal(r.bsaM2[0], 2);
   const lines = cohortToCsv(r).trim().split("\n");
-    // CSV quoting (RFC 4180): the flag text contains commas and quotes, so it is quoted and "" escaped
+  // CSV quoting (RFC 4180): the flag text contains commas and quotes, so it is quoted and "" escaped
   assert.equal(
     lines.at(-2),
     'B,175,,,"invalid weight [kg] at line 5: expected a number in [0.2, 650] kg, got ""abc"""',
@@ -157,10 +198,14 @@ Deno.test("BSA outside a model's range is flagged per row in the output", () => 
   assert.equal(result.bsaOutsideModel.lvedd![1], 1);
   assert.equal(result.flags[1]! & FLAG_BSA_OUTSIDE_MODEL, FLAG_BSA_OUTSIDE_MODEL);
   assert.equal(result.bsaOutsideModel.lvedd![0], 0);
-  assert.match(out, /lvedd: BSA outside the range of model phn2017\.lvEndDiastolicDimension \[0\.15, 2\.4\] m\^2/);
+  assert.match(
+    out,
+    /lvedd: BSA outside the range of model phn2017\.lvEndDiastolicDimension \[0\.15, 2\.4\] m\^2/,
+  );
   assert.throws(() => computeCohort(result.table, { zScores: { lvedd: MASS } }), {
     name: "TypeError",
-    message: "Cohort: measurement 'lvedd' must be read in the unit of model 'phn2017.lvMass' (g), got cm",
+    message:
+      "Cohort: measurement 'lvedd' must be read in the unit of model 'phn2017.lvMass' (g), got cm",
   });
   assert.throws(() => computeCohort(result.table, { index: ["lvesd"] }), {
     name: "TypeError",

@@ -10,7 +10,10 @@ import {
 } from "../../mod.ts";
 
 const close = (actual: number, expected: number, tol: number, what: string) =>
-  assert.ok(Math.abs(actual - expected) <= tol, `${what}: expected ${expected} ± ${tol}, got ${actual}`);
+  assert.ok(
+    Math.abs(actual - expected) <= tol,
+    `${what}: expected ${expected} ± ${tol}, got ${actual}`,
+  );
 
 const option = (r: AliasingCheck, remedy: AliasingRemedy) => {
   const o = r.options.find((x) => x.remedy === remedy);
@@ -29,11 +32,21 @@ Deno.test("Nyquist limit at a depth: c²/(8·d·f0) and deeper or higher-frequen
   close(other.outputs.nyquistVelocity, r.outputs.nyquistVelocity, 1e-12, "d·f constant");
   // Consistency with the Nyquist calculation at that PRF.
   const direct = evaluate(nyquistVelocity, { prfHz: r.outputs.maxPrfHz, transmitFrequencyMHz: 2 });
-  close(direct.outputs.nyquistVelocity, r.outputs.nyquistVelocity, 1e-12, "same as nyquistVelocity");
+  close(
+    direct.outputs.nyquistVelocity,
+    r.outputs.nyquistVelocity,
+    1e-12,
+    "same as nyquistVelocity",
+  );
 });
 
 Deno.test("aliasing check: 1.5 m/s at 2 MHz, 4 kHz, 15 cm aliases; the remedies and their limits", () => {
-  const r = aliasingCheck({ velocity: 1.5, prfHz: 4000, transmitFrequencyMHz: 2, sampleDepthCm: 15 });
+  const r = aliasingCheck({
+    velocity: 1.5,
+    prfHz: 4000,
+    transmitFrequencyMHz: 2,
+    sampleDepthCm: 15,
+  });
   // Current limit 2000·1540/(2·2e6) = 0.77 m/s (hand check from the Doppler equation).
   close(r.nyquistVelocity, 0.77, 1e-12, "current");
   assert.equal(r.aliases, true);
@@ -87,7 +100,12 @@ Deno.test("aliasing check: a given lower frequency reports its own Nyquist limit
 
 Deno.test("aliasing check: an aortic-stenosis jet of 5 m/s needs continuous-wave", () => {
   // At 2.5 MHz, 14 cm, PRF at its limit: Nyquist 1540²/(8·0.14·2.5e6) = 0.847 m/s (hand check).
-  const r = aliasingCheck({ velocity: 5, prfHz: 5500, transmitFrequencyMHz: 2.5, sampleDepthCm: 14 });
+  const r = aliasingCheck({
+    velocity: 5,
+    prfHz: 5500,
+    transmitFrequencyMHz: 2.5,
+    sampleDepthCm: 14,
+  });
   assert.equal(r.aliases, true);
   assert.equal(option(r, "maximumPrf").resolves, false);
   assert.equal(option(r, "baselineShift").resolves, false);
@@ -100,26 +118,45 @@ Deno.test("aliasing check: an aortic-stenosis jet of 5 m/s needs continuous-wave
 });
 
 Deno.test("aliasing check: a velocity under the limit does not alias", () => {
-  const r = aliasingCheck({ velocity: "50 cm/s", prfHz: 4000, transmitFrequencyMHz: 2, sampleDepthCm: 15 });
+  const r = aliasingCheck({
+    velocity: "50 cm/s",
+    prfHz: 4000,
+    transmitFrequencyMHz: 2,
+    sampleDepthCm: 15,
+  });
   assert.equal(r.aliases, false);
   assert.equal(r.velocity, 0.5);
   // No shallower depth is needed: the option keeps the current depth.
   assert.equal(option(r, "shallowerSampleVolume").setting!.value, 15);
   assert.ok(r.options.every((o) => o.resolves));
   // Zero velocity never aliases.
-  assert.equal(aliasingCheck({ velocity: 0, prfHz: 4000, transmitFrequencyMHz: 2, sampleDepthCm: 15 }).aliases, false);
+  assert.equal(
+    aliasingCheck({ velocity: 0, prfHz: 4000, transmitFrequencyMHz: 2, sampleDepthCm: 15 }).aliases,
+    false,
+  );
 });
 
 Deno.test("aliasing check: angle raises the Nyquist limit by 1/cos θ", () => {
   // At 60° the limit doubles (cos 60° = 0.5, hand check).
-  const r = aliasingCheck({ velocity: 1, prfHz: 4000, transmitFrequencyMHz: 2, sampleDepthCm: 15, angleDeg: 60 });
+  const r = aliasingCheck({
+    velocity: 1,
+    prfHz: 4000,
+    transmitFrequencyMHz: 2,
+    sampleDepthCm: 15,
+    angleDeg: 60,
+  });
   close(r.nyquistVelocity, 1.54, 1e-12, "60°");
   assert.equal(r.aliases, false);
   assert.equal(r.flags.length, 1); // 60° is outside the usual ≤ 20° practice
 });
 
 Deno.test("aliasing check displays a table of remedies in notebooks", () => {
-  const r = aliasingCheck({ velocity: 1.5, prfHz: 4000, transmitFrequencyMHz: 2, sampleDepthCm: 15 });
+  const r = aliasingCheck({
+    velocity: 1.5,
+    prfHz: 4000,
+    transmitFrequencyMHz: 2,
+    sampleDepthCm: 15,
+  });
   const bundle = r[JUPYTER_DISPLAY]();
   assert.match(String(bundle["text/plain"]), /1\.5 m\/s aliases \(Nyquist limit 0\.77 m\/s\)/);
   assert.match(String(bundle["text/plain"]), /continuousWave\s+no limit\s+yes/);

@@ -10,7 +10,10 @@ import {
 } from "../../mod.ts";
 
 const close = (actual: number, expected: number, tol: number, what: string) =>
-  assert.ok(Math.abs(actual - expected) <= tol, `${what}: expected ${expected} ± ${tol}, got ${actual}`);
+  assert.ok(
+    Math.abs(actual - expected) <= tol,
+    `${what}: expected ${expected} ± ${tol}, got ${actual}`,
+  );
 
 Deno.test("attenuation: 0.5 dB/cm/MHz soft-tissue rule of thumb is the default", () => {
   // 0.5 dB/cm/MHz soft-tissue rule of thumb (common practice; Kremkau 2015 ch. 2).
@@ -58,7 +61,10 @@ Deno.test("acoustic impedance Z = ρc reproduces the published table impedances"
       densityKgPerM3: row.densityKgPerM3,
       soundSpeedMps: row.soundSpeedMps,
     }).outputs.impedanceMRayl;
-    assert.ok(Math.abs(z / row.impedanceMRayl - 1) < 0.03, `${row.name}: ${z} vs ${row.impedanceMRayl}`);
+    assert.ok(
+      Math.abs(z / row.impedanceMRayl - 1) < 0.03,
+      `${row.name}: ${z} vs ${row.impedanceMRayl}`,
+    );
   }
   // Soft tissue 1050 kg/m³ × 1540 m/s = 1.617 MRayl ≈ 1.62 (hand check; Bushberg, from memory).
   const z = evaluate(acousticImpedance, { densityKgPerM3: "1.05 g/cm^3" });

@@ -14,7 +14,10 @@ import {
 } from "../../mod.ts";
 
 const close = (actual: number, expected: number, tol: number, what: string) =>
-  assert.ok(Math.abs(actual - expected) <= tol, `${what}: expected ${expected} ± ${tol}, got ${actual}`);
+  assert.ok(
+    Math.abs(actual - expected) <= tol,
+    `${what}: expected ${expected} ± ${tol}, got ${actual}`,
+  );
 
 Deno.test("default speed of sound is the soft-tissue 1540 m/s", () => {
   // Soft-tissue c ≈ 1540 m/s (common practice; Kremkau 2015 ch. 2, from memory).
@@ -99,7 +102,10 @@ Deno.test("angle correction: cos θ error under about 6 % below 20°", () => {
   close(at60.outputs.trueVelocity, 4, 1e-12, "60° true velocity");
   // 60° is outside the usual ≤ 20° practice: flagged, not rejected (common practice).
   assert.equal(at60.flags.length, 1);
-  assert.match(at60.flags[0]!, /'angleDeg' = 60 deg lies outside the validated range \[0, 20\] deg/);
+  assert.match(
+    at60.flags[0]!,
+    /'angleDeg' = 60 deg lies outside the validated range \[0, 20\] deg/,
+  );
   // θ = 0 leaves the velocity unchanged.
   const at0 = evaluate(angleCorrectedVelocity, { measuredVelocity: 2.5, angleDeg: 0 });
   assert.equal(at0.outputs.trueVelocity, 2.5);

@@ -43,7 +43,8 @@ Deno.test("zero or negative frequency is a RangeError naming the field and (0, 1
   for (const f of [0, -2, "-2 MHz"]) {
     assert.throws(() => evaluate(velocityFromDopplerShift, { ...base, transmitFrequencyMHz: f }), {
       name: "RangeError",
-      message: /^Velocity from Doppler shift: expected 'transmitFrequencyMHz' in \(0, 100\] MHz, got -?[02]$/,
+      message:
+        /^Velocity from Doppler shift: expected 'transmitFrequencyMHz' in \(0, 100\] MHz, got -?[02]$/,
     });
   }
   assert.throws(() => evaluate(wavelengthAndPeriod, { transmitFrequencyMHz: 0 }), {
@@ -54,20 +55,30 @@ Deno.test("zero or negative frequency is a RangeError naming the field and (0, 1
     name: "RangeError",
     message: /^Nyquist velocity limit: expected 'prfHz' in \(0, 1000000\] Hz, got 0$/,
   });
-  assert.throws(() => evaluate(mechanicalIndex, { peakRarefactionalPressureMPa: 1, transmitFrequencyMHz: -1 }), {
-    name: "RangeError",
-    message: /^Mechanical index: expected 'transmitFrequencyMHz' in \(0, 100\] MHz, got -1$/,
-  });
+  assert.throws(
+    () => evaluate(mechanicalIndex, { peakRarefactionalPressureMPa: 1, transmitFrequencyMHz: -1 }),
+    {
+      name: "RangeError",
+      message: /^Mechanical index: expected 'transmitFrequencyMHz' in \(0, 100\] MHz, got -1$/,
+    },
+  );
 });
 
 Deno.test("a wrong unit or type is a TypeError naming the field", () => {
-  assert.throws(() => evaluate(velocityFromDopplerShift, { ...base, transmitFrequencyMHz: "2 cm" }), {
-    name: "TypeError",
-    message: /Velocity from Doppler shift: 'transmitFrequencyMHz': expected a quantity convertible to MHz, got "2 cm"/,
-  });
+  assert.throws(
+    () => evaluate(velocityFromDopplerShift, { ...base, transmitFrequencyMHz: "2 cm" }),
+    {
+      name: "TypeError",
+      message:
+        /Velocity from Doppler shift: 'transmitFrequencyMHz': expected a quantity convertible to MHz, got "2 cm"/,
+    },
+  );
   assert.throws(
     () => evaluate(velocityFromDopplerShift, { ...base, angleDeg: [] as unknown as number }),
-    { name: "TypeError", message: /expected 'angleDeg' as a number or a quantity string, got an array/ },
+    {
+      name: "TypeError",
+      message: /expected 'angleDeg' as a number or a quantity string, got an array/,
+    },
   );
   assert.throws(
     () => evaluate(velocityFromDopplerShift, { dopplerShiftHz: 3000, angleDeg: 0 } as never),
@@ -82,7 +93,10 @@ Deno.test("negative velocity where a magnitude is required is a RangeError", () 
   });
   assert.throws(
     () => aliasingCheck({ velocity: -1, prfHz: 4000, transmitFrequencyMHz: 2, sampleDepthCm: 15 }),
-    { name: "RangeError", message: /^Aliasing check: expected 'velocity' in \[0, 20\] m\/s, got -1$/ },
+    {
+      name: "RangeError",
+      message: /^Aliasing check: expected 'velocity' in \[0, 20\] m\/s, got -1$/,
+    },
   );
 });
 
@@ -108,7 +122,10 @@ Deno.test("depth beyond what the PRF allows is a RangeError naming prfHz and the
 
 Deno.test("plain functions reject unknown keys, non-objects and a 'lower' frequency that is not lower", () => {
   assert.throws(
-    () => aliasingCheck({ velocity: 1, prfHz: 4000, transmitFrequencyMHz: 2, sampleDepthCm: 15, depth: 3 } as never),
+    () =>
+      aliasingCheck(
+        { velocity: 1, prfHz: 4000, transmitFrequencyMHz: 2, sampleDepthCm: 15, depth: 3 } as never,
+      ),
     { name: "TypeError", message: /^Aliasing check: unknown input 'depth'/ },
   );
   assert.throws(() => aliasingCheck(null as never), {
@@ -139,6 +156,9 @@ Deno.test("plain functions reject unknown keys, non-objects and a 'lower' freque
         sampleDepthCm: 15,
         lowerTransmitFrequencyMHz: 0,
       }),
-    { name: "RangeError", message: /expected 'lowerTransmitFrequencyMHz' in \(0, 100\] MHz, got 0$/ },
+    {
+      name: "RangeError",
+      message: /expected 'lowerTransmitFrequencyMHz' in \(0, 100\] MHz, got 0$/,
+    },
   );
 });

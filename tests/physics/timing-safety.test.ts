@@ -4,15 +4,18 @@ import {
   deratedPressure,
   evaluate,
   frameRate,
+  maximumPrfForDepth,
   MECHANICAL_INDEX_LIMIT,
   mechanicalIndex,
-  maximumPrfForDepth,
   rangeAmbiguity,
   unambiguousDepthForPrf,
 } from "../../mod.ts";
 
 const close = (actual: number, expected: number, tol: number, what: string) =>
-  assert.ok(Math.abs(actual - expected) <= tol, `${what}: expected ${expected} ± ${tol}, got ${actual}`);
+  assert.ok(
+    Math.abs(actual - expected) <= tol,
+    `${what}: expected ${expected} ± ${tol}, got ${actual}`,
+  );
 
 Deno.test("PRF limit for 15 cm ≈ 5.1 kHz and 13 µs per cm round trip", () => {
   // PRF for 15 cm ≈ 5.1 kHz (hand check from c/2d = 1540/0.30).
@@ -22,15 +25,30 @@ Deno.test("PRF limit for 15 cm ≈ 5.1 kHz and 13 µs per cm round trip", () => 
   const perCm = evaluate(maximumPrfForDepth, { depthCm: 1 }).outputs.roundTripTimeUs;
   close(perCm, 13, 0.05, "13 µs/cm");
   // Deeper → lower PRF limit, inversely proportional.
-  close(evaluate(maximumPrfForDepth, { depthCm: "300 mm" }).outputs.maxPrfHz, r.outputs.maxPrfHz / 2, 1e-9, "30 cm");
+  close(
+    evaluate(maximumPrfForDepth, { depthCm: "300 mm" }).outputs.maxPrfHz,
+    r.outputs.maxPrfHz / 2,
+    1e-9,
+    "30 cm",
+  );
 });
 
 Deno.test("unambiguous depth inverts the PRF limit", () => {
   // d = c/(2·PRF): 5 kHz → 15.4 cm (hand check).
-  close(evaluate(unambiguousDepthForPrf, { prfHz: 5000 }).outputs.unambiguousDepthCm, 15.4, 1e-9, "5 kHz");
+  close(
+    evaluate(unambiguousDepthForPrf, { prfHz: 5000 }).outputs.unambiguousDepthCm,
+    15.4,
+    1e-9,
+    "5 kHz",
+  );
   for (const depthCm of [2, 7.5, 16, 24]) {
     const prf = evaluate(maximumPrfForDepth, { depthCm }).outputs.maxPrfHz;
-    close(evaluate(unambiguousDepthForPrf, { prfHz: prf }).outputs.unambiguousDepthCm, depthCm, 1e-9, "inverse");
+    close(
+      evaluate(unambiguousDepthForPrf, { prfHz: prf }).outputs.unambiguousDepthCm,
+      depthCm,
+      1e-9,
+      "inverse",
+    );
   }
 });
 
@@ -62,7 +80,11 @@ Deno.test("frame rate follows the 77,000 cm/s rule and scales with focal zones a
   const narrow = evaluate(frameRate, { depthCm: 16, sectorAngleDeg: 40, lineDensityPerDeg: 1.6 });
   close(narrow.outputs.frameRateHz, 2 * r.outputs.frameRateHz, 1e-9, "half sector");
   // Line density accepts its label.
-  const labelled = evaluate(frameRate, { depthCm: 16, sectorAngleDeg: 80, lineDensityPerDeg: "1.6 lines/deg" });
+  const labelled = evaluate(frameRate, {
+    depthCm: 16,
+    sectorAngleDeg: 80,
+    lineDensityPerDeg: "1.6 lines/deg",
+  });
   assert.equal(labelled.outputs.linesPerFrame, 128);
 });
 
@@ -90,14 +112,18 @@ Deno.test("range ambiguity: sample volumes spaced by c/(2·PRF)", () => {
   assert.deepEqual(edge.sampleVolumeDepthsCm.map((d) => Number(d.toFixed(6))), [7.7, 15.4]);
   assert.throws(() => rangeAmbiguity({ sampleDepthCm: 12, prfHz: 10000, imagingDepthCm: 8 }), {
     name: "RangeError",
-    message: /Range ambiguity: expected 'imagingDepthCm' in \[12, 50\] cm \(at least the sample depth\), got 8/,
+    message:
+      /Range ambiguity: expected 'imagingDepthCm' in \[12, 50\] cm \(at least the sample depth\), got 8/,
   });
 });
 
 Deno.test("mechanical index: hand values, the 1.9 limit and the clinical caution", () => {
   // MI = p_r,derated/√f (Apfel & Holland 1991, Ultrasound Med Biol 17:179; AIUM/NEMA UD 3):
   // 2.6 MPa at 1.87 MHz → 1.901 (hand check).
-  const r = evaluate(mechanicalIndex, { peakRarefactionalPressureMPa: 2.6, transmitFrequencyMHz: 1.87 });
+  const r = evaluate(mechanicalIndex, {
+    peakRarefactionalPressureMPa: 2.6,
+    transmitFrequencyMHz: 1.87,
+  });
   close(r.outputs.mechanicalIndex, 2.6 / Math.sqrt(1.87), 1e-12, "MI");
   close(r.outputs.mechanicalIndex, 1.901, 0.001, "MI value");
   // Regulatory limit 1.9 for cardiac is common practice (FDA Track 3, from memory).
@@ -106,7 +132,10 @@ Deno.test("mechanical index: hand values, the 1.9 limit and the clinical caution
   assert.ok(r.cautions.some((c) => /1\.9/.test(c)));
   assert.ok(r.cautions.includes(CLINICAL_CAUTION));
   // Unit conversion: "1500 kPa" = 1.5 MPa.
-  const kpa = evaluate(mechanicalIndex, { peakRarefactionalPressureMPa: "1500 kPa", transmitFrequencyMHz: 2.25 });
+  const kpa = evaluate(mechanicalIndex, {
+    peakRarefactionalPressureMPa: "1500 kPa",
+    transmitFrequencyMHz: 2.25,
+  });
   close(kpa.outputs.mechanicalIndex, 1, 1e-12, "kPa");
 });
 

@@ -8,7 +8,10 @@ import {
 } from "../../mod.ts";
 
 const close = (actual: number, expected: number, tol: number, what: string) =>
-  assert.ok(Math.abs(actual - expected) <= tol, `${what}: expected ${expected} ± ${tol}, got ${actual}`);
+  assert.ok(
+    Math.abs(actual - expected) <= tol,
+    `${what}: expected ${expected} ± ${tol}, got ${actual}`,
+  );
 
 Deno.test("wavelength ≈ 0.77 mm at 2 MHz and ≈ 0.13 mm at 12 MHz in soft tissue", () => {
   // λ ≈ 0.77 mm at 2 MHz and ≈ 0.13 mm at 12 MHz (common practice; Kremkau 2015 ch. 2).
@@ -78,7 +81,11 @@ Deno.test("lateral resolution matches the diffraction width of a line aperture",
   // Rule of thumb "lateral resolution ≈ λ × F-number" (common practice) agrees within 15 %.
   assert.ok(Math.abs(r.outputs.beamWidthMm / (lambda * 5) - 1) < 0.15);
   // Higher frequency → narrower beam (common practice).
-  const r7 = evaluate(lateralResolution, { transmitFrequencyMHz: 7, apertureMm: 20, focalDepthCm: 10 });
+  const r7 = evaluate(lateralResolution, {
+    transmitFrequencyMHz: 7,
+    apertureMm: 20,
+    focalDepthCm: 10,
+  });
   close(r7.outputs.beamWidthMm, r.outputs.beamWidthMm / 2, 1e-12, "halves at double frequency");
 });
 
@@ -89,7 +96,12 @@ Deno.test("near-field length D²/(4λ) and far-field divergence", () => {
   close(r.outputs.nearFieldLengthCm, 8.117, 1e-3, "near field");
   // sin θ = 1.22·λ/D (first zero of the Airy pattern; 1.22 = 3.8317/π, the first zero of J1
   // divided by π, standard table of Bessel zeros): 1.22·0.308/10 → 2.154°.
-  close(r.outputs.divergenceHalfAngleDeg, (Math.asin(0.037576) * 180) / Math.PI, 1e-3, "divergence");
+  close(
+    r.outputs.divergenceHalfAngleDeg,
+    (Math.asin(0.037576) * 180) / Math.PI,
+    1e-3,
+    "divergence",
+  );
   close(3.8317 / Math.PI, 1.22, 0.0005, "Airy constant");
   // Larger aperture or higher frequency → longer near field and less divergence (common
   // practice, Kremkau 2015 ch. 3).

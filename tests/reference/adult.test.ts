@@ -22,10 +22,19 @@ Deno.test("Lang 2015 Table 1 LV dimensions and indexed volumes by sex (from memo
     assert.ok(Math.abs(r.normal.upper! - (r.mean! + 2 * r.sd!)) < 1e-9, r.parameter);
   }
   // Table 1: LVEDV/BSA men 54 ± 10 (34–74), women 45 ± 8 (29–61) mL/m²
-  assert.deepEqual(adultReferenceRow("lvEndDiastolicVolumeIndex", "male").normal, { lower: 34, upper: 74 });
-  assert.deepEqual(adultReferenceRow("lvEndDiastolicVolumeIndex", "female").normal, { lower: 29, upper: 61 });
+  assert.deepEqual(adultReferenceRow("lvEndDiastolicVolumeIndex", "male").normal, {
+    lower: 34,
+    upper: 74,
+  });
+  assert.deepEqual(adultReferenceRow("lvEndDiastolicVolumeIndex", "female").normal, {
+    lower: 29,
+    upper: 61,
+  });
   // Table 1: LVESV/BSA men 11–31, women 8–24 mL/m²
-  assert.deepEqual(adultReferenceRow("lvEndSystolicVolumeIndex", "female").normal, { lower: 8, upper: 24 });
+  assert.deepEqual(adultReferenceRow("lvEndSystolicVolumeIndex", "female").normal, {
+    lower: 8,
+    upper: 24,
+  });
 });
 
 Deno.test("Lang 2015 Table 2 LVEF partitions by sex (from memory)", () => {
@@ -66,7 +75,10 @@ Deno.test("Lang 2015 Table 2 LA volume index partitions, both sexes (from memory
 
 Deno.test("Lang 2015 Table 6 LV mass index and RWT; RV basal diameter and TAPSE (from memory)", () => {
   // Table 6 linear method: LV mass/BSA men 49–115, women 43–95 g/m²
-  assert.deepEqual(adultReferenceRow("lvMassIndexLinear", "male").normal, { lower: 49, upper: 115 });
+  assert.deepEqual(adultReferenceRow("lvMassIndexLinear", "male").normal, {
+    lower: 49,
+    upper: 115,
+  });
   assert.equal(classifyAdult("lvMassIndexLinear", "female", 100).class, "above normal range");
   assert.equal(classifyAdult("lvMassIndexLinear", "male", 100).class, "normal");
   // Table 6: RWT upper limit 0.42 for both sexes
@@ -89,7 +101,8 @@ Deno.test("adult classification: bad input names the field and value", () => {
   });
   assert.throws(() => classifyAdult("lvEjectionFractio", "male", 55), {
     name: "TypeError",
-    message: /^Adult reference: expected 'parameter' in lvInternalDiameterDiastole, .*, got "lvEjectionFractio"$/,
+    message:
+      /^Adult reference: expected 'parameter' in lvInternalDiameterDiastole, .*, got "lvEjectionFractio"$/,
   });
   assert.throws(() => classifyAgainstRow(adultReferenceRow("tapse", "male"), NaN), {
     name: "RangeError",

@@ -18,7 +18,10 @@ import {
 } from "../../mod.ts";
 
 const close = (actual: number, expected: number, tol: number, what: string) =>
-  assert.ok(Math.abs(actual - expected) <= tol, `${what}: expected ${expected} ± ${tol}, got ${actual}`);
+  assert.ok(
+    Math.abs(actual - expected) <= tol,
+    `${what}: expected ${expected} ± ${tol}, got ${actual}`,
+  );
 
 // PHN coefficients (α, M, S) as listed in issue 4, attributed to Lopez L et al., Circ Cardiovasc
 // Imaging 2017;10:e006979; the Z definition Z = (X/BSA^α − M)/S is the paper's.
@@ -43,7 +46,13 @@ Deno.test("PHN 2017 table holds the coefficients of issue 4 exactly, BSA by Hayc
   assert.equal(Object.keys(PHN_2017_MODELS).length, ISSUE_4_TABLE.length);
   for (const [key, alpha, mean, sd, unit] of ISSUE_4_TABLE) {
     const m = PHN_2017_MODELS[key];
-    assert.deepEqual([m.alpha, m.mean, m.sd, m.unit, m.bsaMethod], [alpha, mean, sd, unit, "haycock"], key);
+    assert.deepEqual([m.alpha, m.mean, m.sd, m.unit, m.bsaMethod], [
+      alpha,
+      mean,
+      sd,
+      unit,
+      "haycock",
+    ], key);
     assert.equal(m.source.doi, "10.1161/CIRCIMAGING.117.006979");
   }
 });
@@ -53,9 +62,24 @@ Deno.test("PHN: X = M·BSA^α gives Z = 0 and X = (M + 2S)·BSA^α gives Z = 2 (
     const model = PHN_2017_MODELS[key];
     for (const bsa of [0.3, 0.8, 1.5, 2.1]) {
       // Lopez 2017: Z = (X/BSA^α − M)/S → exact by construction of X (hand-checkable)
-      close(zScore(model, { measurement: mean * bsa ** alpha, bsaM2: bsa }).zScore, 0, 1e-12, `${key} Z=0`);
-      close(zScore(model, { measurement: (mean + 2 * sd) * bsa ** alpha, bsaM2: bsa }).zScore, 2, 1e-12, `${key} Z=2`);
-      close(zScore(model, { measurement: (mean - 2 * sd) * bsa ** alpha, bsaM2: bsa }).zScore, -2, 1e-12, `${key} Z=-2`);
+      close(
+        zScore(model, { measurement: mean * bsa ** alpha, bsaM2: bsa }).zScore,
+        0,
+        1e-12,
+        `${key} Z=0`,
+      );
+      close(
+        zScore(model, { measurement: (mean + 2 * sd) * bsa ** alpha, bsaM2: bsa }).zScore,
+        2,
+        1e-12,
+        `${key} Z=2`,
+      );
+      close(
+        zScore(model, { measurement: (mean - 2 * sd) * bsa ** alpha, bsaM2: bsa }).zScore,
+        -2,
+        1e-12,
+        `${key} Z=-2`,
+      );
     }
   }
 });
@@ -125,7 +149,8 @@ Deno.test("Z-score bad input: clear errors naming field, range and value", () =>
   const model = PHN_2017_MODELS.aorticAnnulus;
   assert.throws(() => zScore(model, { measurement: -1, bsaM2: 1 }), {
     name: "RangeError",
-    message: "Z-score: Aortic valve annulus (phn2017.aorticAnnulus): expected 'measurement' in (0, 15] cm, got -1",
+    message:
+      "Z-score: Aortic valve annulus (phn2017.aorticAnnulus): expected 'measurement' in (0, 15] cm, got -1",
   });
   assert.throws(() => zScore(model, { measurement: 1.5, bsaM2: 0 }), {
     name: "RangeError",
@@ -158,7 +183,12 @@ const SYNTHETIC_LOG_MODEL: LogPolynomialBsaModel = defineZScoreModel({
   bsaRange: { min: 0.2, max: 2 },
   bsaRangeNote: "synthetic",
   measurementRange: { min: 0, max: 15, minExclusive: true },
-  source: { authors: "none", year: 2026, title: "Synthetic test model", publication: "not published" },
+  source: {
+    authors: "none",
+    year: 2026,
+    title: "Synthetic test model",
+    publication: "not published",
+  },
   provenance: "SYNTHETIC: invented for a unit test; not a published model",
   synthetic: true,
   family: "logPolynomialBsa",
@@ -170,12 +200,21 @@ Deno.test("extensible models: a synthetic log-polynomial model evaluates and com
   // Hand computation of the family formula at BSA 1: mean ln X = 0.3 + 0.6 − 0.1 = 0.8,
   // SD = 0.09; X = e^(0.8 + 0.09) = e^0.89 gives Z = 1
   close(zScoreFormula(SYNTHETIC_LOG_MODEL, Math.exp(0.89), 1), 1, 1e-12, "synthetic Z");
-  close(measurementAtZ(SYNTHETIC_LOG_MODEL, -2, 1), Math.exp(0.8 - 0.18), 1e-12, "synthetic X at −2");
+  close(
+    measurementAtZ(SYNTHETIC_LOG_MODEL, -2, 1),
+    Math.exp(0.8 - 0.18),
+    1e-12,
+    "synthetic X at −2",
+  );
   const rows = compareZScoreModels(
     [PHN_2017_MODELS.aorticRootSinus, SYNTHETIC_LOG_MODEL, PHN_2017_MODELS.lvMass],
     { measurement: 2.2, heightCm: 120, weightKg: 22 },
   );
-  assert.deepEqual(rows.map((r) => r.modelId), ["phn2017.aorticRootSinus", "synthetic.aorticRootLog", "phn2017.lvMass"]);
+  assert.deepEqual(rows.map((r) => r.modelId), [
+    "phn2017.aorticRootSinus",
+    "synthetic.aorticRootLog",
+    "phn2017.lvMass",
+  ]);
   assert.ok(Number.isFinite(rows[0]!.zScore) && Number.isFinite(rows[1]!.zScore));
   // The LV mass model is in g: a length cannot be compared; the row says why instead of failing
   assert.ok(Number.isNaN(rows[2]!.zScore));
@@ -205,11 +244,17 @@ Deno.test("Z with uncertainty: GUM by hand, Monte Carlo agrees, BSA uncertainty 
   close(g.probabilityAbovePlus2, 0.5, 1e-9, "P(Z>2) at Z=2");
   // Measurement and BSA: ∂Z/∂BSA = −α·X·BSA^(−α−1)/S = −0.5·1.76/0.14 = −6.285714 at BSA 1;
   // u(BSA) = 0.03 → contribution 0.188571; u(Z) = √(0.357143² + 0.188571²) = 0.403871 (by hand)
-  const gb = zScoreWithUncertainty(model, { measurement: normal(1.76, 0.05), bsaM2: normal(1, 0.03) });
+  const gb = zScoreWithUncertainty(model, {
+    measurement: normal(1.76, 0.05),
+    bsaM2: normal(1, 0.03),
+  });
   close(gb.standardUncertainty, 0.403871, 1e-4, "u(Z) with BSA");
   close(gb.shares.bsaM2!, 0.188571 ** 2 / 0.403871 ** 2, 1e-3, "BSA share");
   // JCGM 101 §8: Monte Carlo agrees with GUM for a nearly linear model
-  const mc = zScoreWithUncertainty(model, { measurement: normal(1.76, 0.05), bsaM2: normal(1, 0.03) }, {
+  const mc = zScoreWithUncertainty(model, {
+    measurement: normal(1.76, 0.05),
+    bsaM2: normal(1, 0.03),
+  }, {
     method: "monteCarlo",
     trials: 200_000,
     seed: 3,
@@ -223,6 +268,13 @@ Deno.test("Z with uncertainty: GUM by hand, Monte Carlo agrees, BSA uncertainty 
     weightKg: normal(22, 0.2),
   });
   assert.ok(hw.shares.heightCm! > 0 && hw.shares.weightKg! > 0);
-  const big = zScoreWithUncertainty(model, { measurement: normal(2.6, 0.05), bsaM2: normal(2.7, 0.03) });
-  assert.ok(big.flags.some((f) => /outside the range the model 'phn2017\.aorticAnnulus' was built on/.test(f)));
+  const big = zScoreWithUncertainty(model, {
+    measurement: normal(2.6, 0.05),
+    bsaM2: normal(2.7, 0.03),
+  });
+  assert.ok(
+    big.flags.some((f) =>
+      /outside the range the model 'phn2017\.aorticAnnulus' was built on/.test(f)
+    ),
+  );
 });

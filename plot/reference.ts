@@ -1,0 +1,426 @@
+/**
+ * Normal-range charts: a measurement against BSA with the mean and ±1/±2/±3 SD bands of a
+ * pediatric Z-score model, or a value against the sex-specific limit lines of the adult
+ * reference table; one patient or a cohort as points with uncertainty error bars.
+ *
+ * @module
+ */
+import {
+  ADULT_REFERENCE_LANG_2015,
+  type AdultReferenceRow,
+  adultReferenceRow,
+} from "../calc/reference/adult.ts";
+import { measurementFormula, type ZScoreModel } from "../calc/reference/zscore.ts";
+import { bsaCalculation } from "../calc/body/bsa.ts";
+import type { CohortResult } from "../calc/cohort/compute.ts";
+import { Chart } from "./chart.ts";
+
+/** One patient on a pediatric normal-range chart. */
+export interface ReferenceChartPoint {
+  /** BSA, m² (by the model's BSA formula). */
+  readonly bsaM2: number;
+  /** Measurement in the model's unit. */
+  readonly value: number;
+  /** Standard uncertainty of the measurement (drawn as ±k·u). */
+  readonly valueUncertainty?: number;
+  /** Standard uncertainty of the BSA (drawn as ±k·u). */
+  readonly bsaUncertainty?: number;
+  /** Label shown in the tooltip. */
+  readonly label?: string;
+}
+
+/** Options of {@linkcode zScoreChart}. */
+export interface ZScoreChartOptions {
+  /** Patients to plot. */
+  readonly points?: readonly ReferenceChartPoint[];
+  /** BSA axis range, m². @default the model's BSA range, widened to include the points */
+  readonly bsaRange?: readonly [number, number];
+  /** Coverage factor k of the error bars (±k·u). @default 2 */
+  readonly coverageFactor?: number;
+  /** Number of BSA grid points of the bands. @default 121 */
+  readonly gridPoints?: number;
+  /** Chart title. @default the model's measurement */
+  readonly title?: string;
+  /** Width in pixels. @default 520 */
+  readonly width?: number;
+  /** Height in pixels. @default 360 */
+  readonly height?: number;
+}
+
+function checkPoints(where: string, points: readonly ReferenceChartPoint[]): void {
+  points.forEach((p, i) => {
+    for (const key of ["bsaM2", "value"] as const) {
+      if (typeof p?.[key] !== "number" || !Number.isFinite(p[key])) {
+        throw new TypeError(
+          `${where}: expected point ${i} '${key}' as a finite number, got ${p?.[key]}`,
+        );
+      }
+    }
+    for (const key of ["valueUncertainty", "bsaUncertainty"] as const) {
+      const u = p[key];
+      if (u !== undefined && !(u >= 0)) {
+        throw new RangeError(`${where}: expected point ${i} '${key}' >= 0, got ${u}`);
+      }
+    }
+  });
+}
+
+/**
+ * Pediatric normal-range chart: the model's mean (Z = 0) against BSA with shaded ±1, ±2 and ±3
+ * SD bands (the measurements at those Z-scores, from the model's one Z formula), dashed lines at
+ * the model's BSA range, and patients as points with ±k·u error bars in both directions.
+ *
+ * @param model The Z-score model.
+ * @param options Points, axis range, coverage factor, size.
+ * @returns The chart (vega-lite spec; `await chart.toSVG()` for a static SVG).
+ * @throws {TypeError} For a point without a finite BSA or value.
+ * @throws {RangeError} For a negative uncertainty, an empty BSA range or k ≤ 0.
+ *
+ * @example
+ * ```ts
+ * import { PHN_2017_MODELS } from "@sonorigor/sonorigor";
+ * import { zScoreChart } from "@sonorigor/sonorigor/plot";
+ * import assert from "node:assert/strict";
+ * const chart = zScoreChart(PHN_2017_MODELS.lvEndDiastolicDimension, {
+ *   points: [{ bsaM2: 0.85, value: 3.9, valueUncertainty: 0.1, bsaUncertainty: 0.02, label: "P1" }],
+ * });
+ * assert.match(await chart.toSVG(), /^<svg/);
+ * ```
+ */
+export function zScoreChart(model: ZScoreModel, options: ZScoreChartOptions = {}): Chart {
+  const where = `Z-score chart (${model.id})`;
+  const points = options.points ?? [];
+  checkPoints(where, points);
+  const k = options.coverageFactor ?? 2;
+  if (!(k > 0)) throw new RangeError(`${where}: expected 'coverageFactor' > 0, got ${k}`);
+  let [lo, hi] = options.bsaRange ?? [model.bsaRange.min, model.bsaRange.max];
+  if (options.bsaRange === undefined) {
+    for (const p of points) {
+      lo = Math.min(lo, p.bsaM2 - k * (p.bsaUncertainty ?? 0));
+      hi = Math.max(hi, p.bsaM2 + k * (p.bsaUncertainty ?? 0));
+    }
+    lo = Math.max(lo, 0.05);
+  }
+  if (!(lo > 0 && hi > lo)) {
+    throw new RangeError(`${where}: expected a BSA range 0 < min < max, got [${lo}, ${hi}]`);
+  }
+  const n = Math.max(2, Math.floor(options.gridPoints ?? 121));
+  const grid: Record<string, number>[] = [];
+  for (let i = 0; i < n; i++) {
+    const bsa = lo + ((hi - lo) * i) / (n - 1);
+    const row: Record<string, number> = { bsa };
+    for (const z of [-3, -2, -1, 0, 1, 2, 3]) row[`z${z}`] = measurementFormula(model, z, bsa);
+    grid.push(row);
+  }
+  const unit = model.unit;
+  const x = {
+    field: "bsa",
+    type: "quantitative",
+    title: "BSA [m²]",
+    scale: { domain: [lo, hi], nice: false },
+  };
+  const band = (z: number, opacity: number) => ({
+    mark: { type: "area", color: "#4c78a8", opacity },
+    encoding: {
+      x,
+      y: { field: `z${-z}`, type: "quantitative", title: `${model.measurement} [${unit}]` },
+      y2: { field: `z${z}` },
+    },
+  });
+  const line = (z: number, dash: number[]) => ({
+    mark: {
+      type: "line",
+      color: z === 0 ? "#1f3b5a" : "#4c78a8",
+      strokeDash: dash,
+      strokeWidth: z === 0 ? 2 : 1,
+    },
+    encoding: { x, y: { field: `z${z}`, type: "quantitative" } },
+  });
+  const layers: Record<string, unknown>[] = [
+    {
+      data: { values: grid },
+      layer: [
+        band(3, 0.12),
+        band(2, 0.18),
+        band(1, 0.25),
+        line(0, []),
+        line(2, [4, 3]),
+        line(-2, [4, 3]),
+      ],
+    },
+    {
+      data: {
+        values: [{ bsa: model.bsaRange.min }, { bsa: model.bsaRange.max }].filter((d) =>
+          d.bsa >= lo && d.bsa <= hi
+        ),
+      },
+      mark: { type: "rule", color: "#888", strokeDash: [2, 3] },
+      encoding: { x: { field: "bsa", type: "quantitative" } },
+    },
+  ];
+  if (points.length > 0) {
+    const values = points.map((p, i) => ({
+      label: p.label ?? `#${i + 1}`,
+      bsa: p.bsaM2,
+      value: p.value,
+      valueLow: p.value - k * (p.valueUncertainty ?? 0),
+      valueHigh: p.value + k * (p.valueUncertainty ?? 0),
+      bsaLow: p.bsaM2 - k * (p.bsaUncertainty ?? 0),
+      bsaHigh: p.bsaM2 + k * (p.bsaUncertainty ?? 0),
+    }));
+    layers.push({
+      data: { values },
+      layer: [
+        {
+          mark: { type: "rule", color: "#d62728" },
+          encoding: {
+            x: { field: "bsa", type: "quantitative" },
+            y: { field: "valueLow", type: "quantitative" },
+            y2: { field: "valueHigh" },
+          },
+        },
+        {
+          mark: { type: "rule", color: "#d62728" },
+          encoding: {
+            x: { field: "bsaLow", type: "quantitative" },
+            x2: { field: "bsaHigh" },
+            y: { field: "value", type: "quantitative" },
+          },
+        },
+        {
+          mark: { type: "point", filled: true, color: "#d62728", size: 40 },
+          encoding: {
+            x: { field: "bsa", type: "quantitative" },
+            y: { field: "value", type: "quantitative" },
+            tooltip: [{ field: "label" }, { field: "bsa", format: ".3f" }, {
+              field: "value",
+              format: ".3g",
+            }],
+          },
+        },
+      ],
+    });
+  }
+  const title = options.title ?? `${model.measurement}: mean and ±1/±2/±3 SD (${model.id})`;
+  return new Chart({
+    title,
+    width: options.width ?? 520,
+    height: options.height ?? 360,
+    layer: layers,
+    ...(model.synthetic ? { description: "SYNTHETIC model: not published coefficients" } : {}),
+  }, { title });
+}
+
+/**
+ * A cohort's measurements on the model's normal-range chart: one point per row with a finite
+ * value, BSA by the model's BSA formula (the formula of its one definition).
+ *
+ * @param result A computed cohort.
+ * @param measurement Measurement name with a Z-score model in the result.
+ * @param options Chart options (points are taken from the cohort); `valueUncertainty` applies to
+ * every point.
+ * @returns The chart.
+ * @throws {TypeError} When the measurement has no Z-score model in the result.
+ *
+ * @example
+ * ```ts
+ * import { computeCohort, PHN_2017_MODELS, readCohortCsv } from "@sonorigor/sonorigor";
+ * import { cohortZScoreChart } from "@sonorigor/sonorigor/plot";
+ * import assert from "node:assert/strict";
+ * const m = PHN_2017_MODELS.aorticRootSinus;
+ * const t = readCohortCsv("height [cm],weight [kg],root [cm]\n120,22,2.0\n150,40,2.5\n", {
+ *   height: "height", weight: "weight", measurements: [{ column: "root", canonicalUnit: "cm" }],
+ * });
+ * const chart = cohortZScoreChart(computeCohort(t, { zScores: { root: m } }), "root");
+ * assert.match(await chart.toSVG(), /^<svg/);
+ * ```
+ */
+export function cohortZScoreChart(
+  result: CohortResult,
+  measurement: string,
+  options: Omit<ZScoreChartOptions, "points"> & { readonly valueUncertainty?: number } = {},
+): Chart {
+  const model = result.models[measurement];
+  if (model === undefined) {
+    throw new TypeError(
+      `Cohort chart: expected a measurement with a Z-score model (${
+        Object.keys(result.models).join(", ") || "none"
+      }), got '${measurement}'`,
+    );
+  }
+  const t = result.table;
+  const calc = bsaCalculation(model.bsaMethod);
+  const values = t.measurements[measurement]!.values;
+  const points: ReferenceChartPoint[] = [];
+  for (let i = 0; i < t.rowCount; i++) {
+    const h = t.heightCm.values[i]!;
+    const w = t.weightKg.values[i]!;
+    const v = values[i]!;
+    if (!(Number.isFinite(h) && Number.isFinite(w) && Number.isFinite(v))) continue;
+    const bsaM2 = model.bsaMethod === result.bsaMethod
+      ? result.bsaM2[i]!
+      : calc.formula({ heightCm: h, weightKg: w }).bsaM2;
+    points.push({
+      bsaM2,
+      value: v,
+      label: t.ids?.[i] ?? `line ${t.lines[i]}`,
+      ...(options.valueUncertainty === undefined
+        ? {}
+        : { valueUncertainty: options.valueUncertainty }),
+    });
+  }
+  const { valueUncertainty: _u, ...chartOptions } = options;
+  return zScoreChart(model, { ...chartOptions, points });
+}
+
+/** One patient on an adult limit chart. */
+export interface AdultChartPoint {
+  /** Value in the row's unit. */
+  readonly value: number;
+  /** "male" or "female". */
+  readonly sex: "male" | "female";
+  /** Standard uncertainty (drawn as ±k·u). */
+  readonly uncertainty?: number;
+  /** Label on the x axis. */
+  readonly label?: string;
+}
+
+/** Options of {@linkcode adultLimitChart}. */
+export interface AdultLimitChartOptions {
+  /** Patients to plot. */
+  readonly points?: readonly AdultChartPoint[];
+  /** Coverage factor of the error bars. @default 2 */
+  readonly coverageFactor?: number;
+  /** Reference rows. @default ADULT_REFERENCE_LANG_2015 */
+  readonly table?: readonly AdultReferenceRow[];
+  /** Width in pixels. @default 520 */
+  readonly width?: number;
+  /** Height in pixels. @default 320 */
+  readonly height?: number;
+}
+
+/**
+ * Adult limit chart: horizontal lines at the sex-specific normal limits (solid) and severity cut
+ * points (dashed) of a parameter (one grey set when the guideline gives one range for both
+ * sexes), and patients as points coloured by sex with ±k·u error bars.
+ *
+ * @param parameter Parameter key of the adult reference table, e.g. "lvEjectionFraction".
+ * @param options Points, coverage factor, table, size.
+ * @returns The chart.
+ * @throws {TypeError} For an unknown parameter or a point without a finite value or valid sex.
+ * @throws {RangeError} For a negative uncertainty or k ≤ 0.
+ *
+ * @example
+ * ```ts
+ * import { adultLimitChart } from "@sonorigor/sonorigor/plot";
+ * import assert from "node:assert/strict";
+ * const chart = adultLimitChart("lvEjectionFraction", {
+ *   points: [{ value: 48, sex: "female", uncertainty: 3, label: "A03" }],
+ * });
+ * assert.match(await chart.toSVG(), /^<svg/);
+ * ```
+ */
+export function adultLimitChart(parameter: string, options: AdultLimitChartOptions = {}): Chart {
+  const table = options.table ?? ADULT_REFERENCE_LANG_2015;
+  const rows = (["male", "female"] as const).map((sex) => ({
+    sex,
+    row: adultReferenceRow(parameter, sex, table),
+  }));
+  const where = `Adult limit chart (${parameter})`;
+  const k = options.coverageFactor ?? 2;
+  if (!(k > 0)) throw new RangeError(`${where}: expected 'coverageFactor' > 0, got ${k}`);
+  const points = options.points ?? [];
+  points.forEach((p, i) => {
+    if (typeof p?.value !== "number" || !Number.isFinite(p.value)) {
+      throw new TypeError(
+        `${where}: expected point ${i} 'value' as a finite number, got ${p?.value}`,
+      );
+    }
+    if (p.sex !== "male" && p.sex !== "female") {
+      throw new TypeError(
+        `${where}: expected point ${i} 'sex' "male" or "female", got ${JSON.stringify(p.sex)}`,
+      );
+    }
+    if (p.uncertainty !== undefined && !(p.uncertainty >= 0)) {
+      throw new RangeError(
+        `${where}: expected point ${i} 'uncertainty' >= 0, got ${p.uncertainty}`,
+      );
+    }
+  });
+  const limits: { sex: string; value: number; kind: string }[] = [];
+  const shared = rows[0]!.row === rows[1]!.row;
+  for (const { sex: rowSex, row } of shared ? rows.slice(0, 1) : rows) {
+    const sex = shared ? "both sexes" : rowSex;
+    if (row.normal.lower !== undefined) {
+      limits.push({ sex, value: row.normal.lower, kind: "normal limit" });
+    }
+    if (row.normal.upper !== undefined) {
+      limits.push({ sex, value: row.normal.upper, kind: "normal limit" });
+    }
+    const p = row.partitions;
+    if (p) {
+      const cuts = p.direction === "high" ? [p.mild[1], p.moderate[1]] : [p.mild[0], p.moderate[0]];
+      for (const c of cuts) limits.push({ sex, value: c, kind: "severity cut point" });
+    }
+  }
+  const r0 = rows[0]!.row;
+  const yTitle = `${r0.label}${r0.unit === "1" ? "" : ` [${r0.unit}]`}`;
+  const color = {
+    field: "sex",
+    type: "nominal",
+    scale: { domain: ["female", "male", "both sexes"], range: ["#e377c2", "#1f77b4", "#555555"] },
+  };
+  const layers: Record<string, unknown>[] = [{
+    data: { values: limits },
+    mark: { type: "rule", strokeWidth: 1.5 },
+    encoding: {
+      y: { field: "value", type: "quantitative", title: yTitle },
+      color,
+      strokeDash: {
+        field: "kind",
+        type: "nominal",
+        scale: { domain: ["normal limit", "severity cut point"], range: [[1, 0], [5, 3]] },
+      },
+    },
+  }];
+  if (points.length > 0) {
+    const values = points.map((p, i) => ({
+      label: p.label ?? `#${i + 1}`,
+      sex: p.sex,
+      value: p.value,
+      low: p.value - k * (p.uncertainty ?? 0),
+      high: p.value + k * (p.uncertainty ?? 0),
+    }));
+    const xLabel = { field: "label", type: "nominal", title: "Patient", sort: null };
+    layers.push({
+      data: { values },
+      layer: [
+        {
+          mark: { type: "rule" },
+          encoding: {
+            x: xLabel,
+            y: { field: "low", type: "quantitative" },
+            y2: { field: "high" },
+            color,
+          },
+        },
+        {
+          mark: { type: "point", filled: true, size: 50 },
+          encoding: {
+            x: xLabel,
+            y: { field: "value", type: "quantitative" },
+            color,
+            tooltip: [{ field: "label" }, { field: "value" }],
+          },
+        },
+      ],
+    });
+  }
+  const title = `${r0.label}: ${r0.source.authors.split(",")[0]} ${r0.source.year} limits by sex`;
+  return new Chart({
+    title,
+    width: options.width ?? 520,
+    height: options.height ?? 320,
+    layer: layers,
+  }, { title });
+}

@@ -1,0 +1,99 @@
+import assert from "node:assert/strict";
+import { computeCohort, measurementAtZ, PHN_2017_MODELS, readCohortCsv } from "../../mod.ts";
+import { adultLimitChart, cohortZScoreChart, zScoreChart } from "../../plot/mod.ts";
+
+type Layer = { data?: { values: Record<string, number | string>[] }; layer?: Layer[] };
+
+Deno.test("pediatric chart bands are the model's measurements at Z = −3…3", async () => {
+  const model = PHN_2017_MODELS.aorticRootSinus;
+  const chart = zScoreChart(model, {
+    points: [{ bsaM2: 1, value: 2.4, valueUncertainty: 0.05, bsaUncertainty: 0.03, label: "P1" }],
+  });
+  const layers = chart.spec.layer as Layer[];
+  const grid = layers[0]!.data!.values;
+  const row = grid[Math.floor(grid.length / 2)]!;
+  // Lopez 2017 form: at BSA b the Z = +2 measurement is (M + 2S)·b^α (hand-checkable)
+  const b = row.bsa as number;
+  assert.ok(Math.abs((row["z2"] as number) - (2.06 + 0.36) * b ** 0.5) < 1e-12);
+  assert.equal(row["z-3"], measurementAtZ(model, -3, b));
+  // Error bars: ±2·u by default (coverage factor 2)
+  const pts = layers[2]!.data!.values[0]!;
+  assert.deepEqual([pts.valueLow, pts.valueHigh], [2.4 - 0.1, 2.4 + 0.1]);
+  const svg = await chart.toSVG();
+  assert.match(svg, /^<svg/);
+  assert.match(svg, /BSA \[m²\]/);
+});
+
+Deno.test("pediatric chart rejects bad points naming the field", () => {
+  assert.throws(
+    () => zScoreChart(PHN_2017_MODELS.lvMass, { points: [{ bsaM2: NaN, value: 40 }] }),
+    {
+      name: "TypeError",
+      message:
+        "Z-score chart (phn2017.lvMass): expected point 0 'bsaM2' as a finite number, got NaN",
+    },
+  );
+  assert.throws(
+    () =>
+      zScoreChart(PHN_2017_MODELS.lvMass, {
+        points: [{ bsaM2: 1, value: 40, valueUncertainty: -1 }],
+      }),
+    {
+      name: "RangeError",
+      message: "Z-score chart (phn2017.lvMass): expected point 0 'valueUncertainty' >= 0, got -1",
+    },
+  );
+});
+
+Deno.test("cohort chart plots every row with a value; adult chart draws sex-specific limits", async () => {
+  const text = await Deno.readTextFile(
+    new URL("../../examples/data/pediatric-clinic.csv", import.meta.url),
+  );
+  const model = PHN_2017_MODELS.lvMass;
+  const t = readCohortCsv(text, {
+    id: "patient",
+    height: "height",
+    weight: "weight",
+    measurements: [{ column: "lv mass", name: "lvMass", canonicalUnit: "g" }],
+  });
+  const chart = cohortZScoreChart(computeCohort(t, { zScores: { lvMass: model } }), "lvMass");
+  // 20 invented rows, 2 with LV mass not measured → 18 points
+  assert.equal((chart.spec.layer as Layer[])[2]!.data!.values.length, 18);
+  assert.match(await chart.toSVG(), /^<svg/);
+
+  const adult = adultLimitChart("lvEjectionFraction", {
+    points: [{ value: 48, sex: "female", uncertainty: 3, label: "A03" }, {
+      value: 38,
+      sex: "male",
+      label: "A04",
+    }],
+  });
+  const limits = (adult.spec.layer as Layer[])[0]!.data!.values;
+  // Lang 2015 Table 2 (from memory): women 54–74 with cut points 41 and 30; men 52–72, 41, 30
+  assert.deepEqual(
+    limits.filter((l) => l.sex === "female").map((l) => l.value),
+    [54, 74, 41, 30],
+  );
+  assert.deepEqual(limits.filter((l) => l.sex === "male").map((l) => l.value), [52, 72, 41, 30]);
+  assert.match(await adult.toSVG(), /^<svg/);
+  assert.throws(
+    () => adultLimitChart("lvEjectionFraction", { points: [{ value: 50, sex: "x" as never }] }),
+    {
+      name: "TypeError",
+      message:
+        `Adult limit chart (lvEjectionFraction): expected point 0 'sex' "male" or "female", got "x"`,
+    },
+  );
+});
+
+Deno.test("adult chart draws one set of limits when the guideline gives one range for both sexes", () => {
+  const chart = adultLimitChart("laVolumeIndex");
+  const limits = (chart.spec.layer as Layer[])[0]!.data!.values;
+  // Lang 2015 Table 2 (from memory): LA volume index 16–34, cut points 41 and 48, both sexes
+  assert.deepEqual(limits.map((l) => [l.sex, l.value]), [
+    ["both sexes", 16],
+    ["both sexes", 34],
+    ["both sexes", 41],
+    ["both sexes", 48],
+  ]);
+});

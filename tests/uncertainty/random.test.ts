@@ -1,0 +1,128 @@
+import assert from "node:assert/strict";
+import fc from "fast-check";
+import {
+  chiSquareQuantile,
+  coverageIntervals,
+  normalCdf,
+  normalQuantile,
+  randomStream,
+  tCdf,
+} from "../../mod.ts";
+
+const N = 200_000;
+
+/** Kolmogorov–Smirnov statistic D = sup |F_n(x) − F(x)| of a sample against a CDF. */
+function ksStatistic(sample: Float64Array, cdf: (x: number) => number): number {
+  const s = sample.slice().sort();
+  let d = 0;
+  for (let i = 0; i < s.length; i++) {
+    const f = cdf(s[i]!);
+    d = Math.max(d, f - i / s.length, (i + 1) / s.length - f);
+  }
+  return d;
+}
+// Asymptotic KS critical value at α = 0.001: 1.95/√n (Massey 1951, J Am Stat Assoc 46:68–78, Table 1)
+const ksCritical = (n: number) => 1.95 / Math.sqrt(n);
+
+Deno.test("ziggurat normals: moments of N(0, 1)", () => {
+  const z = new Float64Array(N);
+  randomStream(123).fillNormal(z);
+  let m1 = 0, m2 = 0, m3 = 0, m4 = 0;
+  for (const x of z) {
+    m1 += x;
+    m2 += x * x;
+    m3 += x ** 3;
+    m4 += x ** 4;
+  }
+  m1 /= N, m2 /= N, m3 /= N, m4 /= N;
+  // Standard normal moments 0, 1, 0, 3 (common practice, no source); tolerances ≈ 5 standard errors
+  // (SE of mean 1/√N, of m2 √(2/N), of m3 √(15/N), of m4 √(96/N))
+  assert.ok(Math.abs(m1) < 5 / Math.sqrt(N), `mean ${m1}`);
+  assert.ok(Math.abs(m2 - 1) < 5 * Math.sqrt(2 / N), `variance ${m2}`);
+  assert.ok(Math.abs(m3) < 5 * Math.sqrt(15 / N), `third moment ${m3}`);
+  assert.ok(Math.abs(m4 - 3) < 5 * Math.sqrt(96 / N), `fourth moment ${m4}`);
+});
+
+Deno.test("ziggurat normals: Kolmogorov–Smirnov and χ² goodness of fit", () => {
+  const z = new Float64Array(N);
+  randomStream(321).fillNormal(z);
+  assert.ok(ksStatistic(z, normalCdf) < ksCritical(N));
+  // 100 equiprobable bins from the normal quantile function; χ²(99) at 0.999 from the χ² quantile
+  const bins = 100;
+  const edges = Array.from({ length: bins - 1 }, (_, i) => normalQuantile((i + 1) / bins));
+  const counts = new Array<number>(bins).fill(0);
+  for (const x of z) {
+    let lo = 0, hi = edges.length;
+    while (lo < hi) {
+      const mid = (lo + hi) >> 1;
+      if (x < edges[mid]!) hi = mid;
+      else lo = mid + 1;
+    }
+    counts[lo]!++;
+  }
+  const expected = N / bins;
+  const chi2 = counts.reduce((s, c) => s + (c - expected) ** 2 / expected, 0);
+  assert.ok(chi2 < chiSquareQuantile(0.999, bins - 1), `χ² = ${chi2}`);
+});
+
+Deno.test("ziggurat normals: the tail beyond 3.44 (bottom layer) has the right mass", () => {
+  const z = new Float64Array(2_000_000);
+  randomStream(77).fillNormal(z);
+  let beyond = 0;
+  for (const x of z) if (Math.abs(x) > 3.442619855899) beyond++;
+  // P(|Z| > 3.4426) = 2(1 − Φ(3.4426)) ≈ 5.76e-4 from the normal CDF; binomial SE √(np(1−p))
+  const p = 2 * (1 - normalCdf(3.442619855899));
+  const expected = z.length * p;
+  assert.ok(Math.abs(beyond - expected) < 5 * Math.sqrt(expected), `${beyond} vs ${expected}`);
+});
+
+Deno.test("uniform draws: open interval (0, 1), KS against U(0, 1)", () => {
+  const u = new Float64Array(N);
+  randomStream(9).fillUniform(u);
+  assert.ok(u.every((x) => x > 0 && x < 1));
+  assert.ok(ksStatistic(u, (x) => x) < ksCritical(N));
+});
+
+Deno.test("Student t draws (Bailey's polar method): KS against the t CDF for ν = 3 and 10", () => {
+  for (const dof of [3, 10]) {
+    const rng = randomStream(dof);
+    const t = new Float64Array(N);
+    for (let i = 0; i < N; i++) t[i] = rng.studentT(dof);
+    assert.ok(ksStatistic(t, (x) => tCdf(x, dof)) < ksCritical(N), `ν = ${dof}`);
+  }
+});
+
+Deno.test("coverage intervals from tails equal those from a full sort (property)", () => {
+  fc.assert(
+    fc.property(
+      fc.array(fc.double({ min: -1e6, max: 1e6, noNaN: true }), { minLength: 40, maxLength: 400 }),
+      fc.constantFrom(0.9, 0.95, 0.99),
+      (values, p) => {
+        const a = Float64Array.from(values);
+        const got = coverageIntervals(a, p);
+        // reference: JCGM 101:2008 §7.7 applied literally to a fully sorted copy
+        const s = a.slice().sort();
+        const m = s.length, pm = p * m;
+        const q = Math.min(m - 1, Number.isInteger(pm) ? pm : Math.floor(pm + 0.5));
+        const r = Number.isInteger((m - q) / 2) ? (m - q) / 2 : (m - q + 1) / 2;
+        let best = Infinity, br = 1;
+        for (let k = 1; k + q <= m; k++) {
+          if (s[k + q - 1]! - s[k - 1]! < best) {
+            best = s[k + q - 1]! - s[k - 1]!;
+            br = k;
+          }
+        }
+        return got.symmetric[0] === s[r - 1] && got.symmetric[1] === s[r + q - 1] &&
+          got.shortest[1] - got.shortest[0] === best && got.shortest[0] === s[br - 1];
+      },
+    ),
+    { numRuns: 200, seed: 5 },
+  );
+});
+
+Deno.test("coverage intervals leave their input untouched (frozen copy compared)", () => {
+  const a = Float64Array.from({ length: 1000 }, (_, i) => Math.sin(i));
+  const before = a.slice();
+  coverageIntervals(a, 0.95);
+  assert.deepEqual(a, before);
+});
