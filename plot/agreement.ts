@@ -200,7 +200,6 @@ export function methodComparisonChart(
             title: withUnit(options.methodY ?? "Y", unit),
           },
           color: { field: "line", type: "nominal", title: "Line" },
-          strokeDash: { field: "line", type: "nominal", legend: null },
         },
       },
       {

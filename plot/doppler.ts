@@ -63,7 +63,7 @@ export interface AngleUnderestimationOptions {
  * ```ts
  * import { angleUnderestimationData } from "@sonorigor/sonorigor/plot";
  * import assert from "node:assert/strict";
- * const rows = angleUnderestimationData({ maxAngleDeg: 60, stepDeg: 30 });
+ * const rows = angleUnderestimationData({ maxAngleDeg: 60, stepDeg: 10 });
  * // cos 60° = ½: the velocity reads 50 % low and the gradient 75 % low
  * const at60 = rows.filter((r) => r.angleDeg === 60).map((r) => Math.round(r.underestimationPercent));
  * assert.deepEqual(at60, [50, 75]);

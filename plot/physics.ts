@@ -73,6 +73,15 @@ function checkFrequencies(where: string, list: unknown): readonly number[] {
  * @throws {TypeError} For an empty or non-numeric frequency list.
  * @throws {RangeError} For a frequency, depth or angle outside its valid range (from the
  * calculation's input definitions).
+ *
+ * @example
+ * ```ts
+ * import { nyquistDepthRows } from "@sonorigor/sonorigor/plot";
+ * import assert from "node:assert/strict";
+ * const rows = nyquistDepthRows({ transmitFrequenciesMHz: [2], fromDepthCm: 15, toDepthCm: 16, steps: 2 });
+ * // 1540² / (8 · 0.15 · 2e6) = 0.988 m/s at 15 cm (hand check)
+ * assert.ok(Math.abs(rows[0]!.nyquistVelocity - 0.98817) < 1e-5);
+ * ```
  */
 export function nyquistDepthRows(options: NyquistDepthChartOptions = {}): NyquistDepthRow[] {
   const where = "Nyquist limit vs depth chart";
@@ -218,6 +227,14 @@ export interface ResolutionPenetrationRow {
  * @param options Frequency range, pulse, aperture, focus, dynamic range, attenuation.
  * @returns One row per frequency.
  * @throws {RangeError} For a value outside the calculations' valid ranges.
+ *
+ * @example
+ * ```ts
+ * import { resolutionPenetrationRows } from "@sonorigor/sonorigor/plot";
+ * import assert from "node:assert/strict";
+ * const [row] = resolutionPenetrationRows({ fromFrequencyMHz: 3, toFrequencyMHz: 6, steps: 2 });
+ * assert.ok(Math.abs(row!.penetrationDepthCm - 20) < 1e-12); // 60 dB / (2 · 0.5 · 3) (hand check)
+ * ```
  */
 export function resolutionPenetrationRows(
   options: ResolutionPenetrationChartOptions = {},

@@ -7,6 +7,7 @@
 import type { GumResult } from "../calc/uncertainty/gum.ts";
 import { coverageIntervals, type MonteCarloResult } from "../calc/uncertainty/montecarlo.ts";
 import type { SensitivityCurve } from "../calc/core/sensitivity.ts";
+import { formatUnit } from "../calc/core/display.ts";
 import { Chart } from "./chart.ts";
 
 /** Options of {@linkcode histogramChart}. */
@@ -22,7 +23,7 @@ export interface HistogramOptions {
 }
 
 function unitLabel(unit: string): string {
-  return unit === "1" ? "" : ` [${unit}]`;
+  return unit === "1" ? "" : ` [${formatUnit(unit)}]`;
 }
 
 /**
@@ -84,7 +85,12 @@ export function histogramChart(mc: MonteCarloResult, options: HistogramOptions =
     data: { values: bars },
     mark: { type: "rect", color: "#9ecae1" },
     encoding: {
-      x: { field: "start", type: "quantitative", title: `${name}${unitLabel(o.unit)}` },
+      x: {
+        field: "start",
+        type: "quantitative",
+        title: `${name}${unitLabel(o.unit)}`,
+        scale: { zero: false },
+      },
       x2: { field: "end" },
       y: { field: "density", type: "quantitative", title: "probability density" },
     },
@@ -127,6 +133,7 @@ export function histogramChart(mc: MonteCarloResult, options: HistogramOptions =
         type: "nominal",
         title: null,
         scale: { domain: ["MC symmetric interval", "GUM interval"], range: ["#08519c", "#d62728"] },
+        legend: { orient: "bottom", labelLimit: 400 },
       },
     },
   });
@@ -227,7 +234,12 @@ export function sensitivityChart(
           ? `change of ${first.output} [%]`
           : `${first.output}${unitLabel(first.outputUnit)}`,
       },
-      color: { field: "curve", type: "nominal", title: null },
+      color: {
+        field: "curve",
+        type: "nominal",
+        title: null,
+        legend: curves.length > 1 ? { orient: "bottom", labelLimit: 400 } : null,
+      },
     },
   }, { title });
 }

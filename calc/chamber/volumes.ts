@@ -15,8 +15,9 @@ import {
   type Contour,
   contourArea,
   type ContourCoordinates,
+  contourDiscChords,
   contourLongAxis,
-  discDiameters,
+  type DiscChord,
   type LongAxis,
   validateContour,
 } from "./contour.ts";
@@ -250,11 +251,14 @@ function traceView(contour: unknown, view: string, where: string, discCount: num
       `${where}: expected a ${view} long axis longer than 0 cm, got ${longAxis.lengthCm}`,
     );
   }
+  const chords = contourDiscChords(c, longAxis, discCount);
   return {
     view,
     longAxis,
     areaCm2: contourArea(c),
-    diameters: discDiameters(c, longAxis, discCount),
+    diameters: Float64Array.from(chords, (d) => d.diameterCm),
+    chords,
+    contour: c,
   };
 }
 

@@ -108,6 +108,11 @@ export const ROW_MISSING = 2;
 export class CohortCsvError extends Error {
   /** Every invalid cell. */
   readonly issues: readonly CohortIssue[];
+  /**
+   * @param name "TypeError" (not a number, missing) or "RangeError" (outside the domain).
+   * @param message The message of the first invalid cell.
+   * @param issues Every invalid cell.
+   */
   constructor(name: "TypeError" | "RangeError", message: string, issues: readonly CohortIssue[]) {
     super(message);
     this.name = name;

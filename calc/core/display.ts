@@ -54,6 +54,14 @@ export function htmlNotes(title: string, notes: readonly string[]): string {
   }</ul>`;
 }
 
+const SUPERSCRIPTS: Record<string, string> = { "2": "²", "3": "³", "-1": "⁻¹", "-2": "⁻²" };
+
+/** Formats a mathjs unit string for people: "cm^2" → "cm²", "1" → "" (dimensionless). */
+export function formatUnit(unit: string): string {
+  if (unit === "1") return "";
+  return unit.replace(/\^(-?\d)/g, (m, p: string) => SUPERSCRIPTS[p] ?? m);
+}
+
 /** Formats a number for display with up to `digits` significant digits. */
 export function formatNumber(value: number, digits = 4): string {
   if (!Number.isFinite(value)) return String(value);

@@ -36,4 +36,11 @@ export {
   type SensitivityPoint,
 } from "./sensitivity.ts";
 export { calculationsOf, formatReference, referenceMarkdown } from "./reference-docs.ts";
-export { escapeHtml, formatNumber, htmlNotes, htmlTable, textTable } from "./display.ts";
+export {
+  escapeHtml,
+  formatNumber,
+  formatUnit,
+  htmlNotes,
+  htmlTable,
+  textTable,
+} from "./display.ts";

@@ -174,3 +174,5 @@ export function tissueProperties(name: string): TissueAcousticProperties {
     }, got ${typeof name === "string" ? `"${name}"` : String(name)}`,
   );
 }
+
+for (const row of Object.values(TISSUE_ACOUSTIC_PROPERTIES)) Object.freeze(row);

@@ -45,6 +45,7 @@ export interface ZScoreModelBase {
  * Z = (X / BSA^α − M) / S.
  */
 export interface AllometricConstantSdModel extends ZScoreModelBase {
+  /** Family discriminator. */
   readonly family: "allometricConstantSd";
   /** Exponent α of BSA. */
   readonly alpha: number;
@@ -59,6 +60,7 @@ export interface AllometricConstantSdModel extends ZScoreModelBase {
  * Z = (ln X − Σ aᵢ·BSAⁱ) / Σ sᵢ·BSAⁱ (X in `unit`; a single SD coefficient means constant SD).
  */
 export interface LogPolynomialBsaModel extends ZScoreModelBase {
+  /** Family discriminator. */
   readonly family: "logPolynomialBsa";
   /** a₀, a₁, … of the mean of ln X. */
   readonly meanCoefficients: readonly number[];
@@ -71,12 +73,15 @@ export interface LogPolynomialBsaModel extends ZScoreModelBase {
  * Z = (X − a·BSA^b) / (c·BSA^d).
  */
 export interface AllometricModelledSdModel extends ZScoreModelBase {
+  /** Family discriminator. */
   readonly family: "allometricModelledSd";
-  /** a, b of the mean a·BSA^b. */
+  /** a of the mean a·BSA^b. */
   readonly meanScale: number;
+  /** b of the mean a·BSA^b. */
   readonly meanExponent: number;
-  /** c, d of the SD c·BSA^d. */
+  /** c of the SD c·BSA^d. */
   readonly sdScale: number;
+  /** d of the SD c·BSA^d. */
   readonly sdExponent: number;
 }
 

@@ -54,9 +54,10 @@ export interface ZScoreUncertaintyResult {
   readonly coverage: number;
   /** Percentiles at the ends of the interval. */
   readonly percentileInterval: readonly [number, number];
-  /** Probability that the true Z exceeds +2 and falls below −2 (normal approximation for GUM,
-   * sample fraction for Monte Carlo). */
+  /** Probability that the true Z exceeds +2 (normal approximation for GUM, sample fraction for
+   * Monte Carlo). */
   readonly probabilityAbovePlus2: number;
+  /** Probability that the true Z falls below −2 (same method). */
   readonly probabilityBelowMinus2: number;
   /** Share of the variance of Z from each input (GUM only; empty for Monte Carlo). */
   readonly shares: Readonly<Record<string, number>>;

@@ -7,6 +7,7 @@
 import {
   escapeHtml,
   formatNumber,
+  formatUnit,
   htmlNotes,
   htmlTable,
   type MimeBundle,
@@ -19,7 +20,7 @@ import type { MonteCarloResult } from "./montecarlo.ts";
 /** "y ± U unit (k = 2.00, p = 95 %)" for a GUM output, rounded per JCGM 100 §7.2.6. */
 export function formatGumOutput(o: GumOutput, coverage: number): string {
   const r = roundForReport(o.value, o.expandedUncertainty);
-  const unit = o.unit === "1" ? "" : ` ${o.unit}`;
+  const unit = o.unit === "1" ? "" : ` ${formatUnit(o.unit)}`;
   return `${o.output} = ${r.value} ± ${r.uncertainty}${unit} (k = ${
     o.coverageFactor.toFixed(2)
   }, p = ${formatNumber(coverage * 100, 4)} %)`;
@@ -38,7 +39,7 @@ const budgetHeader = [
 
 function budgetRows(o: GumOutput): string[][] {
   return o.budget.map((b) => [
-    `${b.input} [${b.unit}]`,
+    b.unit === "1" ? b.input : `${b.input} [${formatUnit(b.unit)}]`,
     b.distribution,
     formatNumber(b.estimate, 6),
     formatNumber(b.standardUncertainty, 3),
@@ -87,7 +88,7 @@ export function displayMonteCarlo(result: MonteCarloResult): MimeBundle {
     const hi = roundForReport(o.symmetricInterval[1], o.standardUncertainty).value;
     const slo = roundForReport(o.shortestInterval[0], o.standardUncertainty).value;
     const shi = roundForReport(o.shortestInterval[1], o.standardUncertainty).value;
-    const unit = o.unit === "1" ? "" : ` ${o.unit}`;
+    const unit = o.unit === "1" ? "" : ` ${formatUnit(o.unit)}`;
     return [name, `${r.value}${unit}`, r.uncertainty, `[${lo}, ${hi}]`, `[${slo}, ${shi}]`];
   });
   const head = `${result.title} (Monte Carlo, ${result.trials} trials, seed ${result.seed}, p = ${

@@ -350,20 +350,30 @@ export class DenoKernel {
   /**
    * Checks the heartbeat channel: sends a ping and waits for the echo.
    *
+   * The kernel's heartbeat socket is a REP socket. The client speaks to it with a DEALER socket
+   * that adds the empty envelope frame a REQ socket would add (wire-identical to REQ): under Deno
+   * the npm `zeromq` REQ socket never delivered the echo here and could crash the process when
+   * closed with a pending receive, while DEALER works.
+   *
    * @param timeoutMs How long to wait for the echo.
    * @returns Whether the echo came back in time.
    */
   async heartbeat(timeoutMs = 2_000): Promise<boolean> {
-    const socket = new zmq.Request({ linger: 0, receiveTimeout: timeoutMs, sendTimeout: timeoutMs });
+    const socket = new zmq.Dealer({ linger: 0 });
+    let timer: number | undefined;
     try {
       socket.connect(this.#url(this.connection.hb_port));
-      const ping = new TextEncoder().encode(`ping ${randomUUID()}`);
-      await socket.send(ping);
-      const [echo] = await socket.receive();
-      return echo !== undefined && new TextDecoder().decode(echo) === new TextDecoder().decode(ping);
+      const ping = `ping ${randomUUID()}`;
+      await socket.send(["", ping]);
+      const echo = await Promise.race([
+        socket.receive(),
+        new Promise<null>((resolve) => (timer = setTimeout(() => resolve(null), timeoutMs))),
+      ]);
+      return echo !== null && echo.length === 2 && new TextDecoder().decode(echo[1]) === ping;
     } catch {
       return false;
     } finally {
+      clearTimeout(timer);
       socket.close();
     }
   }

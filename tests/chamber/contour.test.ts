@@ -1,4 +1,5 @@
 import assert from "node:assert/strict";
+import fc from "fast-check";
 import {
   biplaneDiscVolume,
   contourLongAxis,
@@ -137,4 +138,93 @@ Deno.test("bad contours: self-intersections, including the annulus segment and f
   );
   // A valid triangle passes.
   assert.equal(validateContour([[0, 0], [1, 3], [2, 0]], "Test", "apical").x.length, 3);
+});
+
+// Independent brute-force oracle for the self-intersection rule (every pair of non-adjacent
+// segments of the closed outline, touching included; adjacent segments folding back). Integer
+// coordinates keep the orientation tests exact. Standard computational-geometry predicate
+// (orientation signs plus collinear bounding-box overlap), common practice, no source.
+function bruteForceCrosses(pts: readonly (readonly [number, number])[]): boolean {
+  const n = pts.length;
+  const o = (a: readonly number[], b: readonly number[], c: readonly number[]): number =>
+    Math.sign((b[0]! - a[0]!) * (c[1]! - a[1]!) - (b[1]! - a[1]!) * (c[0]! - a[0]!));
+  const on = (a: readonly number[], b: readonly number[], c: readonly number[]): boolean =>
+    Math.min(a[0]!, b[0]!) <= c[0]! && c[0]! <= Math.max(a[0]!, b[0]!) &&
+    Math.min(a[1]!, b[1]!) <= c[1]! && c[1]! <= Math.max(a[1]!, b[1]!);
+  const hit = (
+    p1: readonly number[],
+    p2: readonly number[],
+    p3: readonly number[],
+    p4: readonly number[],
+  ) => {
+    const d1 = o(p3, p4, p1), d2 = o(p3, p4, p2), d3 = o(p1, p2, p3), d4 = o(p1, p2, p4);
+    if (d1 * d2 < 0 && d3 * d4 < 0) return true;
+    return (d1 === 0 && on(p3, p4, p1)) || (d2 === 0 && on(p3, p4, p2)) ||
+      (d3 === 0 && on(p1, p2, p3)) || (d4 === 0 && on(p1, p2, p4));
+  };
+  for (let i = 0; i < n; i++) {
+    const a = pts[i]!, b = pts[(i + 1) % n]!, c = pts[(i + 2) % n]!;
+    const dot = (a[0] - b[0]) * (c[0] - b[0]) + (a[1] - b[1]) * (c[1] - b[1]);
+    if (o(a, b, c) === 0 && dot > 0) return true;
+    for (let j = i + 2; j < n; j++) {
+      if (i === 0 && j === n - 1) continue;
+      if (hit(a, b, pts[j]!, pts[(j + 1) % n]!)) return true;
+    }
+  }
+  return false;
+}
+
+Deno.test("property: the sweep self-intersection check agrees with a brute-force oracle", () => {
+  fc.assert(
+    fc.property(
+      fc.array(fc.tuple(fc.integer({ min: 0, max: 6 }), fc.integer({ min: 0, max: 6 })), {
+        minLength: 3,
+        maxLength: 12,
+      }),
+      (raw) => {
+        // Drop consecutive repeats and a repeated closing point (those have their own errors).
+        const pts = raw.filter((p, i) =>
+          i === 0 || p[0] !== raw[i - 1]![0] || p[1] !== raw[i - 1]![1]
+        );
+        if (pts.length < 3) return;
+        const last = pts[pts.length - 1]!;
+        if (last[0] === pts[0]![0] && last[1] === pts[0]![1]) return;
+        const expected = bruteForceCrosses(pts);
+        let threw = false;
+        try {
+          validateContour(pts, "Property", "apical");
+        } catch (e) {
+          assert.ok(e instanceof RangeError);
+          assert.match(e.message, /not to cross itself/);
+          threw = true;
+        }
+        assert.equal(threw, expected, JSON.stringify(pts));
+      },
+    ),
+    { numRuns: 3000, seed: 12345 },
+  );
+});
+
+Deno.test("property: disc volume of any placed half-ellipsoid matches (π/6)·L·D1·D2·(1 + 1/3200)", () => {
+  // Solid geometry and the midpoint-rule bias derived in volumes.test.ts; 2001-point contours
+  // (polygon error < 2e-6), any rotation and translation.
+  fc.assert(
+    fc.property(
+      fc.double({ min: 3, max: 12, noNaN: true }),
+      fc.double({ min: 1, max: 5.5, noNaN: true }),
+      fc.double({ min: 1, max: 5.5, noNaN: true }),
+      fc.double({ min: -Math.PI, max: Math.PI, noNaN: true }),
+      fc.double({ min: -20, max: 20, noNaN: true }),
+      (L, d1, d2, angle, shift) => {
+        // The apex must be the farthest point: L > D/2 holds for all draws (L ≥ 3, D ≤ 5.5).
+        const v = biplaneDiscVolume({
+          fourChamber: halfEllipse(L, d1, 2001, angle, shift, -shift),
+          twoChamber: halfEllipse(L, d2, 2001, -angle, 0, shift),
+        }).volumeMl;
+        const expected = (Math.PI / 6) * L * d1 * d2 * (1 + 1 / 3200);
+        assert.ok(Math.abs(v / expected - 1) < 1e-5, `${v} vs ${expected}`);
+      },
+    ),
+    { numRuns: 60, seed: 777 },
+  );
 });

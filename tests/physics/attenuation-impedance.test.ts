@@ -127,4 +127,8 @@ Deno.test("tissue table: facts of the trade and lookups", () => {
       /Tissue properties: expected 'name' to be one of softTissue, blood, myocardium, fat, bone, water, air, got "liver"/,
   });
   assert.throws(() => tissueProperties("toString"), { name: "TypeError" });
+  // Rows are frozen: the shared table cannot be altered by a caller.
+  assert.throws(() => {
+    (t.softTissue as { soundSpeedMps: number }).soundSpeedMps = 1500;
+  }, TypeError);
 });

@@ -2,8 +2,10 @@ import assert from "node:assert/strict";
 import {
   axialResolution,
   evaluate,
+  gum,
   lateralResolution,
   nearFieldLength,
+  normal,
   wavelengthAndPeriod,
 } from "../../mod.ts";
 
@@ -122,4 +124,24 @@ Deno.test("an aperture smaller than 1.22 wavelengths has no far-field lobe: a cl
         /Near-field length and far-field divergence: output 'divergenceHalfAngleDeg' is not finite for transmitFrequencyMHz = 1, apertureMm = 1, soundSpeedMps = 1540, got NaN/,
     },
   );
+});
+
+Deno.test("uncertainty: 1 % on the speed of sound gives 1 % on wavelength and beam width", () => {
+  // For product/quotient models the relative standard uncertainties add in quadrature (JCGM
+  // 100:2008 §5.1.6): λ = c/f with u(c)/c = 1 % and f exact → u(λ)/λ = 1 % (hand check).
+  const g = gum(wavelengthAndPeriod, {
+    transmitFrequencyMHz: 3,
+    soundSpeedMps: normal(1540, 15.4),
+  });
+  const w = g.outputs.wavelengthMm;
+  assert.ok(Math.abs(w.standardUncertainty / w.value - 0.01) < 1e-6);
+  assert.equal(g.outputs.periodUs.standardUncertainty, 0);
+  // Beam width = 0.886·c·z/(f·D): 1 % on c and 2 % on D → √(1² + 2²) = 2.236 % (hand check).
+  const b = gum(lateralResolution, {
+    transmitFrequencyMHz: 3,
+    apertureMm: normal(20, 0.4),
+    focalDepthCm: 8,
+    soundSpeedMps: normal(1540, 15.4),
+  }).outputs.beamWidthMm;
+  assert.ok(Math.abs(b.standardUncertainty / b.value - Math.sqrt(5) / 100) < 1e-4);
 });

@@ -1,0 +1,70 @@
+import assert from "node:assert/strict";
+import { expressionModel, gum, monteCarlo, normal, sensitivityCurve } from "../../mod.ts";
+import { budgetChart, Chart, histogramChart, sensitivityChart } from "../../plot/mod.ts";
+
+const model = expressionModel({
+  expression: "4 * v^2",
+  inputs: { v: { unit: "m/s", description: "Peak velocity", range: { min: 0, max: 10 } } },
+  output: { name: "gradient", unit: "mmHg", description: "Peak gradient" },
+});
+const inputs = { v: normal(4, 0.2) };
+
+Deno.test("histogram chart: density integrates to 1 and the GUM curve is N(y, u²)", async () => {
+  const mc = monteCarlo(model, inputs, { trials: 50_000, seed: 8 });
+  const g = gum(model, inputs);
+  const chart = histogramChart(mc, { gum: g, bins: 40 });
+  const layers = chart.spec.layer as { data: { values: Record<string, number>[] } }[];
+  const bars = layers[0]!.data.values;
+  const mass = bars.reduce((s, b) => s + b.density! * (b.end! - b.start!), 0);
+  // the plotted range covers at least the 99.9 % interval, so the bars hold ≥ 0.998 of the mass
+  assert.ok(mass > 0.998 && mass <= 1 + 1e-12, `mass ${mass}`);
+  const curve = layers[1]!.data.values;
+  const peak = Math.max(...curve.map((p) => p.density!));
+  // the GUM curve's peak is 1/(u√(2π)) with u = 8·4·0.2 = 6.4 mmHg (JCGM 100 eq. (10), hand-checkable)
+  assert.ok(Math.abs(peak - 1 / (6.4 * Math.sqrt(2 * Math.PI))) / peak < 0.01);
+  const svg = await chart.toSVG();
+  assert.match(svg, /^<svg/);
+  assert.ok((svg.match(/<path/g) ?? []).length > 40, "bars, curve and rules are drawn");
+});
+
+Deno.test("histogram chart is deterministic for a seed (snapshot of the spec)", () => {
+  const a = histogramChart(monteCarlo(model, inputs, { trials: 5_000, seed: 9 }));
+  const b = histogramChart(monteCarlo(model, inputs, { trials: 5_000, seed: 9 }));
+  assert.deepEqual(a.spec, b.spec);
+});
+
+Deno.test("budget and sensitivity charts carry their data", async () => {
+  const budget = budgetChart(gum(model, inputs));
+  assert.deepEqual((budget.spec.data as { values: unknown[] }).values, [{
+    input: "v",
+    sharePercent: 100,
+  }]);
+  const curve = sensitivityCurve(model, { v: 4 }, { vary: "v", from: 3, to: 5, steps: 3 });
+  const chart = sensitivityChart([curve], { relative: true });
+  const values = (chart.spec.data as { values: { x: number; y: number }[] }).values;
+  // (3/4)² − 1 = −43.75 %, 0 %, (5/4)² − 1 = 56.25 % (hand-checkable from ΔP = 4v²)
+  assert.deepEqual(values.map((v) => v.y), [-43.75, 0, 56.25]);
+  assert.match(await chart.toSVG(), /<svg/);
+});
+
+Deno.test("chart errors: bad spec, unknown output, no samples", () => {
+  assert.throws(() => new Chart(null as never), {
+    name: "TypeError",
+    message: "Chart: expected a vega-lite spec object, got object",
+  });
+  const mc = monteCarlo(model, inputs, { trials: 1000, seed: 1, keepSamples: false });
+  assert.throws(() => histogramChart(mc), { name: "TypeError", message: /holds no samples/ });
+  assert.throws(() => histogramChart(mc, { output: "nope" }), {
+    name: "TypeError",
+    message: /unknown output 'nope'/,
+  });
+});
+
+Deno.test("chart display offers vega-lite and SVG MIME types", async () => {
+  const chart = budgetChart(gum(model, inputs));
+  const bundle = await (chart as unknown as Record<symbol, () => Promise<Record<string, unknown>>>)[
+    Symbol.for("Jupyter.display")
+  ]!();
+  assert.ok(bundle["application/vnd.vegalite.v5+json"]);
+  assert.match(String(bundle["image/svg+xml"]), /^<svg/);
+});
