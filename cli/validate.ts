@@ -85,6 +85,7 @@ const fmt = (
   v: number | null | undefined,
   d = 4,
 ) => (v === null || v === undefined ? "–" : formatNumber(v, d));
+const pval = (p: number) => (p < 0.001 ? "< 0.001" : formatNumber(p, 3));
 const ci = (i: { lower: number; upper: number }, d = 4) =>
   `${fmt(i.lower, d)} to ${fmt(i.upper, d)}`;
 
@@ -506,7 +507,9 @@ async function main(): Promise<void> {
               "Proportional bias: slope of difference on mean",
               fmt(ba.proportionalBias.slope),
               ci(ba.proportionalBias.slopeCi),
-              `p = ${fmt(ba.proportionalBias.pValue, 3)}`,
+              `p ${pval(ba.proportionalBias.pValue).startsWith("<") ? "" : "= "}${
+                pval(ba.proportionalBias.pValue)
+              }`,
             ]]
             : []),
         ]);
@@ -675,7 +678,7 @@ async function main(): Promise<void> {
             fmt(f.value, 3),
             ci(f.ci, 3),
             `${fmt(f.f, 4)} (${fmt(f.df1)}, ${fmt(f.df2)})`,
-            fmt(f.pValue, 3),
+            pval(f.pValue),
           ]),
         );
         report.p(
@@ -796,7 +799,7 @@ async function main(): Promise<void> {
           fmt(fk.expectedAgreement, 3),
           fmt(fk.kappa, 3),
           fmt(fk.standardErrorNull, 3),
-          fmt(fk.pValue, 3),
+          pval(fk.pValue),
         ]]);
         report.p(`Subjects left out as incomplete: ${subjects.length - complete.length}.`);
       } catch (e) {

@@ -8,7 +8,7 @@
  */
 import { Chart } from "./chart.ts";
 import { contourAxisFrame } from "../calc/chamber/contour.ts";
-import type { DiscVolume } from "../calc/chamber/volumes.ts";
+import type { DiscVolume, TracedView } from "../calc/chamber/volumes.ts";
 
 /** One drawable element of {@linkcode discMethodChart}, in the long-axis frame of its view (cm). */
 export interface DiscMethodRow {
@@ -52,8 +52,9 @@ export function discMethodData(result: DiscVolume): DiscMethodRow[] {
       `Method of discs chart: expected a result of biplaneDiscVolume or singlePlaneDiscVolume, got ${typeof result}`,
     );
   }
+  const views: readonly TracedView[] = result.views;
   const rows: DiscMethodRow[] = [];
-  for (const v of result.views) {
+  for (const v of views) {
     const frame = contourAxisFrame(v.contour, v.longAxis);
     const n = frame.axialCm.length;
     for (let i = 0; i <= n; i++) {
@@ -116,7 +117,9 @@ export function discMethodChart(result: DiscVolume, options: DiscMethodChartOpti
   const rows = discMethodData(result);
   const heightPx = options.heightPx ?? 320;
   if (!(heightPx >= 100 && heightPx <= 2000)) {
-    throw new RangeError(`Method of discs chart: expected 'heightPx' in [100, 2000], got ${heightPx}`);
+    throw new RangeError(
+      `Method of discs chart: expected 'heightPx' in [100, 2000], got ${heightPx}`,
+    );
   }
   let xMin = Infinity, xMax = -Infinity, yMin = 0, yMax = -Infinity;
   for (const r of rows) {
@@ -128,7 +131,9 @@ export function discMethodChart(result: DiscVolume, options: DiscMethodChartOpti
   const pad = 0.05 * (yMax - yMin);
   const xDomain = [xMin - pad, xMax + pad];
   const yDomain = [yMin - pad, yMax + pad];
-  const widthPx = Math.round((heightPx * (xDomain[1]! - xDomain[0]!)) / (yDomain[1]! - yDomain[0]!));
+  const widthPx = Math.round(
+    (heightPx * (xDomain[1]! - xDomain[0]!)) / (yDomain[1]! - yDomain[0]!),
+  );
   const title = options.title ??
     `Method of discs: ${result.volumeMl.toFixed(1)} mL (${result.discCount} discs, L = ${
       result.longAxisCm.toFixed(2)

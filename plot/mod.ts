@@ -10,3 +10,4 @@ export * from "./agreement.ts";
 export * from "./doppler.ts";
 export * from "./physics.ts";
 export * from "./reference.ts";
+export * from "./chamber.ts";

@@ -109,6 +109,8 @@ export class CohortCsvError extends Error {
   /** Every invalid cell. */
   readonly issues: readonly CohortIssue[];
   /**
+   * Creates the error from the first invalid cell and the list of all of them.
+   *
    * @param name "TypeError" (not a number, missing) or "RangeError" (outside the domain).
    * @param message The message of the first invalid cell.
    * @param issues Every invalid cell.
@@ -174,6 +176,9 @@ interface Plan {
   readonly sourceUnit: string;
   readonly unit: string;
   readonly factor: number;
+  /** When the conversion is a division by an integer (mm → cm: 10), that integer, so that
+   * 38 mm gives exactly 3.8 cm; otherwise 0. */
+  readonly divisor: number;
   readonly range: ValueRange;
   readonly schema: z.ZodNumber | z.ZodType<number>;
   readonly optional: boolean;
@@ -295,7 +300,10 @@ export function readCohortCsv(text: string, options: CohortReadOptions): CohortT
       );
     }
     const factor = conversionFactor(sourceUnit, unit, header);
+    const inverse = Math.round(1 / factor);
+    const divisor = factor < 1 && Math.abs(1 / factor - inverse) < 1e-9 * inverse ? inverse : 0;
     return {
+      divisor,
       key,
       header,
       index,
@@ -380,7 +388,7 @@ export function readCohortCsv(text: string, options: CohortReadOptions): CohortT
         issues.push(issue(lineOf[i]!, i, p, "invalid", "TypeError", expected(p), cell));
         continue;
       }
-      const value = Number(cell) * p.factor;
+      const value = p.divisor > 0 ? Number(cell) / p.divisor : Number(cell) * p.factor;
       if (!p.schema.safeParse(value).success) {
         col[i] = NaN;
         rowStatus[i]! |= ROW_INVALID;

@@ -94,3 +94,52 @@ export function displayEvaluation(result: Evaluation): MimeBundle {
     }${htmlNotes("Cautions", result.cautions)}</div>`,
   };
 }
+
+/** A table that displays itself in notebooks (HTML) with a text/plain fallback. */
+export interface TableDisplay {
+  /** Column names. */
+  readonly columns: readonly string[];
+  /** Rows of formatted cells. */
+  readonly rows: readonly (readonly string[])[];
+  /** Notebook display. */
+  [JUPYTER_DISPLAY](): MimeBundle;
+}
+
+/**
+ * Turns rows of plain objects into a table that displays itself in notebooks; numbers are shown
+ * with up to 4 significant digits, columns in first-seen order.
+ *
+ * @param records The rows.
+ * @param title Optional caption.
+ * @returns The displayable table.
+ *
+ * @example
+ * ```ts
+ * import { tableDisplay } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const t = tableDisplay([{ patient: "A", area: 0.81234 }, { patient: "B", area: 1.2 }]);
+ * assert.deepEqual(t.columns, ["patient", "area"]);
+ * assert.deepEqual(t.rows[0], ["A", "0.8123"]);
+ * ```
+ */
+export function tableDisplay(
+  records: readonly Record<string, unknown>[],
+  title = "",
+): TableDisplay {
+  const columns: string[] = [];
+  for (const r of records) {
+    for (const k of Object.keys(r)) if (!columns.includes(k)) columns.push(k);
+  }
+  const show = (
+    v: unknown,
+  ) => (typeof v === "number" ? formatNumber(v) : v === undefined ? "" : String(v));
+  const rows = records.map((r) => columns.map((c) => show(r[c])));
+  return {
+    columns,
+    rows,
+    [JUPYTER_DISPLAY]: () => ({
+      "text/plain": (title ? `${title}\n` : "") + textTable(columns, rows),
+      "text/html": (title ? `<p><b>${escapeHtml(title)}</b></p>` : "") + htmlTable(columns, rows),
+    }),
+  };
+}

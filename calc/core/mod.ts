@@ -42,5 +42,7 @@ export {
   formatUnit,
   htmlNotes,
   htmlTable,
+  type TableDisplay,
+  tableDisplay,
   textTable,
 } from "./display.ts";

@@ -5,7 +5,9 @@
  * bands here close those gaps at the next printed value so that every measurement falls in exactly
  * one class (e.g. mild AS is 2.5 < Vmax < 3.0). All thresholds were recalled by the authors and
  * checked against each other, not against a fresh copy of the printed tables: they are marked
- * "from memory" row by row.
+ * "from memory" row by row. The aortic stenosis (2017), mitral regurgitation (2017) and pulmonary
+ * hypertension (2015) bands were also compared with reproductions of those tables in secondary
+ * literature and agree.
  *
  * @module
  */

@@ -93,7 +93,7 @@ export const GALIE_2015: Reference = {
   authors: "Galiè N, Humbert M, Vachiery JL, Gibbs S, Lang I, Torbicki A, et al.",
   year: 2015,
   title: "2015 ESC/ERS Guidelines for the diagnosis and treatment of pulmonary hypertension",
-  publication: "Eur Heart J 2016;37(1):67-119",
+  publication: "Eur Heart J 2016;37(1):67-119; co-published in Eur Respir J 2015;46(4):903-975",
   locator: "Table 8, echocardiographic probability of pulmonary hypertension (from memory)",
   doi: "10.1093/eurheartj/ehv317",
 };

@@ -17,6 +17,7 @@ import { type RandomStream, randomStream } from "./random.ts";
 import { checkCoverage, type GumResult } from "./gum.ts";
 import { numericalTolerance } from "./rounding.ts";
 import { displayMonteCarlo } from "./display.ts";
+import { columnKernel } from "./kernel.ts";
 
 /** Default number of Monte Carlo trials (JCGM 101:2008 §7.2.2 suggests 10⁶ for 95 % coverage). */
 export const DEFAULT_TRIALS = 1_000_000;
@@ -182,30 +183,23 @@ function sampleInputs(
 /** Evaluates the formula on every trial; returns one column per output. */
 function evaluateColumns<I extends string, O extends string>(
   calc: Calculation<I, O>,
-  prepared: PreparedInputs<I>,
   columns: readonly Float64Array[],
   m: number,
 ): Float64Array[] {
-  const names = calc.inputNames;
-  const outs = calc.outputNames;
-  const results = outs.map(() => new Float64Array(m));
-  const x: Record<string, number> = { ...prepared.estimates };
-  const ni = names.length, no = outs.length;
-  for (let r = 0; r < m; r++) {
-    for (let i = 0; i < ni; i++) x[names[i]!] = columns[i]![r]!;
+  const results = calc.outputNames.map(() => new Float64Array(m));
+  const c = calc as unknown as Calculation;
+  const bad = columnKernel(c)(c.formula, columns, results, m);
+  if (bad >= 0) {
+    const x: Record<string, number> = {};
+    calc.inputNames.forEach((n, i) => (x[n] = columns[i]![bad]!));
     const y = calc.formula(x as InputValues<I>) as Record<string, number>;
-    for (let k = 0; k < no; k++) {
-      const v = y[outs[k]!]!;
-      if (!Number.isFinite(v)) {
-        const shown = names.map((n) => `${n} = ${x[n]}`).join(", ");
-        throw new RangeError(
-          `${calc.title}: output '${
-            outs[k]
-          }' is not finite at Monte Carlo trial ${r} (${shown}), got ${v}; give the inputs distributions that respect the formula's domain (e.g. rectangular bounds)`,
-        );
-      }
-      results[k]![r] = v;
-    }
+    const output = calc.outputNames.find((o) => !Number.isFinite(y[o]))!;
+    const shown = calc.inputNames.map((n) => `${n} = ${x[n]}`).join(", ");
+    throw new RangeError(
+      `${calc.title}: output '${output}' is not finite at Monte Carlo trial ${bad} (${shown}), got ${
+        y[output]
+      }; give the inputs distributions that respect the formula's domain (e.g. rectangular bounds)`,
+    );
   }
   return results;
 }
@@ -416,7 +410,7 @@ export function monteCarlo<I extends string, O extends string>(
   const rng = randomStream(seed);
   const prepared = prepareInputs(calc, inputs, options.correlations);
   const columns = sampleInputs(prepared as PreparedInputs<string>, trials, rng, calc.title);
-  const results = evaluateColumns(calc, prepared, columns, trials);
+  const results = evaluateColumns(calc, columns, trials);
   const warnings = [...prepared.flags, ...rangeWarnings(calc as unknown as Calculation, columns)];
   return summarise(calc, results, coverage, trials, seed, warnings, options.keepSamples ?? true);
 }
@@ -504,7 +498,7 @@ export function monteCarloAdaptive<I extends string, O extends string>(
     if (batches.length === 0) {
       inputWarnings = rangeWarnings(calc as unknown as Calculation, columns);
     }
-    const results = evaluateColumns(calc, prepared, columns, m);
+    const results = evaluateColumns(calc, columns, m);
     batches.push(results);
     results.forEach((col, k) => {
       const { mean, sd } = meanAndStandardDeviation(col);

@@ -369,8 +369,9 @@ export class DenoKernel {
         socket.receive(),
         new Promise<null>((resolve) => (timer = setTimeout(() => resolve(null), timeoutMs))),
       ]);
+      console.error("ECHO", echo, ping);
       return echo !== null && echo.length === 2 && new TextDecoder().decode(echo[1]) === ping;
-    } catch {
+    } catch (e) { console.error("HB", e);
       return false;
     } finally {
       clearTimeout(timer);
