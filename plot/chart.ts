@@ -44,6 +44,8 @@ export class Chart {
   #svg: Promise<string> | undefined;
 
   /**
+   * Wraps a vega-lite spec.
+   *
    * @param spec A vega-lite spec (plain object; inline data only, no URLs).
    * @param options Title.
    * @throws {TypeError} When the spec is not an object.

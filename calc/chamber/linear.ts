@@ -14,6 +14,10 @@ import { DEVEREUX_1986, GANAU_1992, LANG_2015, TEICHHOLZ_1976 } from "./sources.
 import { ejectionFraction, percentReduction } from "./function.ts";
 import { monteCarlo, type MonteCarloOptions } from "../uncertainty/montecarlo.ts";
 import type { UncertainInputs } from "../uncertainty/prepare.ts";
+import { bsaIndexCalculation } from "../body/indexing.ts";
+
+/** Measurement / BSA for grams: the one indexing definition of the body-size module. */
+const indexByGrams = bsaIndexCalculation("g");
 
 // Valid domains are physical limits; typical ranges are the adult span seen in practice
 // (common practice, no source) and only raise a flag.
@@ -254,7 +258,8 @@ export const lvMassLinear: Calculation<
 });
 
 /**
- * LV mass indexed to body surface area; composes {@linkcode lvMassLinear}.
+ * LV mass indexed to body surface area; composes {@linkcode lvMassLinear} and the body-size
+ * module's indexing calculation (`bsaIndexCalculation("g")`).
  *
  * Formula: LV mass index [g/m²] = LV mass / BSA
  *
@@ -290,11 +295,12 @@ export const lvMassIndex: Calculation<
   },
   formula: (x) => {
     const { lvMassG } = lvMassLinear.formula(x);
-    return { lvMassG, lvMassIndexGPerM2: lvMassG / x.bodySurfaceAreaM2 };
+    const { indexed } = indexByGrams.formula({ measurement: lvMassG, bsaM2: x.bodySurfaceAreaM2 });
+    return { lvMassG, lvMassIndexGPerM2: indexed };
   },
   formulaText: "LVMi = LV mass / BSA",
   sources: [LANG_2015],
-  cautions: lvMassLinear.cautions,
+  cautions: [...lvMassLinear.cautions, ...indexByGrams.cautions],
   clinical: true,
 });
 

@@ -23,6 +23,10 @@ import {
 } from "./contour.ts";
 import { ejectionFraction } from "./function.ts";
 import { LANG_2015, SCHILLER_1989 } from "./sources.ts";
+import { bsaIndexCalculation } from "../body/indexing.ts";
+
+/** Measurement / BSA for millilitres: the one indexing definition of the body-size module. */
+const indexByMl = bsaIndexCalculation("mL");
 
 /** The number of discs of the guideline method. */
 export const GUIDELINE_DISC_COUNT = 20;
@@ -502,8 +506,8 @@ export function biplaneEjectionFraction(
   if (!(es.volumeMl <= ed.volumeMl)) {
     throw new RangeError(
       `${where}: expected the end-systolic volume not to exceed the end-diastolic volume (${
-        ed.volumeMl.toFixed(1)
-      } mL), got ${es.volumeMl.toFixed(1)} mL`,
+        ed.volumeMl.toFixed(2)
+      } mL), got ${es.volumeMl.toFixed(2)} mL`,
     );
   }
   const r = evaluate(ejectionFraction, {
@@ -545,7 +549,7 @@ function withPhase<T>(fn: () => T, phase: string): T {
  * appendage must be excluded from the trace by the caller.
  *
  * Formula: V_AL = 0.85·A₄ch·A₂ch/min(L₄ch, L₂ch); V_discs = (π/4)·Σ aᵢ·bᵢ·max(L₄ch, L₂ch)/20;
- * LAVi = V/BSA when `bodySurfaceAreaM2` is given.
+ * LAVi = V/BSA when `bodySurfaceAreaM2` is given (the body-size module's indexing calculation).
  *
  * Source: Lang RM et al., J Am Soc Echocardiogr 2015;28:1–39 (LA volume: biplane area–length
  * and disc summation; the shorter-length rule from memory).
@@ -615,10 +619,15 @@ export function leftAtrialVolume(
       ...new Set([...discs.cautions, ...al.cautions]),
     ],
   };
-  return bsa === undefined ? out : {
+  if (bsa === undefined) return out;
+  const areaLengthIndex = evaluate(indexByMl, { measurement: out.areaLengthMl, bsaM2: bsa });
+  const discsIndex = evaluate(indexByMl, { measurement: out.discsMl, bsaM2: bsa });
+  return {
     ...out,
-    areaLengthIndexMlPerM2: out.areaLengthMl / bsa,
-    discsIndexMlPerM2: out.discsMl / bsa,
+    areaLengthIndexMlPerM2: areaLengthIndex.outputs.indexed,
+    discsIndexMlPerM2: discsIndex.outputs.indexed,
+    flags: [...out.flags, ...discsIndex.flags],
+    cautions: [...out.cautions, ...indexByMl.cautions],
   };
 }
 

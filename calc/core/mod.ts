@@ -27,7 +27,7 @@ export {
   isCalculation,
   validateInputs,
 } from "./define.ts";
-export { math, type QuantityInput, toCanonical } from "./units.ts";
+export { type MathJsUnit, type QuantityInput, toCanonical } from "./units.ts";
 export { JUPYTER_DISPLAY, type MimeBundle } from "./display.ts";
 export {
   type SensitivityCurve,

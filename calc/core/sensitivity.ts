@@ -35,11 +35,13 @@ export interface SensitivityPoint {
 export interface SensitivityCurve {
   /** Calculation title. */
   readonly title: string;
-  /** Swept input name and unit. */
+  /** Swept input name. */
   readonly input: string;
+  /** Unit of the swept input. */
   readonly inputUnit: string;
-  /** Followed output name and unit. */
+  /** Followed output name. */
   readonly output: string;
+  /** Unit of the followed output. */
   readonly outputUnit: string;
   /** Reference value of the swept input and of the output. */
   readonly reference: { readonly x: number; readonly y: number };

@@ -6,6 +6,14 @@
  */
 import { all, create, type MathJsInstance, type Unit } from "mathjs";
 
+/** The part of a mathjs Unit this library uses (any mathjs Unit satisfies it). */
+export interface MathJsUnit {
+  /** The value converted to `unit`. */
+  toNumber(unit: string): number;
+  /** Formatted value and unit. */
+  toString(): string;
+}
+
 /** The project's one mathjs instance (units, expressions, symbolic derivatives). */
 export const math: MathJsInstance = create(all!, {});
 
@@ -29,10 +37,10 @@ export function mathUnitOf(unit: string): Unit | null {
 
 /** A value as callers may give it: a number in the canonical unit, a quantity string such as
  * "21 mm", or a mathjs Unit. */
-export type QuantityInput = number | string | Unit;
+export type QuantityInput = number | string | MathJsUnit;
 
 /** True for a mathjs Unit object. */
-export function isMathUnit(value: unknown): value is Unit {
+export function isMathUnit(value: unknown): value is MathJsUnit {
   return typeof value === "object" && value !== null &&
     (value as { type?: unknown }).type === "Unit" &&
     typeof (value as { toNumber?: unknown }).toNumber === "function";
@@ -80,7 +88,7 @@ export function toCanonical(value: QuantityInput, unit: string, where: string): 
         `${where}: expected a plain number in ${unit}, got the unit ${value.toString()}`,
       );
     }
-    return convert(value, target, unit, where, value.toString());
+    return convert(value as unknown as Unit, target, unit, where, value.toString());
   }
   throw new TypeError(
     `${where}: expected a number or a quantity string in ${unit}, got ${describe(value)}`,

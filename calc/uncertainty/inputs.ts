@@ -14,36 +14,53 @@ export type Amount = number | string;
 
 /** Normal (Gaussian) distribution, JCGM 101 §6.4.7. */
 export interface NormalInput {
+  /** Distribution tag. */
   readonly kind: "normal";
+  /** Estimate (expectation), in the input's canonical unit or as a quantity string. */
   readonly value: Amount;
+  /** Standard uncertainty, ≥ 0. */
   readonly standardUncertainty: Amount;
+  /** Degrees of freedom of the standard uncertainty (infinite when omitted). */
   readonly dof?: number;
 }
 /** Rectangular (uniform) distribution on [lower, upper], JCGM 100 §4.3.7, JCGM 101 §6.4.2. */
 export interface RectangularInput {
+  /** Distribution tag. */
   readonly kind: "rectangular";
+  /** Lower bound. */
   readonly lower: Amount;
+  /** Upper bound. */
   readonly upper: Amount;
+  /** Degrees of freedom of the standard uncertainty (infinite when omitted). */
   readonly dof?: number;
 }
 /** Triangular distribution on [lower, upper] with a mode, JCGM 100 §4.3.9, JCGM 101 §6.4.5. */
 export interface TriangularInput {
+  /** Distribution tag. */
   readonly kind: "triangular";
+  /** Lower bound. */
   readonly lower: Amount;
+  /** Upper bound. */
   readonly upper: Amount;
   /** Mode; the midpoint when omitted (symmetric triangle). */
   readonly mode?: Amount;
+  /** Degrees of freedom of the standard uncertainty (infinite when omitted). */
   readonly dof?: number;
 }
 /** Arcsine (U-shaped) distribution on [lower, upper], JCGM 101 §6.4.6. */
 export interface ArcsineInput {
+  /** Distribution tag. */
   readonly kind: "arcsine";
+  /** Lower bound. */
   readonly lower: Amount;
+  /** Upper bound. */
   readonly upper: Amount;
+  /** Degrees of freedom of the standard uncertainty (infinite when omitted). */
   readonly dof?: number;
 }
 /** Scaled and shifted Student t distribution (Type A evaluation), JCGM 101 §6.4.9. */
 export interface StudentTInput {
+  /** Distribution tag. */
   readonly kind: "studentT";
   /** Mean of the readings. */
   readonly value: Amount;
@@ -54,7 +71,9 @@ export interface StudentTInput {
 }
 /** A value known exactly (zero uncertainty). */
 export interface ExactInput {
+  /** Distribution tag. */
   readonly kind: "exact";
+  /** Estimate (expectation), in the input's canonical unit or as a quantity string. */
   readonly value: Amount;
 }
 
@@ -235,7 +254,9 @@ export function isUncertainInput(value: unknown): value is UncertainInput {
 
 /** An input resolved to canonical numbers: what GUM and Monte Carlo consume. */
 export interface ResolvedInput {
+  /** Input name. */
   readonly name: string;
+  /** Distribution tag. */
   readonly kind: UncertainInput["kind"];
   /** Expectation used as the estimate. */
   readonly estimate: number;
@@ -243,9 +264,11 @@ export interface ResolvedInput {
   readonly standardUncertainty: number;
   /** Degrees of freedom (Infinity for Type B without stated reliability). */
   readonly dof: number;
-  /** Distribution parameters in canonical units (lower/upper/mode for bounded shapes; scale for t). */
+  /** Lower bound of a bounded shape (the estimate otherwise), canonical unit. */
   readonly lower: number;
+  /** Upper bound of a bounded shape (the estimate otherwise), canonical unit. */
   readonly upper: number;
+  /** Mode of a triangular shape (the estimate otherwise), canonical unit. */
   readonly mode: number;
 }
 

@@ -369,9 +369,8 @@ export class DenoKernel {
         socket.receive(),
         new Promise<null>((resolve) => (timer = setTimeout(() => resolve(null), timeoutMs))),
       ]);
-      console.error("ECHO", echo, ping);
       return echo !== null && echo.length === 2 && new TextDecoder().decode(echo[1]) === ping;
-    } catch (e) { console.error("HB", e);
+    } catch {
       return false;
     } finally {
       clearTimeout(timer);
@@ -475,9 +474,9 @@ export class DenoKernel {
       try {
         const reply = this.#waitReply(request.header.msg_id, graceMs);
         await this.#controlQueue.send(serializeMessage(request, this.connection.key));
-        await reply;
-        const timer = sleep(graceMs);
-        await Promise.race([this.#exited, timer]);
+        // the Deno kernel may exit before its shutdown_reply reaches us: either one will do
+        await Promise.race([reply, this.#exited]);
+        await Promise.race([this.#exited, sleep(graceMs)]);
         clean = this.exitStatus !== null;
       } catch {
         clean = false;

@@ -6,7 +6,7 @@ const relClose = (actual: number, expected: number, tol: number): void =>
   assert.ok(Math.abs(actual / expected - 1) <= tol, `expected ${expected}, got ${actual}`);
 
 // EF = 100·(1 − ESV/EDV). Sensitivities (hand-derived): c_EDV = 100·ESV/EDV², c_ESV = −100/EDV.
-// JCGM 100:2008 §5.2.2, eq. (16): u_c²(y) = Σ cᵢ²u²(xᵢ) + 2·Σ_{i<j} cᵢ·cⱼ·u(xᵢ)·u(xⱼ)·r(xᵢ, xⱼ).
+// JCGM 100:2008 §5.2.2, eq. (16) (equation number from memory): u_c²(y) = Σ cᵢ²u²(xᵢ) + 2·Σ_{i<j} cᵢ·cⱼ·u(xᵢ)·u(xⱼ)·r(xᵢ, xⱼ).
 // The sensitivities have opposite signs, so r > 0 makes the cross term negative: correlated
 // tracing errors partly cancel in the ratio and the EF uncertainty shrinks.
 const EDV = 120, ESV = 50, U_EDV = 6, U_ESV = 5;

@@ -151,7 +151,7 @@ Deno.test("ejection fraction from traced contours", () => {
     {
       name: "RangeError",
       message:
-        /^Biplane ejection fraction: expected the end-systolic volume not to exceed the end-diastolic volume \(44\.9 mL\), got 104\.8 mL$/,
+        /^Biplane ejection fraction: expected the end-systolic volume not to exceed the end-diastolic volume \(44\.91 mL\), got 104\.75 mL$/,
     },
   );
   assert.throws(

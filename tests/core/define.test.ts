@@ -1,5 +1,6 @@
 import assert from "node:assert/strict";
-import { CLINICAL_CAUTION, defineCalculation, evaluate, math } from "../../mod.ts";
+import { CLINICAL_CAUTION, defineCalculation, evaluate } from "../../mod.ts";
+import { math } from "../../calc/core/units.ts";
 
 // A small calculation for exercising the machinery: continuity-equation valve area,
 // AVA = π(D/2)²·VTI_LVOT/VTI_AV (Baumgartner et al., J Am Soc Echocardiogr 2009;22:1–23, eq. in text).
