@@ -175,6 +175,9 @@ export class DenoKernel {
   readonly #control = new zmq.Dealer({ linger: 0 });
   readonly #stdin = new zmq.Dealer({ linger: 0 });
   readonly #iopub = new zmq.Subscriber({ linger: 0 });
+  readonly #hb = new zmq.Dealer({ linger: 0 });
+  readonly #hbQueue = new SendQueue(this.#hb);
+  readonly #pings = new Map<string, () => void>();
   readonly #shellQueue = new SendQueue(this.#shell);
   readonly #controlQueue = new SendQueue(this.#control);
   readonly #replyWaiters = new Map<string, (message: JupyterMessage) => void>();
@@ -290,9 +293,11 @@ export class DenoKernel {
     this.#stdin.connect(this.#url(this.connection.stdin_port));
     this.#iopub.connect(this.#url(this.connection.iopub_port));
     this.#iopub.subscribe();
+    this.#hb.connect(this.#url(this.connection.hb_port));
     this.#receiveLoop(this.#shell, false);
     this.#receiveLoop(this.#control, false);
     this.#receiveLoop(this.#iopub, true);
+    this.#heartbeatLoop();
     const deadline = Date.now() + timeoutMs;
     // A SUB socket misses what is published before its subscription reaches the kernel, so ask
     // for kernel_info until a reply AND its iopub status message both arrive.
@@ -348,33 +353,49 @@ export class DenoKernel {
   }
 
   /**
-   * Checks the heartbeat channel: sends a ping and waits for the echo.
+   * Checks the heartbeat channel: sends pings until one is echoed or the time runs out.
    *
    * The kernel's heartbeat socket is a REP socket. The client speaks to it with a DEALER socket
-   * that adds the empty envelope frame a REQ socket would add (wire-identical to REQ): under Deno
-   * the npm `zeromq` REQ socket never delivered the echo here and could crash the process when
-   * closed with a pending receive, while DEALER works.
+   * that adds the empty envelope frame a REQ socket would add (wire-identical to REQ), because a
+   * REQ socket waits forever for a lost echo: the Deno kernel was seen to drop the first ping on
+   * a fresh connection, and the npm `zeromq` REQ socket then never recovered under Deno.
    *
-   * @param timeoutMs How long to wait for the echo.
-   * @returns Whether the echo came back in time.
+   * @param timeoutMs How long to wait for an echo in total.
+   * @returns Whether an echo came back in time.
    */
-  async heartbeat(timeoutMs = 2_000): Promise<boolean> {
-    const socket = new zmq.Dealer({ linger: 0 });
-    let timer: number | undefined;
-    try {
-      socket.connect(this.#url(this.connection.hb_port));
+  async heartbeat(timeoutMs = 5_000): Promise<boolean> {
+    if (this.#closed || this.exitStatus !== null) return false;
+    const deadline = Date.now() + timeoutMs;
+    while (Date.now() < deadline && this.exitStatus === null) {
       const ping = `ping ${randomUUID()}`;
-      await socket.send(["", ping]);
-      const echo = await Promise.race([
-        socket.receive(),
-        new Promise<null>((resolve) => (timer = setTimeout(() => resolve(null), timeoutMs))),
-      ]);
-      return echo !== null && echo.length === 2 && new TextDecoder().decode(echo[1]) === ping;
-    } catch {
-      return false;
-    } finally {
+      let timer: ReturnType<typeof setTimeout> | undefined;
+      const echoed = new Promise<boolean>((resolve) => {
+        this.#pings.set(ping, () => resolve(true));
+        timer = setTimeout(() => resolve(false), Math.min(1_000, deadline - Date.now()));
+      });
+      try {
+        await this.#hbQueue.send(["", ping]);
+      } catch {
+        return false;
+      }
+      const ok = await echoed;
       clearTimeout(timer);
-      socket.close();
+      this.#pings.delete(ping);
+      if (ok) return true;
+    }
+    return false;
+  }
+
+  async #heartbeatLoop(): Promise<void> {
+    const decoder = new TextDecoder();
+    while (!this.#closed) {
+      try {
+        const frames = await this.#hb.receive();
+        const payload = frames[frames.length - 1];
+        if (payload !== undefined) this.#pings.get(decoder.decode(payload))?.();
+      } catch {
+        return; // socket closed
+      }
     }
   }
 
@@ -442,7 +463,7 @@ export class DenoKernel {
       if (this.exitStatus !== null) return finish("died");
       const remaining = deadline - Date.now();
       if (remaining <= 0) return finish("timeout");
-      let timer: number | undefined;
+      let timer: ReturnType<typeof setTimeout> | undefined;
       let onAbort: (() => void) | undefined;
       await Promise.race([
         new Promise<void>((resolve) => {
@@ -508,7 +529,7 @@ export class DenoKernel {
     await this.#exited;
     if (!this.#closed) {
       this.#closed = true;
-      for (const socket of [this.#shell, this.#control, this.#stdin, this.#iopub]) socket.close();
+      for (const s of [this.#shell, this.#control, this.#stdin, this.#iopub, this.#hb]) s.close();
       await Deno.remove(this.#connectionDir, { recursive: true }).catch(() => {});
     }
   }
