@@ -96,7 +96,7 @@ export const ejectionFraction: Calculation<
   },
   formula: ({ endDiastolicVolumeMl: edv, endSystolicVolumeMl: esv }) => {
     const ef = percentReduction(edv, esv);
-    return { ejectionFractionPercent: ef, strokeVolumeMl: ef === ef ? edv - esv : NaN };
+    return { ejectionFractionPercent: ef, strokeVolumeMl: Number.isNaN(ef) ? NaN : edv - esv };
   },
   formulaText: "EF = 100·(EDV − ESV)/EDV; SV = EDV − ESV",
   sources: [LANG_2015, SCHILLER_1989],

@@ -106,7 +106,7 @@ function sampleColumn(input: ResolvedInput, out: Float64Array, rng: RandomStream
       out.fill(x);
       return;
     case "normal":
-      for (let r = 0; r < m; r++) out[r] = x + u * rng.normal();
+      rng.fillNormal(out, x, u);
       return;
     case "studentT":
       for (let r = 0; r < m; r++) out[r] = x + u * rng.studentT(input.dof);
@@ -160,7 +160,7 @@ function sampleInputs(
       return null;
     }
     const col = new Float64Array(m);
-    for (let r = 0; r < m; r++) col[r] = rng.normal();
+    rng.fillNormal(col);
     return col;
   });
   inputs.forEach((input, i) => {
@@ -239,42 +239,43 @@ export function meanAndStandardDeviation(values: Float64Array): { mean: number; 
 }
 
 /**
- * The `count` smallest (`upper` false) or largest (`upper` true) values of `values`, sorted
- * ascending, without sorting the whole array: a value histogram locates the tail, only the tail
- * is copied and sorted. Exact for any data (ties and heavy tails only enlarge the copied part).
+ * The `count` smallest and the `count` largest values of `values`, each sorted ascending, without
+ * sorting the whole array: one pass finds the range, one builds a value histogram that locates
+ * both tails, one copies the tails, and only they are sorted. Exact for any data (ties and heavy
+ * tails only enlarge the copied part).
  */
-export function sortedTail(values: Float64Array, count: number, upper: boolean): Float64Array {
+export function sortedTails(values: Float64Array, count: number): { low: Float64Array; high: Float64Array } {
   const m = values.length;
-  if (count >= m) return values.slice().sort();
+  if (2 * count >= m) {
+    const all = values.slice().sort();
+    return { low: all.subarray(0, count), high: all.subarray(m - count) };
+  }
   let min = Infinity, max = -Infinity;
   for (let r = 0; r < m; r++) {
     const v = values[r]!;
     if (v < min) min = v;
     if (v > max) max = v;
   }
-  if (min === max) return new Float64Array(count).fill(min);
+  if (min === max) return { low: new Float64Array(count).fill(min), high: new Float64Array(count).fill(min) };
   const bins = 4096;
   const scale = bins / (max - min);
   const counts = new Uint32Array(bins);
-  for (let r = 0; r < m; r++) {
-    const b = Math.min(bins - 1, Math.floor((values[r]! - min) * scale));
-    counts[b]!++;
-  }
-  let cut = 0, total = 0;
-  if (upper) {
-    for (cut = bins - 1; cut >= 0; cut--) if ((total += counts[cut]!) >= count) break;
-  } else {
-    for (cut = 0; cut < bins; cut++) if ((total += counts[cut]!) >= count) break;
-  }
-  const tail = new Float64Array(total);
-  let n = 0;
+  for (let r = 0; r < m; r++) counts[Math.min(bins - 1, Math.floor((values[r]! - min) * scale))]!++;
+  let lowCut = 0, lowTotal = 0;
+  for (; lowCut < bins; lowCut++) if ((lowTotal += counts[lowCut]!) >= count) break;
+  let highCut = bins - 1, highTotal = 0;
+  for (; highCut >= 0; highCut--) if ((highTotal += counts[highCut]!) >= count) break;
+  const low = new Float64Array(lowTotal), high = new Float64Array(highTotal);
+  let nl = 0, nh = 0;
   for (let r = 0; r < m; r++) {
     const v = values[r]!;
     const b = Math.min(bins - 1, Math.floor((v - min) * scale));
-    if (upper ? b >= cut : b <= cut) tail[n++] = v;
+    if (b <= lowCut) low[nl++] = v;
+    if (b >= highCut) high[nh++] = v;
   }
-  tail.sort();
-  return upper ? tail.subarray(total - count) : tail.subarray(0, count);
+  low.sort();
+  high.sort();
+  return { low: low.subarray(0, count), high: high.subarray(highTotal - count) };
 }
 
 /**
@@ -301,8 +302,8 @@ export function coverageIntervals(
   const q = Math.min(m - 1, Number.isInteger(pm) ? pm : Math.floor(pm + 0.5));
   const r = Number.isInteger((m - q) / 2) ? (m - q) / 2 : (m - q + 1) / 2;
   const tailSize = m - q; // order statistics 1 … m − q and q + 1 … m
-  const low = sortedTail(values, tailSize, false); // low[j] = y_(j+1)
-  const high = sortedTail(values, tailSize, true); // high[j] = y_(q+1+j)
+  // low[j] = y_(j+1), high[j] = y_(q+1+j)
+  const { low, high } = sortedTails(values, tailSize);
   const symmetric: [number, number] = [low[r - 1]!, high[r - 1]!];
   let best = Infinity, bestJ = 0;
   for (let j = 0; j < tailSize; j++) {

@@ -30,8 +30,8 @@ export interface RandomStream {
   normal(): number;
   /** Standard Student t with `dof` degrees of freedom. */
   studentT(dof: number): number;
-  /** Fills `out` with standard normal draws. */
-  fillNormal(out: Float64Array): void;
+  /** Fills `out` with normal draws of the given mean and standard deviation (default N(0, 1)). */
+  fillNormal(out: Float64Array, mean?: number, sd?: number): void;
   /** Fills `out` with uniform draws on (0, 1). */
   fillUniform(out: Float64Array): void;
 }
@@ -117,8 +117,25 @@ export function randomStream(seed: number): RandomStream {
     uniform,
     normal,
     studentT,
-    fillNormal(out: Float64Array): void {
-      for (let r = 0; r < out.length; r++) out[r] = normal();
+    fillNormal(out: Float64Array, mean = 0, sd = 1): void {
+      const m = out.length;
+      for (let r = 0; r < m; r++) {
+        // fast path of the ziggurat inlined; the rare wedge and tail cases call normal()
+        const a = mt.next();
+        const b = mt.next();
+        const u = 2 * (((a >>> 5) * TWO_POW_26 + (b >>> 6) + 0.5) / TWO_POW_53) - 1;
+        const i = (b & 63) | ((a & 1) << 6);
+        let z: number;
+        if (Math.abs(u) < ZIG_RATIO[i]!) z = u * ZIG_X[i]!;
+        else if (i === 0) z = tail(u < 0);
+        else {
+          const x = u * ZIG_X[i]!;
+          const f0 = Math.exp(-0.5 * (ZIG_X[i]! * ZIG_X[i]! - x * x));
+          const f1 = Math.exp(-0.5 * (ZIG_X[i + 1]! * ZIG_X[i + 1]! - x * x));
+          z = f1 + uniform() * (f0 - f1) < 1 ? x : normal();
+        }
+        out[r] = mean + sd * z;
+      }
     },
     fillUniform(out: Float64Array): void {
       for (let r = 0; r < out.length; r++) out[r] = uniform();

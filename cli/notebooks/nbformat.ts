@@ -1,0 +1,466 @@
+/**
+ * Notebook documents (nbformat 4.5): types, reading with clear errors, upgrading 4.x to 4.5 (cell
+ * ids), strict validation of what the runner writes, and collection of kernel iopub messages
+ * into cell outputs.
+ *
+ * Reference: Jupyter nbformat, "The Notebook file format" and the JSON schema nbformat.v4.5.
+ *
+ * @module
+ */
+import { randomUUID } from "node:crypto";
+import * as z from "zod";
+
+/** A string stored whole or as a list of lines (each but the last ending in "\n"). */
+export type MultilineString = string | string[];
+
+/** A MIME bundle as stored in a notebook: MIME type → content. */
+export type MimeData = Record<string, unknown>;
+
+/** `stream` output. */
+export interface StreamOutput {
+  /** Output type. */
+  output_type: "stream";
+  /** "stdout" or "stderr". */
+  name: string;
+  /** The text. */
+  text: MultilineString;
+}
+
+/** `display_data` output. */
+export interface DisplayDataOutput {
+  /** Output type. */
+  output_type: "display_data";
+  /** MIME bundle. */
+  data: MimeData;
+  /** Metadata per MIME type. */
+  metadata: Record<string, unknown>;
+}
+
+/** `execute_result` output. */
+export interface ExecuteResultOutput {
+  /** Output type. */
+  output_type: "execute_result";
+  /** Execution count of the cell. */
+  execution_count: number | null;
+  /** MIME bundle. */
+  data: MimeData;
+  /** Metadata per MIME type. */
+  metadata: Record<string, unknown>;
+}
+
+/** `error` output. */
+export interface ErrorOutput {
+  /** Output type. */
+  output_type: "error";
+  /** Error class name. */
+  ename: string;
+  /** Error message. */
+  evalue: string;
+  /** Traceback lines (may contain ANSI colour codes). */
+  traceback: string[];
+}
+
+/** One output of a code cell. */
+export type Output = StreamOutput | DisplayDataOutput | ExecuteResultOutput | ErrorOutput;
+
+/** A code cell. */
+export interface CodeCell {
+  /** Cell id (nbformat 4.5). */
+  id: string;
+  /** Cell type. */
+  cell_type: "code";
+  /** Cell metadata. */
+  metadata: Record<string, unknown>;
+  /** Source code. */
+  source: MultilineString;
+  /** Outputs from the last execution. */
+  outputs: Output[];
+  /** Execution count, null when not executed. */
+  execution_count: number | null;
+}
+
+/** A Markdown cell. */
+export interface MarkdownCell {
+  /** Cell id. */
+  id: string;
+  /** Cell type. */
+  cell_type: "markdown";
+  /** Cell metadata. */
+  metadata: Record<string, unknown>;
+  /** Markdown source. */
+  source: MultilineString;
+  /** Attachments (name → MIME bundle). */
+  attachments?: Record<string, MimeData>;
+}
+
+/** A raw cell. */
+export interface RawCell {
+  /** Cell id. */
+  id: string;
+  /** Cell type. */
+  cell_type: "raw";
+  /** Cell metadata. */
+  metadata: Record<string, unknown>;
+  /** Raw source. */
+  source: MultilineString;
+  /** Attachments. */
+  attachments?: Record<string, MimeData>;
+}
+
+/** Any cell. */
+export type Cell = CodeCell | MarkdownCell | RawCell;
+
+/** A notebook document, nbformat 4.5. */
+export interface Notebook {
+  /** Notebook metadata (kernelspec, language_info, …). */
+  metadata: {
+    kernelspec?: { name: string; display_name: string; language?: string };
+    language_info?: { name: string; [key: string]: unknown };
+    [key: string]: unknown;
+  };
+  /** Major format version (4). */
+  nbformat: 4;
+  /** Minor format version (5 or more once ids exist). */
+  nbformat_minor: number;
+  /** The cells. */
+  cells: Cell[];
+}
+
+/** Bad notebook input: missing file, invalid JSON, wrong structure or a non-Deno kernel. */
+export class NotebookInputError extends Error {
+  /** Creates the error. */
+  constructor(message: string, options?: ErrorOptions) {
+    super(message, options);
+    this.name = "NotebookInputError";
+  }
+}
+
+const multiline = z.union([z.string(), z.array(z.string())]);
+const record = z.record(z.string(), z.unknown());
+const cellId = z.string().regex(/^[a-zA-Z0-9-_]+$/).min(1).max(64);
+const mimeBundle = z.record(
+  z.string().regex(/^[^/\s]+\/[^/\s]+$/, "expected a MIME type key"),
+  z.unknown(),
+);
+
+const outputSchema = z.discriminatedUnion("output_type", [
+  z.strictObject({ output_type: z.literal("stream"), name: z.string(), text: multiline }),
+  z.strictObject({ output_type: z.literal("display_data"), data: mimeBundle, metadata: record }),
+  z.strictObject({
+    output_type: z.literal("execute_result"),
+    execution_count: z.number().int().min(0).nullable(),
+    data: mimeBundle,
+    metadata: record,
+  }),
+  z.strictObject({
+    output_type: z.literal("error"),
+    ename: z.string(),
+    evalue: z.string(),
+    traceback: z.array(z.string()),
+  }),
+]);
+
+const cellSchema = z.discriminatedUnion("cell_type", [
+  z.strictObject({
+    id: cellId,
+    cell_type: z.literal("code"),
+    metadata: record,
+    source: multiline,
+    outputs: z.array(outputSchema),
+    execution_count: z.number().int().min(0).nullable(),
+  }),
+  z.strictObject({
+    id: cellId,
+    cell_type: z.literal("markdown"),
+    metadata: record,
+    source: multiline,
+    attachments: z.record(z.string(), mimeBundle).optional(),
+  }),
+  z.strictObject({
+    id: cellId,
+    cell_type: z.literal("raw"),
+    metadata: record,
+    source: multiline,
+    attachments: z.record(z.string(), mimeBundle).optional(),
+  }),
+]);
+
+const notebookSchema = z.strictObject({
+  metadata: z.looseObject({
+    kernelspec: z.looseObject({ name: z.string(), display_name: z.string() }).optional(),
+    language_info: z.looseObject({ name: z.string() }).optional(),
+  }),
+  nbformat: z.literal(4),
+  nbformat_minor: z.number().int().min(5),
+  cells: z.array(cellSchema),
+});
+
+/**
+ * Validates a notebook against the nbformat 4.5 structure (cell ids, cell and output shapes,
+ * unique ids). Used on everything the runner writes.
+ *
+ * @param notebook The notebook to check.
+ * @returns The list of problems, each "path: message"; empty when valid.
+ */
+export function notebookProblems(notebook: unknown): string[] {
+  const result = notebookSchema.safeParse(notebook);
+  const problems = result.success ? [] : result.error.issues.map((issue) =>
+    `${issue.path.length === 0 ? "(root)" : issue.path.join(".")}: ${issue.message}`
+  );
+  if (result.success) {
+    const seen = new Set<string>();
+    result.data.cells.forEach((cell, i) => {
+      if (seen.has(cell.id)) problems.push(`cells.${i}.id: duplicate cell id '${cell.id}'`);
+      seen.add(cell.id);
+    });
+  }
+  return problems;
+}
+
+/**
+ * Throws when the notebook is not valid nbformat 4.5.
+ *
+ * @param notebook The notebook to check.
+ * @param label Where it came from (for the message).
+ * @throws {TypeError} Listing up to five problems.
+ */
+export function assertValidNotebook(notebook: unknown, label: string): asserts notebook is Notebook {
+  const problems = notebookProblems(notebook);
+  if (problems.length > 0) {
+    throw new TypeError(
+      `${label}: not valid nbformat 4.5: ${problems.slice(0, 5).join("; ")}${
+        problems.length > 5 ? ` (and ${problems.length - 5} more)` : ""
+      }`,
+    );
+  }
+}
+
+/**
+ * Joins a multiline string.
+ *
+ * @param text A string or list of lines.
+ * @returns The text.
+ */
+export function joinText(text: MultilineString | unknown): string {
+  if (Array.isArray(text)) return text.join("");
+  return typeof text === "string" ? text : "";
+}
+
+/**
+ * Splits text into lines that keep their "\n", as Jupyter stores sources and text outputs.
+ *
+ * @param text The text.
+ * @returns The lines (empty list for empty text).
+ */
+export function splitLines(text: string): string[] {
+  return text === "" ? [] : text.split(/(?<=\n)/);
+}
+
+/** Whether a MIME type's content is stored as lines (text-like, not JSON, not base64). */
+function storedAsLines(mime: string): boolean {
+  return mime.startsWith("text/") || mime === "image/svg+xml" ||
+    mime === "application/javascript";
+}
+
+/**
+ * Converts a kernel MIME bundle to the stored form: text-like values split into lines.
+ *
+ * @param data The bundle from the kernel.
+ * @returns The bundle to store.
+ */
+export function storedMimeData(data: Record<string, unknown>): MimeData {
+  const out: MimeData = {};
+  for (const [mime, value] of Object.entries(data)) {
+    out[mime] = typeof value === "string" && storedAsLines(mime) ? splitLines(value) : value;
+  }
+  return out;
+}
+
+/**
+ * Parses notebook JSON text, upgrading nbformat 4.0–4.4 to 4.5 (adds cell ids) and normalizing
+ * missing optional members, with clear errors for input that is not a notebook.
+ *
+ * @param text The file content.
+ * @param label The path (for messages).
+ * @returns The notebook.
+ * @throws {NotebookInputError} On invalid JSON, a non-v4 notebook or a wrong structure.
+ */
+export function parseNotebook(text: string, label: string): Notebook {
+  let raw: unknown;
+  try {
+    raw = JSON.parse(text);
+  } catch (error) {
+    throw new NotebookInputError(
+      `Notebook ${label}: invalid JSON: ${(error as Error).message}`,
+      { cause: error },
+    );
+  }
+  if (typeof raw !== "object" || raw === null || Array.isArray(raw)) {
+    throw new NotebookInputError(`Notebook ${label}: expected a JSON object, got ${
+      Array.isArray(raw) ? "an array" : JSON.stringify(raw)
+    }`);
+  }
+  const nb = raw as Record<string, unknown>;
+  if (nb.nbformat !== 4) {
+    throw new NotebookInputError(
+      `Notebook ${label}: expected 'nbformat' 4, got ${JSON.stringify(nb.nbformat)}`,
+    );
+  }
+  if (!Array.isArray(nb.cells)) {
+    throw new NotebookInputError(
+      `Notebook ${label}: expected 'cells' to be an array, got ${JSON.stringify(nb.cells)}`,
+    );
+  }
+  const used = new Set<string>();
+  const cells = nb.cells.map((c, i) => {
+    if (typeof c !== "object" || c === null) {
+      throw new NotebookInputError(`Notebook ${label}: cell ${i + 1} is not an object`);
+    }
+    const cell = { ...(c as Record<string, unknown>) };
+    if (!["code", "markdown", "raw"].includes(cell.cell_type as string)) {
+      throw new NotebookInputError(`Notebook ${label}: cell ${i + 1}: expected 'cell_type' code, ${""}markdown or raw, got ${JSON.stringify(cell.cell_type)}`);
+    }
+    let id = typeof cell.id === "string" && /^[a-zA-Z0-9-_]{1,64}$/.test(cell.id) ? cell.id : "";
+    if (id === "" || used.has(id)) id = randomUUID().replaceAll("-", "").slice(0, 16);
+    used.add(id);
+    cell.id = id;
+    cell.metadata ??= {};
+    cell.source ??= "";
+    if (cell.cell_type === "code") {
+      cell.outputs ??= [];
+      cell.execution_count ??= null;
+    }
+    return cell;
+  });
+  const metadata = typeof nb.metadata === "object" && nb.metadata !== null ? nb.metadata : {};
+  const notebook = {
+    metadata,
+    nbformat: 4,
+    nbformat_minor: Math.max(5, typeof nb.nbformat_minor === "number" ? nb.nbformat_minor : 5),
+    cells,
+  };
+  const problems = notebookProblems(notebook);
+  if (problems.length > 0) {
+    throw new NotebookInputError(`Notebook ${label}: not a valid notebook: ${
+      problems.slice(0, 5).join("; ")
+    }`);
+  }
+  return notebook as Notebook;
+}
+
+/**
+ * Checks that a notebook is meant for the Deno kernel: its kernelspec names Deno (or it has no
+ * kernelspec, in which case it is run with Deno anyway).
+ *
+ * @param notebook The notebook.
+ * @param label The path (for messages).
+ * @returns Whether a kernelspec was present.
+ * @throws {NotebookInputError} When the kernelspec names another kernel.
+ */
+export function checkDenoKernelspec(notebook: Notebook, label: string): boolean {
+  const spec = notebook.metadata.kernelspec;
+  if (spec === undefined) return false;
+  if (/deno/i.test(spec.name) || /deno/i.test(spec.display_name)) return true;
+  throw new NotebookInputError(
+    `Notebook ${label}: expected a Deno kernelspec (name 'deno'), got '${spec.name}' (${spec.display_name})`,
+  );
+}
+
+/**
+ * Collects the iopub messages of one execution into nbformat outputs the way Jupyter front ends
+ * do: consecutive stream text of the same name is merged, `clear_output` (with `wait`) and
+ * `update_display_data` are honoured.
+ */
+export class OutputCollector {
+  /** The outputs collected so far. */
+  readonly outputs: Output[] = [];
+  #clearOnNext = false;
+  /** display_id → outputs (in any cell of the run) showing it; shared across collectors. */
+  readonly #displays: Map<string, DisplayDataOutput[]>;
+
+  /**
+   * @param displays The run-wide display-id registry (share one map across the cells of a run).
+   */
+  constructor(displays: Map<string, DisplayDataOutput[]> = new Map()) {
+    this.#displays = displays;
+  }
+
+  #add(output: Output): void {
+    if (this.#clearOnNext) {
+      this.outputs.length = 0;
+      this.#clearOnNext = false;
+    }
+    this.outputs.push(output);
+  }
+
+  /**
+   * Handles one iopub message.
+   *
+   * @param msgType The message type.
+   * @param content The message content.
+   */
+  handle(msgType: string, content: Record<string, unknown>): void {
+    const data = (content.data ?? {}) as Record<string, unknown>;
+    const metadata = (content.metadata ?? {}) as Record<string, unknown>;
+    const transient = (content.transient ?? {}) as Record<string, unknown>;
+    switch (msgType) {
+      case "stream": {
+        const name = String(content.name ?? "stdout");
+        const text = String(content.text ?? "");
+        const last = this.outputs[this.outputs.length - 1];
+        if (!this.#clearOnNext && last?.output_type === "stream" && last.name === name) {
+          last.text = splitLines(joinText(last.text) + text);
+        } else {
+          this.#add({ output_type: "stream", name, text: splitLines(text) });
+        }
+        break;
+      }
+      case "display_data": {
+        const output: DisplayDataOutput = {
+          output_type: "display_data",
+          data: storedMimeData(data),
+          metadata,
+        };
+        this.#add(output);
+        if (typeof transient.display_id === "string") {
+          const list = this.#displays.get(transient.display_id) ?? [];
+          list.push(output);
+          this.#displays.set(transient.display_id, list);
+        }
+        break;
+      }
+      case "update_display_data": {
+        if (typeof transient.display_id !== "string") break;
+        for (const output of this.#displays.get(transient.display_id) ?? []) {
+          output.data = storedMimeData(data);
+          output.metadata = metadata;
+        }
+        break;
+      }
+      case "execute_result": {
+        const count = content.execution_count;
+        this.#add({
+          output_type: "execute_result",
+          execution_count: typeof count === "number" ? count : null,
+          data: storedMimeData(data),
+          metadata,
+        });
+        break;
+      }
+      case "error":
+        this.#add({
+          output_type: "error",
+          ename: String(content.ename ?? "Error"),
+          evalue: String(content.evalue ?? ""),
+          traceback: Array.isArray(content.traceback) ? content.traceback.map(String) : [],
+        });
+        break;
+      case "clear_output":
+        if (content.wait === true) this.#clearOnNext = true;
+        else this.outputs.length = 0;
+        break;
+      default:
+        break; // status, execute_input, comm messages: not outputs
+    }
+  }
+}
