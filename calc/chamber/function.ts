@@ -5,7 +5,7 @@
  *
  * @module
  */
-import { CLINICAL_CAUTION, defineCalculation } from "../core/define.ts";
+import { CLINICAL_CAUTION, defineCalculation, notAbove } from "../core/define.ts";
 import type { Calculation, InputDefinition, Reference } from "../core/types.ts";
 import {
   HU_2013,
@@ -98,6 +98,7 @@ export const ejectionFraction: Calculation<
     const ef = percentReduction(edv, esv);
     return { ejectionFractionPercent: ef, strokeVolumeMl: Number.isNaN(ef) ? NaN : edv - esv };
   },
+  constraints: [notAbove("endSystolicVolumeMl", "endDiastolicVolumeMl")],
   formulaText: "EF = 100·(EDV − ESV)/EDV; SV = EDV − ESV",
   sources: [LANG_2015, SCHILLER_1989],
   cautions: [
@@ -157,6 +158,7 @@ export const fractionalAreaChange: Calculation<
   formula: ({ endDiastolicAreaCm2, endSystolicAreaCm2 }) => ({
     fractionalAreaChangePercent: percentReduction(endDiastolicAreaCm2, endSystolicAreaCm2),
   }),
+  constraints: [notAbove("endSystolicAreaCm2", "endDiastolicAreaCm2")],
   formulaText: "FAC = 100·(EDA − ESA)/EDA",
   sources: [RUDSKI_2010, LANG_2015],
   cautions: [
@@ -216,6 +218,7 @@ export const tapse: Calculation<
   formula: ({ annulusDepthEndDiastoleMm, annulusDepthPeakSystoleMm }) => ({
     tapseMm: annularExcursionMm(annulusDepthEndDiastoleMm, annulusDepthPeakSystoleMm),
   }),
+  constraints: [notAbove("annulusDepthPeakSystoleMm", "annulusDepthEndDiastoleMm")],
   formulaText: "TAPSE = depth(ED) − depth(peak systole)",
   sources: [KAUL_1984, RUDSKI_2010, LANG_2015],
   cautions: [
@@ -280,6 +283,10 @@ export const mapse: Calculation<
       mapseMm: (septal + lateral) / 2,
     };
   },
+  constraints: [
+    notAbove("septalDepthPeakSystoleMm", "septalDepthEndDiastoleMm"),
+    notAbove("lateralDepthPeakSystoleMm", "lateralDepthEndDiastoleMm"),
+  ],
   formulaText: "MAPSE = ½·[(depth ED − depth PS)septal + (depth ED − depth PS)lateral]",
   sources: [HU_2013],
   cautions: ["Angle-dependent: align the M-mode cursor with the annular motion"],

@@ -8,7 +8,7 @@
  *
  * @module
  */
-import { CLINICAL_CAUTION, defineCalculation } from "../core/define.ts";
+import { CLINICAL_CAUTION, defineCalculation, notAbove } from "../core/define.ts";
 import type { Calculation, InputDefinition } from "../core/types.ts";
 import { DEVEREUX_1986, GANAU_1992, LANG_2015, TEICHHOLZ_1976 } from "./sources.ts";
 import { ejectionFraction, percentReduction } from "./function.ts";
@@ -98,6 +98,7 @@ export const fractionalShortening: Calculation<
       lvInternalDiameterSystoleCm,
     ),
   }),
+  constraints: [notAbove("lvInternalDiameterSystoleCm", "lvInternalDiameterDiastoleCm")],
   formulaText: "FS = 100·(LVIDd − LVIDs)/LVIDd",
   sources: [LANG_2015],
   cautions: [

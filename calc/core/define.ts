@@ -7,12 +7,14 @@ import * as z from "zod";
 import type {
   Calculation,
   CalculationSpec,
+  InputConstraint,
+  InputDefinition,
   InputValues,
   OutputValues,
   ValueRange,
 } from "./types.ts";
 import { describe, isMathUnit, type QuantityInput, toCanonical } from "./units.ts";
-import { displayEvaluation, JUPYTER_DISPLAY, type MimeBundle } from "./display.ts";
+import { displayEvaluation, formatUnit, JUPYTER_DISPLAY, type MimeBundle } from "./display.ts";
 
 /** The caution shown with every result that could reach a patient decision. */
 export const CLINICAL_CAUTION =
@@ -89,7 +91,7 @@ export function isCalculation(value: unknown): value is Calculation {
 export function formatRange(range: ValueRange, unit: string): string {
   const open = range.minExclusive ? "(" : "[";
   const close = range.maxExclusive ? ")" : "]";
-  const u = unit === "1" || unit === "" ? "" : ` ${unit}`;
+  const u = unit === "1" || unit === "" ? "" : ` ${formatUnit(unit)}`;
   return `${open}${range.min}, ${range.max}${close}${u}`;
 }
 
@@ -176,16 +178,60 @@ export function validateInputs<I extends string>(
         `${calc.title}: expected '${name}' in ${formatRange(def.range, def.unit)}, got ${value}`,
       );
     }
-    if (def.typical && !inRange(value, def.typical)) {
-      flags.push(
-        `'${name}' = ${value} ${def.unit} lies outside the validated range ${
-          formatRange(def.typical, def.unit)
-        }: interpret with care`,
-      );
-    }
+    if (def.typical && !inRange(value, def.typical)) flags.push(typicalRangeFlag(name, value, def));
     values[name] = value;
   }
+  checkConstraints(calc, values);
   return { values, flags };
+}
+
+/** The flag for a value outside an input's validated range. */
+export function typicalRangeFlag(name: string, value: number, def: InputDefinition): string {
+  const unit = formatUnit(def.unit);
+  return `'${name}' = ${value}${unit ? ` ${unit}` : ""} lies outside the validated range ${
+    formatRange(def.typical!, def.unit)
+  }: interpret with care`;
+}
+
+/**
+ * A constraint that one input must not exceed another (e.g. end-systolic ≤ end-diastolic volume).
+ *
+ * @param smaller The input that must be the smaller (or equal).
+ * @param larger The input that must be the larger (or equal).
+ * @returns The constraint.
+ *
+ * @example
+ * ```ts
+ * import { notAbove } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const c = notAbove("esv", "edv");
+ * assert.equal(c.holds({ esv: 50, edv: 120 }), true);
+ * assert.equal(c.description, "'esv' <= 'edv'");
+ * ```
+ */
+export function notAbove<I extends string>(smaller: I, larger: I): InputConstraint<I> {
+  return {
+    inputs: [smaller, larger],
+    description: `'${smaller}' <= '${larger}'`,
+    holds: (x) => x[smaller] <= x[larger],
+  };
+}
+
+/**
+ * Checks the cross-input constraints of a calculation.
+ *
+ * @throws {RangeError} Naming the relation and the values of the inputs involved.
+ */
+export function checkConstraints<I extends string>(
+  calc: Calculation<I, string>,
+  values: InputValues<I>,
+): void {
+  for (const c of calc.constraints ?? []) {
+    if (!c.holds(values)) {
+      const shown = c.inputs.map((n) => `${n} = ${values[n]}`).join(", ");
+      throw new RangeError(`${calc.title}: expected ${c.description}, got ${shown}`);
+    }
+  }
 }
 
 /**

@@ -6,6 +6,7 @@
 export type {
   Calculation,
   CalculationSpec,
+  InputConstraint,
   InputDefinition,
   InputsOf,
   InputValues,
@@ -25,6 +26,7 @@ export {
   type InputArguments,
   inRange,
   isCalculation,
+  notAbove,
   validateInputs,
 } from "./define.ts";
 export { type MathJsUnit, type QuantityInput, toCanonical } from "./units.ts";

@@ -64,6 +64,16 @@ export type InputValues<I extends string> = { readonly [K in I]: number };
 /** Output values, keyed by output name. */
 export type OutputValues<O extends string> = { [K in O]: number };
 
+/** A relation between inputs that must hold, e.g. end-systolic ≤ end-diastolic volume. */
+export interface InputConstraint<I extends string> {
+  /** The inputs involved, named in the error message with their values. */
+  readonly inputs: readonly I[];
+  /** The relation in words, e.g. "'endSystolicVolumeMl' <= 'endDiastolicVolumeMl'". */
+  readonly description: string;
+  /** True when the relation holds (false for NaN). */
+  readonly holds: (x: InputValues<I>) => boolean;
+}
+
 /** Everything a calculation author writes, once. */
 export interface CalculationSpec<I extends string, O extends string> {
   /** Stable identifier in camelCase, e.g. "continuityValveArea". */
@@ -84,6 +94,8 @@ export interface CalculationSpec<I extends string, O extends string> {
   readonly sources: readonly Reference[];
   /** Cautions specific to this calculation. */
   readonly cautions: readonly string[];
+  /** Relations between inputs that must hold; a violation is a RangeError naming the inputs. */
+  readonly constraints?: readonly InputConstraint<I>[];
   /** True when a result could reach a patient decision: the standard clinical caution is shown.
    * @default false */
   readonly clinical?: boolean;

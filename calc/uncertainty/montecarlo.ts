@@ -244,7 +244,10 @@ export function meanAndStandardDeviation(values: Float64Array): { mean: number; 
  * both tails, one copies the tails, and only they are sorted. Exact for any data (ties and heavy
  * tails only enlarge the copied part).
  */
-export function sortedTails(values: Float64Array, count: number): { low: Float64Array; high: Float64Array } {
+export function sortedTails(
+  values: Float64Array,
+  count: number,
+): { low: Float64Array; high: Float64Array } {
   const m = values.length;
   if (2 * count >= m) {
     const all = values.slice().sort();
@@ -256,7 +259,9 @@ export function sortedTails(values: Float64Array, count: number): { low: Float64
     if (v < min) min = v;
     if (v > max) max = v;
   }
-  if (min === max) return { low: new Float64Array(count).fill(min), high: new Float64Array(count).fill(min) };
+  if (min === max) {
+    return { low: new Float64Array(count).fill(min), high: new Float64Array(count).fill(min) };
+  }
   const bins = 4096;
   const scale = bins / (max - min);
   const counts = new Uint32Array(bins);

@@ -4,7 +4,7 @@
  * @module
  */
 import type { Calculation, InputValues } from "../core/types.ts";
-import { formatRange, inRange } from "../core/define.ts";
+import { checkConstraints, formatRange, inRange, typicalRangeFlag } from "../core/define.ts";
 import { describe } from "../core/units.ts";
 import { type InputEstimate, type ResolvedInput, resolveInput } from "./inputs.ts";
 import { correlationMatrix, type Correlations } from "./correlation.ts";
@@ -80,6 +80,7 @@ export function prepareInputs<I extends string>(
     estimates[name] = r.estimate;
     return r;
   });
+  checkConstraints(calc, estimates as InputValues<I>);
   const correlation = correlationMatrix(calc.inputNames, correlations, calc.title);
   const correlated = correlation.some((row, i) => row.some((v, j) => i !== j && v !== 0));
   return { inputs, estimates, correlation, correlated, flags };

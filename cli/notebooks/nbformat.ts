@@ -318,7 +318,7 @@ export function parseNotebook(text: string, label: string): Notebook {
     }
     const cell = { ...(c as Record<string, unknown>) };
     if (!["code", "markdown", "raw"].includes(cell.cell_type as string)) {
-      throw new NotebookInputError(`Notebook ${label}: cell ${i + 1}: expected 'cell_type' code, ${""}markdown or raw, got ${JSON.stringify(cell.cell_type)}`);
+      throw new NotebookInputError(`Notebook ${label}: cell ${i + 1}: expected 'cell_type' code, markdown or raw, got ${JSON.stringify(cell.cell_type)}`);
     }
     let id = typeof cell.id === "string" && /^[a-zA-Z0-9-_]{1,64}$/.test(cell.id) ? cell.id : "";
     if (id === "" || used.has(id)) id = randomUUID().replaceAll("-", "").slice(0, 16);
@@ -345,7 +345,7 @@ export function parseNotebook(text: string, label: string): Notebook {
       problems.slice(0, 5).join("; ")
     }`);
   }
-  return notebook as Notebook;
+  return notebook as unknown as Notebook;
 }
 
 /**

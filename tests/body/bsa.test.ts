@@ -106,7 +106,7 @@ Deno.test("indexing divides by BSA with the unit", () => {
   close(indexToBsa("0.12 L", 2, "mL").value, 60, 1e-12, "L to mL");
   assert.throws(() => indexToBsa(120, 0, "mL"), {
     name: "RangeError",
-    message: "Measurement indexed to BSA (mL/m²): expected 'bsaM2' in (0, 5] m^2, got 0",
+    message: "Measurement indexed to BSA (mL/m²): expected 'bsaM2' in (0, 5] m², got 0",
   });
   assert.throws(() => indexToBsa(-1, 1.5, "mL"), {
     name: "RangeError",

@@ -174,7 +174,7 @@ Deno.test("bad input: negative or missing dimensions, LVIDs above LVIDd, bad sex
     {
       name: "RangeError",
       message:
-        /output 'fractionalShorteningPercent' is not finite for lvInternalDiameterDiastoleCm = 3.2, lvInternalDiameterSystoleCm = 5, got NaN$/,
+        /expected 'lvInternalDiameterSystoleCm' <= 'lvInternalDiameterDiastoleCm', got lvInternalDiameterSystoleCm = 5, lvInternalDiameterDiastoleCm = 3.2$/,
     },
   );
   assert.throws(

@@ -154,3 +154,24 @@ Deno.test("display: an evaluation offers HTML and text/plain", () => {
   assert.match(bundle["text/html"]!, /<table/);
   assert.match(bundle["text/plain"]!, /areaCm2\s+0\.785398/);
 });
+
+Deno.test("cross-input constraints are checked in evaluation and propagation", async () => {
+  const { ejectionFraction, gum, normal } = await import("../../mod.ts");
+  // EF = 100·(EDV − ESV)/EDV needs ESV ≤ EDV (Lang et al. 2015, LV systolic function; common practice)
+  assert.throws(
+    () => evaluate(ejectionFraction, { endDiastolicVolumeMl: 50, endSystolicVolumeMl: 60 }),
+    {
+      name: "RangeError",
+      message:
+        "Ejection fraction: expected 'endSystolicVolumeMl' <= 'endDiastolicVolumeMl', got endSystolicVolumeMl = 60, endDiastolicVolumeMl = 50",
+    },
+  );
+  assert.throws(
+    () =>
+      gum(ejectionFraction, {
+        endDiastolicVolumeMl: normal(50, 3),
+        endSystolicVolumeMl: normal(60, 3),
+      }),
+    { name: "RangeError", message: /expected 'endSystolicVolumeMl' <= 'endDiastolicVolumeMl'/ },
+  );
+});

@@ -1,0 +1,472 @@
+/**
+ * The Python-free notebook runner: executes a notebook's code cells in order on the real Deno
+ * kernel, stores the outputs (nbformat 4.5, validated before writing), stops at the first error
+ * with the cell number, the source line and the traceback, and always shuts the kernel down.
+ *
+ * Files: the executed notebook goes to the output folder (or over the original with `inPlace`);
+ * on failure a partially executed notebook is written beside the original as `*.partial.ipynb`;
+ * the original is never touched unless `inPlace` is set and the run succeeded.
+ *
+ * @module
+ */
+import { basename, dirname, extname, join, resolve } from "node:path";
+import { notebookToHtml, stripAnsi } from "./html.ts";
+import { DenoKernel, type ExecuteOutcome, KernelError } from "./kernel.ts";
+import {
+  assertValidNotebook,
+  checkDenoKernelspec,
+  type CodeCell,
+  type DisplayDataOutput,
+  joinText,
+  type Notebook,
+  NotebookInputError,
+  OutputCollector,
+  parseNotebook,
+} from "./nbformat.ts";
+
+/** Options of {@linkcode runNotebook}. */
+export interface RunOptions {
+  /** Folder for the executed notebook and the HTML export (default "out/notebooks"). */
+  outDir?: string;
+  /** Overwrite the original notebook with the executed one (only after a successful run). */
+  inPlace?: boolean;
+  /** Per-cell time limit in seconds (default 300). */
+  timeoutSeconds?: number;
+  /** Time limit for the kernel to start and answer, in seconds (default 60). */
+  startupTimeoutSeconds?: number;
+  /** Also write a self-contained HTML export to the output folder. */
+  html?: boolean;
+  /** The deno binary (default: `SONORIGOR_DENO`, else the running deno). */
+  denoPath?: string;
+  /** Aborts the run (Ctrl-C): the kernel is killed and a partial notebook written. */
+  signal?: AbortSignal;
+  /** Receives progress and report lines (default: written to stderr). */
+  log?: (line: string) => void;
+  /** Called with the kernel pid as soon as the kernel has started. */
+  onKernelStarted?: (pid: number) => void;
+}
+
+/** Where and how a cell failed. */
+export interface CellFailure {
+  /** Why: the kernel reported an error, the cell timed out, the kernel died, or the run was aborted. */
+  kind: "error" | "timeout" | "died" | "aborted";
+  /** 1-based position of the cell among all cells. */
+  cellNumber: number;
+  /** Total number of cells. */
+  cellCount: number;
+  /** Cell id. */
+  cellId: string;
+  /** Execution count of the failing cell, when the kernel gave one. */
+  executionCount: number | null;
+  /** Error class name. */
+  ename: string;
+  /** Error message. */
+  evalue: string;
+  /** Traceback lines, ANSI codes removed. */
+  traceback: string[];
+  /** The source line that failed, when it could be located. */
+  line?: SourceLine;
+  /** What the kernel wrote to its own stderr during the cell (e.g. a syntax error's details). */
+  kernelStderr?: string;
+}
+
+/** A located source line of a cell. */
+export interface SourceLine {
+  /** 1-based line number in the cell. */
+  number: number;
+  /** The line's text. */
+  text: string;
+  /**
+   * How it was found: "name" when a name from the error message occurs on it, "message" when
+   * the thrown message text does, "position" when only the kernel's line number was used (the
+   * kernel numbers lines after transpiling TypeScript, so that one can be off by a few lines).
+   */
+  how: "name" | "message" | "position";
+}
+
+/** The result of {@linkcode runNotebook}; never thrown, always returned. */
+export interface RunResult {
+  /** The notebook path as given. */
+  path: string;
+  /**
+   * "ok"; "failed" (a cell failed or the kernel died); "invalid" (missing file, bad JSON,
+   * non-Deno kernelspec); "kernel" (the kernel could not be started); "interrupted".
+   */
+  status: "ok" | "failed" | "invalid" | "kernel" | "interrupted";
+  /** A one-paragraph human-readable explanation when not ok. */
+  message?: string;
+  /** The failing cell, when a cell failed. */
+  failure?: CellFailure;
+  /** The executed (or partially executed) notebook. */
+  notebook?: Notebook;
+  /** Where the executed notebook was written (success only). */
+  outputPath?: string;
+  /** Where the HTML export was written. */
+  htmlPath?: string;
+  /** Where the partial notebook was written (failure only). */
+  partialPath?: string;
+  /** The kernel's process id (for checks that it is gone). */
+  kernelPid?: number;
+  /** Whether the kernel exited on its own after `shutdown_request`. */
+  cleanShutdown?: boolean;
+  /** Code cells executed (including a failing one). */
+  cellsExecuted: number;
+  /** Code cells in the notebook. */
+  codeCells: number;
+  /** Wall-clock milliseconds. */
+  elapsedMs: number;
+}
+
+/**
+ * Locates the source line of a cell error. The Deno kernel reports positions in the transpiled
+ * JavaScript, so a name quoted in the message (e.g. `'lvotDiameterCm'`, `x is not defined`) or the
+ * thrown message text is searched first, nearest to the reported line; the reported line is the
+ * fallback.
+ *
+ * @param source The cell source.
+ * @param evalue The error message.
+ * @param traceback The traceback lines (ANSI removed).
+ * @returns The line, or undefined when nothing fits.
+ */
+export function locateErrorLine(
+  source: string,
+  evalue: string,
+  traceback: readonly string[],
+): SourceLine | undefined {
+  const lines = source.split("\n");
+  let reported: number | undefined;
+  for (const entry of traceback) {
+    const match = /<anonymous>:(\d+):\d+/.exec(entry);
+    if (match?.[1] !== undefined) {
+      reported = Number(match[1]);
+      break;
+    }
+  }
+  const nearest = (candidates: number[]): number | undefined =>
+    candidates.sort((a, b) =>
+      Math.abs(a - (reported ?? a)) - Math.abs(b - (reported ?? b)) || a - b
+    )[0];
+  const pick = (predicate: (line: string) => boolean): number | undefined =>
+    nearest(lines.flatMap((line, i) => (predicate(line) ? [i + 1] : [])));
+  const isCode = (line: string) => line.trim() !== "" && !/^\s*(\/\/|\*|\/\*)/.test(line);
+  const names = new Set<string>();
+  for (const m of evalue.matchAll(/['"`]([A-Za-z_$][\w$.]*)['"`]/g)) names.add(m[1]!);
+  for (const m of evalue.matchAll(/\b([A-Za-z_$][\w$.]*) is not (?:defined|a function|iterable)/g)) {
+    names.add(m[1]!.split(".").pop()!);
+  }
+  for (const m of evalue.matchAll(/reading '([^']+)'/g)) names.add(m[1]!);
+  if (names.size > 0) {
+    const escaped = [...names].map((n) => n.replace(/[.*+?^${}()|[\]\\]/g, "\\$&"));
+    const re = new RegExp(`(^|[^\\w$])(${escaped.join("|")})(?![\\w$])`);
+    const at = pick((line) => isCode(line) && re.test(line));
+    if (at !== undefined) return { number: at, text: lines[at - 1]!, how: "name" };
+  }
+  const message = evalue.trim();
+  if (message.length >= 3) {
+    const at = pick((line) => isCode(line) && line.includes(message));
+    if (at !== undefined) return { number: at, text: lines[at - 1]!, how: "message" };
+  }
+  if (reported !== undefined && reported >= 1 && reported <= lines.length) {
+    return { number: reported, text: lines[reported - 1]!, how: "position" };
+  }
+  return undefined;
+}
+
+/**
+ * Formats a failure as the multi-line report printed on stderr.
+ *
+ * @param path The notebook path.
+ * @param failure The failure.
+ * @returns The report text.
+ */
+export function formatFailure(path: string, failure: CellFailure): string {
+  const what = {
+    error: "failed",
+    timeout: "timed out",
+    died: "lost its kernel",
+    aborted: "was interrupted",
+  }[failure.kind];
+  const count = failure.executionCount === null ? "" : `, execution count ${failure.executionCount}`;
+  const out = [
+    `${path}: cell ${failure.cellNumber} of ${failure.cellCount} ${what} (id ${failure.cellId}${count})`,
+    `  ${failure.ename}: ${failure.evalue}`,
+  ];
+  if (failure.line !== undefined) {
+    const approx = failure.line.how === "position" ? "near " : "";
+    out.push(`  at ${approx}line ${failure.line.number} of the cell: ${failure.line.text.trim()}`);
+  }
+  if (failure.traceback.length > 0) {
+    out.push("  traceback:");
+    for (const entry of failure.traceback) {
+      for (const line of entry.split("\n")) out.push(`    ${line}`);
+    }
+  }
+  if (failure.kernelStderr !== undefined && failure.kernelStderr.trim() !== "") {
+    out.push("  kernel stderr:");
+    for (const line of failure.kernelStderr.trim().split("\n").slice(-20)) out.push(`    ${line}`);
+  }
+  return out.join("\n");
+}
+
+/**
+ * Writes a notebook after validating it against nbformat 4.5.
+ *
+ * @param path Destination.
+ * @param notebook The notebook.
+ * @returns When written.
+ * @throws {TypeError} When the notebook is not valid (a runner defect; nothing is written).
+ */
+export async function writeNotebook(path: string, notebook: Notebook): Promise<void> {
+  assertValidNotebook(notebook, path);
+  await Deno.mkdir(dirname(path), { recursive: true });
+  await Deno.writeTextFile(path, JSON.stringify(notebook, null, 1) + "\n");
+}
+
+function stemOf(path: string): string {
+  return basename(path, extname(path));
+}
+
+/** The path of the partial notebook beside `path`: `name.partial.ipynb`. */
+export function partialPathOf(path: string): string {
+  return join(dirname(path), `${stemOf(path)}.partial.ipynb`);
+}
+
+function firstCodeLine(source: string): string {
+  const line = source.split("\n").find((l) => l.trim() !== "" && !l.trim().startsWith("//")) ??
+    "";
+  return line.length > 60 ? `${line.slice(0, 57)}...` : line.trim();
+}
+
+function imageResolver(notebookDir: string): (href: string) => string | undefined {
+  const types: Record<string, string> = {
+    ".png": "image/png",
+    ".jpg": "image/jpeg",
+    ".jpeg": "image/jpeg",
+    ".gif": "image/gif",
+    ".svg": "image/svg+xml",
+  };
+  return (href) => {
+    const mime = types[extname(href).toLowerCase()];
+    if (mime === undefined) return undefined;
+    try {
+      const bytes = Deno.readFileSync(resolve(notebookDir, decodeURI(href)));
+      let binary = "";
+      for (let i = 0; i < bytes.length; i += 0x8000) {
+        binary += String.fromCharCode(...bytes.subarray(i, i + 0x8000));
+      }
+      return `data:${mime};base64,${btoa(binary)}`;
+    } catch {
+      return undefined;
+    }
+  };
+}
+
+/**
+ * Executes one notebook on the real Deno kernel.
+ *
+ * @param path The .ipynb file.
+ * @param options Output folder, in-place, per-cell timeout, HTML export, deno binary, abort
+ *   signal, logger.
+ * @returns What happened (never throws for bad input or cell errors).
+ */
+export async function runNotebook(path: string, options: RunOptions = {}): Promise<RunResult> {
+  const started = Date.now();
+  const log = options.log ?? ((line: string) => console.error(line));
+  const timeoutSeconds = options.timeoutSeconds ?? 300;
+  const result: RunResult = {
+    path,
+    status: "ok",
+    cellsExecuted: 0,
+    codeCells: 0,
+    elapsedMs: 0,
+  };
+  const done = (status: RunResult["status"], message?: string): RunResult => {
+    result.status = status;
+    if (message !== undefined) result.message = message;
+    result.elapsedMs = Date.now() - started;
+    return result;
+  };
+
+  // ---- input ---------------------------------------------------------------------------------
+  let notebook: Notebook;
+  try {
+    let text: string;
+    try {
+      text = await Deno.readTextFile(path);
+    } catch (error) {
+      if (error instanceof Deno.errors.NotFound) {
+        throw new NotebookInputError(`Notebook not found: ${path}`);
+      }
+      if (error instanceof Deno.errors.IsADirectory) {
+        throw new NotebookInputError(`Notebook path is a directory: ${path}`);
+      }
+      throw new NotebookInputError(`Notebook ${path}: cannot read: ${(error as Error).message}`);
+    }
+    notebook = parseNotebook(text, path);
+    if (!checkDenoKernelspec(notebook, path)) {
+      log(`${path}: no kernelspec in the notebook metadata; running it on the Deno kernel`);
+    }
+  } catch (error) {
+    if (error instanceof NotebookInputError) return done("invalid", error.message);
+    throw error;
+  }
+  const codeCells = notebook.cells.filter((c): c is CodeCell => c.cell_type === "code");
+  result.codeCells = codeCells.length;
+  result.notebook = notebook;
+  for (const cell of codeCells) {
+    cell.outputs = [];
+    cell.execution_count = null;
+  }
+
+  // ---- kernel --------------------------------------------------------------------------------
+  if (options.signal?.aborted) return done("interrupted", `${path}: interrupted before start`);
+  let kernel: DenoKernel;
+  try {
+    kernel = await DenoKernel.start({
+      cwd: dirname(resolve(path)),
+      startupTimeoutMs: (options.startupTimeoutSeconds ?? 60) * 1000,
+      ...(options.denoPath === undefined ? {} : { denoPath: options.denoPath }),
+    });
+  } catch (error) {
+    if (error instanceof KernelError) return done("kernel", `${path}: ${error.message}`);
+    throw error;
+  }
+  result.kernelPid = kernel.pid;
+  options.onKernelStarted?.(kernel.pid);
+  const info = kernel.kernelInfo;
+  log(`${path}: kernel started (pid ${kernel.pid}, ${String(info.implementation ?? "kernel")} ${
+    String(info.implementation_version ?? "")
+  }, protocol ${String(info.protocol_version ?? "?")})`);
+  if (!(await kernel.heartbeat())) log(`${path}: warning: the kernel heartbeat did not answer`);
+
+  // ---- cells ---------------------------------------------------------------------------------
+  const displays = new Map<string, DisplayDataOutput[]>();
+  let failure: CellFailure | undefined;
+  try {
+    let codeIndex = 0;
+    for (const [index, cell] of notebook.cells.entries()) {
+      if (cell.cell_type !== "code") continue;
+      codeIndex++;
+      const source = joinText(cell.source);
+      const label = `${path} [cell ${index + 1}/${notebook.cells.length}, code ${codeIndex}/${
+        codeCells.length
+      }]`;
+      if (source.trim() === "") {
+        log(`${label} empty, skipped`);
+        continue;
+      }
+      const collector = new OutputCollector(displays);
+      cell.outputs = collector.outputs;
+      const stderrBefore = kernel.stderrTail;
+      const outcome: ExecuteOutcome = await kernel.execute(source, {
+        timeoutMs: timeoutSeconds * 1000,
+        onIopub: (m) => collector.handle(m.header.msg_type, m.content),
+        ...(options.signal === undefined ? {} : { signal: options.signal }),
+      });
+      result.cellsExecuted++;
+      cell.execution_count = outcome.executionCount;
+      const seconds = (outcome.elapsedMs / 1000).toFixed(2);
+      if (outcome.status === "ok") {
+        log(`${label} ok in ${seconds} s · ${firstCodeLine(source)}`);
+        continue;
+      }
+      const base = {
+        cellNumber: index + 1,
+        cellCount: notebook.cells.length,
+        cellId: cell.id,
+        executionCount: outcome.executionCount,
+      };
+      if (outcome.status === "error") {
+        const error = outcome.error ?? { ename: "Error", evalue: "", traceback: [] };
+        const traceback = error.traceback.map(stripAnsi);
+        failure = { kind: "error", ...base, ename: error.ename, evalue: error.evalue, traceback };
+        const line = locateErrorLine(source, error.evalue, traceback);
+        if (line !== undefined) failure.line = line;
+        if (!collector.outputs.some((o) => o.output_type === "error")) {
+          collector.handle("error", error);
+        }
+      } else {
+        const evalue = outcome.status === "timeout"
+          ? `Cell did not finish within ${timeoutSeconds} s; the kernel was stopped`
+          : outcome.status === "aborted"
+          ? "Run interrupted; the kernel was stopped"
+          : `The kernel process exited during the cell${
+            kernel.exitStatus === null ? "" : ` (${
+              kernel.exitStatus.signal === null
+                ? `exit ${kernel.exitStatus.code}`
+                : `signal ${kernel.exitStatus.signal}`
+            })`
+          }`;
+        const ename = { timeout: "CellTimeoutError", aborted: "InterruptedError", died: "KernelDiedError" }[
+          outcome.status
+        ];
+        failure = { kind: outcome.status, ...base, ename, evalue, traceback: [] };
+        collector.handle("error", { ename, evalue, traceback: [`${ename}: ${evalue}`] });
+      }
+      const newStderr = stderrSince(stderrBefore, kernel.stderrTail);
+      if (newStderr.trim() !== "") failure.kernelStderr = stripAnsi(newStderr);
+      log(`${label} ${failure.kind === "error" ? "FAILED" : failure.kind.toUpperCase()} after ${seconds} s · ${
+        firstCodeLine(source)
+      }`);
+      break;
+    }
+  } finally {
+    if (failure === undefined || failure.kind === "error") {
+      result.cleanShutdown = await kernel.shutdown();
+    } else {
+      await kernel.kill(); // hung, dead or interrupted: no point asking politely
+      result.cleanShutdown = false;
+    }
+  }
+
+  // ---- files ---------------------------------------------------------------------------------
+  notebook.metadata.kernelspec ??= { name: "deno", display_name: "Deno", language: "typescript" };
+  if (typeof info.language_info === "object" && info.language_info !== null) {
+    notebook.metadata.language_info = info.language_info as Notebook["metadata"]["language_info"] &
+      object;
+  }
+  const partialPath = partialPathOf(path);
+  if (failure !== undefined) {
+    result.failure = failure;
+    notebook.metadata.sonorigor_partial = {
+      failed_cell: failure.cellNumber,
+      reason: `${failure.ename}: ${failure.evalue}`,
+    };
+    await writeNotebook(partialPath, notebook);
+    result.partialPath = partialPath;
+    const report = `${formatFailure(path, failure)}\n  partial notebook: ${partialPath}`;
+    log(report);
+    return done(failure.kind === "aborted" ? "interrupted" : "failed", report);
+  }
+  await Deno.remove(partialPath).catch(() => {}); // a stale partial from an earlier failed run
+  const outDir = options.outDir ?? "out/notebooks";
+  const outputPath = options.inPlace ? path : join(outDir, basename(path));
+  await writeNotebook(outputPath, notebook);
+  result.outputPath = outputPath;
+  if (options.html) {
+    const htmlPath = join(outDir, `${stemOf(path)}.html`);
+    await Deno.mkdir(outDir, { recursive: true });
+    await Deno.writeTextFile(
+      htmlPath,
+      notebookToHtml(notebook, {
+        sourceLabel: path,
+        resolveImage: imageResolver(dirname(resolve(path))),
+      }),
+    );
+    result.htmlPath = htmlPath;
+  }
+  log(`${path}: ok, ${result.cellsExecuted} code cells in ${
+    ((Date.now() - started) / 1000).toFixed(1)
+  } s → ${outputPath}${result.htmlPath === undefined ? "" : ` and ${result.htmlPath}`}`);
+  return done("ok");
+}
+
+/** The text appended to a rolling tail between two snapshots. */
+function stderrSince(before: string, after: string): string {
+  if (after.startsWith(before)) return after.slice(before.length);
+  // the tail rolled over: find the longest suffix of `before` that starts `after`
+  for (let k = Math.min(before.length, after.length); k > 0; k--) {
+    if (after.startsWith(before.slice(before.length - k))) return after.slice(k);
+  }
+  return after;
+}
