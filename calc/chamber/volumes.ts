@@ -596,7 +596,7 @@ export function leftAtrialVolume(
   }
   const bsa = options?.bodySurfaceAreaM2;
   if (bsa !== undefined && !(typeof bsa === "number" && bsa > 0 && bsa <= 5)) {
-    throw new RangeError(`${where}: expected 'bodySurfaceAreaM2' in (0, 5] m^2, got ${bsa}`);
+    throw new RangeError(`${where}: expected 'bodySurfaceAreaM2' in (0, 5] m², got ${bsa}`);
   }
   const discs = withName(() => biplaneDiscVolume(contours, options), where);
   const [a, b] = discs.views as [TracedView, TracedView];

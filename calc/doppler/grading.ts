@@ -9,6 +9,7 @@ import type { Reference } from "../core/types.ts";
 import {
   escapeHtml,
   formatNumber,
+  formatUnit,
   htmlTable,
   JUPYTER_DISPLAY,
   type MimeBundle,
@@ -165,8 +166,10 @@ function inBand(value: number, b: SeverityBand): boolean {
 function domainText(table: SeverityTable): string {
   const first = table.bands[0]!;
   const last = table.bands[table.bands.length - 1]!;
-  return boundText({ ...first, upper: last.upper, upperInclusive: last.upperInclusive }, table.unit)
-    .trim();
+  return boundText(
+    { ...first, upper: last.upper, upperInclusive: last.upperInclusive },
+    formatUnit(table.unit),
+  ).trim();
 }
 
 function bandIndex(table: SeverityTable, value: number, where: string): number {

@@ -325,7 +325,7 @@ export function defineZScoreModel<M extends ZScoreModel>(model: M): M {
       throw new RangeError(
         `Z-score model '${model.id}': expected a positive SD across the BSA range, got ${
           f.sd(model, bsa)
-        } at BSA ${bsa} m^2`,
+        } at BSA ${bsa} m²`,
       );
     }
   }
@@ -645,7 +645,7 @@ export interface ZScoreResult {
 export function bsaOutsideModelFlag(model: ZScoreModel, bsaM2: number): string {
   return `BSA ${
     Number(bsaM2.toPrecision(4))
-  } m^2 lies outside the range the model '${model.id}' was built on ${
+  } m² lies outside the range the model '${model.id}' was built on ${
     formatRange(model.bsaRange, "m^2")
   }: the Z-score is an extrapolation`;
 }
@@ -716,10 +716,10 @@ export function zScore(model: ZScoreModel, args: ZScoreArguments): ZScoreResult 
 
 function checkBsa(where: string, bsaM2: number): void {
   if (typeof bsaM2 !== "number") {
-    throw new TypeError(`${where}: expected 'bsaM2' as a number in m^2, got ${typeof bsaM2}`);
+    throw new TypeError(`${where}: expected 'bsaM2' as a number in m², got ${typeof bsaM2}`);
   }
   if (!(bsaM2 > 0 && bsaM2 <= 5)) {
-    throw new RangeError(`${where}: expected 'bsaM2' in (0, 5] m^2, got ${bsaM2}`);
+    throw new RangeError(`${where}: expected 'bsaM2' in (0, 5] m², got ${bsaM2}`);
   }
 }
 
@@ -756,7 +756,7 @@ export function measurementAtZ(model: ZScoreModel, zScore: number, bsaM2: number
   const x = measurementFormula(model, zScore, bsaM2);
   if (!(x > 0 && Number.isFinite(x))) {
     throw new RangeError(
-      `${where}: Z = ${zScore} at BSA ${bsaM2} m^2 gives no positive measurement, got ${x}`,
+      `${where}: Z = ${zScore} at BSA ${bsaM2} m² gives no positive measurement, got ${x}`,
     );
   }
   return x;

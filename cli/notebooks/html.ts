@@ -12,6 +12,7 @@ import { escapeHtml } from "../../calc/core/display.ts";
 import { type Cell, joinText, type MimeData, type Notebook, type Output } from "./nbformat.ts";
 
 // ESC [ params intermediates final  |  ESC ] ... BEL/ST  |  other two-byte ESC sequences
+// deno-lint-ignore no-control-regex -- matching ESC is the point of this pattern
 const ANSI_PATTERN = /\x1b\[[0-?]*[ -\/]*[@-~]|\x1b\][^\x07\x1b]*(?:\x07|\x1b\\)|\x1b[@-Z\\-_]/g;
 
 /**

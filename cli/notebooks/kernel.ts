@@ -15,7 +15,6 @@ import {
   createMessage,
   deserializeMessage,
   type JupyterMessage,
-  type MessageHeader,
   serializeMessage,
 } from "./protocol.ts";
 
@@ -97,8 +96,10 @@ export interface ExecuteOptions {
  * @returns The port numbers.
  */
 export function findFreePorts(count: number): number[] {
-  const listeners = Array.from({ length: count }, () =>
-    Deno.listen({ hostname: "127.0.0.1", port: 0 }));
+  const listeners = Array.from(
+    { length: count },
+    () => Deno.listen({ hostname: "127.0.0.1", port: 0 }),
+  );
   const ports = listeners.map((l) => (l.addr as Deno.NetAddr).port);
   for (const l of listeners) l.close();
   return ports;
@@ -306,9 +307,9 @@ export class DenoKernel {
       if (this.exitStatus !== null) throw this.#diedError("while starting");
       if (remaining <= 0) {
         throw new KernelError(
-          `Kernel did not answer kernel_info_request within ${timeoutMs / 1000} s${
-            this.#stderrSuffix()
-          }`,
+          `Kernel did not answer kernel_info_request within ${
+            timeoutMs / 1000
+          } s${this.#stderrSuffix()}`,
         );
       }
       const request = createMessage("kernel_info_request", {}, { session: this.#session });
@@ -349,7 +350,9 @@ export class DenoKernel {
   #diedError(when: string): KernelError {
     const s = this.exitStatus;
     const how = s === null ? "" : s.signal !== null ? ` (signal ${s.signal})` : ` (exit ${s.code})`;
-    return new KernelError(`Kernel process ${this.pid} exited ${when}${how}${this.#stderrSuffix()}`);
+    return new KernelError(
+      `Kernel process ${this.pid} exited ${when}${how}${this.#stderrSuffix()}`,
+    );
   }
 
   /**

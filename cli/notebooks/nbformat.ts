@@ -204,9 +204,11 @@ const notebookSchema = z.strictObject({
  */
 export function notebookProblems(notebook: unknown): string[] {
   const result = notebookSchema.safeParse(notebook);
-  const problems = result.success ? [] : result.error.issues.map((issue) =>
-    `${issue.path.length === 0 ? "(root)" : issue.path.join(".")}: ${issue.message}`
-  );
+  const problems = result.success
+    ? []
+    : result.error.issues.map((issue) =>
+      `${issue.path.length === 0 ? "(root)" : issue.path.join(".")}: ${issue.message}`
+    );
   if (result.success) {
     const seen = new Set<string>();
     result.data.cells.forEach((cell, i) => {
@@ -224,7 +226,10 @@ export function notebookProblems(notebook: unknown): string[] {
  * @param label Where it came from (for the message).
  * @throws {TypeError} Listing up to five problems.
  */
-export function assertValidNotebook(notebook: unknown, label: string): asserts notebook is Notebook {
+export function assertValidNotebook(
+  notebook: unknown,
+  label: string,
+): asserts notebook is Notebook {
   const problems = notebookProblems(notebook);
   if (problems.length > 0) {
     throw new TypeError(
@@ -296,9 +301,11 @@ export function parseNotebook(text: string, label: string): Notebook {
     );
   }
   if (typeof raw !== "object" || raw === null || Array.isArray(raw)) {
-    throw new NotebookInputError(`Notebook ${label}: expected a JSON object, got ${
-      Array.isArray(raw) ? "an array" : JSON.stringify(raw)
-    }`);
+    throw new NotebookInputError(
+      `Notebook ${label}: expected a JSON object, got ${
+        Array.isArray(raw) ? "an array" : JSON.stringify(raw)
+      }`,
+    );
   }
   const nb = raw as Record<string, unknown>;
   if (nb.nbformat !== 4) {
@@ -318,7 +325,11 @@ export function parseNotebook(text: string, label: string): Notebook {
     }
     const cell = { ...(c as Record<string, unknown>) };
     if (!["code", "markdown", "raw"].includes(cell.cell_type as string)) {
-      throw new NotebookInputError(`Notebook ${label}: cell ${i + 1}: expected 'cell_type' code, markdown or raw, got ${JSON.stringify(cell.cell_type)}`);
+      throw new NotebookInputError(
+        `Notebook ${label}: cell ${i + 1}: expected 'cell_type' code, markdown or raw, got ${
+          JSON.stringify(cell.cell_type)
+        }`,
+      );
     }
     let id = typeof cell.id === "string" && /^[a-zA-Z0-9-_]{1,64}$/.test(cell.id) ? cell.id : "";
     if (id === "" || used.has(id)) id = randomUUID().replaceAll("-", "").slice(0, 16);
@@ -341,9 +352,9 @@ export function parseNotebook(text: string, label: string): Notebook {
   };
   const problems = notebookProblems(notebook);
   if (problems.length > 0) {
-    throw new NotebookInputError(`Notebook ${label}: not a valid notebook: ${
-      problems.slice(0, 5).join("; ")
-    }`);
+    throw new NotebookInputError(
+      `Notebook ${label}: not a valid notebook: ${problems.slice(0, 5).join("; ")}`,
+    );
   }
   return notebook as unknown as Notebook;
 }

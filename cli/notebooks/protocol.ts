@@ -139,9 +139,9 @@ export function deserializeMessage(frames: readonly Uint8Array[], key: string): 
   const at = frames.findIndex((f) => decoder.decode(f) === DELIMITER);
   if (at < 0) throw new Error("Jupyter message: missing the '<IDS|MSG>' delimiter frame");
   if (frames.length < at + 6) {
-    throw new Error(`Jupyter message: expected at least 6 frames after the identities, got ${
-      frames.length - at
-    }`);
+    throw new Error(
+      `Jupyter message: expected at least 6 frames after the identities, got ${frames.length - at}`,
+    );
   }
   const signature = decoder.decode(frames[at + 1]!);
   const json = frames.slice(at + 2, at + 6);

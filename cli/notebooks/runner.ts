@@ -11,7 +11,7 @@
  */
 import { basename, dirname, extname, join, resolve } from "node:path";
 import { notebookToHtml, stripAnsi } from "./html.ts";
-import { DenoKernel, type ExecuteOutcome, KernelError } from "./kernel.ts";
+import { DenoKernel, type ExecuteOutcome, KernelError, resolveDenoPath } from "./kernel.ts";
 import {
   assertValidNotebook,
   checkDenoKernelspec,
@@ -151,7 +151,9 @@ export function locateErrorLine(
   const isCode = (line: string) => line.trim() !== "" && !/^\s*(\/\/|\*|\/\*)/.test(line);
   const names = new Set<string>();
   for (const m of evalue.matchAll(/['"`]([A-Za-z_$][\w$.]*)['"`]/g)) names.add(m[1]!);
-  for (const m of evalue.matchAll(/\b([A-Za-z_$][\w$.]*) is not (?:defined|a function|iterable)/g)) {
+  for (
+    const m of evalue.matchAll(/\b([A-Za-z_$][\w$.]*) is not (?:defined|a function|iterable)/g)
+  ) {
     names.add(m[1]!.split(".").pop()!);
   }
   for (const m of evalue.matchAll(/reading '([^']+)'/g)) names.add(m[1]!);
@@ -186,7 +188,9 @@ export function formatFailure(path: string, failure: CellFailure): string {
     died: "lost its kernel",
     aborted: "was interrupted",
   }[failure.kind];
-  const count = failure.executionCount === null ? "" : `, execution count ${failure.executionCount}`;
+  const count = failure.executionCount === null
+    ? ""
+    : `, execution count ${failure.executionCount}`;
   const out = [
     `${path}: cell ${failure.cellNumber} of ${failure.cellCount} ${what} (id ${failure.cellId}${count})`,
     `  ${failure.ename}: ${failure.evalue}`,
@@ -221,6 +225,13 @@ export async function writeNotebook(path: string, notebook: Notebook): Promise<v
   await Deno.mkdir(dirname(path), { recursive: true });
   await Deno.writeTextFile(path, JSON.stringify(notebook, null, 1) + "\n");
 }
+
+const STATUS_WORD: Readonly<Record<CellFailure["kind"], string>> = {
+  error: "FAILED",
+  timeout: "TIMED OUT",
+  died: "KERNEL DIED",
+  aborted: "INTERRUPTED",
+};
 
 function stemOf(path: string): string {
   return basename(path, extname(path));
@@ -334,9 +345,11 @@ export async function runNotebook(path: string, options: RunOptions = {}): Promi
   result.kernelPid = kernel.pid;
   options.onKernelStarted?.(kernel.pid);
   const info = kernel.kernelInfo;
-  log(`${path}: kernel started (pid ${kernel.pid}, ${String(info.implementation ?? "kernel")} ${
-    String(info.implementation_version ?? "")
-  }, protocol ${String(info.protocol_version ?? "?")})`);
+  log(
+    `${path}: kernel started (pid ${kernel.pid}, ${String(info.implementation ?? "kernel")} ${
+      String(info.implementation_version ?? "")
+    }, protocol ${String(info.protocol_version ?? "?")})`,
+  );
   if (!(await kernel.heartbeat())) log(`${path}: warning: the kernel heartbeat did not answer`);
 
   // ---- cells ---------------------------------------------------------------------------------
@@ -348,9 +361,9 @@ export async function runNotebook(path: string, options: RunOptions = {}): Promi
       if (cell.cell_type !== "code") continue;
       codeIndex++;
       const source = joinText(cell.source);
-      const label = `${path} [cell ${index + 1}/${notebook.cells.length}, code ${codeIndex}/${
-        codeCells.length
-      }]`;
+      const label = `${path} [cell ${
+        index + 1
+      }/${notebook.cells.length}, code ${codeIndex}/${codeCells.length}]`;
       if (source.trim() === "") {
         log(`${label} empty, skipped`);
         continue;
@@ -377,10 +390,21 @@ export async function runNotebook(path: string, options: RunOptions = {}): Promi
         executionCount: outcome.executionCount,
       };
       if (outcome.status === "error") {
-        const error = outcome.error ?? { ename: "Error", evalue: "", traceback: [] };
+        let error = outcome.error ?? { ename: "Error", evalue: "", traceback: [] };
+        let line: SourceLine | undefined;
+        if (error.traceback.length === 0) {
+          // The Deno kernel answers a syntax error with a bare "Execution failed": ask the
+          // parser of the same deno binary for the message and position.
+          const syntax = await diagnoseSyntax(resolveDenoPath(options.denoPath), source);
+          if (syntax !== undefined) {
+            error = { ename: "SyntaxError", evalue: syntax.message, traceback: [] };
+            error.traceback.push(`SyntaxError: ${syntax.message} (line ${syntax.line.number})`);
+            line = syntax.line;
+          }
+        }
         const traceback = error.traceback.map(stripAnsi);
         failure = { kind: "error", ...base, ename: error.ename, evalue: error.evalue, traceback };
-        const line = locateErrorLine(source, error.evalue, traceback);
+        line ??= locateErrorLine(source, error.evalue, traceback);
         if (line !== undefined) failure.line = line;
         if (!collector.outputs.some((o) => o.output_type === "error")) {
           collector.handle("error", error);
@@ -390,24 +414,17 @@ export async function runNotebook(path: string, options: RunOptions = {}): Promi
           ? `Cell did not finish within ${timeoutSeconds} s; the kernel was stopped`
           : outcome.status === "aborted"
           ? "Run interrupted; the kernel was stopped"
-          : `The kernel process exited during the cell${
-            kernel.exitStatus === null ? "" : ` (${
-              kernel.exitStatus.signal === null
-                ? `exit ${kernel.exitStatus.code}`
-                : `signal ${kernel.exitStatus.signal}`
-            })`
-          }`;
-        const ename = { timeout: "CellTimeoutError", aborted: "InterruptedError", died: "KernelDiedError" }[
-          outcome.status
-        ];
+          : `The kernel process exited during the cell${describeExit(kernel.exitStatus)}`;
+        const ename =
+          { timeout: "CellTimeoutError", aborted: "InterruptedError", died: "KernelDiedError" }[
+            outcome.status
+          ];
         failure = { kind: outcome.status, ...base, ename, evalue, traceback: [] };
         collector.handle("error", { ename, evalue, traceback: [`${ename}: ${evalue}`] });
       }
       const newStderr = stderrSince(stderrBefore, kernel.stderrTail);
       if (newStderr.trim() !== "") failure.kernelStderr = stripAnsi(newStderr);
-      log(`${label} ${failure.kind === "error" ? "FAILED" : failure.kind.toUpperCase()} after ${seconds} s · ${
-        firstCodeLine(source)
-      }`);
+      log(`${label} ${STATUS_WORD[failure.kind]} after ${seconds} s · ${firstCodeLine(source)}`);
       break;
     }
   } finally {
@@ -422,8 +439,9 @@ export async function runNotebook(path: string, options: RunOptions = {}): Promi
   // ---- files ---------------------------------------------------------------------------------
   notebook.metadata.kernelspec ??= { name: "deno", display_name: "Deno", language: "typescript" };
   if (typeof info.language_info === "object" && info.language_info !== null) {
-    notebook.metadata.language_info = info.language_info as Notebook["metadata"]["language_info"] &
-      object;
+    notebook.metadata.language_info = info.language_info as
+      & Notebook["metadata"]["language_info"]
+      & object;
   }
   const partialPath = partialPathOf(path);
   if (failure !== undefined) {
@@ -455,9 +473,11 @@ export async function runNotebook(path: string, options: RunOptions = {}): Promi
     );
     result.htmlPath = htmlPath;
   }
-  log(`${path}: ok, ${result.cellsExecuted} code cells in ${
-    ((Date.now() - started) / 1000).toFixed(1)
-  } s → ${outputPath}${result.htmlPath === undefined ? "" : ` and ${result.htmlPath}`}`);
+  log(
+    `${path}: ok, ${result.cellsExecuted} code cells in ${
+      ((Date.now() - started) / 1000).toFixed(1)
+    } s → ${outputPath}${result.htmlPath === undefined ? "" : ` and ${result.htmlPath}`}`,
+  );
   return done("ok");
 }
 
@@ -469,4 +489,49 @@ function stderrSince(before: string, after: string): string {
     if (after.startsWith(before.slice(before.length - k))) return after.slice(k);
   }
   return after;
+}
+
+/**
+ * Finds a syntax error in cell source with the TypeScript parser of a deno binary (`deno fmt
+ * --ext=ts -` parses without running anything and reports the first error with its position).
+ *
+ * @param denoPath The deno binary.
+ * @param source The cell source.
+ * @returns The message and the located line, or undefined when the source parses (or the check
+ *   itself cannot run).
+ */
+export async function diagnoseSyntax(
+  denoPath: string,
+  source: string,
+): Promise<{ message: string; line: SourceLine } | undefined> {
+  let output: Deno.CommandOutput;
+  try {
+    const child = new Deno.Command(denoPath, {
+      args: ["fmt", "--ext=ts", "-"],
+      env: { NO_COLOR: "1", DENO_NO_UPDATE_CHECK: "1" },
+      stdin: "piped",
+      stdout: "null",
+      stderr: "piped",
+    }).spawn();
+    const writer = child.stdin.getWriter();
+    await writer.write(new TextEncoder().encode(source));
+    await writer.close();
+    output = await child.output();
+  } catch {
+    return undefined;
+  }
+  if (output.success) return undefined;
+  const text = stripAnsi(new TextDecoder().decode(output.stderr));
+  const message = /SyntaxError: (.+)/.exec(text)?.[1]?.trim();
+  const position = /_stdin\.ts:(\d+):\d+/.exec(text)?.[1];
+  if (message === undefined || position === undefined) return undefined;
+  const number = Number(position);
+  const lines = source.split("\n");
+  if (!(number >= 1 && number <= lines.length)) return undefined;
+  return { message, line: { number, text: lines[number - 1]!, how: "parser" } };
+}
+
+function describeExit(status: Deno.CommandStatus | null): string {
+  if (status === null) return "";
+  return status.signal === null ? ` (exit ${status.code})` : ` (signal ${status.signal})`;
 }

@@ -184,7 +184,7 @@ Deno.test("left atrial volume: area–length uses the shorter axis, discs the lo
     () => leftAtrialVolume({ fourChamber: a, twoChamber: b }, { bodySurfaceAreaM2: 0 }),
     {
       name: "RangeError",
-      message: /^Left atrial volume: expected 'bodySurfaceAreaM2' in \(0, 5\] m\^2, got 0$/,
+      message: /^Left atrial volume: expected 'bodySurfaceAreaM2' in \(0, 5\] m², got 0$/,
     },
   );
   assert.throws(

@@ -200,7 +200,7 @@ Deno.test("BSA outside a model's range is flagged per row in the output", () => 
   assert.equal(result.bsaOutsideModel.lvedd![0], 0);
   assert.match(
     out,
-    /lvedd: BSA outside the range of model phn2017\.lvEndDiastolicDimension \[0\.15, 2\.4\] m\^2/,
+    /lvedd: BSA outside the range of model phn2017\.lvEndDiastolicDimension \[0\.15, 2\.4\] m²/,
   );
   assert.throws(() => computeCohort(result.table, { zScores: { lvedd: MASS } }), {
     name: "TypeError",

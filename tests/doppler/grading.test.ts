@@ -231,7 +231,7 @@ Deno.test("bad values for grading", () => {
   });
   assert.throws(() => gradeSeverity(AORTIC_STENOSIS_2017.valveArea, [1, 0]), {
     name: "RangeError",
-    message: /'samples\[1\]': expected a value in \(0, ∞\) cm\^2, got 0$/,
+    message: /'samples\[1\]': expected a value in \(0, ∞\) cm², got 0$/,
   });
   assert.throws(() => gradeSeverity(AORTIC_STENOSIS_2017.valveArea, []), {
     name: "TypeError",

@@ -139,7 +139,7 @@ Deno.test("BSA outside the model's range is flagged, not hidden", () => {
   assert.equal(r.flags.length, 1, "one clear flag, not the generic typical-range one as well");
   assert.match(
     r.flags[0]!,
-    /^BSA 2\.8 m\^2 lies outside the range the model 'phn2017\.lvMass' was built on \[0\.15, 2\.4\] m\^2: the Z-score is an extrapolation$/,
+    /^BSA 2\.8 m² lies outside the range the model 'phn2017\.lvMass' was built on \[0\.15, 2\.4\] m²: the Z-score is an extrapolation$/,
   );
   assert.equal(zScore(PHN_2017_MODELS.lvMass, { measurement: 60, bsaM2: 1 }).flags.length, 0);
   assert.equal(normalLimits(PHN_2017_MODELS.lvMass, 0.1).bsaOutsideModelRange, true);
@@ -154,7 +154,7 @@ Deno.test("Z-score bad input: clear errors naming field, range and value", () =>
   });
   assert.throws(() => zScore(model, { measurement: 1.5, bsaM2: 0 }), {
     name: "RangeError",
-    message: /expected 'bsaM2' in \(0, 5\] m\^2, got 0$/,
+    message: /expected 'bsaM2' in \(0, 5\] m², got 0$/,
   });
   assert.throws(() => zScore(model, { measurement: "1.5 mL", bsaM2: 1 }), {
     name: "TypeError",
@@ -166,7 +166,7 @@ Deno.test("Z-score bad input: clear errors naming field, range and value", () =>
   });
   assert.throws(() => measurementAtZ(model, 2, -1), {
     name: "RangeError",
-    message: "Measurement at Z (phn2017.aorticAnnulus): expected 'bsaM2' in (0, 5] m^2, got -1",
+    message: "Measurement at Z (phn2017.aorticAnnulus): expected 'bsaM2' in (0, 5] m², got -1",
   });
   assert.throws(() => measurementAtZ(model, -20, 1), {
     name: "RangeError",
@@ -232,7 +232,7 @@ Deno.test("defineZScoreModel rejects malformed data naming the field", () => {
   });
   assert.throws(() => defineZScoreModel({ ...SYNTHETIC_LOG_MODEL, sdCoefficients: [0.1, -1] }), {
     name: "RangeError",
-    message: /expected a positive SD across the BSA range, got -0\.1\d* at BSA 0\.2 m\^2$/,
+    message: /expected a positive SD across the BSA range, got -0\.1\d* at BSA 0\.2 m²$/,
   });
 });
 

@@ -1,0 +1,157 @@
+/**
+ * `deno task notebooks [paths...] [--out DIR] [--in-place] [--timeout SECONDS] [--html]
+ * [--deno PATH]`: executes notebooks on the real Deno Jupyter kernel, without Python.
+ *
+ * With no paths, every `*.ipynb` in notebooks/ and examples/ is run. Exit status: 0 when every
+ * notebook ran; 1 when a cell failed, timed out or the kernel died; 2 for bad input (usage, a
+ * missing notebook, invalid JSON, a non-Deno kernelspec); 3 when the kernel could not be started
+ * (e.g. the deno binary is missing); 130 when interrupted (Ctrl-C) or terminated.
+ *
+ * @module
+ */
+import { parseArgs } from "node:util";
+import { runNotebook, type RunResult } from "./notebooks/runner.ts";
+
+const USAGE = `Usage: deno task notebooks [paths...] [options]
+
+Executes Jupyter notebooks on the Deno kernel (no Python needed) and writes the executed copies.
+
+Options:
+  --out DIR          folder for executed notebooks and HTML (default: out/notebooks)
+  --in-place         overwrite each original notebook after a successful run
+  --timeout SECONDS  per-cell time limit (default: 300)
+  --html             also export a self-contained HTML document per notebook
+  --deno PATH        deno binary for the kernel (default: $SONORIGOR_DENO, else this deno)
+  -h, --help         show this help
+
+With no paths, runs every *.ipynb in notebooks/ and examples/ (skipping *.partial.ipynb).`;
+
+/** Exit status per outcome. */
+export const EXIT_CODES: Readonly<Record<RunResult["status"], number>> = {
+  ok: 0,
+  failed: 1,
+  invalid: 2,
+  kernel: 3,
+  interrupted: 130,
+};
+
+/**
+ * Lists the notebooks in the given folders (sorted, partial notebooks excluded).
+ *
+ * @param folders Folders to scan (missing ones are skipped).
+ * @returns Paths such as "notebooks/01-x.ipynb".
+ */
+export async function findNotebooks(folders: readonly string[]): Promise<string[]> {
+  const found: string[] = [];
+  for (const folder of folders) {
+    try {
+      for await (const entry of Deno.readDir(folder)) {
+        if (
+          entry.isFile && entry.name.endsWith(".ipynb") && !entry.name.endsWith(".partial.ipynb")
+        ) {
+          found.push(`${folder}/${entry.name}`);
+        }
+      }
+    } catch (error) {
+      if (!(error instanceof Deno.errors.NotFound)) throw error;
+    }
+  }
+  return found.sort();
+}
+
+/**
+ * Runs the command line.
+ *
+ * @param args Command-line arguments.
+ * @returns The exit status.
+ */
+export async function main(args: string[]): Promise<number> {
+  let parsed;
+  try {
+    parsed = parseArgs({
+      args,
+      allowPositionals: true,
+      options: {
+        out: { type: "string" },
+        "in-place": { type: "boolean", default: false },
+        timeout: { type: "string" },
+        html: { type: "boolean", default: false },
+        deno: { type: "string" },
+        help: { type: "boolean", short: "h", default: false },
+      },
+    });
+  } catch (error) {
+    console.error(`${(error as Error).message}\n\n${USAGE}`);
+    return 2;
+  }
+  const { values, positionals } = parsed;
+  if (values.help) {
+    console.log(USAGE);
+    return 0;
+  }
+  let timeoutSeconds = 300;
+  if (values.timeout !== undefined) {
+    timeoutSeconds = Number(values.timeout);
+    if (!(timeoutSeconds > 0 && timeoutSeconds <= 86_400)) {
+      console.error(`Option --timeout: expected seconds in (0, 86400], got ${values.timeout}`);
+      return 2;
+    }
+  }
+  if (values.out !== undefined && values["in-place"] && !values.html) {
+    console.error("note: --out only matters with --html when --in-place is set");
+  }
+  const paths = positionals.length > 0
+    ? positionals
+    : await findNotebooks(["notebooks", "examples"]);
+  if (paths.length === 0) {
+    console.error("No notebooks to run (none given, none in notebooks/ or examples/)");
+    return 0;
+  }
+
+  const controller = new AbortController();
+  const signals: Deno.Signal[] = ["SIGINT", "SIGTERM"];
+  const onSignal = () => {
+    if (!controller.signal.aborted) {
+      console.error("\nInterrupted: stopping the kernel…");
+      controller.abort();
+    }
+  };
+  for (const s of signals) Deno.addSignalListener(s, onSignal);
+
+  const results: RunResult[] = [];
+  try {
+    for (const path of paths) {
+      if (controller.signal.aborted) break;
+      const result = await runNotebook(path, {
+        timeoutSeconds,
+        inPlace: values["in-place"],
+        html: values.html,
+        signal: controller.signal,
+        ...(values.out === undefined ? {} : { outDir: values.out }),
+        ...(values.deno === undefined ? {} : { denoPath: values.deno }),
+      });
+      results.push(result);
+      if (result.status === "invalid" || result.status === "kernel") {
+        console.error(result.message);
+      }
+    }
+  } finally {
+    for (const s of signals) Deno.removeSignalListener(s, onSignal);
+  }
+
+  const count = (status: RunResult["status"]) => results.filter((r) => r.status === status).length;
+  if (results.length > 1) {
+    console.error(
+      `\n${results.length} notebooks: ${count("ok")} ok, ${results.length - count("ok")} not ok${
+        controller.signal.aborted ? " (interrupted)" : ""
+      }`,
+    );
+    for (const r of results) console.error(`  ${r.status.padEnd(11)} ${r.path}`);
+  }
+  if (controller.signal.aborted) return EXIT_CODES.interrupted;
+  return Math.max(0, ...results.map((r) => EXIT_CODES[r.status]));
+}
+
+if (import.meta.main) {
+  Deno.exit(await main(Deno.args));
+}
