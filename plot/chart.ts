@@ -104,7 +104,7 @@ export class Chart {
   /** Notebook display: the vega-lite spec (interactive front ends) and its SVG twin. */
   async [JUPYTER_DISPLAY](): Promise<MimeBundle> {
     return {
-      "application/vnd.vegalite.v5+json": this.spec,
+      "application/vnd.vegalite.v6+json": this.spec,
       "image/svg+xml": await this.toSVG(),
       "text/plain": `Chart: ${this.title}`,
     };

@@ -131,19 +131,11 @@ function sampleColumn(input: ResolvedInput, out: Float64Array, rng: RandomStream
   }
 }
 
-/** Draws `m` trials of every input: one Float64Array column per input, in input order. */
-function sampleInputs(
-  prepared: PreparedInputs<string>,
-  m: number,
-  rng: RandomStream,
-  where: string,
-): Float64Array[] {
+/** Checks that correlated inputs are normal and returns the Cholesky factor (null when the
+ * inputs are uncorrelated). */
+function correlationFactor(prepared: PreparedInputs<string>, where: string): number[][] | null {
   const { inputs, correlation, correlated } = prepared;
-  const columns = inputs.map(() => new Float64Array(m));
-  if (!correlated) {
-    inputs.forEach((input, i) => sampleColumn(input, columns[i]!, rng));
-    return columns;
-  }
+  if (!correlated) return null;
   inputs.forEach((input, i) => {
     const involved = correlation[i]!.some((v, j) => j !== i && v !== 0);
     if (involved && input.kind !== "normal") {
@@ -152,16 +144,27 @@ function sampleInputs(
       );
     }
   });
-  const l = choleskySemidefinite(correlation, inputs.map((i) => i.name), where);
-  // standard normal columns for normal inputs, in order; then mix with L
-  const z = inputs.map((input, i) => {
-    if (input.kind !== "normal") {
-      sampleColumn(input, columns[i]!, rng);
-      return null;
-    }
-    const col = new Float64Array(m);
-    rng.fillNormal(col);
-    return col;
+  return choleskySemidefinite(correlation, inputs.map((i) => i.name), where);
+}
+
+/** Fills one column per input with draws (correlated normal inputs mixed by the Cholesky factor
+ * `l`; `scratch` holds their standard normal draws). */
+function sampleInputs(
+  prepared: PreparedInputs<string>,
+  columns: readonly Float64Array[],
+  l: number[][] | null,
+  scratch: readonly Float64Array[],
+  rng: RandomStream,
+): void {
+  const { inputs } = prepared;
+  if (!l) {
+    inputs.forEach((input, i) => sampleColumn(input, columns[i]!, rng));
+    return;
+  }
+  const m = columns[0]!.length;
+  inputs.forEach((input, i) => {
+    if (input.kind === "normal") rng.fillNormal(scratch[i]!);
+    else sampleColumn(input, columns[i]!, rng);
   });
   inputs.forEach((input, i) => {
     if (input.kind !== "normal") return;
@@ -170,51 +173,91 @@ function sampleInputs(
     out.fill(0);
     for (let k = 0; k <= i; k++) {
       const coef = row[k]!;
-      const zk = z[k];
-      if (coef === 0 || !zk) continue;
+      if (coef === 0 || inputs[k]!.kind !== "normal") continue;
+      const zk = scratch[k]!;
       for (let r = 0; r < m; r++) out[r]! += coef * zk[r]!;
     }
     const x = input.estimate, u = input.standardUncertainty;
     for (let r = 0; r < m; r++) out[r] = x + u * out[r]!;
   });
-  return columns;
 }
 
-/** Evaluates the formula on every trial; returns one column per output. */
-function evaluateColumns<I extends string, O extends string>(
+/** Trials are drawn and evaluated in chunks of this size: input columns stay small and in cache;
+ * only the output columns hold all trials. Part of the definition of the random stream layout. */
+const CHUNK = 65_536;
+
+/** Draws and evaluates `m` trials in chunks; returns the output columns and, per input, how many
+ * draws fell outside its valid range. */
+function runTrials<I extends string, O extends string>(
   calc: Calculation<I, O>,
-  columns: readonly Float64Array[],
+  prepared: PreparedInputs<I>,
   m: number,
-): Float64Array[] {
-  const results = calc.outputNames.map(() => new Float64Array(m));
+  rng: RandomStream,
+): { results: Float64Array[]; outside: number[] } {
   const c = calc as unknown as Calculation;
-  const bad = columnKernel(c)(c.formula, columns, results, m);
-  if (bad >= 0) {
-    const x: Record<string, number> = {};
-    calc.inputNames.forEach((n, i) => (x[n] = columns[i]![bad]!));
-    const y = calc.formula(x as InputValues<I>) as Record<string, number>;
-    const output = calc.outputNames.find((o) => !Number.isFinite(y[o]))!;
-    const shown = calc.inputNames.map((n) => `${n} = ${x[n]}`).join(", ");
-    throw new RangeError(
-      `${calc.title}: output '${output}' is not finite at Monte Carlo trial ${bad} (${shown}), got ${
-        y[output]
-      }; give the inputs distributions that respect the formula's domain (e.g. rectangular bounds)`,
-    );
+  const p = prepared as unknown as PreparedInputs<string>;
+  const l = correlationFactor(p, calc.title);
+  const size = Math.min(CHUNK, m);
+  const columns = p.inputs.map(() => new Float64Array(size));
+  const scratch = l ? p.inputs.map(() => new Float64Array(size)) : [];
+  const results = calc.outputNames.map(() => new Float64Array(m));
+  const outside = p.inputs.map(() => 0);
+  const kernel = columnKernel(c);
+  for (let start = 0; start < m; start += size) {
+    const n = Math.min(size, m - start);
+    const cols = n === size ? columns : columns.map((col) => col.subarray(0, n));
+    sampleInputs(p, cols, l, n === size ? scratch : scratch.map((z) => z.subarray(0, n)), rng);
+    calc.inputNames.forEach((
+      name,
+      i,
+    ) => (outside[i]! += countOutside(cols[i]!, c.inputs[name]!.range)));
+    const outs = results.map((r) => r.subarray(start, start + n));
+    const bad = kernel(c.formula, cols, outs, n);
+    if (bad >= 0) nonFiniteError(calc, cols, bad, start + bad);
   }
-  return results;
+  return { results, outside };
+}
+
+/** Number of values outside a range (a min/max pass first: usually nothing to count). */
+function countOutside(col: Float64Array, range: Calculation["inputs"][string]["range"]): number {
+  let min = Infinity, max = -Infinity;
+  for (let r = 0; r < col.length; r++) {
+    const v = col[r]!;
+    if (v < min) min = v;
+    if (v > max) max = v;
+  }
+  if (inRange(min, range) && inRange(max, range)) return 0;
+  let n = 0;
+  for (let r = 0; r < col.length; r++) if (!inRange(col[r]!, range)) n++;
+  return n;
+}
+
+function nonFiniteError<I extends string, O extends string>(
+  calc: Calculation<I, O>,
+  cols: readonly Float64Array[],
+  index: number,
+  trial: number,
+): never {
+  const x: Record<string, number> = {};
+  calc.inputNames.forEach((n, i) => (x[n] = cols[i]![index]!));
+  const y = calc.formula(x as InputValues<I>) as Record<string, number>;
+  const output = calc.outputNames.find((o) => !Number.isFinite(y[o]))!;
+  const shown = calc.inputNames.map((n) => `${n} = ${x[n]}`).join(", ");
+  throw new RangeError(
+    `${calc.title}: output '${output}' is not finite at Monte Carlo trial ${trial} (${shown}), got ${
+      y[output]
+    }; give the inputs distributions that respect the formula's domain (e.g. rectangular bounds)`,
+  );
 }
 
 /** Warnings for draws outside an input's valid range. */
-function rangeWarnings(calc: Calculation, columns: readonly Float64Array[]): string[] {
+function rangeWarnings(calc: Calculation, outside: readonly number[], trials: number): string[] {
   const warnings: string[] = [];
   calc.inputNames.forEach((name, i) => {
     const def = calc.inputs[name]!;
-    const col = columns[i]!;
-    let outside = 0;
-    for (let r = 0; r < col.length; r++) if (!inRange(col[r]!, def.range)) outside++;
-    if (outside > 0) {
+    if (outside[i]! > 0) {
       warnings.push(
-        `${outside} of ${col.length} draws of '${name}' fell outside its valid range ${
+        `${outside[i]} of ${trials} draws of '${name}' fell outside its valid range ${
           formatRange(def.range, def.unit)
         }: its distribution puts mass where the quantity cannot be`,
       );
@@ -415,9 +458,11 @@ export function monteCarlo<I extends string, O extends string>(
   const seed = options.seed ?? DEFAULT_SEED;
   const rng = randomStream(seed);
   const prepared = prepareInputs(calc, inputs, options.correlations);
-  const columns = sampleInputs(prepared as PreparedInputs<string>, trials, rng, calc.title);
-  const results = evaluateColumns(calc, columns, trials);
-  const warnings = [...prepared.flags, ...rangeWarnings(calc as unknown as Calculation, columns)];
+  const { results, outside } = runTrials(calc, prepared, trials, rng);
+  const warnings = [
+    ...prepared.flags,
+    ...rangeWarnings(calc as unknown as Calculation, outside, trials),
+  ];
   return summarise(calc, results, coverage, trials, seed, warnings, options.keepSamples ?? true);
 }
 
@@ -498,13 +543,10 @@ export function monteCarloAdaptive<I extends string, O extends string>(
   const warnings = [...prepared.flags];
   const tolerance = {} as Record<O, number>;
   let stabilized = false;
-  let inputWarnings: string[] = [];
+  const outsideTotal = calc.inputNames.map(() => 0);
   while (!stabilized && (batches.length + 1) * m <= maxTrials) {
-    const columns = sampleInputs(prepared as PreparedInputs<string>, m, rng, calc.title);
-    if (batches.length === 0) {
-      inputWarnings = rangeWarnings(calc as unknown as Calculation, columns);
-    }
-    const results = evaluateColumns(calc, columns, m);
+    const { results, outside } = runTrials(calc, prepared, m, rng);
+    outside.forEach((n, i) => (outsideTotal[i]! += n));
     batches.push(results);
     results.forEach((col, k) => {
       const { mean, sd } = meanAndStandardDeviation(col);
@@ -532,8 +574,8 @@ export function monteCarloAdaptive<I extends string, O extends string>(
       `Adaptive Monte Carlo did not stabilise within ${maxTrials} trials at ${digits} significant digits`,
     );
   }
-  warnings.push(...inputWarnings);
   const total = batches.length * m;
+  warnings.push(...rangeWarnings(calc as unknown as Calculation, outsideTotal, total));
   const merged = outs.map((_, k) => {
     const all = new Float64Array(total);
     batches.forEach((b, h) => all.set(b[k]!, h * m));

@@ -71,11 +71,7 @@ export function prepareInputs<I extends string>(
       );
     }
     if (def.typical && !inRange(r.estimate, def.typical)) {
-      flags.push(
-        `'${name}' = ${r.estimate} ${def.unit} lies outside the validated range ${
-          formatRange(def.typical, def.unit)
-        }: interpret with care`,
-      );
+      flags.push(typicalRangeFlag(name, r.estimate, def));
     }
     estimates[name] = r.estimate;
     return r;

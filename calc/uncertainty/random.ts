@@ -55,6 +55,67 @@ const ZIG_RATIO = new Float64Array(LAYERS);
 const TWO_POW_26 = 67108864;
 const TWO_POW_53 = 9007199254740992;
 
+/** The 32-bit generator behind a stream (pure-rand's MT19937). */
+type Generator32 = ReturnType<typeof mersenne>;
+
+/** Uniform on (0, 1) with 53-bit resolution from two 32-bit draws (genrand_res53 construction). */
+function uniform53(mt: Generator32): number {
+  const a = mt.next() >>> 5;
+  const b = mt.next() >>> 6;
+  return (a * TWO_POW_26 + b + 0.5) / TWO_POW_53;
+}
+
+/** Exact sampling of the normal tail beyond R (Marsaglia 1964, as used by Doornik 2005). */
+function tail(mt: Generator32, negative: boolean): number {
+  let x: number, y: number;
+  do {
+    x = Math.log(uniform53(mt)) / R;
+    y = Math.log(uniform53(mt));
+  } while (-2 * y < x * x);
+  return negative ? x - R : R - x;
+}
+
+/** The rare ziggurat cases: bottom layer (tail) or a wedge; on rejection a fresh normal. */
+function slowNormal(mt: Generator32, u: number, i: number): number {
+  if (i === 0) return tail(mt, u < 0);
+  const x = u * ZIG_X[i]!;
+  const f0 = Math.exp(-0.5 * (ZIG_X[i]! * ZIG_X[i]! - x * x));
+  const f1 = Math.exp(-0.5 * (ZIG_X[i + 1]! * ZIG_X[i + 1]! - x * x));
+  return f1 + uniform53(mt) * (f0 - f1) < 1 ? x : normal(mt);
+}
+
+/** One standard normal draw: improved ziggurat (Doornik 2005), 128 layers. */
+function normal(mt: Generator32): number {
+  const a = mt.next();
+  const b = mt.next();
+  // 53-bit uniform on (−1, 1) from the high bits; the layer from the low bits of both draws
+  const u = 2 * (((a >>> 5) * TWO_POW_26 + (b >>> 6) + 0.5) / TWO_POW_53) - 1;
+  const i = (b & 63) | ((a & 1) << 6);
+  return Math.abs(u) < ZIG_RATIO[i]! ? u * ZIG_X[i]! : slowNormal(mt, u, i);
+}
+
+/** Fills `out` with mean + sd·Z; the fast path of {@linkcode normal} written inline. */
+function fillNormal(mt: Generator32, out: Float64Array, mean: number, sd: number): void {
+  for (let r = 0; r < out.length; r++) {
+    const a = mt.next();
+    const b = mt.next();
+    const u = 2 * (((a >>> 5) * TWO_POW_26 + (b >>> 6) + 0.5) / TWO_POW_53) - 1;
+    const i = (b & 63) | ((a & 1) << 6);
+    const z = Math.abs(u) < ZIG_RATIO[i]! ? u * ZIG_X[i]! : slowNormal(mt, u, i);
+    out[r] = mean + sd * z;
+  }
+}
+
+/** Standard Student t by Bailey's polar method (Bailey 1994). */
+function studentT(mt: Generator32, dof: number): number {
+  for (;;) {
+    const u = 2 * uniform53(mt) - 1;
+    const v = 2 * uniform53(mt) - 1;
+    const w = u * u + v * v;
+    if (w <= 1 && w > 0) return u * Math.sqrt((dof * (w ** (-2 / dof) - 1)) / w);
+  }
+}
+
 /**
  * Creates a seeded random stream.
  *
@@ -76,69 +137,14 @@ export function randomStream(seed: number): RandomStream {
     );
   }
   const mt = mersenne(seed | 0);
-  const uniform = (): number => {
-    const a = mt.next() >>> 5;
-    const b = mt.next() >>> 6;
-    return (a * TWO_POW_26 + b + 0.5) / TWO_POW_53;
-  };
-  const tail = (negative: boolean): number => {
-    let x: number, y: number;
-    do {
-      x = Math.log(uniform()) / R;
-      y = Math.log(uniform());
-    } while (-2 * y < x * x);
-    return negative ? x - R : R - x;
-  };
-  const normal = (): number => {
-    for (;;) {
-      const a = mt.next();
-      const b = mt.next();
-      // 53-bit uniform on (−1, 1) from the high bits; the layer from the low bits of both draws
-      const u = 2 * (((a >>> 5) * TWO_POW_26 + (b >>> 6) + 0.5) / TWO_POW_53) - 1;
-      const i = (b & 63) | ((a & 1) << 6);
-      if (Math.abs(u) < ZIG_RATIO[i]!) return u * ZIG_X[i]!;
-      if (i === 0) return tail(u < 0);
-      const x = u * ZIG_X[i]!;
-      const f0 = Math.exp(-0.5 * (ZIG_X[i]! * ZIG_X[i]! - x * x));
-      const f1 = Math.exp(-0.5 * (ZIG_X[i + 1]! * ZIG_X[i + 1]! - x * x));
-      if (f1 + uniform() * (f0 - f1) < 1) return x;
-    }
-  };
-  const studentT = (dof: number): number => {
-    for (;;) {
-      const u = 2 * uniform() - 1;
-      const v = 2 * uniform() - 1;
-      const w = u * u + v * v;
-      if (w <= 1 && w > 0) return u * Math.sqrt((dof * (w ** (-2 / dof) - 1)) / w);
-    }
-  };
   return {
     seed,
-    uniform,
-    normal,
-    studentT,
-    fillNormal(out: Float64Array, mean = 0, sd = 1): void {
-      const m = out.length;
-      for (let r = 0; r < m; r++) {
-        // fast path of the ziggurat inlined; the rare wedge and tail cases call normal()
-        const a = mt.next();
-        const b = mt.next();
-        const u = 2 * (((a >>> 5) * TWO_POW_26 + (b >>> 6) + 0.5) / TWO_POW_53) - 1;
-        const i = (b & 63) | ((a & 1) << 6);
-        let z: number;
-        if (Math.abs(u) < ZIG_RATIO[i]!) z = u * ZIG_X[i]!;
-        else if (i === 0) z = tail(u < 0);
-        else {
-          const x = u * ZIG_X[i]!;
-          const f0 = Math.exp(-0.5 * (ZIG_X[i]! * ZIG_X[i]! - x * x));
-          const f1 = Math.exp(-0.5 * (ZIG_X[i + 1]! * ZIG_X[i + 1]! - x * x));
-          z = f1 + uniform() * (f0 - f1) < 1 ? x : normal();
-        }
-        out[r] = mean + sd * z;
-      }
-    },
+    uniform: () => uniform53(mt),
+    normal: () => normal(mt),
+    studentT: (dof: number) => studentT(mt, dof),
+    fillNormal: (out: Float64Array, mean = 0, sd = 1) => fillNormal(mt, out, mean, sd),
     fillUniform(out: Float64Array): void {
-      for (let r = 0; r < out.length; r++) out[r] = uniform();
+      for (let r = 0; r < out.length; r++) out[r] = uniform53(mt);
     },
   };
 }

@@ -145,6 +145,9 @@ export function resolveDenoPath(explicit?: string): string {
   return Deno.execPath();
 }
 
+/** Quiet time on iopub after "idle" before a cell counts as finished, in milliseconds. */
+const SETTLE_MS = 40;
+
 const sleep = (ms: number) => new Promise<void>((resolve) => setTimeout(resolve, ms));
 
 /** Serializes sends on one socket (zeromq allows one pending send per socket). */
@@ -424,7 +427,9 @@ export class DenoKernel {
     let idle = false;
     let wake: () => void = () => {};
     const progressed = () => wake();
+    let lastIopubAt = Date.now();
     this.#iopubListeners.set(id, (message) => {
+      lastIopubAt = Date.now();
       options.onIopub?.(message);
       if (message.header.msg_type === "status" && message.content.execution_state === "idle") {
         idle = true;
@@ -436,7 +441,9 @@ export class DenoKernel {
       progressed();
     });
     const finish = (status: ExecuteOutcome["status"]): ExecuteOutcome => {
-      this.#iopubListeners.delete(id);
+      // The iopub listener stays: the Deno kernel forwards console output asynchronously, so a
+      // stream message may arrive after "idle", even while the next cell runs; it still carries
+      // this request as parent and so still reaches this cell's outputs.
       this.#replyWaiters.delete(id);
       const content = (reply as JupyterMessage | null)?.content;
       const count = content?.execution_count;
@@ -459,8 +466,14 @@ export class DenoKernel {
     const deadline = started + options.timeoutMs;
     while (true) {
       if (reply !== null && idle) {
-        const status = (reply as JupyterMessage).content.status;
-        return finish(status === "ok" ? "ok" : "error");
+        // let late console output settle: wait for a short quiet spell on iopub
+        const quiet = Date.now() - lastIopubAt;
+        if (quiet >= SETTLE_MS || Date.now() - deadline >= 0) {
+          const status = (reply as JupyterMessage).content.status;
+          return finish(status === "ok" ? "ok" : "error");
+        }
+        await sleep(SETTLE_MS - quiet);
+        continue;
       }
       if (options.signal?.aborted) return finish("aborted");
       if (this.exitStatus !== null) return finish("died");
@@ -533,6 +546,7 @@ export class DenoKernel {
     if (!this.#closed) {
       this.#closed = true;
       for (const s of [this.#shell, this.#control, this.#stdin, this.#iopub, this.#hb]) s.close();
+      this.#iopubListeners.clear();
       await Deno.remove(this.#connectionDir, { recursive: true }).catch(() => {});
     }
   }

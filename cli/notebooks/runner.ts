@@ -78,10 +78,11 @@ export interface SourceLine {
   text: string;
   /**
    * How it was found: "name" when a name from the error message occurs on it, "message" when
-   * the thrown message text does, "position" when only the kernel's line number was used (the
-   * kernel numbers lines after transpiling TypeScript, so that one can be off by a few lines).
+   * the thrown message text does, "parser" for a syntax error found by the TypeScript parser,
+   * "position" when only the kernel's line number was used (the kernel numbers lines after
+   * transpiling TypeScript, so that one can be off by a few lines).
    */
-  how: "name" | "message" | "position";
+  how: "name" | "message" | "parser" | "position";
 }
 
 /** The result of {@linkcode runNotebook}; never thrown, always returned. */
@@ -196,8 +197,8 @@ export function formatFailure(path: string, failure: CellFailure): string {
     `  ${failure.ename}: ${failure.evalue}`,
   ];
   if (failure.line !== undefined) {
-    const approx = failure.line.how === "position" ? "near " : "";
-    out.push(`  at ${approx}line ${failure.line.number} of the cell: ${failure.line.text.trim()}`);
+    const where = failure.line.how === "position" ? "near" : "at";
+    out.push(`  ${where} line ${failure.line.number} of the cell: ${failure.line.text.trim()}`);
   }
   if (failure.traceback.length > 0) {
     out.push("  traceback:");

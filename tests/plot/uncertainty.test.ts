@@ -65,6 +65,6 @@ Deno.test("chart display offers vega-lite and SVG MIME types", async () => {
   const bundle = await (chart as unknown as Record<symbol, () => Promise<Record<string, unknown>>>)[
     Symbol.for("Jupyter.display")
   ]!();
-  assert.ok(bundle["application/vnd.vegalite.v5+json"]);
+  assert.ok(bundle["application/vnd.vegalite.v6+json"]);
   assert.match(String(bundle["image/svg+xml"]), /^<svg/);
 });

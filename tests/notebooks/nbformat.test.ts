@@ -1,0 +1,222 @@
+import assert from "node:assert/strict";
+import {
+  assertValidNotebook,
+  checkDenoKernelspec,
+  joinText,
+  type Notebook,
+  NotebookInputError,
+  notebookProblems,
+  OutputCollector,
+  parseNotebook,
+  splitLines,
+  storedMimeData,
+} from "../../cli/notebooks/nbformat.ts";
+import { FIXTURES } from "./helpers.ts";
+
+const minimal = (cells: unknown[], extra: Record<string, unknown> = {}) =>
+  JSON.stringify({ metadata: {}, nbformat: 4, nbformat_minor: 5, cells, ...extra });
+
+Deno.test("parseNotebook reads the fixture notebooks as valid nbformat 4.5", () => {
+  for (const name of ["ok.ipynb", "throws.ipynb", "hangs.ipynb", "python-kernel.ipynb"]) {
+    const nb = parseNotebook(Deno.readTextFileSync(`${FIXTURES}/${name}`), name);
+    assert.deepEqual(notebookProblems(nb), [], name);
+  }
+});
+
+Deno.test("parseNotebook upgrades nbformat 4.4 by adding unique cell ids", () => {
+  // nbformat docs, "Cell ids": required from 4.5, pattern ^[a-zA-Z0-9-_]+$, 1 to 64 characters.
+  const nb = parseNotebook(
+    JSON.stringify({
+      metadata: {},
+      nbformat: 4,
+      nbformat_minor: 4,
+      cells: [
+        { cell_type: "code", metadata: {}, source: "1", outputs: [], execution_count: null },
+        { cell_type: "markdown", metadata: {}, source: "# a" },
+      ],
+    }),
+    "old.ipynb",
+  );
+  assert.equal(nb.nbformat_minor, 5);
+  const ids = nb.cells.map((c) => c.id);
+  assert.equal(new Set(ids).size, 2);
+  for (const id of ids) assert.match(id, /^[a-zA-Z0-9-_]{1,64}$/);
+  assertValidNotebook(nb, "old.ipynb");
+});
+
+Deno.test("parseNotebook replaces duplicate cell ids", () => {
+  const cell = { id: "same", cell_type: "markdown", metadata: {}, source: "x" };
+  const nb = parseNotebook(minimal([cell, cell]), "dup.ipynb");
+  assert.equal(nb.cells[0]!.id, "same");
+  assert.notEqual(nb.cells[1]!.id, "same");
+});
+
+Deno.test("parseNotebook names the problem in invalid input", () => {
+  assert.throws(() => parseNotebook("{ not json", "bad.ipynb"), {
+    name: "NotebookInputError",
+    message: /^Notebook bad\.ipynb: invalid JSON: /,
+  });
+  assert.throws(() => parseNotebook("[1, 2]", "arr.ipynb"), {
+    name: "NotebookInputError",
+    message: "Notebook arr.ipynb: expected a JSON object, got an array",
+  });
+  assert.throws(() => parseNotebook(JSON.stringify({ nbformat: 3, cells: [] }), "v3.ipynb"), {
+    name: "NotebookInputError",
+    message: "Notebook v3.ipynb: expected 'nbformat' 4, got 3",
+  });
+  assert.throws(() => parseNotebook(JSON.stringify({ nbformat: 4 }), "nocells.ipynb"), {
+    name: "NotebookInputError",
+    message: "Notebook nocells.ipynb: expected 'cells' to be an array, got undefined",
+  });
+  assert.throws(() => parseNotebook(minimal([{ cell_type: "image", source: "" }]), "ct.ipynb"), {
+    name: "NotebookInputError",
+    message: `Notebook ct.ipynb: cell 1: expected 'cell_type' code, markdown or raw, got "image"`,
+  });
+  assert.throws(
+    () =>
+      parseNotebook(
+        minimal([{
+          cell_type: "code",
+          source: "1",
+          outputs: [{ output_type: "stream", text: "x" }],
+        }]),
+        "out.ipynb",
+      ),
+    {
+      name: "NotebookInputError",
+      message: /^Notebook out\.ipynb: not a valid notebook: cells\.0\.outputs\.0\.name/,
+    },
+  );
+  assert.ok(new NotebookInputError("x") instanceof Error);
+});
+
+Deno.test("the invalid-JSON fixture is reported with the JSON parser's position", () => {
+  const text = Deno.readTextFileSync(`${FIXTURES}/invalid-json.ipynb`);
+  assert.throws(() => parseNotebook(text, "invalid-json.ipynb"), {
+    name: "NotebookInputError",
+    message: /^Notebook invalid-json\.ipynb: invalid JSON: .*position \d+/,
+  });
+});
+
+Deno.test("notebookProblems catches structures nbformat 4.5 forbids", () => {
+  const valid: Notebook = {
+    metadata: { kernelspec: { name: "deno", display_name: "Deno" } },
+    nbformat: 4,
+    nbformat_minor: 5,
+    cells: [{
+      id: "a",
+      cell_type: "code",
+      metadata: {},
+      source: ["1\n", "2"],
+      execution_count: 1,
+      outputs: [
+        { output_type: "stream", name: "stdout", text: ["x\n"] },
+        {
+          output_type: "execute_result",
+          execution_count: 1,
+          data: { "text/plain": "2" },
+          metadata: {},
+        },
+        { output_type: "error", ename: "E", evalue: "v", traceback: [] },
+      ],
+    }],
+  };
+  assert.deepEqual(notebookProblems(valid), []);
+  // nbformat.v4.5.schema.json: cell id pattern, no extra members on outputs (additionalProperties
+  // false), MIME bundle keys are MIME types, execution_count an integer or null, ids unique.
+  const broken = structuredClone(valid) as unknown as { cells: Record<string, unknown>[] };
+  broken.cells[0]!.id = "has space";
+  assert.match(notebookProblems(broken).join("\n"), /cells\.0\.id/);
+  const extra = structuredClone(valid) as unknown as { cells: { outputs: object[] }[] };
+  extra.cells[0]!.outputs[0] = { output_type: "stream", name: "stdout", text: "", transient: {} };
+  assert.match(notebookProblems(extra).join("\n"), /cells\.0\.outputs\.0/);
+  const mime = structuredClone(valid) as unknown as { cells: { outputs: object[] }[] };
+  mime.cells[0]!.outputs[1] = {
+    output_type: "execute_result",
+    execution_count: 1,
+    data: { plain: "2" },
+    metadata: {},
+  };
+  assert.match(notebookProblems(mime).join("\n"), /cells\.0\.outputs\.1\.data\.plain: Invalid key/);
+  const count = structuredClone(valid) as unknown as { cells: Record<string, unknown>[] };
+  count.cells[0]!.execution_count = 1.5;
+  assert.match(notebookProblems(count).join("\n"), /cells\.0\.execution_count/);
+  const dup = structuredClone(valid);
+  dup.cells.push(structuredClone(dup.cells[0]!));
+  assert.deepEqual(notebookProblems(dup), ["cells.1.id: duplicate cell id 'a'"]);
+  assert.throws(() => assertValidNotebook(dup, "x.ipynb"), {
+    name: "TypeError",
+    message: "x.ipynb: not valid nbformat 4.5: cells.1.id: duplicate cell id 'a'",
+  });
+});
+
+Deno.test("checkDenoKernelspec accepts Deno, tolerates none and rejects other kernels", () => {
+  const nb = (kernelspec?: { name: string; display_name: string }): Notebook => ({
+    metadata: kernelspec === undefined ? {} : { kernelspec },
+    nbformat: 4,
+    nbformat_minor: 5,
+    cells: [],
+  });
+  assert.equal(checkDenoKernelspec(nb({ name: "deno", display_name: "Deno" }), "a"), true);
+  assert.equal(checkDenoKernelspec(nb({ name: "deno-2", display_name: "Deno 2" }), "a"), true);
+  assert.equal(checkDenoKernelspec(nb(), "a"), false);
+  assert.throws(
+    () =>
+      checkDenoKernelspec(nb({ name: "python3", display_name: "Python 3 (ipykernel)" }), "p.ipynb"),
+    {
+      name: "NotebookInputError",
+      message:
+        "Notebook p.ipynb: expected a Deno kernelspec (name 'deno'), got 'python3' (Python 3 (ipykernel))",
+    },
+  );
+});
+
+Deno.test("splitLines and joinText store text the way Jupyter does", () => {
+  // nbformat docs, "multiline strings": a list of lines, each keeping its newline.
+  assert.deepEqual(splitLines("a\nb\n"), ["a\n", "b\n"]);
+  assert.deepEqual(splitLines("a\nb"), ["a\n", "b"]);
+  assert.deepEqual(splitLines(""), []);
+  assert.equal(joinText(["a\n", "b"]), "a\nb");
+  assert.equal(joinText("x"), "x");
+  assert.deepEqual(
+    storedMimeData({ "text/plain": "a\nb", "image/png": "AAA\nBBB", "application/json": { a: 1 } }),
+    { "text/plain": ["a\n", "b"], "image/png": "AAA\nBBB", "application/json": { a: 1 } },
+  );
+});
+
+Deno.test("OutputCollector merges streams, honours clear_output and display updates", () => {
+  const displays = new Map();
+  const c = new OutputCollector(displays);
+  c.handle("status", { execution_state: "busy" });
+  c.handle("stream", { name: "stdout", text: "a\n" });
+  c.handle("stream", { name: "stdout", text: "b\n" });
+  c.handle("stream", { name: "stderr", text: "w\n" });
+  assert.deepEqual(c.outputs, [
+    { output_type: "stream", name: "stdout", text: ["a\n", "b\n"] },
+    { output_type: "stream", name: "stderr", text: ["w\n"] },
+  ]);
+  c.handle("clear_output", { wait: true });
+  assert.equal(c.outputs.length, 2); // wait: cleared only when the next output arrives
+  c.handle("display_data", {
+    data: { "text/plain": "v1" },
+    metadata: {},
+    transient: { display_id: "d" },
+  });
+  assert.equal(c.outputs.length, 1);
+  const later = new OutputCollector(displays); // a later cell updates the earlier display
+  later.handle("update_display_data", {
+    data: { "text/plain": "v2" },
+    metadata: {},
+    transient: { display_id: "d" },
+  });
+  assert.deepEqual(c.outputs[0], {
+    output_type: "display_data",
+    data: { "text/plain": ["v2"] },
+    metadata: {},
+  });
+  assert.equal(later.outputs.length, 0);
+  c.handle("execute_result", { execution_count: 3, data: { "text/plain": "1" }, metadata: {} });
+  c.handle("error", { ename: "E", evalue: "v", traceback: ["E: v"] });
+  c.handle("clear_output", { wait: false });
+  assert.deepEqual(c.outputs, []);
+});

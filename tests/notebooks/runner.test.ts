@@ -1,0 +1,347 @@
+/**
+ * The runner on the REAL Deno kernel (`deno jupyter --kernel`), through the library API. Each
+ * run takes a few seconds; the hanging fixture uses a 2 s cell limit.
+ */
+import assert from "node:assert/strict";
+import { stripAnsi } from "../../cli/notebooks/html.ts";
+import { joinText, type Notebook, notebookProblems } from "../../cli/notebooks/nbformat.ts";
+import { runNotebook } from "../../cli/notebooks/runner.ts";
+import {
+  CAN_RUN_KERNEL,
+  copyFixtures,
+  FIXTURES,
+  processExists,
+  processGroupMembers,
+  readJson,
+} from "./helpers.ts";
+
+const kernelTest = (name: string, fn: () => Promise<void>) =>
+  Deno.test({ name, ignore: !CAN_RUN_KERNEL, fn });
+
+function assertKernelGone(pid: number | undefined): void {
+  assert.ok(pid !== undefined && pid > 0, "the run reports the kernel pid");
+  assert.equal(processExists(pid), false, `kernel process ${pid} still exists`);
+  assert.deepEqual(processGroupMembers(pid), [], `processes left in the kernel's group ${pid}`);
+}
+
+const code = (nb: Notebook) => nb.cells.filter((c) => c.cell_type === "code");
+
+kernelTest(
+  "ok notebook: outputs stored, valid nbformat 4.5, HTML export, kernel gone",
+  async () => {
+    const out = await Deno.makeTempDir({ prefix: "sonorigor-nb-out-" });
+    const original = await Deno.readTextFile(`${FIXTURES}/ok.ipynb`);
+    const lines: string[] = [];
+    const result = await runNotebook(`${FIXTURES}/ok.ipynb`, {
+      outDir: out,
+      html: true,
+      timeoutSeconds: 60,
+      log: (l) => lines.push(l),
+    });
+    assert.equal(result.status, "ok", result.message);
+    assert.equal(result.codeCells, 7);
+    assert.equal(result.cellsExecuted, 7);
+    assert.equal(result.outputPath, `${out}/ok.ipynb`);
+    assert.equal(result.htmlPath, `${out}/ok.html`);
+    assert.equal(result.cleanShutdown, true);
+    assertKernelGone(result.kernelPid);
+    // the original is never touched without --in-place
+    assert.equal(await Deno.readTextFile(`${FIXTURES}/ok.ipynb`), original);
+    // one progress line per executed cell
+    assert.equal(lines.filter((l) => / ok in \d+\.\d\d s · /.test(l)).length, 7);
+    assert.ok(lines.some((l) => /kernel started \(pid \d+, Deno kernel/.test(l)));
+
+    const nb = readJson(`${out}/ok.ipynb`) as Notebook;
+    assert.deepEqual(notebookProblems(nb), []);
+    assert.equal(nb.nbformat, 4);
+    assert.equal(nb.nbformat_minor, 5);
+    assert.equal(nb.metadata.language_info?.name, "typescript");
+    const cells = code(nb);
+    assert.deepEqual(cells.map((c) => c.cell_type === "code" && c.execution_count), [
+      1,
+      2,
+      3,
+      4,
+      5,
+      6,
+      7,
+    ]);
+    const outputs = cells.map((c) => (c.cell_type === "code" ? c.outputs : []));
+    assert.deepEqual(outputs[0]!.slice(0, 2), [
+      {
+        output_type: "stream",
+        name: "stdout",
+        text: ["hello from the kernel\n", "<b>not bold</b>\n"],
+      },
+      { output_type: "stream", name: "stderr", text: ["a warning line\n"] },
+    ]);
+    const result42 = outputs[0]![2]!;
+    assert.equal(result42.output_type, "execute_result");
+    if (result42.output_type === "execute_result") {
+      assert.equal(result42.execution_count, 1);
+      assert.equal(stripAnsi(joinText(result42.data["text/plain"])), "42");
+    }
+    const table = outputs[1]![0]!;
+    assert.equal(table.output_type, "execute_result");
+    if (table.output_type === "execute_result") {
+      assert.match(joinText(table.data["text/html"]), /<table class="fixture-table">/);
+    }
+    const kinds = (i: number) => outputs[i]!.map((o) => o.output_type);
+    assert.deepEqual(kinds(2), ["display_data"]); // `await display(...)` leaves no result
+    assert.deepEqual(kinds(3), ["display_data"]);
+    assert.deepEqual(kinds(4), ["display_data"]);
+    const svg = outputs[2]![0]!;
+    assert.ok(
+      svg.output_type === "display_data" &&
+        joinText(svg.data["image/svg+xml"]).includes("fixture-rect"),
+    );
+    const vega = outputs[4]![0]!;
+    assert.ok(
+      vega.output_type === "display_data" && "application/vnd.vegalite.v5+json" in vega.data,
+    );
+
+    const html = await Deno.readTextFile(`${out}/ok.html`);
+    assert.match(html, /<h1>Fixture: a notebook that runs<\/h1>/);
+    assert.match(html, /<strong>bold text<\/strong>/);
+    assert.match(html, /<th>quantity<\/th>/); // Markdown table
+    assert.match(html, /<table class="fixture-table">/); // HTML table output
+    assert.match(html, /<svg [^>]*><rect id="fixture-rect"/); // inline SVG
+    assert.match(html, /<img src="data:image\/png;base64,iVBORw0KGgo/); // PNG data URI
+    assert.match(html, /<circle id="vega-twin"/); // vega-lite through its SVG twin
+    assert.doesNotMatch(html, /<script/); // the cell source shows it escaped only
+    assert.match(html, /&lt;b&gt;not bold&lt;\/b&gt;/); // stream text escaped
+    assert.match(html, /<pre>{ velocity: 2\.5, unit: &quot;m\/s&quot; }<\/pre>/); // ANSI stripped
+    assert.match(html, /<em>markdown output<\/em> from a cell/);
+    assert.ok(!html.includes("\x1b"), "no ANSI escape left");
+    assert.doesNotMatch(html, /(src|href)="(https?:)?\/\//);
+    await Deno.remove(out, { recursive: true });
+  },
+);
+
+kernelTest(
+  "a cell that throws: cell number, source line, traceback, partial notebook",
+  async () => {
+    const dir = await copyFixtures("throws.ipynb");
+    const path = `${dir}/throws.ipynb`;
+    const original = await Deno.readTextFile(path);
+    const lines: string[] = [];
+    const result = await runNotebook(path, { outDir: `${dir}/out`, log: (l) => lines.push(l) });
+    assert.equal(result.status, "failed");
+    assert.equal(result.cellsExecuted, 2);
+    const f = result.failure!;
+    assert.equal(f.kind, "error");
+    assert.equal(f.cellNumber, 3);
+    assert.equal(f.cellCount, 4);
+    assert.equal(f.executionCount, 2);
+    assert.equal(f.ename, "ReferenceError");
+    assert.equal(f.evalue, "missingFunction is not defined");
+    assert.deepEqual(f.line, { number: 5, text: "  if (v > 2) missingFunction(v);", how: "name" });
+    assert.match(f.traceback[0]!, /^ReferenceError: missingFunction is not defined$/);
+    assert.ok(f.traceback.some((t) => t.includes("<anonymous>")));
+    assert.match(result.message!, /cell 3 of 4 failed/);
+    assert.match(result.message!, /at line 5 of the cell: if \(v > 2\) missingFunction\(v\);/);
+    assert.match(result.message!, /traceback:\n {4}ReferenceError/);
+    assert.ok(lines.some((l) => l.includes("FAILED after")));
+    assert.equal(result.cleanShutdown, true);
+    assertKernelGone(result.kernelPid);
+
+    assert.equal(result.partialPath, `${dir}/throws.partial.ipynb`);
+    assert.equal(result.outputPath, undefined);
+    assert.equal(await Deno.readTextFile(path), original);
+    await assert.rejects(Deno.stat(`${dir}/out/throws.ipynb`), Deno.errors.NotFound);
+    const partial = readJson(result.partialPath!) as Notebook;
+    assert.deepEqual(notebookProblems(partial), []);
+    assert.deepEqual(partial.metadata.sonorigor_partial, {
+      failed_cell: 3,
+      reason: "ReferenceError: missingFunction is not defined",
+    });
+    const [first, failing, never] = code(partial);
+    assert.ok(
+      first?.cell_type === "code" && failing?.cell_type === "code" && never?.cell_type === "code",
+    );
+    assert.deepEqual(first.outputs, [
+      { output_type: "stream", name: "stdout", text: ["before the error\n"] },
+    ]);
+    assert.deepEqual(failing.outputs.map((o) => o.output_type), ["stream", "error"]);
+    assert.equal(never.execution_count, null);
+    assert.deepEqual(never.outputs, []);
+    await Deno.remove(dir, { recursive: true });
+  },
+);
+
+kernelTest(
+  "a cell that hangs: per-cell timeout, process group killed, partial notebook",
+  async () => {
+    const dir = await copyFixtures("hangs.ipynb");
+    const started = Date.now();
+    let pidSeenEarly: number | undefined;
+    const result = await runNotebook(`${dir}/hangs.ipynb`, {
+      outDir: `${dir}/out`,
+      timeoutSeconds: 2,
+      log: () => {},
+      onKernelStarted: (pid) => (pidSeenEarly = pid),
+    });
+    assert.equal(result.status, "failed");
+    assert.equal(result.failure?.kind, "timeout");
+    assert.equal(result.failure?.cellNumber, 3);
+    assert.equal(result.failure?.ename, "CellTimeoutError");
+    assert.match(result.message!, /cell 3 of 4 timed out/);
+    assert.ok(Date.now() - started < 30_000, "the timeout stops the run promptly");
+    assert.equal(pidSeenEarly, result.kernelPid);
+    assertKernelGone(result.kernelPid);
+    const partial = readJson(`${dir}/hangs.partial.ipynb`) as Notebook;
+    assert.deepEqual(notebookProblems(partial), []);
+    const [first, hanging] = code(partial);
+    assert.ok(first?.cell_type === "code" && hanging?.cell_type === "code");
+    assert.deepEqual(first.outputs, [{
+      output_type: "stream",
+      name: "stdout",
+      text: ["started\n"],
+    }]);
+    assert.deepEqual(hanging.outputs.at(-1), {
+      output_type: "error",
+      ename: "CellTimeoutError",
+      evalue: "Cell did not finish within 2 s; the kernel was stopped",
+      traceback: ["CellTimeoutError: Cell did not finish within 2 s; the kernel was stopped"],
+    });
+    await Deno.remove(dir, { recursive: true });
+  },
+);
+
+kernelTest(
+  "abort signal (Ctrl-C path): kernel killed, partial written, status interrupted",
+  async () => {
+    const dir = await copyFixtures("hangs.ipynb");
+    const controller = new AbortController();
+    const result = await runNotebook(`${dir}/hangs.ipynb`, {
+      timeoutSeconds: 60,
+      signal: controller.signal,
+      log: (line) => {
+        if (line.includes("[cell 2/4") && line.includes(" ok in ")) {
+          setTimeout(() => controller.abort(), 500);
+        }
+      },
+    });
+    assert.equal(result.status, "interrupted");
+    assert.equal(result.failure?.kind, "aborted");
+    assert.equal(result.failure?.cellNumber, 3);
+    assertKernelGone(result.kernelPid);
+    await Deno.stat(`${dir}/hangs.partial.ipynb`);
+    await Deno.remove(dir, { recursive: true });
+  },
+);
+
+kernelTest(
+  "bad input: missing, invalid JSON, non-Deno kernelspec; no kernel, no files",
+  async () => {
+    const dir = await copyFixtures("invalid-json.ipynb", "python-kernel.ipynb");
+    const cases: [string, RegExp][] = [
+      [`${dir}/missing.ipynb`, /^Notebook not found: .*missing\.ipynb$/],
+      [`${dir}/invalid-json.ipynb`, /^Notebook .*invalid-json\.ipynb: invalid JSON: .+/],
+      [
+        `${dir}/python-kernel.ipynb`,
+        /^Notebook .*python-kernel\.ipynb: expected a Deno kernelspec \(name 'deno'\), got 'python3'/,
+      ],
+      [dir, /^Notebook path is a directory: /],
+    ];
+    for (const [path, message] of cases) {
+      const result = await runNotebook(path, { outDir: `${dir}/out`, log: () => {} });
+      assert.equal(result.status, "invalid", path);
+      assert.match(result.message!, message);
+      assert.equal(result.kernelPid, undefined);
+      assert.equal(result.partialPath, undefined);
+    }
+    assert.deepEqual([...Deno.readDirSync(dir)].map((e) => e.name).sort(), [
+      "invalid-json.ipynb",
+      "python-kernel.ipynb",
+    ]);
+    await Deno.remove(dir, { recursive: true });
+  },
+);
+
+kernelTest("the kernel binary missing: clear message, status kernel", async () => {
+  const result = await runNotebook(`${FIXTURES}/ok.ipynb`, {
+    denoPath: "/nonexistent/bin/deno",
+    log: () => {},
+  });
+  assert.equal(result.status, "kernel");
+  assert.match(
+    result.message!,
+    /Deno binary not found: '\/nonexistent\/bin\/deno' \(set --deno PATH or SONORIGOR_DENO\)$/,
+  );
+});
+
+kernelTest("a syntax error is located by the parser; a kernel that exits is reported", async () => {
+  const dir = await Deno.makeTempDir({ prefix: "sonorigor-nb-test-" });
+  const cells = (sources: string[]) =>
+    JSON.stringify({
+      metadata: { kernelspec: { name: "deno", display_name: "Deno" } },
+      nbformat: 4,
+      nbformat_minor: 5,
+      cells: sources.map((source, i) => ({
+        id: `c${i}`,
+        cell_type: "code",
+        metadata: {},
+        source,
+        outputs: [],
+        execution_count: null,
+      })),
+    });
+  await Deno.writeTextFile(
+    `${dir}/syntax.ipynb`,
+    cells(["const a = 1;", "const b = 2;\nconst c = ;"]),
+  );
+  const syntax = await runNotebook(`${dir}/syntax.ipynb`, { log: () => {} });
+  assert.equal(syntax.status, "failed");
+  assert.equal(syntax.failure?.ename, "SyntaxError");
+  assert.equal(syntax.failure?.evalue, "Expression expected");
+  assert.deepEqual(syntax.failure?.line, { number: 2, text: "const c = ;", how: "parser" });
+  assertKernelGone(syntax.kernelPid);
+
+  await Deno.writeTextFile(`${dir}/exits.ipynb`, cells(["Deno.exit(3);", "1"]));
+  const exits = await runNotebook(`${dir}/exits.ipynb`, { log: () => {} });
+  assert.equal(exits.status, "failed");
+  assert.equal(exits.failure?.kind, "died");
+  assert.equal(exits.failure?.evalue, "The kernel process exited during the cell (exit 3)");
+  assertKernelGone(exits.kernelPid);
+  await Deno.remove(dir, { recursive: true });
+});
+
+kernelTest("--in-place replaces the original only after a successful run", async () => {
+  const dir = await copyFixtures("throws.ipynb");
+  const nb = {
+    metadata: { kernelspec: { name: "deno", display_name: "Deno" } },
+    nbformat: 4,
+    nbformat_minor: 4, // upgraded to 4.5 on the way
+    cells: [{
+      cell_type: "code",
+      metadata: {},
+      source: "2 + 3",
+      outputs: [],
+      execution_count: null,
+    }],
+  };
+  await Deno.writeTextFile(`${dir}/fine.ipynb`, JSON.stringify(nb));
+  // a stale partial from an earlier failed run is removed by a successful one
+  await Deno.writeTextFile(`${dir}/fine.partial.ipynb`, "{}");
+  const ok = await runNotebook(`${dir}/fine.ipynb`, { inPlace: true, log: () => {} });
+  assert.equal(ok.status, "ok");
+  assert.equal(ok.outputPath, `${dir}/fine.ipynb`);
+  const written = readJson(`${dir}/fine.ipynb`) as Notebook;
+  assert.equal(written.nbformat_minor, 5);
+  const cell = written.cells[0]!;
+  assert.ok(cell.cell_type === "code");
+  assert.equal(cell.execution_count, 1);
+  assert.equal(
+    stripAnsi(joinText((cell.outputs[0] as { data: Record<string, unknown> }).data["text/plain"])),
+    "5",
+  );
+  await assert.rejects(Deno.stat(`${dir}/fine.partial.ipynb`), Deno.errors.NotFound);
+
+  const before = await Deno.readTextFile(`${dir}/throws.ipynb`);
+  const failed = await runNotebook(`${dir}/throws.ipynb`, { inPlace: true, log: () => {} });
+  assert.equal(failed.status, "failed");
+  assert.equal(await Deno.readTextFile(`${dir}/throws.ipynb`), before);
+  await Deno.stat(`${dir}/throws.partial.ipynb`);
+  await Deno.remove(dir, { recursive: true });
+});
