@@ -7,6 +7,7 @@
  */
 import Papa from "papaparse";
 import { formatRange, inRange } from "../core/define.ts";
+import { evaluateColumns } from "../core/kernel.ts";
 import { bsaCalculation, type BsaMethod } from "../body/bsa.ts";
 import { bsaIndexCalculation } from "../body/indexing.ts";
 import { percentileFromZ, zScoreCalculation, type ZScoreModel } from "../reference/zscore.ts";
@@ -109,19 +110,14 @@ export function computeCohort(
     const calc = bsaCalculation(method);
     const typH = calc.inputs.heightCm.typical!;
     const typW = calc.inputs.weightKg.typical!;
-    out = new Float64Array(n);
-    const args = { heightCm: 0, weightKg: 0 };
+    // the formula of the one definition over the columns (NaN rows give NaN)
+    out = evaluateColumns(calc, { heightCm: h, weightKg: w }).bsaM2;
     for (let i = 0; i < n; i++) {
       const hi = h[i]!;
       const wi = w[i]!;
-      if (hi !== hi || wi !== wi) {
-        out[i] = NaN;
-        continue;
+      if (hi === hi && wi === wi && (!inRange(hi, typH) || !inRange(wi, typW))) {
+        flags[i]! |= FLAG_BODY_SIZE_ATYPICAL;
       }
-      args.heightCm = hi;
-      args.weightKg = wi;
-      out[i] = calc.formula(args).bsaM2;
-      if (!inRange(hi, typH) || !inRange(wi, typW)) flags[i]! |= FLAG_BODY_SIZE_ATYPICAL;
     }
     bsaByMethod.set(method, out);
     return out;
@@ -144,14 +140,8 @@ export function computeCohort(
   for (const name of options.index ?? []) {
     const col = measurement(name);
     const calc = bsaIndexCalculation(col.unit);
-    const out = new Float64Array(n);
-    const args = { measurement: 0, bsaM2: 0 };
-    for (let i = 0; i < n; i++) {
-      args.measurement = col.values[i]!;
-      args.bsaM2 = bsaM2[i]!;
-      out[i] = calc.formula(args).indexed; // NaN in → NaN out (row already flagged)
-    }
-    indexed[name] = out;
+    // NaN in → NaN out (the row is already flagged)
+    indexed[name] = evaluateColumns(calc, { measurement: col.values, bsaM2 }).indexed;
   }
 
   const zScores: Record<string, Float64Array> = {};
@@ -166,15 +156,12 @@ export function computeCohort(
     }
     const bsa = bsaColumn(model.bsaMethod);
     const calc = zScoreCalculation(model);
-    const out = new Float64Array(n);
+    const out = evaluateColumns(calc, { measurement: col.values, bsaM2: bsa }).zScore;
     const outside = new Uint8Array(n);
-    const args = { measurement: 0, bsaM2: 0 };
+    const { min, max } = model.bsaRange;
     for (let i = 0; i < n; i++) {
       const b = bsa[i]!;
-      args.measurement = col.values[i]!;
-      args.bsaM2 = b;
-      out[i] = calc.formula(args).zScore;
-      if (b === b && !inRange(b, model.bsaRange)) {
+      if (b === b && !(b >= min && b <= max) && !inRange(b, model.bsaRange)) {
         outside[i] = 1;
         flags[i]! |= FLAG_BSA_OUTSIDE_MODEL;
       }

@@ -48,3 +48,4 @@ export {
   tableDisplay,
   textTable,
 } from "./display.ts";
+export { evaluateColumns } from "./kernel.ts";

@@ -17,7 +17,7 @@ import { type RandomStream, randomStream } from "./random.ts";
 import { checkCoverage, type GumResult } from "./gum.ts";
 import { numericalTolerance } from "./rounding.ts";
 import { displayMonteCarlo } from "./display.ts";
-import { columnKernel } from "./kernel.ts";
+import { columnKernel } from "../core/kernel.ts";
 
 /** Default number of Monte Carlo trials (JCGM 101:2008 §7.2.2 suggests 10⁶ for 95 % coverage). */
 export const DEFAULT_TRIALS = 1_000_000;
