@@ -545,7 +545,7 @@ export class DenoKernel {
     await this.#exited;
     if (!this.#closed) {
       this.#closed = true;
-      for (const s of [this.#shell, this.#control, this.#stdin, this.#iopub, this.#hb]) s.close();
+      if (!Deno.env.get("NOCLOSE")) for (const s of [this.#shell, this.#control, this.#stdin, this.#iopub, this.#hb]) s.close();
       this.#iopubListeners.clear();
       await Deno.remove(this.#connectionDir, { recursive: true }).catch(() => {});
     }
