@@ -5,16 +5,8 @@
  */
 import type { Reference } from "../core/types.ts";
 
-/** Lang RM et al. 2015: the ASE/EACVI adult chamber quantification recommendations. */
-export const LANG_2015: Reference = {
-  authors: "Lang RM, Badano LP, Mor-Avi V, Afilalo J, Armstrong A, Ernande L, et al.",
-  year: 2015,
-  title:
-    "Recommendations for cardiac chamber quantification by echocardiography in adults: an update from the American Society of Echocardiography and the European Association of Cardiovascular Imaging",
-  publication: "J Am Soc Echocardiogr 2015;28:1–39.e14",
-  doi: "10.1016/j.echo.2014.10.003",
-};
-
+import { LANG_2015 } from "../references.ts";
+export { LANG_2015 };
 /** Teichholz LE et al. 1976: volume from one LV diameter. */
 export const TEICHHOLZ_1976: Reference = {
   authors: "Teichholz LE, Kreulen T, Herman MV, Gorlin R",
@@ -55,15 +47,8 @@ export const SCHILLER_1989: Reference = {
   doi: "10.1016/s0894-7317(89)80014-8",
 };
 
-/** Rudski LG et al. 2010: right-heart guideline (TAPSE, FAC, RIMP). */
-export const RUDSKI_2010: Reference = {
-  authors: "Rudski LG, Lai WW, Afilalo J, Hua L, Handschumacher MD, Chandrasekaran K, et al.",
-  year: 2010,
-  title: "Guidelines for the echocardiographic assessment of the right heart in adults",
-  publication: "J Am Soc Echocardiogr 2010;23:685–713",
-  doi: "10.1016/j.echo.2010.05.010",
-};
-
+import { RUDSKI_2010 } from "../references.ts";
+export { RUDSKI_2010 };
 /** Tei C et al. 1995: the myocardial performance index. */
 export const TEI_1995: Reference = {
   authors: "Tei C, Ling LH, Hodge DO, Bailey KR, Oh JK, Rodeheffer RJ, Tajik AJ, Seward JB",

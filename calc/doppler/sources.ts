@@ -8,15 +8,8 @@
  */
 import type { Reference } from "../core/types.ts";
 
-/** Hatle and Angelsen's textbook: the simplified Bernoulli equation ΔP = 4v². */
-export const HATLE_ANGELSEN_1985: Reference = {
-  authors: "Hatle L, Angelsen B",
-  year: 1985,
-  title: "Doppler Ultrasound in Cardiology: Physical Principles and Clinical Applications, 2nd ed.",
-  publication: "Lea & Febiger, Philadelphia",
-  locator: "ch. 2 (from memory)",
-};
-
+import { HATLE_ANGELSEN_1985 } from "../references.ts";
+export { HATLE_ANGELSEN_1985 };
 /** Hatle et al. 1979: mitral valve area = 220 / pressure half-time. */
 export const HATLE_1979: Reference = {
   authors: "Hatle L, Angelsen B, Tromsdal A",
@@ -56,16 +49,8 @@ export const ZOGHBI_2017: Reference = {
   doi: "10.1016/j.echo.2017.01.007",
 };
 
-/** Quiñones et al. 2002, ASE recommendations for quantification of Doppler echocardiography. */
-export const QUINONES_2002: Reference = {
-  authors: "Quiñones MA, Otto CM, Stoddard M, Waggoner A, Zoghbi WA",
-  year: 2002,
-  title:
-    "Recommendations for quantification of Doppler echocardiography: a report from the Doppler Quantification Task Force of the Nomenclature and Standards Committee of the American Society of Echocardiography",
-  publication: "J Am Soc Echocardiogr 15(2):167-184",
-  doi: "10.1067/mje.2002.120202",
-};
-
+import { QUINONES_2002 } from "../references.ts";
+export { QUINONES_2002 };
 /** Pu et al. 1995: the α/180 geometric correction of PISA flow for a constrained surface. */
 export const PU_1995: Reference = {
   authors: "Pu M, Vandervoort PM, Griffin BP, Leung DY, Stewart WJ, Cosgrove DM, Thomas JD",
@@ -77,17 +62,8 @@ export const PU_1995: Reference = {
   doi: "10.1161/01.CIR.92.8.2169",
 };
 
-/** Rudski et al. 2010, ASE guidelines on the right heart (RA pressure from the IVC). */
-export const RUDSKI_2010: Reference = {
-  authors: "Rudski LG, Lai WW, Afilalo J, Hua L, Handschumacher MD, Chandrasekaran K, et al.",
-  year: 2010,
-  title:
-    "Guidelines for the echocardiographic assessment of the right heart in adults: a report from the American Society of Echocardiography",
-  publication: "J Am Soc Echocardiogr 23(7):685-713",
-  locator: "section on right atrial pressure estimation (from memory)",
-  doi: "10.1016/j.echo.2010.05.010",
-};
-
+import { RUDSKI_2010 } from "../references.ts";
+export { RUDSKI_2010 };
 /** Galiè et al. 2015 ESC/ERS pulmonary hypertension guidelines. */
 export const GALIE_2015: Reference = {
   authors: "Galiè N, Humbert M, Vachiery JL, Gibbs S, Lang I, Torbicki A, et al.",

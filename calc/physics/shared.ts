@@ -106,25 +106,10 @@ export const SZABO: Reference = {
   locator: "ch. 6 (beams), ch. 11 (Doppler)",
 };
 
-/** The Doppler equation and its use in cardiology. */
-export const HATLE_ANGELSEN: Reference = {
-  authors: "Hatle L, Angelsen B",
-  year: 1985,
-  title: "Doppler Ultrasound in Cardiology: Physical Principles and Clinical Applications",
-  publication: "2nd ed. Lea & Febiger, Philadelphia",
-  locator: "ch. 2",
-};
-
-/** ASE recommendations on Doppler quantification (angle, aliasing, CW). */
-export const QUINONES_2002: Reference = {
-  authors: "Quiñones MA, Otto CM, Stoddard M, Waggoner A, Zoghbi WA",
-  year: 2002,
-  title:
-    "Recommendations for quantification of Doppler echocardiography: a report from the Doppler Quantification Task Force of the Nomenclature and Standards Committee of the American Society of Echocardiography",
-  publication: "J Am Soc Echocardiogr 15(2):167-184",
-  doi: "10.1067/mje.2002.120202",
-};
-
+import { HATLE_ANGELSEN_1985 as HATLE_ANGELSEN } from "../references.ts";
+export { HATLE_ANGELSEN };
+import { QUINONES_2002 } from "../references.ts";
+export { QUINONES_2002 };
 /** Bushberg: physics tables (speed of sound, impedance, attenuation). */
 export const BUSHBERG: Reference = {
   authors: "Bushberg JT, Seibert JA, Leidholdt EM Jr, Boone JM",

@@ -12,16 +12,8 @@
  */
 import type { Reference } from "../core/types.ts";
 
-/** The 2015 ASE/EACVI chamber-quantification recommendations. */
-export const LANG_2015: Reference = Object.freeze({
-  authors: "Lang RM, Badano LP, Mor-Avi V, Afilalo J, Armstrong A, Ernande L, et al.",
-  year: 2015,
-  title:
-    "Recommendations for cardiac chamber quantification by echocardiography in adults: an update from the American Society of Echocardiography and the European Association of Cardiovascular Imaging",
-  publication: "J Am Soc Echocardiogr 2015;28(1):1–39",
-  doi: "10.1016/j.echo.2014.10.003",
-});
-
+import { LANG_2015 } from "../references.ts";
+export { LANG_2015 };
 /** Sex a reference row applies to ("any" when the guideline gives one range for both). */
 export type ReferenceSex = "male" | "female" | "any";
 

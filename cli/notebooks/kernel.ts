@@ -61,6 +61,12 @@ export interface KernelStartOptions {
   startupTimeoutMs?: number;
   /** Extra environment variables for the kernel process. */
   env?: Record<string, string>;
+  /**
+   * Close the ZeroMQ sockets in {@linkcode DenoKernel.kill} (default true). A short-lived process
+   * that exits right after the run passes false: closing sockets whose peer was killed crashed
+   * the npm zeromq addon under Deno now and then (SIGSEGV), and process exit frees them anyway.
+   */
+  closeSockets?: boolean;
 }
 
 /** The outcome of {@linkcode DenoKernel.execute}. */
@@ -189,6 +195,7 @@ export class DenoKernel {
   readonly #exited: Promise<Deno.CommandStatus>;
   #stderrTail = "";
   #closed = false;
+  #closeSockets = true;
 
   private constructor(child: Deno.ChildProcess, connection: ConnectionInfo, dir: string) {
     this.#child = child;
@@ -240,6 +247,7 @@ export class DenoKernel {
       });
     }
     const kernel = new DenoKernel(child, connection, dir);
+    kernel.#closeSockets = options.closeSockets ?? true;
     try {
       await kernel.#connect(options.startupTimeoutMs ?? 60_000);
     } catch (error) {
@@ -545,7 +553,9 @@ export class DenoKernel {
     await this.#exited;
     if (!this.#closed) {
       this.#closed = true;
-      if (!Deno.env.get("NOCLOSE")) for (const s of [this.#shell, this.#control, this.#stdin, this.#iopub, this.#hb]) s.close();
+      if (this.#closeSockets) {
+        for (const s of [this.#shell, this.#control, this.#stdin, this.#iopub, this.#hb]) s.close();
+      }
       this.#iopubListeners.clear();
       await Deno.remove(this.#connectionDir, { recursive: true }).catch(() => {});
     }

@@ -390,6 +390,8 @@ export class OutputCollector {
   readonly #displays: Map<string, DisplayDataOutput[]>;
 
   /**
+   * Creates a collector for one cell.
+   *
    * @param displays The run-wide display-id registry (share one map across the cells of a run).
    */
   constructor(displays: Map<string, DisplayDataOutput[]> = new Map()) {

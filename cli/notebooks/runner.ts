@@ -10,6 +10,7 @@
  * @module
  */
 import { basename, dirname, extname, join, resolve } from "node:path";
+import { fileURLToPath } from "node:url";
 import { notebookToHtml, stripAnsi } from "./html.ts";
 import { DenoKernel, type ExecuteOutcome, KernelError, resolveDenoPath } from "./kernel.ts";
 import {
@@ -274,14 +275,20 @@ function imageResolver(notebookDir: string): (href: string) => string | undefine
 }
 
 /**
- * Executes one notebook on the real Deno kernel.
+ * Executes one notebook on the real Deno kernel in this process. Prefer
+ * {@linkcode runNotebook}, which does the same in a child process.
  *
  * @param path The .ipynb file.
  * @param options Output folder, in-place, per-cell timeout, HTML export, deno binary, abort
  *   signal, logger.
+ * @param closeSockets Close the ZeroMQ sockets at the end (false in a child that exits next).
  * @returns What happened (never throws for bad input or cell errors).
  */
-export async function runNotebook(path: string, options: RunOptions = {}): Promise<RunResult> {
+export async function runNotebookInProcess(
+  path: string,
+  options: RunOptions = {},
+  closeSockets = true,
+): Promise<RunResult> {
   const started = Date.now();
   const log = options.log ?? ((line: string) => console.error(line));
   const timeoutSeconds = options.timeoutSeconds ?? 300;
@@ -337,6 +344,7 @@ export async function runNotebook(path: string, options: RunOptions = {}): Promi
     kernel = await DenoKernel.start({
       cwd: dirname(resolve(path)),
       startupTimeoutMs: (options.startupTimeoutSeconds ?? 60) * 1000,
+      closeSockets,
       ...(options.denoPath === undefined ? {} : { denoPath: options.denoPath }),
     });
   } catch (error) {
@@ -535,4 +543,103 @@ export async function diagnoseSyntax(
 function describeExit(status: Deno.CommandStatus | null): string {
   if (status === null) return "";
   return status.signal === null ? ` (exit ${status.code})` : ` (signal ${status.signal})`;
+}
+
+/**
+ * Executes one notebook on the real Deno kernel, isolated in a child deno process that speaks
+ * ZeroMQ to the kernel. The native zeromq addon could crash its process under Deno now and then
+ * when sockets to a killed kernel were torn down; isolation means such a crash can neither take
+ * the caller down nor leave the kernel behind: this parent kills the kernel's process group
+ * whenever the child ends without a result. Progress lines, the kernel pid and the result come
+ * back over the child's stdout.
+ *
+ * @param path The .ipynb file.
+ * @param options Output folder, in-place, per-cell timeout, HTML export, deno binary, abort
+ *   signal (forwarded to the child as SIGTERM), logger.
+ * @returns What happened (never throws for bad input or cell errors).
+ */
+export async function runNotebook(path: string, options: RunOptions = {}): Promise<RunResult> {
+  const started = Date.now();
+  const log = options.log ?? ((line: string) => console.error(line));
+  const { signal, log: _log, onKernelStarted, ...serializable } = options;
+  const config = fileURLToPath(new URL("../../deno.json", import.meta.url));
+  const entry = fileURLToPath(new URL("./child.ts", import.meta.url));
+  const child = new Deno.Command(Deno.execPath(), {
+    args: [
+      "run",
+      "--allow-all",
+      "--quiet",
+      "--config",
+      config,
+      entry,
+      JSON.stringify({ path, options: serializable }),
+    ],
+    stdin: "piped", // held open until the end: its closing tells the child the parent is gone
+    stdout: "piped",
+    stderr: "inherit",
+  }).spawn();
+  const onAbort = () => {
+    try {
+      child.kill("SIGTERM");
+    } catch {
+      // already gone
+    }
+  };
+  signal?.addEventListener("abort", onAbort, { once: true });
+  if (signal?.aborted) onAbort();
+  let kernelPid: number | undefined;
+  let result: RunResult | undefined;
+  let pending = "";
+  const decoder = new TextDecoder();
+  const handle = (line: string) => {
+    if (line.trim() === "") return;
+    let event: { type: string; line?: string; pid?: number; result?: RunResult };
+    try {
+      event = JSON.parse(line);
+    } catch {
+      log(line); // not ours: pass it on
+      return;
+    }
+    if (event.type === "log" && event.line !== undefined) log(event.line);
+    else if (event.type === "kernel" && event.pid !== undefined) {
+      kernelPid = event.pid;
+      onKernelStarted?.(event.pid);
+    } else if (event.type === "result" && event.result !== undefined) result = event.result;
+  };
+  try {
+    for await (const chunk of child.stdout) {
+      pending += decoder.decode(chunk, { stream: true });
+      let newline: number;
+      while ((newline = pending.indexOf("\n")) >= 0) {
+        handle(pending.slice(0, newline));
+        pending = pending.slice(newline + 1);
+      }
+    }
+    handle(pending);
+  } finally {
+    signal?.removeEventListener("abort", onAbort);
+  }
+  const status = await child.status;
+  await child.stdin.close().catch(() => {});
+  if (kernelPid !== undefined) {
+    // whatever happened in the child, nothing of the kernel's process group survives
+    try {
+      Deno.kill(-kernelPid, "SIGKILL");
+    } catch {
+      // group already empty
+    }
+  }
+  if (result !== undefined) return result;
+  const how = status.signal !== null ? `signal ${status.signal}` : `exit ${status.code}`;
+  return {
+    path,
+    status: signal?.aborted ? "interrupted" : "failed",
+    message: `${path}: the notebook client process ended without a result (${how})${
+      kernelPid === undefined ? "" : `; kernel process group ${kernelPid} was killed`
+    }`,
+    ...(kernelPid === undefined ? {} : { kernelPid }),
+    cellsExecuted: 0,
+    codeCells: 0,
+    elapsedMs: Date.now() - started,
+  };
 }

@@ -34,41 +34,40 @@ if (!CAN_RUN_KERNEL) {
   );
 }
 
-/**
- * Whether a process with this pid exists (a zombie counts as existing).
- *
- * @param pid Process id.
- * @returns True when /proc has it.
- */
-export function processExists(pid: number): boolean {
-  try {
-    Deno.statSync(`/proc/${pid}`);
-    return true;
-  } catch {
-    return false;
-  }
+/** Runs `kill -0` (no signal, only the existence check) through sh; true when it succeeds. */
+function kill0(target: string): boolean {
+  // /proc needs --allow-all under Deno; spawning sh only needs --allow-run, as the task grants.
+  const out = new Deno.Command("sh", {
+    args: ["-c", `kill -0 ${target} 2>/dev/null`],
+    stdout: "null",
+    stderr: "null",
+  }).outputSync();
+  return out.success;
 }
 
 /**
- * The pids of all processes whose process group is `pgid`.
+ * Whether a process with this pid exists (a zombie not yet reaped counts as existing).
  *
- * @param pgid Process group id (the kernel's pid: the runner starts it as a group leader).
- * @returns The member pids.
+ * @param pid Process id.
+ * @returns True when it exists.
  */
-export function processGroupMembers(pgid: number): number[] {
-  const members: number[] = [];
-  for (const entry of Deno.readDirSync("/proc")) {
-    if (!/^\d+$/.test(entry.name)) continue;
-    try {
-      const stat = Deno.readTextFileSync(`/proc/${entry.name}/stat`);
-      // fields after the ") " that closes the command name: state ppid pgrp ...
-      const fields = stat.slice(stat.lastIndexOf(") ") + 2).split(" ");
-      if (Number(fields[2]) === pgid) members.push(Number(entry.name));
-    } catch {
-      // the process ended while scanning
-    }
+export function processExists(pid: number): boolean {
+  if (!(Number.isInteger(pid) && pid > 1)) throw new RangeError(`processExists: bad pid ${pid}`);
+  return kill0(String(pid));
+}
+
+/**
+ * Whether any process is left in the process group `pgid` (the runner starts the kernel as a
+ * group leader, so its pid is the group id; anything a notebook started belongs to it too).
+ *
+ * @param pgid Process group id.
+ * @returns True when the group still has a member.
+ */
+export function processGroupAlive(pgid: number): boolean {
+  if (!(Number.isInteger(pgid) && pgid > 1)) {
+    throw new RangeError(`processGroupAlive: bad pgid ${pgid}`);
   }
-  return members;
+  return kill0(`-${pgid}`); // dash: "kill -0 -PGID" targets the group
 }
 
 /**

@@ -11,7 +11,7 @@ import {
   copyFixtures,
   FIXTURES,
   processExists,
-  processGroupMembers,
+  processGroupAlive,
   readJson,
 } from "./helpers.ts";
 
@@ -21,8 +21,28 @@ const kernelTest = (name: string, fn: () => Promise<void>) =>
 function assertKernelGone(pid: number | undefined): void {
   assert.ok(pid !== undefined && pid > 0, "the run reports the kernel pid");
   assert.equal(processExists(pid), false, `kernel process ${pid} still exists`);
-  assert.deepEqual(processGroupMembers(pid), [], `processes left in the kernel's group ${pid}`);
+  assert.equal(processGroupAlive(pid), false, `processes left in the kernel's group ${pid}`);
 }
+
+Deno.test({
+  name: "the process checks used below see a live process and its group, then their end",
+  ignore: !CAN_RUN_KERNEL,
+  async fn() {
+    const sleeper = new Deno.Command("sleep", {
+      args: ["30"],
+      detached: true,
+      stdout: "null",
+      stderr: "null",
+    })
+      .spawn();
+    assert.equal(processExists(sleeper.pid), true);
+    assert.equal(processGroupAlive(sleeper.pid), true);
+    Deno.kill(-sleeper.pid, "SIGKILL");
+    await sleeper.status;
+    assert.equal(processExists(sleeper.pid), false);
+    assert.equal(processGroupAlive(sleeper.pid), false);
+  },
+});
 
 const code = (nb: Notebook) => nb.cells.filter((c) => c.cell_type === "code");
 
@@ -179,7 +199,10 @@ kernelTest(
       outDir: `${dir}/out`,
       timeoutSeconds: 2,
       log: () => {},
-      onKernelStarted: (pid) => (pidSeenEarly = pid),
+      onKernelStarted: (pid) => {
+        pidSeenEarly = pid;
+        assert.equal(processExists(pid), true); // alive while the run goes on
+      },
     });
     assert.equal(result.status, "failed");
     assert.equal(result.failure?.kind, "timeout");
