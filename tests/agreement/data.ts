@@ -6,7 +6,7 @@
 
 /** Peak expiratory flow rate (l/min), 17 subjects, two readings with the Wright peak flow meter
  * and two with the mini Wright meter: columns wright1, wright2, mini1, mini2. Printed in
- * Bland JM, Altman DG (1986) Lancet 327:307–310, Table 1 (transcribed from memory of the table;
+ * Bland JM, Altman DG (1986) Lancet 327:307–310, Table 1 (typed in from memory of the table;
  * the bias and SD it yields match the paper's −2.1 and 38.8 l/min). */
 export const PEAK_FLOW: readonly (readonly [number, number, number, number])[] = [
   [494, 490, 512, 525],
