@@ -7,6 +7,10 @@
  * on failure a partially executed notebook is written beside the original as `*.partial.ipynb`;
  * the original is never touched unless `inPlace` is set and the run succeeded.
  *
+ * {@linkcode runNotebook} does the work in a child deno process (`child.ts`) that owns the
+ * kernel and its ZeroMQ sockets, and kills the kernel's process group itself if that child ends
+ * without a result; {@linkcode runNotebookInProcess} is the in-process core both share.
+ *
  * @module
  */
 import { basename, dirname, extname, join, resolve } from "node:path";
@@ -448,9 +452,7 @@ export async function runNotebookInProcess(
   // ---- files ---------------------------------------------------------------------------------
   notebook.metadata.kernelspec ??= { name: "deno", display_name: "Deno", language: "typescript" };
   if (typeof info.language_info === "object" && info.language_info !== null) {
-    notebook.metadata.language_info = info.language_info as
-      & Notebook["metadata"]["language_info"]
-      & object;
+    notebook.metadata.language_info = info.language_info as { name: string };
   }
   const partialPath = partialPathOf(path);
   if (failure !== undefined) {
