@@ -152,7 +152,7 @@ export function resolveDenoPath(explicit?: string): string {
 }
 
 /** Quiet time on iopub after "idle" before a cell counts as finished, in milliseconds. */
-const SETTLE_MS = 40;
+const SETTLE_MS = 60;
 
 const sleep = (ms: number) => new Promise<void>((resolve) => setTimeout(resolve, ms));
 

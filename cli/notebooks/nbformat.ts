@@ -420,9 +420,17 @@ export class OutputCollector {
       case "stream": {
         const name = String(content.name ?? "stdout");
         const text = String(content.text ?? "");
-        const last = this.outputs[this.outputs.length - 1];
+        // An error ends the cell, so console output that arrives after it was written before it:
+        // the Deno kernel forwards console output asynchronously and it can trail the error.
+        const tail = this.outputs[this.outputs.length - 1];
+        const at = tail?.output_type === "error" && !this.#clearOnNext
+          ? this.outputs.length - 1
+          : this.outputs.length;
+        const last = this.outputs[at - 1];
         if (!this.#clearOnNext && last?.output_type === "stream" && last.name === name) {
           last.text = splitLines(joinText(last.text) + text);
+        } else if (at < this.outputs.length) {
+          this.outputs.splice(at, 0, { output_type: "stream", name, text: splitLines(text) });
         } else {
           this.#add({ output_type: "stream", name, text: splitLines(text) });
         }

@@ -220,3 +220,24 @@ Deno.test("OutputCollector merges streams, honours clear_output and display upda
   c.handle("clear_output", { wait: false });
   assert.deepEqual(c.outputs, []);
 });
+
+Deno.test("OutputCollector places console output that trails an error before the error", () => {
+  // Seen with the Deno 2.9.6 kernel under load: the stream message of a console.log that ran
+  // before a throw arrived after the error message of the same cell.
+  const c = new OutputCollector();
+  c.handle("stream", { name: "stdout", text: "one\n" });
+  c.handle("error", { ename: "E", evalue: "v", traceback: [] });
+  c.handle("stream", { name: "stdout", text: "two\n" });
+  c.handle("stream", { name: "stderr", text: "warn\n" });
+  assert.deepEqual(c.outputs.map((o) => o.output_type), ["stream", "stream", "error"]);
+  assert.deepEqual(c.outputs[0], {
+    output_type: "stream",
+    name: "stdout",
+    text: ["one\n", "two\n"],
+  });
+  assert.deepEqual(c.outputs[1], { output_type: "stream", name: "stderr", text: ["warn\n"] });
+  const fresh = new OutputCollector();
+  fresh.handle("error", { ename: "E", evalue: "v", traceback: [] });
+  fresh.handle("stream", { name: "stdout", text: "late\n" });
+  assert.deepEqual(fresh.outputs.map((o) => o.output_type), ["stream", "error"]);
+});
