@@ -6,7 +6,16 @@
  */
 import type { Reference } from "./core/types.ts";
 
-/** Lang et al. 2015, ASE/EACVI recommendations for cardiac chamber quantification in adults. */
+/**
+ * Lang et al. 2015, ASE/EACVI recommendations for cardiac chamber quantification in adults.
+ *
+ * @example
+ * ```ts
+ * import { LANG_2015 } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(LANG_2015.year, 2015);
+ * ```
+ */
 export const LANG_2015: Reference = Object.freeze({
   authors: "Lang RM, Badano LP, Mor-Avi V, Afilalo J, Armstrong A, Ernande L, et al.",
   year: 2015,

@@ -263,7 +263,16 @@ export const bsaBoyd: Calculation<"heightCm" | "weightKg", "bsaM2"> = defineCalc
 /** The BSA formula names accepted by the helpers that take a method. */
 export type BsaMethod = "mosteller" | "duBois" | "haycock" | "gehanGeorge" | "boyd";
 
-/** The BSA calculations by method name. Each entry is the one definition of that formula. */
+/**
+ * The BSA calculations by method name. Each entry is the one definition of that formula.
+ *
+ * @example
+ * ```ts
+ * import { BSA_METHODS } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(BSA_METHODS.haycock.id.length > 0, true);
+ * ```
+ */
 export const BSA_METHODS: Readonly<
   Record<BsaMethod, Calculation<"heightCm" | "weightKg", "bsaM2">>
 > = Object.freeze({

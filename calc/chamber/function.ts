@@ -411,7 +411,16 @@ export const myocardialPerformanceIndexFromClosureTime: Calculation<
   clinical: true,
 });
 
-/** Segment models accepted by {@linkcode globalLongitudinalStrain}. */
+/**
+ * Segment models accepted by {@linkcode globalLongitudinalStrain}.
+ *
+ * @example
+ * ```ts
+ * import { STRAIN_SEGMENT_MODELS } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.ok(STRAIN_SEGMENT_MODELS !== undefined);
+ * ```
+ */
 export const STRAIN_SEGMENT_MODELS: Readonly<Record<16 | 17 | 18, string>> = Object.freeze({
   16: "16 segments: 6 basal, 6 mid, 4 apical (no apical cap)",
   17: "17 segments: 6 basal, 6 mid, 4 apical and the apical cap",

@@ -404,7 +404,16 @@ export type LvGeometry =
   | "concentric hypertrophy"
   | "eccentric hypertrophy";
 
-/** The partition limits of the four-way geometry classification, each with its source. */
+/**
+ * The partition limits of the four-way geometry classification, each with its source.
+ *
+ * @example
+ * ```ts
+ * import { LV_GEOMETRY_LIMITS } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.ok(LV_GEOMETRY_LIMITS !== undefined);
+ * ```
+ */
 export const LV_GEOMETRY_LIMITS: {
   readonly relativeWallThickness: { readonly upperNormal: number; readonly source: string };
   readonly lvMassIndexGPerM2: {

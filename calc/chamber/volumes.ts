@@ -28,7 +28,16 @@ import { bsaIndexCalculation } from "../body/indexing.ts";
 /** Measurement / BSA for millilitres: the one indexing definition of the body-size module. */
 const indexByMl = bsaIndexCalculation("mL");
 
-/** The number of discs of the guideline method. */
+/**
+ * The number of discs of the guideline method.
+ *
+ * @example
+ * ```ts
+ * import { GUIDELINE_DISC_COUNT } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(GUIDELINE_DISC_COUNT, 20);
+ * ```
+ */
 export const GUIDELINE_DISC_COUNT = 20;
 
 /**

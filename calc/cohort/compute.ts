@@ -30,13 +30,49 @@ export interface CohortComputeOptions {
   readonly zScores?: Readonly<Record<string, ZScoreModel>>;
 }
 
-/** Row flag bit: a cell of the row was invalid (outputs NaN). */
+/**
+ * Row flag bit: a cell of the row was invalid (outputs NaN).
+ *
+ * @example
+ * ```ts
+ * import { FLAG_INVALID_INPUT } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(FLAG_INVALID_INPUT, 1);
+ * ```
+ */
 export const FLAG_INVALID_INPUT = 1;
-/** Row flag bit: a measurement was not measured (its outputs NaN). */
+/**
+ * Row flag bit: a measurement was not measured (its outputs NaN).
+ *
+ * @example
+ * ```ts
+ * import { FLAG_MISSING_MEASUREMENT } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(FLAG_MISSING_MEASUREMENT, 2);
+ * ```
+ */
 export const FLAG_MISSING_MEASUREMENT = 2;
-/** Row flag bit: height or weight outside the typical range of the BSA formula. */
+/**
+ * Row flag bit: height or weight outside the typical range of the BSA formula.
+ *
+ * @example
+ * ```ts
+ * import { FLAG_BODY_SIZE_ATYPICAL } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(FLAG_BODY_SIZE_ATYPICAL, 4);
+ * ```
+ */
 export const FLAG_BODY_SIZE_ATYPICAL = 4;
-/** Row flag bit: the BSA lies outside the BSA range of at least one Z-score model. */
+/**
+ * Row flag bit: the BSA lies outside the BSA range of at least one Z-score model.
+ *
+ * @example
+ * ```ts
+ * import { FLAG_BSA_OUTSIDE_MODEL } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(FLAG_BSA_OUTSIDE_MODEL, 8);
+ * ```
+ */
 export const FLAG_BSA_OUTSIDE_MODEL = 8;
 
 /** The computed cohort: the input table plus result columns. */

@@ -99,12 +99,39 @@ export interface CohortTable {
   readonly blankLines: readonly number[];
 }
 
-/** Row status bit: a cell of the row is invalid (value NaN). */
+/**
+ * Row status bit: a cell of the row is invalid (value NaN).
+ *
+ * @example
+ * ```ts
+ * import { ROW_INVALID, ROW_MISSING } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(ROW_INVALID & ROW_MISSING, 0);
+ * ```
+ */
 export const ROW_INVALID = 1;
-/** Row status bit: a measurement cell of the row is empty. */
+/**
+ * Row status bit: a measurement cell of the row is empty.
+ *
+ * @example
+ * ```ts
+ * import { ROW_MISSING } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.ok(ROW_MISSING > 0);
+ * ```
+ */
 export const ROW_MISSING = 2;
 
-/** The error thrown for an invalid cohort file; `issues` lists every invalid cell. */
+/**
+ * The error thrown for an invalid cohort file; `issues` lists every invalid cell.
+ *
+ * @example
+ * ```ts
+ * import { CohortCsvError, readCohortCsv } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.throws(() => readCohortCsv("height [cm],weight [kg]\nx,20\n", { height: "height", weight: "weight" }), CohortCsvError);
+ * ```
+ */
 export class CohortCsvError extends Error {
   /** Every invalid cell. */
   readonly issues: readonly CohortIssue[];

@@ -16,7 +16,14 @@ import type {
 import { describe, isMathUnit, type QuantityInput, toCanonical } from "./units.ts";
 import { displayEvaluation, formatUnit, JUPYTER_DISPLAY, type MimeBundle } from "./display.ts";
 
-/** The caution shown with every result that could reach a patient decision. */
+/** The caution shown with every result that could reach a patient decision. *
+ * @example
+ * ```ts
+ * import { CLINICAL_CAUTION } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.match(CLINICAL_CAUTION, /^Not a diagnosis/);
+ * ```
+ */
 export const CLINICAL_CAUTION =
   "Not a diagnosis: verify against local guidelines and licensed clinical practice before acting on this number";
 
@@ -81,13 +88,28 @@ export function defineCalculation<I extends string, O extends string>(
   });
 }
 
-/** True when `value` is a calculation made by {@linkcode defineCalculation}. */
+/** True when `value` is a calculation made by {@linkcode defineCalculation}. *
+ * @example
+ * ```ts
+ * import { continuityValveArea, isCalculation } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(isCalculation(continuityValveArea), true);
+ * assert.equal(isCalculation({}), false);
+ * ```
+ */
 export function isCalculation(value: unknown): value is Calculation {
   return typeof value === "object" && value !== null &&
     (value as { kind?: unknown }).kind === "sonorigor.calculation";
 }
 
-/** Formats a range in interval notation with its unit, e.g. "(0, 5] cm". */
+/** Formats a range in interval notation with its unit, e.g. "(0, 5] cm". *
+ * @example
+ * ```ts
+ * import { formatRange } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(formatRange({ min: 0, max: 5, minExclusive: true }, "cm^2"), "(0, 5] cm²");
+ * ```
+ */
 export function formatRange(range: ValueRange, unit: string): string {
   const open = range.minExclusive ? "(" : "[";
   const close = range.maxExclusive ? ")" : "]";
@@ -95,7 +117,15 @@ export function formatRange(range: ValueRange, unit: string): string {
   return `${open}${range.min}, ${range.max}${close}${u}`;
 }
 
-/** True when `value` lies in `range` (false for NaN). */
+/** True when `value` lies in `range` (false for NaN). *
+ * @example
+ * ```ts
+ * import { inRange } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(inRange(0, { min: 0, max: 1, minExclusive: true }), false);
+ * assert.equal(inRange(NaN, { min: 0, max: 1 }), false);
+ * ```
+ */
 export function inRange(value: number, range: ValueRange): boolean {
   const aboveMin = range.minExclusive ? value > range.min : value >= range.min;
   const belowMax = range.maxExclusive ? value < range.max : value <= range.max;
@@ -130,6 +160,15 @@ const schemas = new WeakMap<Calculation, z.ZodType>();
  * @returns Canonical input values and flags for values outside the typical range.
  * @throws {TypeError} For an unknown or missing input, or a value of the wrong type or unit.
  * @throws {RangeError} For a value outside the input's valid range (NaN and infinities included).
+ *
+ * @example
+ * ```ts
+ * import { continuityValveArea, validateInputs } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const { values, flags } = validateInputs(continuityValveArea, { lvotDiameterCm: "3.5 cm", lvotVtiCm: 20, avVtiCm: 80 });
+ * assert.equal(values.lvotDiameterCm, 3.5);
+ * assert.equal(flags.length, 1); // 3.5 cm lies outside the validated range
+ * ```
  */
 export function validateInputs<I extends string>(
   calc: Calculation<I, string>,
@@ -270,7 +309,14 @@ export interface Evaluation<I extends string = string, O extends string = string
   [JUPYTER_DISPLAY](): MimeBundle;
 }
 
-/** The cautions to show with a result of `calc`. */
+/** The cautions to show with a result of `calc`. *
+ * @example
+ * ```ts
+ * import { cautionsOf, CLINICAL_CAUTION, continuityValveArea } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.ok(cautionsOf(continuityValveArea).includes(CLINICAL_CAUTION));
+ * ```
+ */
 export function cautionsOf(calc: Calculation): string[] {
   return calc.clinical ? [...calc.cautions, CLINICAL_CAUTION] : [...calc.cautions];
 }
@@ -283,6 +329,16 @@ export function cautionsOf(calc: Calculation): string[] {
  * @returns Outputs with flags and cautions.
  * @throws {TypeError} For unknown, missing or mistyped inputs or wrong units.
  * @throws {RangeError} For inputs outside their valid range or a non-finite output.
+ *
+ * @example
+ * ```ts
+ * import { continuityValveArea, evaluate } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * // π·(2/2)²·20/80 = 0.785 cm² (hand-checkable); "20 mm" is converted to cm
+ * const r = evaluate(continuityValveArea, { lvotDiameterCm: "20 mm", lvotVtiCm: 20, avVtiCm: 80 });
+ * assert.ok(Math.abs(r.outputs.avaCm2 - Math.PI / 4) < 1e-12);
+ * assert.throws(() => evaluate(continuityValveArea, { lvotDiameterCm: 0, lvotVtiCm: 20, avVtiCm: 80 }), RangeError);
+ * ```
  */
 export function evaluate<I extends string, O extends string>(
   calc: Calculation<I, O>,

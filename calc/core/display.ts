@@ -9,10 +9,24 @@ import type { Evaluation } from "./define.ts";
 /** A Jupyter MIME bundle: MIME type → content. */
 export type MimeBundle = Record<string, unknown>;
 
-/** The symbol the Deno Jupyter kernel calls to display a value. */
+/** The symbol the Deno Jupyter kernel calls to display a value. *
+ * @example
+ * ```ts
+ * import { JUPYTER_DISPLAY } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(JUPYTER_DISPLAY, Symbol.for("Jupyter.display"));
+ * ```
+ */
 export const JUPYTER_DISPLAY: unique symbol = Symbol.for("Jupyter.display");
 
-/** Escapes text for HTML. */
+/** Escapes text for HTML. *
+ * @example
+ * ```ts
+ * import { escapeHtml } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(escapeHtml("<b>&"), "&lt;b&gt;&amp;");
+ * ```
+ */
 export function escapeHtml(text: string): string {
   return text.replace(
     /[&<>"']/g,
@@ -29,7 +43,14 @@ export function escapeHtml(text: string): string {
   );
 }
 
-/** An HTML table from a header row and body rows (cells are escaped). */
+/** An HTML table from a header row and body rows (cells are escaped). *
+ * @example
+ * ```ts
+ * import { htmlTable } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.match(htmlTable(["a"], [["1"]]), /<td[^>]*>1<\/td>/);
+ * ```
+ */
 export function htmlTable(header: readonly string[], rows: readonly (readonly string[])[]): string {
   const th = header.map((h) => `<th style="text-align:left;padding:2px 8px">${escapeHtml(h)}</th>`)
     .join("");
@@ -39,14 +60,28 @@ export function htmlTable(header: readonly string[], rows: readonly (readonly st
   return `<table style="border-collapse:collapse"><thead><tr>${th}</tr></thead><tbody>${body}</tbody></table>`;
 }
 
-/** A plain-text table with padded columns. */
+/** A plain-text table with padded columns. *
+ * @example
+ * ```ts
+ * import { textTable } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(textTable(["a", "b"], [["1", "22"]]), "a  b\n-  --\n1  22");
+ * ```
+ */
 export function textTable(header: readonly string[], rows: readonly (readonly string[])[]): string {
   const widths = header.map((h, i) => Math.max(h.length, ...rows.map((r) => (r[i] ?? "").length)));
   const line = (r: readonly string[]) => r.map((c, i) => c.padEnd(widths[i]!)).join("  ").trimEnd();
   return [line(header), widths.map((w) => "-".repeat(w)).join("  "), ...rows.map(line)].join("\n");
 }
 
-/** A list of notes (flags, cautions) as HTML. */
+/** A list of notes (flags, cautions) as HTML. *
+ * @example
+ * ```ts
+ * import { htmlNotes } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.match(htmlNotes("Cautions", ["check the angle"]), /<li>check the angle<\/li>/);
+ * ```
+ */
 export function htmlNotes(title: string, notes: readonly string[]): string {
   if (notes.length === 0) return "";
   return `<p style="margin:4px 0"><b>${escapeHtml(title)}</b></p><ul style="margin:0">${
@@ -56,13 +91,27 @@ export function htmlNotes(title: string, notes: readonly string[]): string {
 
 const SUPERSCRIPTS: Record<string, string> = { "2": "²", "3": "³", "-1": "⁻¹", "-2": "⁻²" };
 
-/** Formats a mathjs unit string for people: "cm^2" → "cm²", "1" → "" (dimensionless). */
+/** Formats a mathjs unit string for people: "cm^2" → "cm²", "1" → "" (dimensionless). *
+ * @example
+ * ```ts
+ * import { formatUnit } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(formatUnit("cm^2"), "cm²");
+ * ```
+ */
 export function formatUnit(unit: string): string {
   if (unit === "1") return "";
   return unit.replace(/\^(-?\d)/g, (m, p: string) => SUPERSCRIPTS[p] ?? m);
 }
 
-/** Formats a number for display with up to `digits` significant digits. */
+/** Formats a number for display with up to `digits` significant digits. *
+ * @example
+ * ```ts
+ * import { formatNumber } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(formatNumber(0.785398), "0.7854");
+ * ```
+ */
 export function formatNumber(value: number, digits = 4): string {
   if (!Number.isFinite(value)) return String(value);
   if (value === 0) return "0";

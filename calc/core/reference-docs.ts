@@ -8,7 +8,17 @@
 import { cautionsOf, formatRange, isCalculation } from "./define.ts";
 import type { Calculation, Reference } from "./types.ts";
 
-/** Formats a reference as "Authors (year). Title. Publication, locator. doi:…". */
+/** Formats a reference as "Authors (year). Title. Publication, locator. doi:…". *
+ * @example
+ * ```ts
+ * import { formatReference } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(
+ *   formatReference({ authors: "Hatle L, Angelsen B", year: 1985, title: "Doppler Ultrasound in Cardiology", publication: "Lea & Febiger" }),
+ *   "Hatle L, Angelsen B (1985). Doppler Ultrasound in Cardiology. Lea & Febiger.",
+ * );
+ * ```
+ */
 export function formatReference(ref: Reference): string {
   const locator = ref.locator ? `, ${ref.locator}` : "";
   const doi = ref.doi ? ` doi:${ref.doi}` : "";

@@ -55,6 +55,14 @@ export function isMathUnit(value: unknown): value is MathJsUnit {
  * @returns The value in `unit`.
  * @throws {TypeError} When the value is neither a number, a string nor a Unit, or its dimension
  * differs from `unit`.
+ *
+ * @example
+ * ```ts
+ * import { toCanonical } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(toCanonical("21 mm", "cm", "LVOT"), 2.1);
+ * assert.throws(() => toCanonical("21 mmHg", "cm", "LVOT"), TypeError);
+ * ```
  */
 export function toCanonical(value: QuantityInput, unit: string, where: string): number {
   if (typeof value === "number") return value;
@@ -99,7 +107,10 @@ function convert(parsed: Unit, target: Unit, unit: string, where: string, shown:
   if (!parsed.equalBase(target)) {
     throw new TypeError(`${where}: expected a quantity convertible to ${unit}, got ${shown}`);
   }
-  return parsed.toNumber(unit);
+  // mathjs converts through SI base units; round to 15 significant digits so that "3.5 cm" stays
+  // 3.5 and "21 mm" becomes 2.1 cm rather than 2.1000000000000001 (far below any measurement
+  // resolution)
+  return Number(parsed.toNumber(unit).toPrecision(15));
 }
 
 /** Converts a difference or standard uncertainty (no offset) to `unit`: same as

@@ -31,7 +31,16 @@ import {
 } from "./shared.ts";
 import { maximumPrfForDepth, unambiguousDepthForPrf } from "./timing.ts";
 
-/** Lowest transmit frequency of usual adult cardiac probes, MHz (common practice, no source). */
+/**
+ * Lowest transmit frequency of usual adult cardiac probes, MHz (common practice, no source).
+ *
+ * @example
+ * ```ts
+ * import { LOWEST_CARDIAC_TRANSMIT_FREQUENCY_MHZ } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.ok(LOWEST_CARDIAC_TRANSMIT_FREQUENCY_MHZ > 0);
+ * ```
+ */
 export const LOWEST_CARDIAC_TRANSMIT_FREQUENCY_MHZ = 1;
 
 /**

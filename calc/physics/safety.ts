@@ -9,10 +9,26 @@ import { attenuationLoss } from "./attenuation.ts";
 import { depthInput, transmitFrequencyInput } from "./shared.ts";
 
 /** Upper limit of the mechanical index in the FDA Track 3 output-display scheme (all uses except
- * ophthalmic), the usual regulatory ceiling for cardiac imaging (common practice, from memory). */
+ * ophthalmic), the usual regulatory ceiling for cardiac imaging (common practice, from memory). *
+ * @example
+ * ```ts
+ * import { MECHANICAL_INDEX_LIMIT } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(MECHANICAL_INDEX_LIMIT, 1.9);
+ * ```
+ */
 export const MECHANICAL_INDEX_LIMIT = 1.9;
 
-/** Derating attenuation coefficient of the output-display standards, dB/cm/MHz. */
+/**
+ * Derating attenuation coefficient of the output-display standards, dB/cm/MHz.
+ *
+ * @example
+ * ```ts
+ * import { DERATING_DB_PER_CM_MHZ } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(DERATING_DB_PER_CM_MHZ, 0.3);
+ * ```
+ */
 export const DERATING_DB_PER_CM_MHZ = 0.3;
 
 const IEC_62359: Reference = {

@@ -11,7 +11,16 @@
 import type { Calculation, InputDefinition, InputValues, Reference } from "../core/types.ts";
 import { type InputArguments, validateInputs } from "../core/define.ts";
 
-/** Speed of sound assumed by scanners for soft tissue, in m/s (common practice). */
+/**
+ * Speed of sound assumed by scanners for soft tissue, in m/s (common practice).
+ *
+ * @example
+ * ```ts
+ * import { DEFAULT_SOUND_SPEED_MPS } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(DEFAULT_SOUND_SPEED_MPS, 1540);
+ * ```
+ */
 export const DEFAULT_SOUND_SPEED_MPS = 1540;
 
 /** cos θ for an angle in degrees. The one place the insonation-angle cosine is written. */

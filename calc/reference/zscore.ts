@@ -335,7 +335,16 @@ export function defineZScoreModel<M extends ZScoreModel>(model: M): M {
 // ---------------------------------------------------------------------------------------------
 // PHN 2017 models
 
-/** Lopez L, Colan S, Stylianou M, et al. Circ Cardiovasc Imaging 2017;10:e006979. */
+/**
+ * Lopez L, Colan S, Stylianou M, et al. Circ Cardiovasc Imaging 2017;10:e006979.
+ *
+ * @example
+ * ```ts
+ * import { LOPEZ_2017 } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(LOPEZ_2017.year, 2017);
+ * ```
+ */
 export const LOPEZ_2017: Reference = Object.freeze({
   authors: "Lopez L, Colan S, Stylianou M, Granger S, Trachtenberg F, Frommelt P, et al.",
   year: 2017,
@@ -641,7 +650,16 @@ export interface ZScoreResult {
   readonly cautions: readonly string[];
 }
 
-/** The flag text for a BSA outside a model's range. */
+/**
+ * The flag text for a BSA outside a model's range.
+ *
+ * @example
+ * ```ts
+ * import { bsaOutsideModelFlag, PHN_2017_MODELS } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.match(bsaOutsideModelFlag(PHN_2017_MODELS.lvMass, 2.8), /extrapolation/);
+ * ```
+ */
 export function bsaOutsideModelFlag(model: ZScoreModel, bsaM2: number): string {
   return `BSA ${
     Number(bsaM2.toPrecision(4))

@@ -17,7 +17,16 @@ import { roundForReport } from "./rounding.ts";
 import type { GumOutput, GumResult } from "./gum.ts";
 import type { MonteCarloResult } from "./montecarlo.ts";
 
-/** "y ± U unit (k = 2.00, p = 95 %)" for a GUM output, rounded per JCGM 100 §7.2.6. */
+/** "y ± U unit (k = 2.00, p = 95 %)" for a GUM output, rounded per JCGM 100 §7.2.6. *
+ * @example
+ * ```ts
+ * import { formatGumOutput, gum, normal, simplifiedBernoulli } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const r = gum(simplifiedBernoulli, { peakVelocity: normal(4, 0.1) });
+ * // u = 8·4·0.1 = 3.2 mmHg, U = 1.96·3.2 = 6.3 mmHg (JCGM 100 eq. (10), hand-checkable)
+ * assert.equal(formatGumOutput(r.outputs.gradient, r.coverage), "gradient = 64.0 ± 6.3 mmHg (k = 1.96, p = 95 %)");
+ * ```
+ */
 export function formatGumOutput(o: GumOutput, coverage: number): string {
   const r = roundForReport(o.value, o.expandedUncertainty);
   const unit = o.unit === "1" ? "" : ` ${formatUnit(o.unit)}`;

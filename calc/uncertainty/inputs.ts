@@ -244,7 +244,15 @@ export function exact(value: Amount): ExactInput {
   return { kind: "exact", value };
 }
 
-/** True for a value made by one of the distribution constructors. */
+/** True for a value made by one of the distribution constructors. *
+ * @example
+ * ```ts
+ * import { isUncertainInput, normal } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(isUncertainInput(normal(1, 0.1)), true);
+ * assert.equal(isUncertainInput(1), false);
+ * ```
+ */
 export function isUncertainInput(value: unknown): value is UncertainInput {
   const k = (value as { kind?: unknown } | null)?.kind;
   return typeof value === "object" && value !== null &&
@@ -278,6 +286,15 @@ export interface ResolvedInput {
  *
  * @throws {TypeError} For an unrecognised input shape or a wrong unit.
  * @throws {RangeError} For a negative or non-finite uncertainty, reversed bounds or dof ≤ 0.
+ *
+ * @example
+ * ```ts
+ * import { rectangular, resolveInput } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * // u = (b − a)/√12 (JCGM 100:2008 §4.3.7), bounds converted from mm to cm
+ * const r = resolveInput("d", "cm", rectangular("20 mm", "22 mm"), "Example");
+ * assert.ok(Math.abs(r.standardUncertainty - 0.2 / Math.sqrt(12)) < 1e-15);
+ * ```
  */
 export function resolveInput(
   name: string,

@@ -19,9 +19,23 @@ import { numericalTolerance } from "./rounding.ts";
 import { displayMonteCarlo } from "./display.ts";
 import { columnKernel } from "../core/kernel.ts";
 
-/** Default number of Monte Carlo trials (JCGM 101:2008 §7.2.2 suggests 10⁶ for 95 % coverage). */
+/** Default number of Monte Carlo trials (JCGM 101:2008 §7.2.2 suggests 10⁶ for 95 % coverage). *
+ * @example
+ * ```ts
+ * import { DEFAULT_TRIALS } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(DEFAULT_TRIALS, 1_000_000);
+ * ```
+ */
 export const DEFAULT_TRIALS = 1_000_000;
-/** Default seed, used when none is given, so that every run is reproducible. */
+/** Default seed, used when none is given, so that every run is reproducible. *
+ * @example
+ * ```ts
+ * import { DEFAULT_SEED } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.ok(Number.isInteger(DEFAULT_SEED) && DEFAULT_SEED > 0);
+ * ```
+ */
 export const DEFAULT_SEED = 20080101;
 
 /** Options of {@linkcode monteCarlo}. */

@@ -1,5 +1,5 @@
 import assert from "node:assert/strict";
-import { CLINICAL_CAUTION, defineCalculation, evaluate } from "../../mod.ts";
+import { CLINICAL_CAUTION, defineCalculation, evaluate, toCanonical } from "../../mod.ts";
 import { math } from "../../calc/core/units.ts";
 
 // A small calculation for exercising the machinery: continuity-equation valve area,
@@ -174,4 +174,11 @@ Deno.test("cross-input constraints are checked in evaluation and propagation", a
       }),
     { name: "RangeError", message: /expected 'endSystolicVolumeMl' <= 'endDiastolicVolumeMl'/ },
   );
+});
+
+Deno.test("unit conversion leaves no floating-point residue from the SI round trip", () => {
+  // 21 mm = 2.1 cm and 3.5 cm = 3.5 cm exactly (common practice, no source)
+  assert.equal(toCanonical("21 mm", "cm", "t"), 2.1);
+  assert.equal(toCanonical("3.5 cm", "cm", "t"), 3.5);
+  assert.equal(toCanonical("0.8 m/s", "cm/s", "t"), 80);
 });

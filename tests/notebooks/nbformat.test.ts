@@ -222,8 +222,8 @@ Deno.test("OutputCollector merges streams, honours clear_output and display upda
 });
 
 Deno.test("OutputCollector places console output that trails an error before the error", () => {
-  // Seen with the Deno 2.9.6 kernel under load: the stream message of a console.log that ran
-  // before a throw arrived after the error message of the same cell.
+  // The Deno 2.9.6 kernel was observed to send console output after the cell's "idle" status,
+  // so the stream of a console.log that ran before a throw can trail the error message.
   const c = new OutputCollector();
   c.handle("stream", { name: "stdout", text: "one\n" });
   c.handle("error", { ename: "E", evalue: "v", traceback: [] });
