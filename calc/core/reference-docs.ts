@@ -22,7 +22,8 @@ import type { Calculation, Reference } from "./types.ts";
 export function formatReference(ref: Reference): string {
   const locator = ref.locator ? `, ${ref.locator}` : "";
   const doi = ref.doi ? ` doi:${ref.doi}` : "";
-  return `${ref.authors} (${ref.year}). ${ref.title}. ${ref.publication}${locator}.${doi}`;
+  const year = ref.year > 0 ? String(ref.year) : "n.d.";
+  return `${ref.authors} (${year}). ${ref.title}. ${ref.publication}${locator}.${doi}`;
 }
 
 const cell = (s: string) => s.replace(/\|/g, "\\|");

@@ -23,7 +23,7 @@ export interface ValueRange {
 export interface Reference {
   /** Authors, e.g. "Baumgartner H, Hung J, Bermejo J, et al." */
   readonly authors: string;
-  /** Year of publication. */
+  /** Year of publication (0 when there is none, e.g. a user-supplied model; shown as "n.d."). */
   readonly year: number;
   /** Title of the paper, standard or book. */
   readonly title: string;

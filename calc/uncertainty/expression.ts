@@ -30,7 +30,7 @@ export interface ExpressionModelSpec<I extends string, O extends string> {
 
 const USER_SOURCE: Reference = {
   authors: "the user",
-  year: new Date(0).getUTCFullYear() + 56,
+  year: 0, // no publication year: shown as "n.d."
   title: "User-supplied measurement model",
   publication: "this analysis",
 };
