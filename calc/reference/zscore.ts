@@ -884,18 +884,20 @@ export function compareZScoreModels(
     const unit = mathUnitOf(model.unit);
     const comparable = model.unit === first.unit ||
       (unit !== null && firstUnit !== null && unit.equalBase(firstUnit));
+    const failed = (error: string): ZScoreComparisonRow => ({
+      modelId: model.id,
+      family: model.family,
+      source,
+      zScore: NaN,
+      percentile: NaN,
+      bsaM2: NaN,
+      flags: [],
+      error,
+    });
     if (!comparable) {
-      return {
-        modelId: model.id,
-        family: model.family,
-        source,
-        zScore: NaN,
-        percentile: NaN,
-        bsaM2: NaN,
-        flags: [],
-        error:
-          `Z-score comparison: model '${model.id}' measures in ${model.unit}, not comparable with ${first.unit} of '${first.id}', got ${model.unit}`,
-      };
+      return failed(
+        `Z-score comparison: model '${model.id}' measures in ${model.unit}, not comparable with ${first.unit} of '${first.id}', got ${model.unit}`,
+      );
     }
     try {
       const r = zScore(model, args);
@@ -910,16 +912,7 @@ export function compareZScoreModels(
       };
     } catch (error) {
       if (!(error instanceof TypeError || error instanceof RangeError)) throw error;
-      return {
-        modelId: model.id,
-        family: model.family,
-        source,
-        zScore: NaN,
-        percentile: NaN,
-        bsaM2: NaN,
-        flags: [],
-        error: error.message,
-      };
+      return failed(error.message);
     }
   });
 }
