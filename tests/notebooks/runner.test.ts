@@ -36,6 +36,10 @@ Deno.test({
     })
       .spawn();
     assert.equal(processExists(sleeper.pid), true);
+    // the child becomes a group leader (setsid) just after fork: under load that can lag the spawn
+    for (let i = 0; i < 100 && !processGroupAlive(sleeper.pid); i++) {
+      await new Promise((r) => setTimeout(r, 20));
+    }
     assert.equal(processGroupAlive(sleeper.pid), true);
     Deno.kill(-sleeper.pid, "SIGKILL");
     await sleeper.status;
