@@ -65,7 +65,10 @@ export function displayGum(result: GumResult): MimeBundle {
   const html: string[] = [`<div><b>${escapeHtml(result.title)}</b> (GUM law of propagation)`];
   for (const name of result.outputNames) {
     const o = result.outputs[name]!;
-    const line = formatGumOutput(o, result.coverage);
+    const line = formatGumOutput(o, result.coverage) +
+      (o.firstOrderAdequate
+        ? ""
+        : " — NOT ADEQUATE: first-order result, see warnings; use monteCarlo()");
     const extra = `u_c = ${formatNumber(o.standardUncertainty, 3)}, ν_eff = ${
       Number.isFinite(o.effectiveDof) ? o.effectiveDof.toFixed(1) : "∞"
     }`;

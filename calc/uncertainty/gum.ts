@@ -70,6 +70,9 @@ export interface GumOutput {
   readonly interval: readonly [number, number];
   /** Per-input budget. */
   readonly budget: readonly BudgetRow[];
+  /** False when the curvature check found the first-order (linear) result inadequate for this
+   * output; its uncertainty and interval are then not to be reported (use Monte Carlo). */
+  readonly firstOrderAdequate: boolean;
 }
 
 /** Result of {@linkcode gum}. */
@@ -227,6 +230,16 @@ export function gum<I extends string, O extends string>(
       contribution: cRow[i]! * r.standardUncertainty,
       share: variance > 0 ? (cRow[i]! * r.standardUncertainty) ** 2 / variance : 0,
     }));
+    const inadequate = linearityWarnings(
+      calc,
+      o,
+      x,
+      resolved.map((r) => r.name),
+      u,
+      uc,
+      cRow,
+      Boolean(options.secondOrder),
+    );
     outputs[o] = {
       output: o,
       unit: calc.outputs[o].unit,
@@ -239,19 +252,9 @@ export function gum<I extends string, O extends string>(
       expandedUncertainty: U,
       interval: [value - U, value + U],
       budget,
+      firstOrderAdequate: inadequate.length === 0,
     };
-    warnings.push(
-      ...linearityWarnings(
-        calc,
-        o,
-        x,
-        resolved.map((r) => r.name),
-        u,
-        uc,
-        cRow,
-        Boolean(options.secondOrder),
-      ),
-    );
+    warnings.push(...inadequate);
   });
   if (prepared.correlated) {
     warnings.push(

@@ -37,6 +37,7 @@ Deno.test("JCGM 101 §9.2.2 additive model, normal inputs: MC agrees with GUM", 
   // JCGM 101:2008 §9.2.2.4: the GUF is validated (n_dig = 2) by the MCM result
   const [v] = validateGumWithMonteCarlo(g, m, 2);
   assert.ok(v!.validated, v!.verdict);
+  assert.equal(g.outputs.y.firstOrderAdequate, true); // a linear model needs no higher-order terms
 });
 
 Deno.test("JCGM 101 §9.2.3 additive model, rectangular inputs: MC interval ±3.88 vs GUM ±3.92", () => {
@@ -76,6 +77,12 @@ Deno.test("JCGM 101 §9.4 comparison loss at x = 0: first order fails, MC and se
     first.warnings.some((w) => /inadequate/.test(w) && /vanishes/.test(w)),
     first.warnings.join("\n"),
   );
+  // the result says so itself, in the data and in what a notebook shows
+  assert.equal(first.outputs.dY.firstOrderAdequate, false);
+  const shown = (first as unknown as Record<symbol, () => Record<string, string>>)[
+    Symbol.for("Jupyter.display")
+  ]!();
+  assert.match(shown["text/plain"]!, /NOT ADEQUATE: first-order result/);
   // Second-order GUF: u = 2u² = 5.0 × 10⁻⁵ (JCGM 101 Table 10, GUF with higher-order terms)
   const second = gum(comparisonLoss, inputs, { secondOrder: true });
   assert.ok(Math.abs(second.outputs.dY.standardUncertainty - 5e-5) < 1e-12);
