@@ -4,9 +4,11 @@
  * @module
  */
 import type { Reference } from "../core/types.ts";
+import { LANG_2015, RUDSKI_2010 } from "../references.ts";
 
-import { LANG_2015 } from "../references.ts";
-export { LANG_2015 };
+/** Shared publications, re-exported under this module's names. */
+export { LANG_2015, RUDSKI_2010 };
+
 /** Teichholz LE et al. 1976: volume from one LV diameter. */
 export const TEICHHOLZ_1976: Reference = {
   authors: "Teichholz LE, Kreulen T, Herman MV, Gorlin R",
@@ -47,8 +49,6 @@ export const SCHILLER_1989: Reference = {
   doi: "10.1016/s0894-7317(89)80014-8",
 };
 
-import { RUDSKI_2010 } from "../references.ts";
-export { RUDSKI_2010 };
 /** Tei C et al. 1995: the myocardial performance index. */
 export const TEI_1995: Reference = {
   authors: "Tei C, Ling LH, Hodge DO, Bailey KR, Oh JK, Rodeheffer RJ, Tajik AJ, Seward JB",

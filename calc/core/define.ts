@@ -9,6 +9,7 @@ import type {
   CalculationSpec,
   InputConstraint,
   InputDefinition,
+  InputSchema,
   InputValues,
   OutputValues,
   ValueRange,
@@ -141,7 +142,7 @@ const quantitySchema = z.custom<QuantityInput>(
 
 /** Builds the zod schema of a calculation's argument object (shape only; ranges are checked
  * afterwards so that messages carry the valid range). */
-function argumentSchema(calc: Calculation): z.ZodType {
+function argumentSchema(calc: InputSchema<string>): z.ZodType {
   const shape: Record<string, z.ZodType> = {};
   for (const name of calc.inputNames) {
     const base = quantitySchema;
@@ -150,7 +151,8 @@ function argumentSchema(calc: Calculation): z.ZodType {
   return z.strictObject(shape);
 }
 
-const schemas = new WeakMap<Calculation, z.ZodType>();
+/** Argument schemas, keyed by the (frozen, long-lived) inputs object of a definition. */
+const schemas = new WeakMap<object, z.ZodType>();
 
 /**
  * Validates and converts a calculation's inputs to canonical numbers.
@@ -171,16 +173,16 @@ const schemas = new WeakMap<Calculation, z.ZodType>();
  * ```
  */
 export function validateInputs<I extends string>(
-  calc: Calculation<I, string>,
+  calc: InputSchema<I>,
   args: InputArguments<I>,
 ): { values: InputValues<I>; flags: string[] } {
   if (typeof args !== "object" || args === null) {
     throw new TypeError(`${calc.title}: expected an object of inputs, got ${describe(args)}`);
   }
-  let schema = schemas.get(calc as Calculation);
+  let schema = schemas.get(calc.inputs);
   if (!schema) {
-    schema = argumentSchema(calc as Calculation);
-    schemas.set(calc as Calculation, schema);
+    schema = argumentSchema(calc as InputSchema<string>);
+    schemas.set(calc.inputs, schema);
   }
   const parsed = schema.safeParse(args);
   if (!parsed.success) {
@@ -262,7 +264,7 @@ export function notAbove<I extends string>(smaller: I, larger: I): InputConstrai
  * @throws {RangeError} Naming the relation and the values of the inputs involved.
  */
 export function checkConstraints<I extends string>(
-  calc: Calculation<I, string>,
+  calc: InputSchema<I>,
   values: InputValues<I>,
 ): void {
   for (const c of calc.constraints ?? []) {

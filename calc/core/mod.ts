@@ -8,6 +8,7 @@ export type {
   CalculationSpec,
   InputConstraint,
   InputDefinition,
+  InputSchema,
   InputsOf,
   InputValues,
   OutputDefinition,

@@ -116,6 +116,13 @@ export interface Calculation<I extends string = string, O extends string = strin
   readonly kind: "sonorigor.calculation";
 }
 
+/** What input validation needs of a calculation: its title, inputs and constraints. A plain
+ * function with calculation-style arguments can describe its own arguments this way. */
+export type InputSchema<I extends string> = Pick<
+  Calculation<I, string>,
+  "title" | "inputs" | "inputNames" | "constraints"
+>;
+
 /** Names of the inputs of a calculation type. */
 export type InputsOf<C> = C extends Calculation<infer I, string> ? I : never;
 /** Names of the outputs of a calculation type. */

@@ -113,10 +113,6 @@ function convert(parsed: Unit, target: Unit, unit: string, where: string, shown:
   return Number(parsed.toNumber(unit).toPrecision(15));
 }
 
-/** Converts a difference or standard uncertainty (no offset) to `unit`: same as
- * {@linkcode toCanonical} for all units used in echocardiography. */
-export const uncertaintyToCanonical = toCanonical;
-
 /** Short description of an unexpected value for error messages. */
 export function describe(value: unknown): string {
   if (value === null) return "null";

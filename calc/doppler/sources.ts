@@ -7,9 +7,11 @@
  * @module
  */
 import type { Reference } from "../core/types.ts";
+import { HATLE_ANGELSEN_1985, QUINONES_2002, RUDSKI_2010 } from "../references.ts";
 
-import { HATLE_ANGELSEN_1985 } from "../references.ts";
-export { HATLE_ANGELSEN_1985 };
+/** Shared publications, re-exported under this module's names. */
+export { HATLE_ANGELSEN_1985, QUINONES_2002, RUDSKI_2010 };
+
 /** Hatle et al. 1979: mitral valve area = 220 / pressure half-time. */
 export const HATLE_1979: Reference = {
   authors: "Hatle L, Angelsen B, Tromsdal A",
@@ -49,8 +51,6 @@ export const ZOGHBI_2017: Reference = {
   doi: "10.1016/j.echo.2017.01.007",
 };
 
-import { QUINONES_2002 } from "../references.ts";
-export { QUINONES_2002 };
 /** Pu et al. 1995: the α/180 geometric correction of PISA flow for a constrained surface. */
 export const PU_1995: Reference = {
   authors: "Pu M, Vandervoort PM, Griffin BP, Leung DY, Stewart WJ, Cosgrove DM, Thomas JD",
@@ -62,8 +62,6 @@ export const PU_1995: Reference = {
   doi: "10.1161/01.CIR.92.8.2169",
 };
 
-import { RUDSKI_2010 } from "../references.ts";
-export { RUDSKI_2010 };
 /** Galiè et al. 2015 ESC/ERS pulmonary hypertension guidelines. */
 export const GALIE_2015: Reference = {
   authors: "Galiè N, Humbert M, Vachiery JL, Gibbs S, Lang I, Torbicki A, et al.",

@@ -8,8 +8,12 @@
  *
  * @module
  */
-import type { Calculation, InputDefinition, InputValues, Reference } from "../core/types.ts";
+import type { InputDefinition, InputSchema, InputValues, Reference } from "../core/types.ts";
 import { type InputArguments, validateInputs } from "../core/define.ts";
+import { HATLE_ANGELSEN_1985 as HATLE_ANGELSEN, QUINONES_2002 } from "../references.ts";
+
+/** Shared publications, re-exported under this module's names. */
+export { HATLE_ANGELSEN, QUINONES_2002 };
 
 /**
  * Speed of sound assumed by scanners for soft tissue, in m/s (common practice).
@@ -115,10 +119,6 @@ export const SZABO: Reference = {
   locator: "ch. 6 (beams), ch. 11 (Doppler)",
 };
 
-import { HATLE_ANGELSEN_1985 as HATLE_ANGELSEN } from "../references.ts";
-export { HATLE_ANGELSEN };
-import { QUINONES_2002 } from "../references.ts";
-export { QUINONES_2002 };
 /** Bushberg: physics tables (speed of sound, impedance, attenuation). */
 export const BUSHBERG: Reference = {
   authors: "Bushberg JT, Seibert JA, Leidholdt EM Jr, Boone JM",
@@ -139,13 +139,8 @@ export function validateArguments<I extends string>(
   inputs: { readonly [K in I]: InputDefinition },
   args: unknown,
 ): { values: InputValues<I>; flags: string[] } {
-  const shape = {
-    id: title,
-    title,
-    inputs,
-    inputNames: Object.keys(inputs) as I[],
-  } as unknown as Calculation<I, string>;
-  return validateInputs(shape, args as InputArguments<I>);
+  const schema: InputSchema<I> = { title, inputs, inputNames: Object.keys(inputs) as I[] };
+  return validateInputs(schema, args as InputArguments<I>);
 }
 
 /** Pulse repetition frequency input in Hz. */

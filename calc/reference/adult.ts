@@ -11,9 +11,11 @@
  * @module
  */
 import type { Reference } from "../core/types.ts";
-
 import { LANG_2015 } from "../references.ts";
+
+/** Shared publications, re-exported under this module's names. */
 export { LANG_2015 };
+
 /** Sex a reference row applies to ("any" when the guideline gives one range for both). */
 export type ReferenceSex = "male" | "female" | "any";
 
