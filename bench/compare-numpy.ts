@@ -17,7 +17,14 @@
  * @module
  */
 import { parseArgs } from "node:util";
-import { gum, monteCarlo, monteCarloAdaptive, PHN_2017_MODELS, randomStream } from "../mod.ts";
+import {
+  createMonteCarloPool,
+  gum,
+  monteCarlo,
+  monteCarloAdaptive,
+  PHN_2017_MODELS,
+  randomStream,
+} from "../mod.ts";
 import { computeCohort, readCohortCsv } from "../mod.ts";
 import { continuityInputs, continuityWithJetAngle, tenInputModel, tenUncertain } from "./models.ts";
 
@@ -26,6 +33,7 @@ const { values: args } = parseArgs({
     runs: { type: "string", default: "5" },
     write: { type: "boolean", default: false },
     "memory-probe": { type: "boolean", default: false },
+    pool: { type: "boolean", default: false },
   },
 });
 const runs = Number(args.runs);
@@ -40,8 +48,15 @@ async function peakMemoryMb(): Promise<number> {
   return kb / 1024;
 }
 
+/** The bench model's module, which the workers load. */
+const modelsModule = new URL("./models.ts", import.meta.url);
+const workers = navigator.hardwareConcurrency;
+
 if (args["memory-probe"]) {
-  monteCarlo(continuityWithJetAngle, continuityInputs, { trials: 1_000_000, seed: 1 });
+  if (args.pool) {
+    using pool = await createMonteCarloPool({ workers, modules: [modelsModule] });
+    await pool.monteCarlo(continuityWithJetAngle, continuityInputs, { trials: 1_000_000, seed: 1 });
+  } else monteCarlo(continuityWithJetAngle, continuityInputs, { trials: 1_000_000, seed: 1 });
   console.log(JSON.stringify({ peakMb: await peakMemoryMb() }));
   Deno.exit(0);
 }
@@ -51,13 +66,48 @@ const median = (v: number[]) => {
   const k = s.length >> 1;
   return s.length % 2 ? s[k]! : (s[k - 1]! + s[k]!) / 2;
 };
-const time = (fn: () => unknown) => {
+const time = async (fn: () => unknown) => {
   const t = performance.now();
-  fn();
+  await fn();
   return (performance.now() - t) / 1000;
 };
 
-// (c) data: 10⁶ invented rows, generated deterministically, shared with numpy as raw float64.
+console.error(`sonorigor: ${runs} runs of each model …`);
+const ours = {
+  a: [] as number[],
+  b: [] as number[],
+  aPool: [] as number[],
+  bPool: [] as number[],
+  c: [] as number[],
+  d: 0,
+  bTrials: 0,
+  poolStartMs: 0,
+};
+const t0 = performance.now();
+const pool = await createMonteCarloPool({ workers, modules: [modelsModule] });
+ours.poolStartMs = performance.now() - t0;
+// one untimed round of each, as numpy's imports and first calls are outside its timings
+await pool.monteCarlo(continuityWithJetAngle, continuityInputs, { trials: 1_000_000, seed: 99 });
+await pool.monteCarloAdaptive(continuityWithJetAngle, continuityInputs, { seed: 99 });
+for (let k = 0; k < runs; k++) {
+  const options = { trials: 1_000_000, seed: 1 + k };
+  ours.a.push(await time(() => monteCarlo(continuityWithJetAngle, continuityInputs, options)));
+  ours.aPool.push(
+    await time(() => pool.monteCarlo(continuityWithJetAngle, continuityInputs, options)),
+  );
+  const adaptive = { significantDigits: 2, seed: 1 + k };
+  ours.b.push(
+    await time(() => {
+      ours.bTrials = monteCarloAdaptive(continuityWithJetAngle, continuityInputs, adaptive).trials;
+    }),
+  );
+  ours.bPool.push(
+    await time(() => pool.monteCarloAdaptive(continuityWithJetAngle, continuityInputs, adaptive)),
+  );
+}
+pool.close();
+
+// (c) data, built after the Monte Carlo timings (as numpy loads it after its own): 10⁶ invented rows, generated deterministically, shared with numpy as raw float64.
 const rows = 1_000_000;
 const rng = randomStream(4242);
 const height = new Float64Array(rows),
@@ -77,22 +127,8 @@ const table = readCohortCsv(csv.join("\n") + "\n", {
   measurements: [{ column: "lvedd", canonicalUnit: model.unit, range: model.measurementRange }],
 });
 
-console.error(`sonorigor: ${runs} runs of each model …`);
-const ours = { a: [] as number[], b: [] as number[], c: [] as number[], d: 0, bTrials: 0 };
 for (let k = 0; k < runs; k++) {
-  ours.a.push(
-    time(() =>
-      monteCarlo(continuityWithJetAngle, continuityInputs, { trials: 1_000_000, seed: 1 + k })
-    ),
-  );
-  ours.b.push(time(() => {
-    ours.bTrials = monteCarloAdaptive(continuityWithJetAngle, continuityInputs, {
-      significantDigits: 2,
-      seed: 1 + k,
-    })
-      .trials;
-  }));
-  ours.c.push(time(() => computeCohort(table, { zScores: { lvedd: model } })));
+  ours.c.push(await time(() => computeCohort(table, { zScores: { lvedd: model } })));
 }
 const calls = 20_000;
 for (let i = 0; i < 2_000; i++) gum(tenInputModel, tenUncertain); // warm-up
@@ -100,14 +136,23 @@ const tGum = performance.now();
 for (let i = 0; i < calls; i++) gum(tenInputModel, tenUncertain);
 ours.d = ((performance.now() - tGum) / calls) * 1000; // µs
 
-const probe = await new Deno.Command(Deno.execPath(), {
-  args: ["run", "-A", new URL(import.meta.url).pathname, "--memory-probe"],
-  stdout: "piped",
-  stderr: "null",
-}).output();
-const peakMb = probe.success
-  ? JSON.parse(new TextDecoder().decode(probe.stdout)).peakMb as number
-  : NaN;
+/** Peak resident memory (MB) of a fresh process running (a) once, single-thread or pooled. */
+async function probeMemory(pooled: boolean): Promise<number> {
+  const probe = await new Deno.Command(Deno.execPath(), {
+    args: [
+      "run",
+      "-A",
+      new URL(import.meta.url).pathname,
+      "--memory-probe",
+      ...(pooled ? ["--pool"] : []),
+    ],
+    stdout: "piped",
+    stderr: "null",
+  }).output();
+  return probe.success ? JSON.parse(new TextDecoder().decode(probe.stdout)).peakMb as number : NaN;
+}
+const peakMb = await probeMemory(false);
+const peakPoolMb = await probeMemory(true);
 
 // numpy peer
 const dataDir = await Deno.makeTempDir({ prefix: "sonorigor-bench-" });
@@ -173,23 +218,33 @@ const report = [
   "| model | sonorigor | numpy | ratio | target |",
   "| --- | --- | --- | --- | --- |",
   line(
-    "(a) Monte Carlo, 4-input continuity with angle, 10⁶ trials + 95 % intervals",
+    `(a) Monte Carlo, 4-input continuity with angle, 10⁶ trials + 95 % intervals: pool of ${workers} workers`,
     "ratio ≤ 0.5",
-    ours.a,
+    ours.aPool,
     peer?.a,
   ),
+  line("(a) the same, single thread (`monteCarlo`)", "—", ours.a, peer?.a),
   line(
     `(b) adaptive Monte Carlo, 2 digits (${ours.bTrials} trials here${
       peer ? `, ${peer.b_trials} numpy` : ""
-    })`,
+    }): pool of ${workers} workers`,
     "ratio ≤ 0.5",
-    ours.b,
+    ours.bPool,
     peer?.b,
   ),
+  line("(b) the same, single thread (`monteCarloAdaptive`)", "—", ours.b, peer?.b),
   line("(c) Haycock BSA + PHN Z-score, 10⁶ cohort rows", "ratio ≤ 1.0", ours.c, peer?.c),
   `| (d) GUM law, 10-input model, per call | ${ours.d.toFixed(1)} µs | — | — | < 50 µs |`,
   "",
-  `Peak resident memory of a process running (a): ${peakMb.toFixed(0)} MB (target < 200 MB).`,
+  `Peak resident memory of a fresh process running (a) once (target < 200 MB): ${
+    peakPoolMb.toFixed(0)
+  } MB with the pool of ${workers} workers, ${peakMb.toFixed(0)} MB single-thread.`,
+  "",
+  `Starting the pool (workers load the package without mathjs) took ${
+    ours.poolStartMs.toFixed(0)
+  } ms, once per session; it is not in the timings above, as numpy's import is not in its own.`,
+  "The pool's results are identical, bit for bit, to the single-thread functions' for the same seed " +
+  "(tests/uncertainty/pool.test.ts).",
   peer ? "" : `\nnumpy comparison skipped: ${peerNote}.`,
 ].join("\n");
 console.log(report);

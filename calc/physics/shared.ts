@@ -11,6 +11,7 @@
 import type { InputDefinition, InputSchema, InputValues, Reference } from "../core/types.ts";
 import { type InputArguments, validateInputs } from "../core/define.ts";
 import { HATLE_ANGELSEN_1985 as HATLE_ANGELSEN, QUINONES_2002 } from "../references.ts";
+import cosine from "@stdlib/math-base-special-cos";
 
 /** Shared publications, re-exported under this module's names. */
 export { HATLE_ANGELSEN, QUINONES_2002 };
@@ -27,9 +28,13 @@ export { HATLE_ANGELSEN, QUINONES_2002 };
  */
 export const DEFAULT_SOUND_SPEED_MPS = 1540;
 
-/** cos θ for an angle in degrees. The one place the insonation-angle cosine is written. */
+/** cos θ for an angle in degrees. The one place the insonation-angle cosine is written.
+ *
+ * The cosine is @stdlib's JavaScript port of the FreeBSD/fdlibm routine (faithfully rounded, like
+ * `Math.cos`, from which it differs by at most 1 ulp): the engine can inline it in Monte Carlo
+ * and cohort loops, where it runs about 2.5 times faster than `Math.cos` (bench/ANALYSIS.md). */
 export function cosDeg(angleDeg: number): number {
-  return Math.cos((angleDeg * Math.PI) / 180);
+  return cosine((angleDeg * Math.PI) / 180);
 }
 
 /**

@@ -26,3 +26,4 @@ export { expressionModel, type ExpressionModelSpec } from "./expression.ts";
 export { numericalTolerance, roundForReport } from "./rounding.ts";
 export { formatGumOutput } from "./display.ts";
 export { type RandomStream, randomStream } from "./random.ts";
+export { createMonteCarloPool, type MonteCarloPool, type MonteCarloPoolOptions } from "./pool.ts";

@@ -6,18 +6,16 @@
  *
  * @module
  */
-import type { Calculation, InputValues } from "../core/types.ts";
-import { cautionsOf, formatRange, inRange } from "../core/define.ts";
+import type { Calculation } from "../core/types.ts";
+import { cautionsOf, formatRange } from "../core/define.ts";
 import { JUPYTER_DISPLAY, type MimeBundle } from "../core/display.ts";
 import type { Correlations } from "./correlation.ts";
-import { choleskySemidefinite } from "./correlation.ts";
-import type { ResolvedInput } from "./inputs.ts";
 import { type PreparedInputs, prepareInputs, type UncertainInputs } from "./prepare.ts";
-import { type RandomStream, randomStream } from "./random.ts";
+import { checkSeed } from "./random.ts";
+import { blockCount, range, runBlocks, type TrialPlan, trialPlan } from "./trials.ts";
 import { checkCoverage, type GumResult } from "./gum.ts";
 import { numericalTolerance } from "./rounding.ts";
 import { displayMonteCarlo } from "./display.ts";
-import { columnKernel } from "../core/kernel.ts";
 
 /** Default number of Monte Carlo trials (JCGM 101:2008 §7.2.2 suggests 10⁶ for 95 % coverage). *
  * @example
@@ -111,157 +109,18 @@ function checkTrials(trials: number, coverage: number, where: string): number {
   return trials;
 }
 
-/** Fills one column with draws of an input (JCGM 101:2008 §6.4). */
-function sampleColumn(input: ResolvedInput, out: Float64Array, rng: RandomStream): void {
-  const m = out.length;
-  const { estimate: x, standardUncertainty: u, lower: a, upper: b, mode: c } = input;
-  switch (input.kind) {
-    case "exact":
-      out.fill(x);
-      return;
-    case "normal":
-      rng.fillNormal(out, x, u);
-      return;
-    case "studentT":
-      for (let r = 0; r < m; r++) out[r] = x + u * rng.studentT(input.dof);
-      return;
-    case "rectangular":
-      for (let r = 0; r < m; r++) out[r] = a + (b - a) * rng.uniform();
-      return;
-    case "arcsine": {
-      const mid = (a + b) / 2, half = (b - a) / 2;
-      for (let r = 0; r < m; r++) out[r] = mid + half * Math.sin(2 * Math.PI * rng.uniform());
-      return;
-    }
-    case "triangular": {
-      const w = b - a;
-      const fc = w > 0 ? (c - a) / w : 0.5;
-      for (let r = 0; r < m; r++) {
-        const v = rng.uniform();
-        out[r] = v < fc ? a + Math.sqrt(v * w * (c - a)) : b - Math.sqrt((1 - v) * w * (b - c));
-      }
-      return;
-    }
-  }
-}
-
-/** Checks that correlated inputs are normal and returns the Cholesky factor (null when the
- * inputs are uncorrelated). */
-function correlationFactor(prepared: PreparedInputs<string>, where: string): number[][] | null {
-  const { inputs, correlation, correlated } = prepared;
-  if (!correlated) return null;
-  inputs.forEach((input, i) => {
-    const involved = correlation[i]!.some((v, j) => j !== i && v !== 0);
-    if (involved && input.kind !== "normal") {
-      throw new TypeError(
-        `${where}: Monte Carlo supports correlation only between normal inputs (JCGM 101 §6.4.8), got '${input.name}' with a ${input.kind} distribution`,
-      );
-    }
-  });
-  return choleskySemidefinite(correlation, inputs.map((i) => i.name), where);
-}
-
-/** Fills one column per input with draws (correlated normal inputs mixed by the Cholesky factor
- * `l`; `scratch` holds their standard normal draws). */
-function sampleInputs(
-  prepared: PreparedInputs<string>,
-  columns: readonly Float64Array[],
-  l: number[][] | null,
-  scratch: readonly Float64Array[],
-  rng: RandomStream,
-): void {
-  const { inputs } = prepared;
-  if (!l) {
-    inputs.forEach((input, i) => sampleColumn(input, columns[i]!, rng));
-    return;
-  }
-  const m = columns[0]!.length;
-  inputs.forEach((input, i) => {
-    if (input.kind === "normal") rng.fillNormal(scratch[i]!);
-    else sampleColumn(input, columns[i]!, rng);
-  });
-  inputs.forEach((input, i) => {
-    if (input.kind !== "normal") return;
-    const out = columns[i]!;
-    const row = l[i]!;
-    out.fill(0);
-    for (let k = 0; k <= i; k++) {
-      const coef = row[k]!;
-      if (coef === 0 || inputs[k]!.kind !== "normal") continue;
-      const zk = scratch[k]!;
-      for (let r = 0; r < m; r++) out[r]! += coef * zk[r]!;
-    }
-    const x = input.estimate, u = input.standardUncertainty;
-    for (let r = 0; r < m; r++) out[r] = x + u * out[r]!;
-  });
-}
-
-/** Trials are drawn and evaluated in chunks of this size: input columns stay small and in cache;
- * only the output columns hold all trials. Part of the definition of the random stream layout. */
-const CHUNK = 65_536;
-
-/** Draws and evaluates `m` trials in chunks; returns the output columns and, per input, how many
- * draws fell outside its valid range. */
+/** Draws and evaluates a run of `m` trials keyed `key` on this thread; returns the output columns
+ * and, per input, how many draws fell outside its valid range. */
 function runTrials<I extends string, O extends string>(
   calc: Calculation<I, O>,
-  prepared: PreparedInputs<I>,
+  plan: TrialPlan,
+  key: readonly number[],
   m: number,
-  rng: RandomStream,
 ): { results: Float64Array[]; outside: number[] } {
-  const c = calc as unknown as Calculation;
-  const p = prepared as unknown as PreparedInputs<string>;
-  const l = correlationFactor(p, calc.title);
-  const size = Math.min(CHUNK, m);
-  const columns = p.inputs.map(() => new Float64Array(size));
-  const scratch = l ? p.inputs.map(() => new Float64Array(size)) : [];
   const results = calc.outputNames.map(() => new Float64Array(m));
-  const outside = p.inputs.map(() => 0);
-  const kernel = columnKernel(c);
-  for (let start = 0; start < m; start += size) {
-    const n = Math.min(size, m - start);
-    const cols = n === size ? columns : columns.map((col) => col.subarray(0, n));
-    sampleInputs(p, cols, l, n === size ? scratch : scratch.map((z) => z.subarray(0, n)), rng);
-    calc.inputNames.forEach((
-      name,
-      i,
-    ) => (outside[i]! += countOutside(cols[i]!, c.inputs[name]!.range)));
-    const outs = results.map((r) => r.subarray(start, start + n));
-    const bad = kernel(c.formula, cols, outs, n);
-    if (bad >= 0) nonFiniteError(calc, cols, bad, start + bad);
-  }
+  const outside = plan.inputs.map(() => 0);
+  runBlocks(calc as unknown as Calculation, plan, key, m, range(blockCount(m)), results, outside);
   return { results, outside };
-}
-
-/** Number of values outside a range (a min/max pass first: usually nothing to count). */
-function countOutside(col: Float64Array, range: Calculation["inputs"][string]["range"]): number {
-  let min = Infinity, max = -Infinity;
-  for (let r = 0; r < col.length; r++) {
-    const v = col[r]!;
-    if (v < min) min = v;
-    if (v > max) max = v;
-  }
-  if (inRange(min, range) && inRange(max, range)) return 0;
-  let n = 0;
-  for (let r = 0; r < col.length; r++) if (!inRange(col[r]!, range)) n++;
-  return n;
-}
-
-function nonFiniteError<I extends string, O extends string>(
-  calc: Calculation<I, O>,
-  cols: readonly Float64Array[],
-  index: number,
-  trial: number,
-): never {
-  const x: Record<string, number> = {};
-  calc.inputNames.forEach((n, i) => (x[n] = cols[i]![index]!));
-  const y = calc.formula(x as InputValues<I>) as Record<string, number>;
-  const output = calc.outputNames.find((o) => !Number.isFinite(y[o]))!;
-  const shown = calc.inputNames.map((n) => `${n} = ${x[n]}`).join(", ");
-  throw new RangeError(
-    `${calc.title}: output '${output}' is not finite at Monte Carlo trial ${trial} (${shown}), got ${
-      y[output]
-    }; give the inputs distributions that respect the formula's domain (e.g. rectangular bounds)`,
-  );
 }
 
 /** Warnings for draws outside an input's valid range. */
@@ -299,7 +158,7 @@ export function meanAndStandardDeviation(values: Float64Array): { mean: number; 
  * The `count` smallest and the `count` largest values of `values`, each sorted ascending, without
  * sorting the whole array: one pass finds the range, one builds a value histogram that locates
  * both tails, one copies the tails, and only they are sorted. Exact for any data (ties and heavy
- * tails only enlarge the copied part).
+ * tails only enlarge the copied part). When `count` ≥ the number of values, both are all of them.
  */
 export function sortedTails(
   values: Float64Array,
@@ -308,7 +167,7 @@ export function sortedTails(
   const m = values.length;
   if (2 * count >= m) {
     const all = values.slice().sort();
-    return { low: all.subarray(0, count), high: all.subarray(m - count) };
+    return { low: all.subarray(0, count), high: all.subarray(Math.max(0, m - count)) };
   }
   let min = Infinity, max = -Infinity;
   for (let r = 0; r < m; r++) {
@@ -359,13 +218,34 @@ export function coverageIntervals(
   values: Float64Array,
   coverage: number,
 ): { symmetric: [number, number]; shortest: [number, number] } {
-  const m = values.length;
+  const tails = sortedTails(values, coverageTailSize(values.length, coverage));
+  return intervalsFromTails(tails.low, tails.high, values.length, coverage);
+}
+
+/** q = pM (or ⌊pM + ½⌋), capped at M − 1 (JCGM 101:2008 §7.7). */
+function coverageCount(m: number, coverage: number): number {
   const pm = coverage * m;
-  const q = Math.min(m - 1, Number.isInteger(pm) ? pm : Math.floor(pm + 0.5));
+  return Math.min(m - 1, Number.isInteger(pm) ? pm : Math.floor(pm + 0.5));
+}
+
+/** How many of the smallest and of the largest model values the coverage intervals need: M − q
+ * (order statistics 1 … M − q and q + 1 … M). */
+export function coverageTailSize(m: number, coverage: number): number {
+  return m - coverageCount(m, coverage);
+}
+
+/** The intervals from the M − q smallest (`low`, ascending) and largest (`high`, ascending) of M
+ * model values. */
+export function intervalsFromTails(
+  low: Float64Array,
+  high: Float64Array,
+  m: number,
+  coverage: number,
+): { symmetric: [number, number]; shortest: [number, number] } {
+  const q = coverageCount(m, coverage);
   const r = Number.isInteger((m - q) / 2) ? (m - q) / 2 : (m - q + 1) / 2;
-  const tailSize = m - q; // order statistics 1 … m − q and q + 1 … m
+  const tailSize = m - q;
   // low[j] = y_(j+1), high[j] = y_(q+1+j)
-  const { low, high } = sortedTails(values, tailSize);
   const symmetric: [number, number] = [low[r - 1]!, high[r - 1]!];
   let best = Infinity, bestJ = 0;
   for (let j = 0; j < tailSize; j++) {
@@ -377,6 +257,40 @@ export function coverageIntervals(
   }
   return { symmetric, shortest: [low[bestJ]!, high[bestJ]!] };
 }
+
+/** The tails of a whole sample from the tails of its parts (each ascending, each holding its
+ * part's `count` smallest or largest values, or the whole part when shorter): a merge that keeps
+ * the `count` smallest (`low`) or largest (`high`) values, ascending. */
+export function mergeTails(
+  parts: readonly Float64Array[],
+  count: number,
+  side: "low" | "high",
+): Float64Array {
+  const out = new Float64Array(count);
+  const at = parts.map((p) => (side === "low" ? 0 : p.length - 1));
+  if (side === "low") {
+    for (let j = 0; j < count; j++) {
+      let best = -1;
+      parts.forEach((p, i) => {
+        if (at[i]! < p.length && (best < 0 || p[at[i]!]! < parts[best]![at[best]!]!)) best = i;
+      });
+      out[j] = parts[best]![at[best]!++]!;
+    }
+  } else {
+    for (let j = count - 1; j >= 0; j--) {
+      let best = -1;
+      parts.forEach((p, i) => {
+        if (at[i]! >= 0 && (best < 0 || p[at[i]!]! > parts[best]![at[best]!]!)) best = i;
+      });
+      out[j] = parts[best]![at[best]!--]!;
+    }
+  }
+  return out;
+}
+
+/** The `count` smallest and largest of each output, when already known (e.g. merged from the
+ * tails computed by workers). */
+export type KnownTails = readonly { readonly low: Float64Array; readonly high: Float64Array }[];
 
 function correlationOf(columns: readonly Float64Array[]): number[][] {
   const stats = columns.map(meanAndStandardDeviation);
@@ -400,13 +314,17 @@ function summarise<I extends string, O extends string>(
   seed: number,
   warnings: string[],
   keepSamples: boolean,
+  tails?: KnownTails,
 ): MonteCarloResult<O> {
   const correlation = results.length > 1 ? correlationOf(results) : [[1]];
   const outputs = {} as Record<O, MonteCarloOutput>;
   calc.outputNames.forEach((o, k) => {
     const col = results[k]!;
     const { mean, sd } = meanAndStandardDeviation(col);
-    const { symmetric, shortest } = coverageIntervals(col, coverage);
+    const known = tails?.[k];
+    const { symmetric, shortest } = known
+      ? intervalsFromTails(known.low, known.high, col.length, coverage)
+      : coverageIntervals(col, coverage);
     outputs[o] = {
       output: o,
       unit: calc.outputs[o].unit,
@@ -435,7 +353,8 @@ function summarise<I extends string, O extends string>(
 
 /**
  * Propagates the input distributions through a calculation by Monte Carlo (JCGM 101:2008 §7):
- * M trials drawn column-wise from one seeded stream, model values, their average and standard
+ * M trials drawn column-wise in blocks, each block from its own stream keyed by the seed and the
+ * block index (see calc/uncertainty/trials.ts), model values, their average and standard
  * deviation, and probabilistically symmetric and shortest coverage intervals.
  *
  * @param calc The calculation.
@@ -467,17 +386,65 @@ export function monteCarlo<I extends string, O extends string>(
   inputs: UncertainInputs<I>,
   options: MonteCarloOptions = {},
 ): MonteCarloResult<O> {
+  const run = monteCarloRun(calc, inputs, options);
+  const { results, outside } = runTrials(calc, run.plan, [run.seed], run.trials);
+  return finishMonteCarlo(calc, run, results, outside);
+}
+
+/** A checked Monte Carlo run: options with their defaults, the resolved inputs and the trial
+ * plan. Shared by {@linkcode monteCarlo} and the worker pool. */
+export interface MonteCarloRun {
+  readonly coverage: number;
+  readonly trials: number;
+  readonly seed: number;
+  readonly keepSamples: boolean;
+  readonly flags: readonly string[];
+  readonly plan: TrialPlan;
+}
+
+/** Checks the options and inputs of a Monte Carlo run (everything that can fail before a draw). */
+export function monteCarloRun<I extends string, O extends string>(
+  calc: Calculation<I, O>,
+  inputs: UncertainInputs<I>,
+  options: MonteCarloOptions,
+): MonteCarloRun {
   const coverage = checkCoverage(options.coverage ?? 0.95, calc.title);
   const trials = checkTrials(options.trials ?? DEFAULT_TRIALS, coverage, calc.title);
-  const seed = options.seed ?? DEFAULT_SEED;
-  const rng = randomStream(seed);
+  const seed = checkSeed(options.seed ?? DEFAULT_SEED);
   const prepared = prepareInputs(calc, inputs, options.correlations);
-  const { results, outside } = runTrials(calc, prepared, trials, rng);
+  const plan = trialPlan(prepared as unknown as PreparedInputs<string>, calc.title);
+  return {
+    coverage,
+    trials,
+    seed,
+    keepSamples: options.keepSamples ?? true,
+    flags: prepared.flags,
+    plan,
+  };
+}
+
+/** The result of a run from its output columns (trial order) and out-of-range counts. */
+export function finishMonteCarlo<I extends string, O extends string>(
+  calc: Calculation<I, O>,
+  run: MonteCarloRun,
+  results: Float64Array[],
+  outside: readonly number[],
+  tails?: KnownTails,
+): MonteCarloResult<O> {
   const warnings = [
-    ...prepared.flags,
-    ...rangeWarnings(calc as unknown as Calculation, outside, trials),
+    ...run.flags,
+    ...rangeWarnings(calc as unknown as Calculation, outside, run.trials),
   ];
-  return summarise(calc, results, coverage, trials, seed, warnings, options.keepSamples ?? true);
+  return summarise(
+    calc,
+    results,
+    run.coverage,
+    run.trials,
+    run.seed,
+    warnings,
+    run.keepSamples,
+    tails,
+  );
 }
 
 /** Options of {@linkcode monteCarloAdaptive}. */
@@ -534,6 +501,75 @@ export function monteCarloAdaptive<I extends string, O extends string>(
   inputs: UncertainInputs<I>,
   options: AdaptiveOptions = {},
 ): AdaptiveResult<O> {
+  const state = adaptiveRun(calc, inputs, options);
+  while (state.wantsMore()) {
+    const h = state.sequences;
+    const { results, outside } = runTrials(
+      calc,
+      state.plan,
+      [state.seed, h],
+      state.trialsPerSequence,
+    );
+    state.add({ results, outside, stats: sequenceStatistics(results, state.coverage) });
+  }
+  return state.finish();
+}
+
+/** Average, standard deviation and probabilistically symmetric interval of one output over one
+ * sequence of the adaptive procedure (JCGM 101 §7.9.4 b). */
+export interface SequenceStatistics {
+  readonly mean: number;
+  readonly sd: number;
+  readonly low: number;
+  readonly high: number;
+}
+
+/** The statistics of each output column of one sequence. */
+export function sequenceStatistics(
+  results: readonly Float64Array[],
+  coverage: number,
+): SequenceStatistics[] {
+  return results.map((col) => {
+    const { mean, sd } = meanAndStandardDeviation(col);
+    const { symmetric } = coverageIntervals(col, coverage);
+    return { mean, sd, low: symmetric[0], high: symmetric[1] };
+  });
+}
+
+/** One finished sequence of the adaptive procedure: its output columns, out-of-range counts per
+ * input, and statistics per output. */
+export interface SequenceRun {
+  readonly results: Float64Array[];
+  readonly outside: readonly number[];
+  readonly stats: readonly SequenceStatistics[];
+}
+
+/** The adaptive procedure as a state that takes sequences in order (h = 0, 1, …; sequence h is the
+ * run keyed [seed, h]) and says when to stop. Shared by {@linkcode monteCarloAdaptive} and the
+ * worker pool, which computes sequences ahead in parallel and adds them in order. */
+export interface AdaptiveRun<O extends string> {
+  readonly coverage: number;
+  readonly seed: number;
+  readonly plan: TrialPlan;
+  readonly trialsPerSequence: number;
+  /** Sequences added so far. */
+  readonly sequences: number;
+  /** How many more sequences the trial limit allows. */
+  readonly sequencesLeft: number;
+  /** True while not stabilised and the trial limit allows another sequence. */
+  wantsMore(): boolean;
+  /** Adds the next sequence; returns true when every output has stabilised. */
+  add(sequence: SequenceRun): boolean;
+  /** The result over all added sequences. */
+  finish(): AdaptiveResult<O>;
+}
+
+/** Checks the options and inputs of an adaptive run and returns its state. */
+export function adaptiveRun<I extends string, O extends string>(
+  calc: Calculation<I, O>,
+  inputs: UncertainInputs<I>,
+  options: AdaptiveOptions,
+): AdaptiveRun<O> {
   const coverage = checkCoverage(options.coverage ?? 0.95, calc.title);
   const digits = options.significantDigits ?? 2;
   if (!(Number.isInteger(digits) && digits >= 1 && digits <= 4)) {
@@ -542,9 +578,9 @@ export function monteCarloAdaptive<I extends string, O extends string>(
     );
   }
   const maxTrials = options.maxTrials ?? 50_000_000;
-  const seed = options.seed ?? DEFAULT_SEED;
-  const rng = randomStream(seed);
+  const seed = checkSeed(options.seed ?? DEFAULT_SEED);
   const prepared = prepareInputs(calc, inputs, options.correlations);
+  const plan = trialPlan(prepared as unknown as PreparedInputs<string>, calc.title);
   const m = Math.max(Math.ceil(100 / (1 - coverage)), 10_000);
   const outs = calc.outputNames;
   const batches: Float64Array[][] = [];
@@ -554,57 +590,72 @@ export function monteCarloAdaptive<I extends string, O extends string>(
     lo: [] as number[],
     hi: [] as number[],
   }));
-  const warnings = [...prepared.flags];
   const tolerance = {} as Record<O, number>;
   let stabilized = false;
   const outsideTotal = calc.inputNames.map(() => 0);
-  while (!stabilized && (batches.length + 1) * m <= maxTrials) {
-    const { results, outside } = runTrials(calc, prepared, m, rng);
+  const sdOfMean = (v: number[]) =>
+    meanAndStandardDeviation(Float64Array.from(v)).sd / Math.sqrt(v.length);
+  const add = ({ results, outside, stats }: SequenceRun): boolean => {
     outside.forEach((n, i) => (outsideTotal[i]! += n));
     batches.push(results);
-    results.forEach((col, k) => {
-      const { mean, sd } = meanAndStandardDeviation(col);
-      const { symmetric } = coverageIntervals(col, coverage);
+    stats.forEach((st, k) => {
       const s = seqStats[k]!;
-      s.y.push(mean);
-      s.u.push(sd);
-      s.lo.push(symmetric[0]);
-      s.hi.push(symmetric[1]);
+      s.y.push(st.mean);
+      s.u.push(st.sd);
+      s.lo.push(st.low);
+      s.hi.push(st.high);
     });
     const h = batches.length;
-    if (h < 2) continue;
+    if (h < 2) return false;
     stabilized = outs.every((o, k) => {
       const s = seqStats[k]!;
-      const sdOfMean = (v: number[]) =>
-        meanAndStandardDeviation(Float64Array.from(v)).sd / Math.sqrt(v.length);
       const uAll = s.u.reduce((a, b) => a + b, 0) / h;
       const delta = numericalTolerance(uAll, digits);
       tolerance[o] = delta;
       return [s.y, s.u, s.lo, s.hi].every((v) => 2 * sdOfMean(v) <= delta);
     });
-  }
-  if (!stabilized) {
-    warnings.push(
-      `Adaptive Monte Carlo did not stabilise within ${maxTrials} trials at ${digits} significant digits`,
-    );
-  }
-  const total = batches.length * m;
-  warnings.push(...rangeWarnings(calc as unknown as Calculation, outsideTotal, total));
-  const merged = outs.map((_, k) => {
-    const all = new Float64Array(total);
-    batches.forEach((b, h) => all.set(b[k]!, h * m));
-    return all;
-  });
-  const base = summarise(calc, merged, coverage, total, seed, warnings, true);
-  const result: AdaptiveResult<O> = {
-    ...base,
-    sequences: batches.length,
-    trialsPerSequence: m,
-    tolerance,
-    stabilized,
-    [JUPYTER_DISPLAY]: () => displayMonteCarlo(result as MonteCarloResult),
+    return stabilized;
   };
-  return result;
+  const finish = (): AdaptiveResult<O> => {
+    const warnings = [...prepared.flags];
+    if (!stabilized) {
+      warnings.push(
+        `Adaptive Monte Carlo did not stabilise within ${maxTrials} trials at ${digits} significant digits`,
+      );
+    }
+    const total = batches.length * m;
+    warnings.push(...rangeWarnings(calc as unknown as Calculation, outsideTotal, total));
+    const merged = outs.map((_, k) => {
+      const all = new Float64Array(total);
+      batches.forEach((b, h) => all.set(b[k]!, h * m));
+      return all;
+    });
+    const base = summarise(calc, merged, coverage, total, seed, warnings, true);
+    const result: AdaptiveResult<O> = {
+      ...base,
+      sequences: batches.length,
+      trialsPerSequence: m,
+      tolerance,
+      stabilized,
+      [JUPYTER_DISPLAY]: () => displayMonteCarlo(result as MonteCarloResult),
+    };
+    return result;
+  };
+  return {
+    coverage,
+    seed,
+    plan,
+    trialsPerSequence: m,
+    get sequences() {
+      return batches.length;
+    },
+    get sequencesLeft() {
+      return stabilized ? 0 : Math.max(0, Math.floor(maxTrials / m) - batches.length);
+    },
+    wantsMore: () => !stabilized && (batches.length + 1) * m <= maxTrials,
+    add,
+    finish,
+  };
 }
 
 /** The verdict of {@linkcode validateGumWithMonteCarlo} for one output. */

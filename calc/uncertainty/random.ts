@@ -14,16 +14,22 @@
  *   reference moments, a Kolmogorov–Smirnov test and a χ² goodness-of-fit test;
  * - Student t: Bailey's polar method (Bailey 1994, Math Comp 62:779–781), exact for any ν > 0.
  *
- * The same seed gives the same numbers, bit for bit.
+ * A stream starts from one seed (the MT reference `init_genrand`, as pure-rand does) or from a key
+ * of several 32-bit words (the MT reference `init_by_array`, which numpy's legacy MT19937 seeding
+ * also uses): Monte Carlo gives every block of trials its own stream keyed by the run seed and the
+ * block index, so that blocks can run in any order, on any number of workers, with the same
+ * result. The same seed or key gives the same numbers, bit for bit.
  *
  * @module
  */
-import { mersenne } from "pure-rand/generator/mersenne";
+import { mersenne, mersenneFromState } from "pure-rand/generator/mersenne";
 
 /** A seeded stream of random numbers. */
 export interface RandomStream {
-  /** The seed that started the stream. */
-  readonly seed: number;
+  /** The seed (or key of several words) that started the stream. */
+  readonly seed: number | readonly number[];
+  /** The next raw 32-bit word of the generator, in [0, 2³² − 1]. */
+  uint32(): number;
   /** Uniform on the open interval (0, 1), 53-bit resolution. */
   uniform(): number;
   /** Standard normal. */
@@ -101,8 +107,10 @@ function fillNormal(mt: Generator32, out: Float64Array, mean: number, sd: number
     const b = mt.next();
     const u = 2 * (((a >>> 5) * TWO_POW_26 + (b >>> 6) + 0.5) / TWO_POW_53) - 1;
     const i = (b & 63) | ((a & 1) << 6);
-    const z = Math.abs(u) < ZIG_RATIO[i]! ? u * ZIG_X[i]! : slowNormal(mt, u, i);
-    out[r] = mean + sd * z;
+    // two stores rather than one merged value: merging the fast path's unboxed number with the
+    // slow path's call result would box every draw (a heap allocation per normal)
+    if (Math.abs(u) < ZIG_RATIO[i]!) out[r] = mean + sd * (u * ZIG_X[i]!);
+    else out[r] = mean + sd * slowNormal(mt, u, i);
   }
 }
 
@@ -116,29 +124,97 @@ function studentT(mt: Generator32, dof: number): number {
   }
 }
 
+const N = 624;
+const M = 397;
+
+/** The MT19937 state recurrence over all 624 words, in place (Matsumoto & Nishimura 1998); the
+ * same order of updates as the reference `genrand_int32` refill. */
+function twist(mt: Int32Array): void {
+  const step = (i: number, next: number, far: number) => {
+    const y = (mt[i]! & -0x80000000) | (mt[next]! & 0x7fffffff);
+    mt[i] = mt[far]! ^ (y >>> 1) ^ (-(y & 1) & 0x9908b0df);
+  };
+  for (let i = 0; i < N - M; i++) step(i, i + 1, i + M);
+  for (let i = N - M; i < N - 1; i++) step(i, i + 1, i + M - N);
+  step(N - 1, 0, M - 1);
+}
+
+/** MT19937 initialised by an array of 32-bit words: the reference `init_by_array`
+ * (mt19937ar.c, Matsumoto & Nishimura 2002), handed to pure-rand as a twisted state. */
+function mersenneFromKey(key: readonly number[]): Generator32 {
+  const mt = new Int32Array(N);
+  mt[0] = 19650218;
+  for (let i = 1; i < N; i++) {
+    mt[i] = Math.imul(1812433253, mt[i - 1]! ^ (mt[i - 1]! >>> 30)) + i;
+  }
+  let i = 1, j = 0;
+  for (let k = Math.max(N, key.length); k > 0; k--) {
+    mt[i] = ((mt[i]! ^ Math.imul(mt[i - 1]! ^ (mt[i - 1]! >>> 30), 1664525)) + key[j]! + j) | 0;
+    i++;
+    j++;
+    if (i >= N) {
+      mt[0] = mt[N - 1]!;
+      i = 1;
+    }
+    if (j >= key.length) j = 0;
+  }
+  for (let k = N - 1; k > 0; k--) {
+    mt[i] = ((mt[i]! ^ Math.imul(mt[i - 1]! ^ (mt[i - 1]! >>> 30), 1566083941)) - i) | 0;
+    i++;
+    if (i >= N) {
+      mt[0] = mt[N - 1]!;
+      i = 1;
+    }
+  }
+  mt[0] = -0x80000000; // 0x80000000: a non-zero initial state
+  twist(mt);
+  return mersenneFromState([0, ...mt]);
+}
+
+/** Checks a seed: an integer in [1, 2³² − 1].
+ * @throws {RangeError} Naming the seed and the valid range. */
+export function checkSeed(seed: number): number {
+  if (!(Number.isInteger(seed) && seed > 0 && seed < 2 ** 32)) {
+    throw new RangeError(
+      `Random stream: expected a seed that is an integer in [1, 2^32 - 1], got ${seed}`,
+    );
+  }
+  return seed;
+}
+
+const isWord = (v: number) => Number.isInteger(v) && v >= 0 && v < 2 ** 32;
+
 /**
- * Creates a seeded random stream.
+ * Creates a seeded random stream: MT19937 started from one seed (reference `init_genrand`) or
+ * from a key of several 32-bit words (reference `init_by_array`).
  *
- * @param seed A positive integer below 2³².
+ * @param seed A positive integer below 2³², or a non-empty array of integers in [0, 2³² − 1].
  * @returns The stream.
- * @throws {RangeError} For a seed that is not a positive integer below 2³².
+ * @throws {RangeError} For a seed that is not a positive integer below 2³², or a bad key.
  *
  * @example
  * ```ts
  * import { randomStream } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
  * assert.equal(randomStream(7).normal(), randomStream(7).normal());
+ * // a key of several words, e.g. a run seed and a block index
+ * assert.notEqual(randomStream([7, 0]).normal(), randomStream([7, 1]).normal());
  * ```
  */
-export function randomStream(seed: number): RandomStream {
-  if (!(Number.isInteger(seed) && seed > 0 && seed < 2 ** 32)) {
-    throw new RangeError(
-      `Random stream: expected a seed that is an integer in [1, 2^32 - 1], got ${seed}`,
-    );
-  }
-  const mt = mersenne(seed | 0);
+export function randomStream(seed: number | readonly number[]): RandomStream {
+  if (typeof seed !== "number") {
+    if (!(Array.isArray(seed) && seed.length > 0 && seed.every(isWord))) {
+      throw new RangeError(
+        `Random stream: expected a key of one or more integers in [0, 2^32 - 1], got [${
+          Array.isArray(seed) ? seed.join(", ") : String(seed)
+        }]`,
+      );
+    }
+  } else checkSeed(seed);
+  const mt = typeof seed === "number" ? mersenne(seed | 0) : mersenneFromKey(seed);
   return {
     seed,
+    uint32: () => mt.next() >>> 0,
     uniform: () => uniform53(mt),
     normal: () => normal(mt),
     studentT: (dof: number) => studentT(mt, dof),

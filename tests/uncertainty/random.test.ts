@@ -126,3 +126,41 @@ Deno.test("coverage intervals leave their input untouched (frozen copy compared)
   coverageIntervals(a, 0.95);
   assert.deepEqual(a, before);
 });
+
+Deno.test("MT19937 raw words: reference outputs for a single seed and for a key (init_by_array)", () => {
+  const words = (seed: number | number[], n: number) => {
+    const r = randomStream(seed);
+    return Array.from({ length: n }, () => r.uint32());
+  };
+  // mt19937ar.out (Matsumoto & Nishimura 2002 reference code), key {0x123, 0x234, 0x345, 0x456}:
+  // first five outputs; the same values from numpy 2.4.6 MT19937._legacy_seeding (init_by_array)
+  assert.deepEqual(
+    words([0x123, 0x234, 0x345, 0x456], 5),
+    [1067595299, 955945823, 477289528, 4107218783, 4228976476],
+  );
+  // numpy 2.4.6, MT19937()._legacy_seeding(key).random_raw(1005): words 1004 and 1005 (past the
+  // first refill of the 624-word state)
+  assert.deepEqual(words([0x123, 0x234, 0x345, 0x456], 1005).slice(-2), [435643333, 1199718579]);
+  assert.deepEqual(words([20080101, 3], 5), [
+    3318652550,
+    1599953118,
+    1737149465,
+    2376876779,
+    744887581,
+  ]);
+  assert.deepEqual(words([20080101, 3], 1005).slice(-2), [1287629184, 1559558500]);
+  assert.deepEqual(words([7, 0, 1], 5), [4134331577, 364536972, 1405532956, 207176672, 3322737464]);
+  // init_genrand(5489), the reference default seed: 3499211612, 581869302, 3890346734 (numpy 2.4.6
+  // MT19937._legacy_seeding(5489); from memory, the first value of C++11 std::mt19937 by default)
+  assert.deepEqual(words(5489, 3), [3499211612, 581869302, 3890346734]);
+});
+
+Deno.test("random stream keys: bad keys are refused with the key shown", () => {
+  assert.throws(
+    () => randomStream([]),
+    /expected a key of one or more integers in \[0, 2\^32 - 1\], got \[\]/,
+  );
+  assert.throws(() => randomStream([1, -2]), /got \[1, -2\]/);
+  assert.throws(() => randomStream([1, 2 ** 32]), /got \[1, 4294967296\]/);
+  assert.throws(() => randomStream([1.5]), /got \[1.5\]/);
+});

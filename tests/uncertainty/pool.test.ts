@@ -1,0 +1,208 @@
+import assert from "node:assert/strict";
+import fc from "fast-check";
+import {
+  arcsine,
+  continuityValveArea,
+  createMonteCarloPool,
+  defineCalculation,
+  monteCarlo,
+  monteCarloAdaptive,
+  type MonteCarloResult,
+  normal,
+  rectangular,
+  studentT,
+  triangular,
+} from "../../mod.ts";
+import { mergeTails, sortedTails } from "../../calc/uncertainty/montecarlo.ts";
+import { monteCarloRun } from "../../calc/uncertainty/montecarlo.ts";
+import { BLOCK_TRIALS, range, runBlocks } from "../../calc/uncertainty/trials.ts";
+import { inverseRoot, sumAndProduct } from "./fixtures/pool-models.ts";
+
+const fixtures = new URL("./fixtures/pool-models.ts", import.meta.url);
+
+// Reference for every check below: the single-thread functions of this package, whose results
+// are checked against JCGM 101 in montecarlo.test.ts. The pool must reproduce them bit for bit.
+
+const mixedInputs = {
+  a: normal(1, 0.1),
+  b: normal(2, 0.2),
+  c: rectangular(0.5, 1.5),
+  d: triangular(1, 3, 1.5),
+  e: arcsine(0.9, 1.1),
+  f: studentT(1, 0.05, 4),
+};
+const mixedOptions = {
+  trials: 3 * BLOCK_TRIALS + 1234, // a last block shorter than the others
+  seed: 77,
+  correlations: [["a", "b", 0.6] as const],
+};
+
+function assertSameResult(actual: MonteCarloResult, expected: MonteCarloResult): void {
+  assert.equal(actual.trials, expected.trials);
+  assert.deepEqual(actual.warnings, expected.warnings);
+  assert.deepEqual(actual.correlation, expected.correlation);
+  for (const name of expected.outputNames) {
+    const a = actual.outputs[name]!, e = expected.outputs[name]!;
+    assert.equal(a.estimate, e.estimate);
+    assert.equal(a.standardUncertainty, e.standardUncertainty);
+    assert.deepEqual(a.symmetricInterval, e.symmetricInterval);
+    assert.deepEqual(a.shortestInterval, e.shortestInterval);
+    assert.deepEqual(a.samples, e.samples);
+  }
+}
+
+Deno.test("pool: results identical to monteCarlo for 1, 2 and 3 workers (mixed shapes, correlation, short last block)", async () => {
+  const single = monteCarlo(sumAndProduct, mixedInputs, mixedOptions);
+  for (const workers of [1, 2, 3]) {
+    const pool = await createMonteCarloPool({ workers, modules: [fixtures] });
+    try {
+      assert.equal(pool.workers, workers);
+      assertSameResult(await pool.monteCarlo(sumAndProduct, mixedInputs, mixedOptions), single);
+    } finally {
+      pool.close();
+    }
+  }
+});
+
+Deno.test("pool: a built-in calculation needs no extra module; units are converted on the calling thread", async () => {
+  const inputs = {
+    lvotDiameterCm: normal("20 mm", "1 mm"),
+    lvotVtiCm: normal(20, 1),
+    avVtiCm: normal(80, 3),
+  };
+  const options = { trials: 100_000, seed: 3, keepSamples: false };
+  using pool = await createMonteCarloPool({ workers: 2 });
+  assertSameResult(
+    await pool.monteCarlo(continuityValveArea, inputs, options),
+    monteCarlo(continuityValveArea, inputs, options),
+  );
+});
+
+Deno.test("pool: adaptive procedure identical to monteCarloAdaptive (same sequences, same stop)", async () => {
+  using pool = await createMonteCarloPool({ workers: 2, modules: [fixtures] });
+  const options = { significantDigits: 2, seed: 11, correlations: [["a", "b", 0.6] as const] };
+  const single = monteCarloAdaptive(sumAndProduct, mixedInputs, options);
+  const pooled = await pool.monteCarloAdaptive(sumAndProduct, mixedInputs, options);
+  assert.equal(pooled.sequences, single.sequences);
+  assert.equal(pooled.stabilized, single.stabilized);
+  assert.deepEqual(pooled.tolerance, single.tolerance);
+  assertSameResult(pooled, single);
+  // a trial limit that stops the procedure before it stabilises: same stop, same warning
+  const limited = { ...options, significantDigits: 4, maxTrials: 50_000 };
+  assertSameResult(
+    await pool.monteCarloAdaptive(sumAndProduct, mixedInputs, limited),
+    monteCarloAdaptive(sumAndProduct, mixedInputs, limited),
+  );
+});
+
+Deno.test("pool: a non-finite model value is the same error as on one thread", async () => {
+  using pool = await createMonteCarloPool({ workers: 2, modules: [fixtures] });
+  const inputs = { x: normal(0.01, 1) };
+  const options = { trials: 200_000, seed: 1 };
+  let expected = "";
+  try {
+    monteCarlo(inverseRoot, inputs, options);
+  } catch (e) {
+    expected = (e as Error).message;
+  }
+  assert.match(expected, /output 'y' is not finite at Monte Carlo trial \d+/);
+  await assert.rejects(() => pool.monteCarlo(inverseRoot, inputs, options), {
+    name: "RangeError",
+    message: expected,
+  });
+  await assert.rejects(() => pool.monteCarloAdaptive(inverseRoot, inputs, { seed: 1 }), {
+    name: "RangeError",
+    message: /output 'y' is not finite at Monte Carlo trial \d+/,
+  });
+});
+
+Deno.test("pool: calculations the workers cannot load, and misuse, are clear errors", async () => {
+  await assert.rejects(() => createMonteCarloPool({ workers: 0 }), {
+    name: "RangeError",
+    message: "Monte Carlo pool: expected workers to be an integer in [1, 64], got 0",
+  });
+  await assert.rejects(() => createMonteCarloPool({ workers: 1, modules: ["./relative.ts"] }), {
+    name: "TypeError",
+    message: /expected modules as absolute URLs .* got '\.\/relative\.ts'/,
+  });
+  await assert.rejects(
+    () =>
+      createMonteCarloPool({
+        workers: 1,
+        modules: [new URL("./fixtures/missing.ts", import.meta.url)],
+      }),
+    { name: "TypeError", message: /a module failed to load in a worker/ },
+  );
+  const pool = await createMonteCarloPool({ workers: 1, modules: [fixtures] });
+  const local = defineCalculation({ ...inverseRoot, id: "testPoolLocalOnly" });
+  await assert.rejects(() => pool.monteCarlo(local, { x: normal(5, 0.1) }, { trials: 1000 }), {
+    name: "TypeError",
+    message: /calculation 'testPoolLocalOnly' is not exported by the modules the pool loaded/,
+  });
+  const impostor = defineCalculation({
+    ...inverseRoot,
+    formula: ({ x }: { x: number }) => ({ y: x }),
+  });
+  await assert.rejects(() => pool.monteCarlo(impostor, { x: normal(5, 0.1) }, { trials: 1000 }), {
+    name: "TypeError",
+    message: /calculation 'testPoolInverseRoot' has a different formula/,
+  });
+  // bad inputs fail on the calling thread, before any draw, as in monteCarlo
+  await assert.rejects(() => pool.monteCarlo(inverseRoot, { x: normal(5, -1) }, { trials: 1000 }), {
+    name: "RangeError",
+  });
+  pool.close();
+  await assert.rejects(() => pool.monteCarlo(inverseRoot, { x: normal(5, 0.1) }), {
+    message: "Monte Carlo pool: the pool is closed; create a new one",
+  });
+});
+
+Deno.test("trial blocks: any order of blocks gives the same values (stream per block)", () => {
+  const run = monteCarloRun(sumAndProduct, mixedInputs, mixedOptions);
+  const m = run.trials;
+  const forward = [new Float64Array(m), new Float64Array(m)];
+  const backward = [new Float64Array(m), new Float64Array(m)];
+  const blocks = range(Math.ceil(m / BLOCK_TRIALS));
+  runBlocks(sumAndProduct, run.plan, [run.seed], m, blocks, forward, run.plan.inputs.map(() => 0));
+  runBlocks(
+    sumAndProduct,
+    run.plan,
+    [run.seed],
+    m,
+    blocks.toReversed(),
+    backward,
+    run.plan.inputs.map(() => 0),
+  );
+  assert.deepEqual(backward, forward);
+});
+
+Deno.test("merged tails of parts equal the tails of the whole (property, against a full sort)", () => {
+  fc.assert(
+    fc.property(
+      fc.array(fc.double({ noNaN: true, noDefaultInfinity: true, min: -1e6, max: 1e6 }), {
+        minLength: 2,
+        maxLength: 400,
+      }),
+      fc.integer({ min: 1, max: 5 }),
+      fc.integer({ min: 1, max: 100 }),
+      (values, parts, countSeed) => {
+        const all = Float64Array.from(values);
+        const count = 1 + (countSeed % Math.floor(all.length / 2));
+        const size = Math.ceil(all.length / parts);
+        const pieces = range(parts).map((p) => all.subarray(p * size, (p + 1) * size)).filter((p) =>
+          p.length
+        );
+        const tails = pieces.map((p) => sortedTails(p, count));
+        const sorted = all.slice().sort();
+        assert.deepEqual(
+          mergeTails(tails.map((t) => t.low), count, "low"),
+          sorted.subarray(0, count),
+        );
+        assert.deepEqual(
+          mergeTails(tails.map((t) => t.high), count, "high"),
+          sorted.subarray(all.length - count),
+        );
+      },
+    ),
+  );
+});
