@@ -193,12 +193,18 @@ try {
 if (!peer) console.error(`numpy comparison skipped: ${peerNote}`);
 
 const fmt = (s: number) => (s < 1 ? `${(s * 1000).toFixed(1)} ms` : `${s.toFixed(2)} s`);
+/** Median with the range of the runs, e.g. "95.1 ms (88.0–131.2)". */
+const spread = (v: number[]) => {
+  const lo = Math.min(...v), hi = Math.max(...v);
+  const unit = (x: number) => (median(v) < 1 ? (x * 1000).toFixed(1) : x.toFixed(2));
+  return `${fmt(median(v))} (${unit(lo)}–${unit(hi)})`;
+};
 const line = (name: string, target: string, our: number[], theirs: number[] | undefined) => {
   const o = median(our);
   const t = theirs && theirs.length ? median(theirs) : NaN;
   const ratio = Number.isFinite(t) ? (o / t).toFixed(2) : "n/a";
-  return `| ${name} | ${fmt(o)} | ${
-    Number.isFinite(t) ? fmt(t) : "skipped"
+  return `| ${name} | ${spread(our)} | ${
+    Number.isFinite(t) ? spread(theirs!) : "skipped"
   } | ${ratio} | ${target} |`;
 };
 const cpu =
@@ -211,9 +217,10 @@ const report = [
     new Date().toISOString().slice(0, 10)
   } on ${cpu}, ${navigator.hardwareConcurrency} logical cores, ` +
   `Deno ${Deno.version.deno} (V8 ${Deno.version.v8})${peer ? `, numpy ${peer.numpy}` : ""}. ` +
-  `Medians of ${runs} runs; ratio = sonorigor / numpy (below 1 is faster).`,
+  `Medians of ${runs} runs (range in brackets); ratio = sonorigor median / numpy median (below 1 is ` +
+  "faster).",
   "",
-  "Reproduce: `deno run -A bench/compare-numpy.ts --runs 5 --write`",
+  "Reproduce: `npx -y deno@2.9.6 run -A bench/compare-numpy.ts --runs 9 --write` (or `deno task bench`)",
   "",
   "| model | sonorigor | numpy | ratio | target |",
   "| --- | --- | --- | --- | --- |",
