@@ -68,7 +68,8 @@ class PoolWorker {
   readonly #pending = new Map<number, { resolve(r: WorkerReply): void; reject(e: Error): void }>();
   #next = 0;
 
-  constructor() {
+  /** @param onFailure Called once the worker has died of an uncaught error. */
+  constructor(onFailure: (message: string) => void) {
     this.#worker = new Worker(new URL("./worker.ts", import.meta.url), { type: "module" });
     this.#worker.onmessage = ({ data }: MessageEvent<WorkerReply>) => {
       const waiting = this.#pending.get(data.job);
@@ -77,9 +78,10 @@ class PoolWorker {
     };
     this.#worker.onerror = (event: ErrorEvent) => {
       event.preventDefault();
-      const error = new Error(`Monte Carlo worker failed: ${event.message}`);
+      const error = new Error(`Monte Carlo pool: a worker failed: ${event.message}`);
       for (const waiting of this.#pending.values()) waiting.reject(error);
       this.#pending.clear();
+      onFailure(event.message);
     };
   }
 
@@ -168,12 +170,20 @@ export async function createMonteCarloPool(
     }
     modules.push(url.href);
   }
-  const workers = range(count).map(() => new PoolWorker());
   let closed = false;
+  let failure: string | null = null;
   const close = () => {
+    if (closed) return;
     closed = true;
     workers.forEach((w) => w.terminate());
   };
+  // a worker that died leaves the pool unusable: stop the others, refuse later calls
+  const workers = range(count).map(() =>
+    new PoolWorker((message) => {
+      failure ??= message;
+      close();
+    })
+  );
   try {
     const loaded = await Promise.all(
       workers.map((w) =>
@@ -192,6 +202,9 @@ export async function createMonteCarloPool(
   }
 
   const ensureOpen = () => {
+    if (failure !== null) {
+      throw new Error(`Monte Carlo pool: a worker failed (${failure}); create a new pool`);
+    }
     if (closed) throw new Error("Monte Carlo pool: the pool is closed; create a new one");
   };
 

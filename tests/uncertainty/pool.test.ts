@@ -16,7 +16,7 @@ import {
 import { mergeTails, sortedTails } from "../../calc/uncertainty/montecarlo.ts";
 import { monteCarloRun } from "../../calc/uncertainty/montecarlo.ts";
 import { BLOCK_TRIALS, range, runBlocks } from "../../calc/uncertainty/trials.ts";
-import { inverseRoot, sumAndProduct } from "./fixtures/pool-models.ts";
+import { crashesLater, inverseRoot, sumAndProduct } from "./fixtures/pool-models.ts";
 
 const fixtures = new URL("./fixtures/pool-models.ts", import.meta.url);
 
@@ -205,4 +205,30 @@ Deno.test("merged tails of parts equal the tails of the whole (property, against
       },
     ),
   );
+});
+
+Deno.test("pool: a worker that dies leaves the pool closed with the reason, never hanging", async () => {
+  const pool = await createMonteCarloPool({ workers: 2, modules: [fixtures] });
+  try {
+    await pool.monteCarlo(crashesLater, { x: normal(1, 0.1) }, { trials: 100 });
+  } catch {
+    // the run itself may finish first or be cut short by the crash
+  }
+  // the crash arrives as an event after the reply: poll until the pool refuses (10 s at most)
+  let refusal: Error | null = null;
+  for (let waited = 0; refusal === null && waited < 10_000; waited += 50) {
+    await new Promise((resolve) => setTimeout(resolve, 50));
+    await pool.monteCarlo(inverseRoot, { x: normal(5, 0.1) }, { trials: 1000 }).catch((e) => {
+      refusal = e as Error;
+    });
+  }
+  assert.match(
+    String((refusal as Error | null)?.message),
+    /Monte Carlo pool: a worker failed.*uncaught in the test fixture/,
+  );
+  await assert.rejects(() => pool.monteCarlo(inverseRoot, { x: normal(5, 0.1) }), {
+    message:
+      /Monte Carlo pool: a worker failed \(.*uncaught in the test fixture.*\); create a new pool/,
+  });
+  pool.close(); // closing again is harmless
 });
