@@ -12,6 +12,7 @@ import { JUPYTER_DISPLAY, type MimeBundle } from "../core/display.ts";
 import type { Correlations } from "./correlation.ts";
 import { type PreparedInputs, prepareInputs, type UncertainInputs } from "./prepare.ts";
 import { checkSeed } from "./random.ts";
+import { sortFloat64 } from "./sort.ts";
 import { blockCount, range, runBlocks, type TrialPlan, trialPlan } from "./trials.ts";
 import { checkCoverage, type GumResult } from "./gum.ts";
 import { numericalTolerance } from "./rounding.ts";
@@ -166,7 +167,7 @@ export function sortedTails(
 ): { low: Float64Array; high: Float64Array } {
   const m = values.length;
   if (2 * count >= m) {
-    const all = values.slice().sort();
+    const all = sortFloat64(values.slice());
     return { low: all.subarray(0, count), high: all.subarray(Math.max(0, m - count)) };
   }
   let min = Infinity, max = -Infinity;
@@ -194,8 +195,8 @@ export function sortedTails(
     if (b <= lowCut) low[nl++] = v;
     if (b >= highCut) high[nh++] = v;
   }
-  low.sort();
-  high.sort();
+  sortFloat64(low);
+  sortFloat64(high);
   return { low: low.subarray(0, count), high: high.subarray(highTotal - count) };
 }
 

@@ -59,6 +59,8 @@ export interface MonteCarloPool {
 
 /** Sequences of the adaptive procedure sent to each worker per round. */
 const SEQUENCES_PER_WORKER = 4;
+/** Rounds of sequences the adaptive procedure keeps in flight. */
+const ROUNDS_IN_FLIGHT = 2;
 
 type Done = Extract<WorkerReply, { type: "done" }>;
 
@@ -281,26 +283,41 @@ export async function createMonteCarloPool(
       const state = adaptiveRun(calc, inputs, runOptions);
       const m = state.trialsPerSequence;
       const blocks = range(blockCount(m));
+      // rounds of sequences; the next round is sent before this one is taken, so that the
+      // workers never wait for the main thread (a round past the stopping point is discarded)
+      const lastSequence = state.sequences + state.sequencesLeft; // the trial limit's
+      let next = state.sequences;
+      const inFlight: { shares: WorkerTask[][]; replies: Promise<Done[]> }[] = [];
+      const send = () => {
+        while (inFlight.length < ROUNDS_IN_FLIGHT && next < lastSequence) {
+          const batch = Math.min(count * SEQUENCES_PER_WORKER, lastSequence - next);
+          const first = next;
+          const tasks: WorkerTask[] = range(batch).map((i) => ({
+            key: [state.seed, first + i],
+            m,
+            blocks,
+          }));
+          const shares = split(tasks, count);
+          const replies = dispatch(
+            calc as unknown as Calculation,
+            state.plan,
+            shares,
+            state.coverage,
+            null,
+          );
+          replies.catch(() => {}); // a discarded round may fail unobserved; a taken one rethrows
+          inFlight.push({ shares, replies });
+          next += batch;
+        }
+      };
       while (state.wantsMore()) {
-        const first = state.sequences;
-        const batch = Math.min(count * SEQUENCES_PER_WORKER, state.sequencesLeft);
-        const tasks: WorkerTask[] = range(batch).map((i) => ({
-          key: [state.seed, first + i],
-          m,
-          blocks,
-        }));
-        const shares = split(tasks, count);
-        const replies = await dispatch(
-          calc as unknown as Calculation,
-          state.plan,
-          shares,
-          state.coverage,
-          null,
-        );
+        send();
+        const round = inFlight.shift()!;
+        const replies = await round.replies;
         // take the sequences in order until the procedure stops
         let stopped = false;
         for (const [w, reply] of replies.entries()) {
-          for (let t = 0; t < shares[w]!.length; t++) {
+          for (let t = 0; t < round.shares[w]!.length; t++) {
             if (t === reply.failedTask) throw rebuild(reply.error!);
             const sequence: SequenceRun = {
               results: reply.results[t]! as Float64Array[],
