@@ -12,7 +12,7 @@
  * is absent the comparison is skipped with a clear message and the sonorigor times are still
  * printed.
  *
- * Run: deno run -A bench/compare-numpy.ts [--runs 5] [--write]
+ * Run: deno run -A bench/compare-numpy.ts [--runs 15] [--write]
  *
  * @module
  */
@@ -30,7 +30,7 @@ import { continuityInputs, continuityWithJetAngle, tenInputModel, tenUncertain }
 
 const { values: args } = parseArgs({
   options: {
-    runs: { type: "string", default: "5" },
+    runs: { type: "string", default: "15" },
     write: { type: "boolean", default: false },
     "memory-probe": { type: "boolean", default: false },
     pool: { type: "boolean", default: false },
@@ -220,7 +220,7 @@ const report = [
   `Medians of ${runs} runs (range in brackets); ratio = sonorigor median / numpy median (below 1 is ` +
   "faster).",
   "",
-  "Reproduce: `npx -y deno@2.9.6 run -A bench/compare-numpy.ts --runs 9 --write` (or `deno task bench`)",
+  "Reproduce: `npx -y deno@2.9.6 run -A bench/compare-numpy.ts --runs 15 --write` (or `deno task bench`)",
   "",
   "| model | sonorigor | numpy | ratio | target |",
   "| --- | --- | --- | --- | --- |",
