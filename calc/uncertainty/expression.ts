@@ -9,6 +9,9 @@ import { defineCalculation } from "../core/define.ts";
 import type { Calculation, InputDefinition, InputValues, Reference } from "../core/types.ts";
 import { math } from "../core/units.ts";
 
+/** The id every expression model carries (they are made at run time, not exported by a module). */
+export const EXPRESSION_MODEL_ID = "expressionModel";
+
 /** Options of {@linkcode expressionModel}. */
 export interface ExpressionModelSpec<I extends string, O extends string> {
   /** The model as a mathjs expression over the input names, e.g. "4 * v^2". Angles inside
@@ -107,7 +110,7 @@ export function expressionModel<I extends string, O extends string>(
   };
   const out = spec.output.name;
   return defineCalculation<I, O>({
-    id: "expressionModel",
+    id: EXPRESSION_MODEL_ID,
     title,
     description: `User model ${spec.output.name} = ${spec.expression}`,
     inputs: spec.inputs,

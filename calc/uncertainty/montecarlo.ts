@@ -100,10 +100,11 @@ function checkTrials(trials: number, coverage: number, where: string): number {
   if (!(Number.isInteger(trials) && trials >= 2)) {
     throw new RangeError(`${where}: expected trials to be an integer >= 2, got ${trials}`);
   }
-  if (trials < 1 / (1 - coverage)) {
+  // M ≥ 1/(1 − p), with a margin for the rounding of 1 − p (p = 0.9999 allows M = 10⁴)
+  if (trials * (1 - coverage) < 1 - 1e-9) {
     throw new RangeError(
       `${where}: expected at least 1/(1 − p) = ${
-        Math.ceil(1 / (1 - coverage))
+        Math.ceil(1 / (1 - coverage) - 1e-6)
       } trials for coverage ${coverage}, got ${trials}`,
     );
   }
@@ -158,29 +159,36 @@ export function meanAndStandardDeviation(values: Float64Array): { mean: number; 
 /**
  * The `count` smallest and the `count` largest values of `values`, each sorted ascending, without
  * sorting the whole array: one pass finds the range, one builds a value histogram that locates
- * both tails, one copies the tails, and only they are sorted. Exact for any data (ties and heavy
- * tails only enlarge the copied part). When `count` ≥ the number of values, both are all of them.
+ * both tails, one copies the tails, and only they are sorted. Exact for any data without NaN: ties
+ * and heavy tails only enlarge the copied part; data the histogram cannot split (one value, zeros
+ * of both signs only, a spread beyond the double range) is sorted whole. When `count` ≥ the number
+ * of values, both are all of them.
  */
 export function sortedTails(
   values: Float64Array,
   count: number,
 ): { low: Float64Array; high: Float64Array } {
   const m = values.length;
-  if (2 * count >= m) {
-    const all = sortFloat64(values.slice());
-    return { low: all.subarray(0, count), high: all.subarray(Math.max(0, m - count)) };
-  }
   let min = Infinity, max = -Infinity;
-  for (let r = 0; r < m; r++) {
-    const v = values[r]!;
-    if (v < min) min = v;
-    if (v > max) max = v;
-  }
-  if (min === max) {
-    return { low: new Float64Array(count).fill(min), high: new Float64Array(count).fill(min) };
+  if (2 * count < m) {
+    for (let r = 0; r < m; r++) {
+      const v = values[r]!;
+      if (v < min) min = v;
+      if (v > max) max = v;
+    }
+    // one repeated value (signed zeros aside: −0 === +0 but they sort apart)
+    if (min === max && min !== 0) {
+      return { low: new Float64Array(count).fill(min), high: new Float64Array(count).fill(min) };
+    }
   }
   const bins = 4096;
   const scale = bins / (max - min);
+  // the histogram needs a finite, non-zero spread: otherwise (short arrays, zeros only, spreads
+  // beyond the double range or below its resolution) sort everything
+  if (2 * count >= m || !(max > min) || !Number.isFinite(max - min) || !Number.isFinite(scale)) {
+    const all = sortFloat64(values.slice());
+    return { low: all.subarray(0, count), high: all.subarray(Math.max(0, m - count)) };
+  }
   const counts = new Uint32Array(bins);
   for (let r = 0; r < m; r++) counts[Math.min(bins - 1, Math.floor((values[r]! - min) * scale))]!++;
   let lowCut = 0, lowTotal = 0;
@@ -273,7 +281,9 @@ export function mergeTails(
     for (let j = 0; j < count; j++) {
       let best = -1;
       parts.forEach((p, i) => {
-        if (at[i]! < p.length && (best < 0 || p[at[i]!]! < parts[best]![at[best]!]!)) best = i;
+        if (at[i]! < p.length && (best < 0 || sortsBefore(p[at[i]!]!, parts[best]![at[best]!]!))) {
+          best = i;
+        }
       });
       out[j] = parts[best]![at[best]!++]!;
     }
@@ -281,12 +291,19 @@ export function mergeTails(
     for (let j = count - 1; j >= 0; j--) {
       let best = -1;
       parts.forEach((p, i) => {
-        if (at[i]! >= 0 && (best < 0 || p[at[i]!]! > parts[best]![at[best]!]!)) best = i;
+        if (at[i]! >= 0 && (best < 0 || sortsBefore(parts[best]![at[best]!]!, p[at[i]!]!))) {
+          best = i;
+        }
       });
       out[j] = parts[best]![at[best]!--]!;
     }
   }
   return out;
+}
+
+/** The order of `Float64Array.prototype.sort`: numeric, with −0 before +0. */
+function sortsBefore(a: number, b: number): boolean {
+  return a < b || (a === 0 && b === 0 && Object.is(a, -0) && !Object.is(b, -0));
 }
 
 /** The `count` smallest and largest of each output, when already known (e.g. merged from the
@@ -360,8 +377,9 @@ function summarise<I extends string, O extends string>(
  *
  * @param calc The calculation.
  * @param inputs Uncertain inputs by name (plain values are exact).
- * @param options Trials, seed, coverage probability, correlations.
- * @returns Estimates, uncertainties, intervals and (sorted) samples per output.
+ * @param options Trials, seed, coverage probability, correlations, whether to keep the samples.
+ * @returns Estimates, uncertainties, intervals and (unless `keepSamples` is false) the samples in
+ * trial order, per output.
  * @throws {TypeError} For unknown or missing inputs, wrong units, or correlation involving a
  * non-normal input.
  * @throws {RangeError} For bad trials, seed, coverage, uncertainties, or a non-finite model value.
@@ -458,7 +476,8 @@ export interface AdaptiveOptions {
   readonly coverage?: number;
   /** Correlations between (normal) inputs. */
   readonly correlations?: Correlations;
-  /** Upper limit on the total number of trials. @default 50_000_000 */
+  /** Upper limit on the total number of trials, an integer of at least two sequences (2·M).
+   * @default 50_000_000 */
   readonly maxTrials?: number;
 }
 
@@ -578,11 +597,18 @@ export function adaptiveRun<I extends string, O extends string>(
       `${calc.title}: expected significantDigits as an integer in [1, 4], got ${digits}`,
     );
   }
+  const m = Math.max(Math.ceil(100 / (1 - coverage)), 10_000);
   const maxTrials = options.maxTrials ?? 50_000_000;
+  if (!(Number.isInteger(maxTrials) && maxTrials >= 2 * m)) {
+    throw new RangeError(
+      `${calc.title}: expected maxTrials to be an integer >= ${
+        2 * m
+      } (two sequences of M = ${m} trials, JCGM 101 §7.9), got ${maxTrials}`,
+    );
+  }
   const seed = checkSeed(options.seed ?? DEFAULT_SEED);
   const prepared = prepareInputs(calc, inputs, options.correlations);
   const plan = trialPlan(prepared as unknown as PreparedInputs<string>, calc.title);
-  const m = Math.max(Math.ceil(100 / (1 - coverage)), 10_000);
   const outs = calc.outputNames;
   const batches: Float64Array[][] = [];
   const seqStats = outs.map(() => ({

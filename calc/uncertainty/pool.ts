@@ -21,12 +21,13 @@ import {
   type SequenceRun,
 } from "./montecarlo.ts";
 import type { UncertainInputs } from "./prepare.ts";
+import { EXPRESSION_MODEL_ID } from "./expression.ts";
 import { BLOCK_TRIALS, blockCount, range, type TrialPlan } from "./trials.ts";
 import type { WorkerReply, WorkerRequest, WorkerTask } from "./worker.ts";
 
 /** Options of {@linkcode createMonteCarloPool}. */
 export interface MonteCarloPoolOptions {
-  /** Number of workers, an integer in [1, 64]. @default navigator.hardwareConcurrency */
+  /** Number of workers, an integer in [1, 64]. @default navigator.hardwareConcurrency (at most 64) */
   readonly workers?: number;
   /** Absolute URLs of modules whose exported calculations the workers may run, besides the
    * package's own (mod.ts). A calculation defined in a notebook cell cannot run in a worker:
@@ -96,9 +97,10 @@ class PoolWorker {
     });
   }
 
-  terminate(): void {
+  /** Stops the worker; requests still waiting are refused with `reason`. */
+  terminate(reason: string): void {
     this.#worker.terminate();
-    const error = new Error("Monte Carlo pool: the pool was closed during the run");
+    const error = new Error(reason);
     for (const waiting of this.#pending.values()) waiting.reject(error);
     this.#pending.clear();
   }
@@ -154,7 +156,7 @@ function split<T>(items: readonly T[], parts: number): T[][] {
 export async function createMonteCarloPool(
   options: MonteCarloPoolOptions = {},
 ): Promise<MonteCarloPool> {
-  const count = options.workers ?? navigator.hardwareConcurrency ?? 1;
+  const count = options.workers ?? Math.min(64, navigator.hardwareConcurrency ?? 1);
   if (!(Number.isInteger(count) && count >= 1 && count <= 64)) {
     throw new RangeError(
       `Monte Carlo pool: expected workers to be an integer in [1, 64], got ${count}`,
@@ -174,16 +176,17 @@ export async function createMonteCarloPool(
   }
   let closed = false;
   let failure: string | null = null;
-  const close = () => {
+  const stop = (reason: string) => {
     if (closed) return;
     closed = true;
-    workers.forEach((w) => w.terminate());
+    workers.forEach((w) => w.terminate(reason));
   };
+  const close = () => stop("Monte Carlo pool: the pool was closed during the run");
   // a worker that died leaves the pool unusable: stop the others, refuse later calls
   const workers = range(count).map(() =>
     new PoolWorker((message) => {
       failure ??= message;
-      close();
+      stop(`Monte Carlo pool: a worker failed (${message}); create a new pool`);
     })
   );
   try {
@@ -194,15 +197,21 @@ export async function createMonteCarloPool(
     );
     const failed = loaded.find((r) => r.error);
     if (failed?.error) {
-      throw new TypeError(
-        `Monte Carlo pool: a module failed to load in a worker: ${failed.error.message}`,
-      );
+      throw new TypeError(`Monte Carlo pool: ${failed.error.message}`);
     }
   } catch (e) {
     close();
     throw e;
   }
 
+  /** Refuses what the workers cannot run, before any work is sent. */
+  const checkRunnable = (calc: Calculation) => {
+    if (calc.id === EXPRESSION_MODEL_ID) {
+      throw new TypeError(
+        `Monte Carlo pool: expression models need mathjs, which workers do not load; run '${calc.title}' with monteCarlo or monteCarloAdaptive on this thread`,
+      );
+    }
+  };
   const ensureOpen = () => {
     if (failure !== null) {
       throw new Error(`Monte Carlo pool: a worker failed (${failure}); create a new pool`);
@@ -240,6 +249,7 @@ export async function createMonteCarloPool(
       runOptions: MonteCarloOptions = {},
     ): Promise<MonteCarloResult<O>> {
       ensureOpen();
+      checkRunnable(calc as unknown as Calculation);
       const run = monteCarloRun(calc, inputs, runOptions);
       const m = run.trials;
       const shares = split(range(blockCount(m)), count).map((blocks) => [
@@ -280,6 +290,7 @@ export async function createMonteCarloPool(
       runOptions: AdaptiveOptions = {},
     ): Promise<AdaptiveResult<O>> {
       ensureOpen();
+      checkRunnable(calc as unknown as Calculation);
       const state = adaptiveRun(calc, inputs, runOptions);
       const m = state.trialsPerSequence;
       const blocks = range(blockCount(m));

@@ -4,8 +4,9 @@
  * The generator is the Mersenne Twister MT19937 (Matsumoto & Nishimura 1998) from the well-kept
  * `pure-rand` package. On top of it:
  *
- * - uniform: 53-bit doubles from two 32-bit draws (the genrand_res53 construction of the MT
- *   reference code), on the open interval (0, 1);
+ * - uniform: (k + ½)/2⁵² with k a 52-bit integer from two 32-bit draws, strictly inside (0, 1):
+ *   from 2⁻⁵³ to 1 − 2⁻⁵³. (The reference `genrand_res53` gives [0, 1); adding ½ to its 53 bits
+ *   would avoid 0 but can round up to exactly 1, so one bit fewer keeps the interval open.)
  * - normal: the ziggurat method of Marsaglia & Tsang (2000, J Stat Softw 5(8)) in the improved form
  *   of Doornik (2005, "An Improved Ziggurat Method to Generate Normal Random Samples"): 128 layers,
  *   a 53-bit uniform for the abscissa and separate bits for the layer, exact tail sampling. It is
@@ -30,7 +31,7 @@ export interface RandomStream {
   readonly seed: number | readonly number[];
   /** The next raw 32-bit word of the generator, in [0, 2³² − 1]. */
   uint32(): number;
-  /** Uniform on the open interval (0, 1), 53-bit resolution. */
+  /** Uniform strictly inside (0, 1), 52-bit resolution: from 2⁻⁵³ to 1 − 2⁻⁵³. */
   uniform(): number;
   /** Standard normal. */
   normal(): number;
@@ -59,24 +60,33 @@ const ZIG_RATIO = new Float64Array(LAYERS);
   for (let i = 0; i < LAYERS; i++) ZIG_RATIO[i] = ZIG_X[i + 1]! / ZIG_X[i]!;
 }
 const TWO_POW_26 = 67108864;
+const TWO_POW_52 = 4503599627370496;
 const TWO_POW_53 = 9007199254740992;
 
 /** The 32-bit generator behind a stream (pure-rand's MT19937). */
 type Generator32 = ReturnType<typeof mersenne>;
 
-/** Uniform on (0, 1) with 53-bit resolution from two 32-bit draws (genrand_res53 construction). */
-function uniform53(mt: Generator32): number {
-  const a = mt.next() >>> 5;
-  const b = mt.next() >>> 6;
-  return (a * TWO_POW_26 + b + 0.5) / TWO_POW_53;
+/** (k + ½)/2⁵² for the 52-bit integer k made of the high 26 bits of two 32-bit words: strictly
+ * inside (0, 1), from 2⁻⁵³ to 1 − 2⁻⁵³ (every value exact in double precision).
+ *
+ * @param a First word (any 32-bit integer, signed or not).
+ * @param b Second word.
+ */
+export function uniformFromWords(a: number, b: number): number {
+  return ((a >>> 6) * TWO_POW_26 + (b >>> 6) + 0.5) / TWO_POW_52;
+}
+
+/** Uniform strictly inside (0, 1) from the next two words of the stream. */
+function uniformOpen(mt: Generator32): number {
+  return uniformFromWords(mt.next(), mt.next());
 }
 
 /** Exact sampling of the normal tail beyond R (Marsaglia 1964, as used by Doornik 2005). */
 function tail(mt: Generator32, negative: boolean): number {
   let x: number, y: number;
   do {
-    x = Math.log(uniform53(mt)) / R;
-    y = Math.log(uniform53(mt));
+    x = Math.log(uniformOpen(mt)) / R;
+    y = Math.log(uniformOpen(mt));
   } while (-2 * y < x * x);
   return negative ? x - R : R - x;
 }
@@ -87,7 +97,7 @@ function slowNormal(mt: Generator32, u: number, i: number): number {
   const x = u * ZIG_X[i]!;
   const f0 = Math.exp(-0.5 * (ZIG_X[i]! * ZIG_X[i]! - x * x));
   const f1 = Math.exp(-0.5 * (ZIG_X[i + 1]! * ZIG_X[i + 1]! - x * x));
-  return f1 + uniform53(mt) * (f0 - f1) < 1 ? x : normal(mt);
+  return f1 + uniformOpen(mt) * (f0 - f1) < 1 ? x : normal(mt);
 }
 
 /** One standard normal draw: improved ziggurat (Doornik 2005), 128 layers. */
@@ -117,8 +127,8 @@ function fillNormal(mt: Generator32, out: Float64Array, mean: number, sd: number
 /** Standard Student t by Bailey's polar method (Bailey 1994). */
 function studentT(mt: Generator32, dof: number): number {
   for (;;) {
-    const u = 2 * uniform53(mt) - 1;
-    const v = 2 * uniform53(mt) - 1;
+    const u = 2 * uniformOpen(mt) - 1;
+    const v = 2 * uniformOpen(mt) - 1;
     const w = u * u + v * v;
     if (w <= 1 && w > 0) return u * Math.sqrt((dof * (w ** (-2 / dof) - 1)) / w);
   }
@@ -215,12 +225,12 @@ export function randomStream(seed: number | readonly number[]): RandomStream {
   return {
     seed,
     uint32: () => mt.next() >>> 0,
-    uniform: () => uniform53(mt),
+    uniform: () => uniformOpen(mt),
     normal: () => normal(mt),
     studentT: (dof: number) => studentT(mt, dof),
     fillNormal: (out: Float64Array, mean = 0, sd = 1) => fillNormal(mt, out, mean, sd),
     fillUniform(out: Float64Array): void {
-      for (let r = 0; r < out.length; r++) out[r] = uniform53(mt);
+      for (let r = 0; r < out.length; r++) out[r] = uniformOpen(mt);
     },
   };
 }

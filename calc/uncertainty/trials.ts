@@ -10,8 +10,8 @@
  * index: blocks can run in any order, on the main thread or on any number of workers, and give the
  * same result bit for bit.
  *
- * Shared by {@linkcode monteCarlo} and the worker pool; free of unit handling so that a worker can
- * load it without mathjs.
+ * Shared by {@linkcode monteCarlo} and the worker pool. It converts no units: inputs arrive
+ * resolved to canonical numbers, so a worker (where calc/core/units.ts skips mathjs) can run it.
  *
  * @module
  */

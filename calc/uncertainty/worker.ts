@@ -1,8 +1,8 @@
 /**
  * The Monte Carlo worker behind {@linkcode createMonteCarloPool}: loads the modules that export
- * calculations, then draws and evaluates the blocks of trials it is sent, writing model values
- * straight into shared output columns. It runs the same trial engine (trials.ts) as the main
- * thread, so a block's values do not depend on where it runs.
+ * calculations, then draws and evaluates the blocks of trials it is sent and transfers the model
+ * values back (with each part's tails, or each sequence's statistics). It runs the same trial
+ * engine (trials.ts) as the main thread, so a block's values do not depend on where it runs.
  *
  * The worker never handles units: it marks itself formula-only before loading any module of the
  * package, which then skips loading mathjs (calc/core/units.ts).
@@ -35,7 +35,8 @@ export type WorkerRequest =
     readonly tasks: readonly WorkerTask[];
     /** When set, also return each task's sequence statistics at this coverage probability. */
     readonly coverage: number | null;
-    /** When set, also return the this many smallest and largest values of each output. */
+    /** When set, also return this many of the smallest and of the largest values of each
+     * output. */
     readonly tailSize: number | null;
   };
 
@@ -81,9 +82,22 @@ function isCalculation(value: unknown): value is Calculation {
 
 async function load(modules: readonly string[]): Promise<string[]> {
   for (const url of modules) {
-    const module = await import(url);
+    let module: Record<string, unknown>;
+    try {
+      module = await import(url);
+    } catch (e) {
+      throw new TypeError(`module ${url} failed to load in a worker: ${plain(e).message}`);
+    }
     for (const value of Object.values(module)) {
-      if (isCalculation(value)) calculations.set(value.id, value);
+      if (!isCalculation(value)) continue;
+      const known = calculations.get(value.id);
+      // the same object exported twice is fine; two calculations under one id are not
+      if (known && known !== value) {
+        throw new TypeError(
+          `two different calculations share the id '${value.id}' (the second in ${url}); give each its own id`,
+        );
+      }
+      calculations.set(value.id, value);
     }
   }
   return [...calculations.keys()];

@@ -140,3 +140,38 @@ Deno.test("Monte Carlo: draws outside an input's valid range are reported", () =
   const r = monteCarlo(sq, { x: normal(0.1, 0.1) }, { trials: 10_000, seed: 3 });
   assert.ok(r.warnings.some((w) => /draws of 'x' fell outside its valid range \[0, 10\]/.test(w)));
 });
+
+Deno.test("adaptive Monte Carlo: a trial limit below two sequences is refused with the limit shown", () => {
+  // JCGM 101:2008 §7.9.4: M = max(⌈100/(1 − p)⌉, 10⁴) trials per sequence and h ≥ 2 sequences
+  for (const maxTrials of [5000, 19_999, NaN, -1, 25_000.5]) {
+    assert.throws(
+      () => monteCarloAdaptive(additive, { x1: normal(0, 1), x2: 0, x3: 0, x4: 0 }, { maxTrials }),
+      {
+        name: "RangeError",
+        message: new RegExp(
+          `expected maxTrials to be an integer >= 20000 \\(two sequences of M = 10000 trials, JCGM 101 §7\\.9\\), got ${maxTrials}`,
+        ),
+      },
+    );
+  }
+  const r = monteCarloAdaptive(additive, { x1: normal(0, 1), x2: 0, x3: 0, x4: 0 }, {
+    maxTrials: 20_000,
+    significantDigits: 4,
+  });
+  assert.equal(r.trials, 20_000);
+  assert.equal(r.stabilized, false);
+});
+
+Deno.test("Monte Carlo: M ≥ 1/(1 − p) holds at the boundary despite the rounding of 1 − p", () => {
+  // JCGM 101:2008 §7.2.1: M should be at least 1/(1 − p); for p = 0.9999 that is 10⁴ exactly,
+  // though 1/(1 − 0.9999) evaluates to 10000.0000000011 in double precision (Node.js check)
+  const inputs = { x1: normal(0, 1), x2: 0, x3: 0, x4: 0 };
+  assert.equal(
+    monteCarlo(additive, inputs, { trials: 10_000, coverage: 0.9999, seed: 1 }).trials,
+    10_000,
+  );
+  assert.throws(() => monteCarlo(additive, inputs, { trials: 9_999, coverage: 0.9999, seed: 1 }), {
+    name: "RangeError",
+    message: /expected at least 1\/\(1 − p\) = 10000 trials for coverage 0\.9999, got 9999/,
+  });
+});

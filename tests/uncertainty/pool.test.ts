@@ -5,6 +5,7 @@ import {
   continuityValveArea,
   createMonteCarloPool,
   defineCalculation,
+  expressionModel,
   monteCarlo,
   monteCarloAdaptive,
   type MonteCarloResult,
@@ -16,7 +17,7 @@ import {
 import { mergeTails, sortedTails } from "../../calc/uncertainty/montecarlo.ts";
 import { monteCarloRun } from "../../calc/uncertainty/montecarlo.ts";
 import { BLOCK_TRIALS, range, runBlocks } from "../../calc/uncertainty/trials.ts";
-import { crashesLater, inverseRoot, sumAndProduct } from "./fixtures/pool-models.ts";
+import { crashesLater, inverseRoot, rounded, sumAndProduct } from "./fixtures/pool-models.ts";
 
 const fixtures = new URL("./fixtures/pool-models.ts", import.meta.url);
 
@@ -116,6 +117,48 @@ Deno.test("pool: a non-finite model value is the same error as on one thread", a
   });
 });
 
+Deno.test("pool: ties and zeros of both signs: same intervals as one thread, −0 included", async () => {
+  // y = round(x) has many ties and gives −0 for x in (−0.5, −0]; the merged tails must keep the
+  // order of a full sort (−0 before +0), as monteCarlo does
+  using pool = await createMonteCarloPool({ workers: 2, modules: [fixtures] });
+  for (const coverage of [0.4, 0.95]) {
+    const options = { trials: 262_144, seed: 3, coverage };
+    const inputs = { x: normal(0.45, 0.3) };
+    assertSameResult(
+      await pool.monteCarlo(rounded, inputs, options),
+      monteCarlo(rounded, inputs, options),
+    );
+  }
+});
+
+Deno.test("pool: concurrent runs give the results of sequential runs", async () => {
+  using pool = await createMonteCarloPool({ workers: 2, modules: [fixtures] });
+  const a = { ...mixedOptions, seed: 1 }, b = { ...mixedOptions, seed: 2 };
+  const [ra, rb, rc] = await Promise.all([
+    pool.monteCarlo(sumAndProduct, mixedInputs, a),
+    pool.monteCarlo(sumAndProduct, mixedInputs, b),
+    pool.monteCarloAdaptive(sumAndProduct, mixedInputs, { seed: 3, significantDigits: 1 }),
+  ]);
+  assertSameResult(ra, monteCarlo(sumAndProduct, mixedInputs, a));
+  assertSameResult(rb, monteCarlo(sumAndProduct, mixedInputs, b));
+  assertSameResult(
+    rc,
+    monteCarloAdaptive(sumAndProduct, mixedInputs, { seed: 3, significantDigits: 1 }),
+  );
+});
+
+Deno.test("pool: closing during a run refuses the run with that reason", async () => {
+  const pool = await createMonteCarloPool({ workers: 2, modules: [fixtures] });
+  const running = pool.monteCarlo(sumAndProduct, mixedInputs, {
+    ...mixedOptions,
+    trials: 2_000_000,
+  });
+  pool.close();
+  await assert.rejects(() => running, {
+    message: "Monte Carlo pool: the pool was closed during the run",
+  });
+});
+
 Deno.test("pool: calculations the workers cannot load, and misuse, are clear errors", async () => {
   await assert.rejects(() => createMonteCarloPool({ workers: 0 }), {
     name: "RangeError",
@@ -125,15 +168,29 @@ Deno.test("pool: calculations the workers cannot load, and misuse, are clear err
     name: "TypeError",
     message: /expected modules as absolute URLs .* got '\.\/relative\.ts'/,
   });
+  const missing = new URL("./fixtures/missing.ts", import.meta.url);
+  await assert.rejects(() => createMonteCarloPool({ workers: 1, modules: [missing] }), {
+    name: "TypeError",
+    message: new RegExp(`^Monte Carlo pool: module ${missing.href} failed to load in a worker`),
+  });
   await assert.rejects(
     () =>
       createMonteCarloPool({
         workers: 1,
-        modules: [new URL("./fixtures/missing.ts", import.meta.url)],
+        modules: [fixtures, new URL("./fixtures/pool-duplicate-id.ts", import.meta.url)],
       }),
-    { name: "TypeError", message: /a module failed to load in a worker/ },
+    { name: "TypeError", message: /two different calculations share the id 'testPoolInverseRoot'/ },
   );
-  const pool = await createMonteCarloPool({ workers: 1, modules: [fixtures] });
+  using pool = await createMonteCarloPool({ workers: 1, modules: [fixtures] });
+  const model = expressionModel({
+    expression: "2 * x",
+    inputs: { x: { unit: "1", description: "x", range: { min: -10, max: 10 } } },
+    output: { name: "y", unit: "1", description: "y" },
+  });
+  await assert.rejects(() => pool.monteCarlo(model, { x: normal(1, 0.1) }, { trials: 1000 }), {
+    name: "TypeError",
+    message: /expression models need mathjs, which workers do not load; run '.*' with monteCarlo/,
+  });
   const local = defineCalculation({ ...inverseRoot, id: "testPoolLocalOnly" });
   await assert.rejects(() => pool.monteCarlo(local, { x: normal(5, 0.1) }, { trials: 1000 }), {
     name: "TypeError",
@@ -155,6 +212,7 @@ Deno.test("pool: calculations the workers cannot load, and misuse, are clear err
   await assert.rejects(() => pool.monteCarlo(inverseRoot, { x: normal(5, 0.1) }), {
     message: "Monte Carlo pool: the pool is closed; create a new one",
   });
+  pool.close(); // closing twice is harmless
 });
 
 Deno.test("trial blocks: any order of blocks gives the same values (stream per block)", () => {
@@ -208,7 +266,7 @@ Deno.test("merged tails of parts equal the tails of the whole (property, against
 });
 
 Deno.test("pool: a worker that dies leaves the pool closed with the reason, never hanging", async () => {
-  const pool = await createMonteCarloPool({ workers: 2, modules: [fixtures] });
+  using pool = await createMonteCarloPool({ workers: 2, modules: [fixtures] });
   try {
     await pool.monteCarlo(crashesLater, { x: normal(1, 0.1) }, { trials: 100 });
   } catch {

@@ -8,6 +8,7 @@ import {
   randomStream,
   tCdf,
 } from "../../mod.ts";
+import { uniformFromWords } from "../../calc/uncertainty/random.ts";
 
 const N = 200_000;
 
@@ -76,6 +77,15 @@ Deno.test("ziggurat normals: the tail beyond 3.44 (bottom layer) has the right m
   assert.ok(Math.abs(beyond - expected) < 5 * Math.sqrt(expected), `${beyond} vs ${expected}`);
 });
 
+Deno.test("uniform construction: the extreme words give 2^-53 and 1 - 2^-53, never 0 or 1", () => {
+  // IEEE 754 double arithmetic (hand check): (0 + 0.5)/2^52 = 2^-53 and (2^52 - 1 + 0.5)/2^52 =
+  // 1 - 2^-53, both exact; signed and unsigned 32-bit words give the same value
+  assert.equal(uniformFromWords(0, 0), 2 ** -53);
+  assert.equal(uniformFromWords(0xffffffff, 0xffffffff), 1 - 2 ** -53);
+  assert.equal(uniformFromWords(-1, -1), 1 - 2 ** -53);
+  assert.ok(uniformFromWords(-1, -1) < 1);
+});
+
 Deno.test("uniform draws: open interval (0, 1), KS against U(0, 1)", () => {
   const u = new Float64Array(N);
   randomStream(9).fillUniform(u);
@@ -120,6 +130,39 @@ Deno.test("coverage intervals from tails equal those from a full sort (property)
   );
 });
 
+Deno.test("coverage intervals: data the histogram cannot split give the full-sort answer", () => {
+  // reference: JCGM 101:2008 §7.7 applied to a fully sorted copy (Float64Array.prototype.sort)
+  const bySort = (a: Float64Array, p: number) => {
+    const s = a.slice().sort();
+    const m = s.length, q = Math.min(m - 1, Math.floor(p * m + 0.5));
+    const r = Number.isInteger((m - q) / 2) ? (m - q) / 2 : (m - q + 1) / 2;
+    return [s[r - 1], s[r + q - 1]];
+  };
+  const show = (v: readonly (number | undefined)[]) =>
+    v.map((x) => (Object.is(x, -0) ? "-0" : String(x)));
+  const cases = {
+    "spread below the double resolution": Float64Array.from(
+      { length: 1000 },
+      (_, i) => (i % 2 ? 5e-324 : 0),
+    ),
+    "spread beyond the double range": Float64Array.from(
+      { length: 1000 },
+      (_, i) => (i % 2 ? 1e308 : -1e308),
+    ),
+    "zeros of both signs": Float64Array.from({ length: 1000 }, (_, i) => (i % 3 ? -0 : 0)),
+    "one repeated value": new Float64Array(1000).fill(2.5),
+  };
+  for (const [name, values] of Object.entries(cases)) {
+    for (const p of [0.4, 0.95]) {
+      assert.deepEqual(
+        show(coverageIntervals(values, p).symmetric),
+        show(bySort(values, p)),
+        `${name}, p = ${p}`,
+      );
+    }
+  }
+});
+
 Deno.test("coverage intervals leave their input untouched (frozen copy compared)", () => {
   const a = Float64Array.from({ length: 1000 }, (_, i) => Math.sin(i));
   const before = a.slice();
@@ -141,6 +184,8 @@ Deno.test("MT19937 raw words: reference outputs for a single seed and for a key 
   // numpy 2.4.6, MT19937()._legacy_seeding(key).random_raw(1005): words 1004 and 1005 (past the
   // first refill of the 624-word state)
   assert.deepEqual(words([0x123, 0x234, 0x345, 0x456], 1005).slice(-2), [435643333, 1199718579]);
+  // the same numpy 2.4.6 construction, MT19937()._legacy_seeding(key).random_raw(1005), for a run
+  // seed with a block index and for a three-word key
   assert.deepEqual(words([20080101, 3], 5), [
     3318652550,
     1599953118,
