@@ -10,7 +10,7 @@ import type { Calculation } from "../core/types.ts";
 import { cautionsOf, formatRange } from "../core/define.ts";
 import { JUPYTER_DISPLAY, type MimeBundle } from "../core/display.ts";
 import type { Correlations } from "./correlation.ts";
-import { type PreparedInputs, prepareInputs, type UncertainInputs } from "./prepare.ts";
+import { prepareInputs, type UncertainInputs } from "./prepare.ts";
 import { checkSeed } from "./random.ts";
 import { sortFloat64 } from "./sort.ts";
 import { blockCount, range, runBlocks, type TrialPlan, trialPlan } from "./trials.ts";
@@ -275,28 +275,25 @@ export function mergeTails(
   count: number,
   side: "low" | "high",
 ): Float64Array {
+  // low: take the smallest head first, filling from the front; high: the largest tail first,
+  // filling from the back
+  const low = side === "low";
   const out = new Float64Array(count);
-  const at = parts.map((p) => (side === "low" ? 0 : p.length - 1));
-  if (side === "low") {
-    for (let j = 0; j < count; j++) {
-      let best = -1;
-      parts.forEach((p, i) => {
-        if (at[i]! < p.length && (best < 0 || sortsBefore(p[at[i]!]!, parts[best]![at[best]!]!))) {
-          best = i;
-        }
-      });
-      out[j] = parts[best]![at[best]!++]!;
+  const at = parts.map((p) => (low ? 0 : p.length - 1));
+  const step = low ? 1 : -1;
+  for (let n = 0; n < count; n++) {
+    let best = -1;
+    for (let i = 0; i < parts.length; i++) {
+      const v = parts[i]![at[i]!];
+      if (v === undefined) continue; // this part is used up
+      if (best < 0) best = i;
+      else {
+        const w = parts[best]![at[best]!]!;
+        if (low ? sortsBefore(v, w) : sortsBefore(w, v)) best = i;
+      }
     }
-  } else {
-    for (let j = count - 1; j >= 0; j--) {
-      let best = -1;
-      parts.forEach((p, i) => {
-        if (at[i]! >= 0 && (best < 0 || sortsBefore(parts[best]![at[best]!]!, p[at[i]!]!))) {
-          best = i;
-        }
-      });
-      out[j] = parts[best]![at[best]!--]!;
-    }
+    out[low ? n : count - 1 - n] = parts[best]![at[best]!]!;
+    at[best]! += step;
   }
   return out;
 }
@@ -431,7 +428,7 @@ export function monteCarloRun<I extends string, O extends string>(
   const trials = checkTrials(options.trials ?? DEFAULT_TRIALS, coverage, calc.title);
   const seed = checkSeed(options.seed ?? DEFAULT_SEED);
   const prepared = prepareInputs(calc, inputs, options.correlations);
-  const plan = trialPlan(prepared as unknown as PreparedInputs<string>, calc.title);
+  const plan = trialPlan(prepared, calc.title);
   return {
     coverage,
     trials,
@@ -574,8 +571,8 @@ export interface AdaptiveRun<O extends string> {
   readonly trialsPerSequence: number;
   /** Sequences added so far. */
   readonly sequences: number;
-  /** How many more sequences the trial limit allows. */
-  readonly sequencesLeft: number;
+  /** How many sequences the trial limit allows in all: ⌊maxTrials / M⌋. */
+  readonly maxSequences: number;
   /** True while not stabilised and the trial limit allows another sequence. */
   wantsMore(): boolean;
   /** Adds the next sequence; returns true when every output has stabilised. */
@@ -608,7 +605,8 @@ export function adaptiveRun<I extends string, O extends string>(
   }
   const seed = checkSeed(options.seed ?? DEFAULT_SEED);
   const prepared = prepareInputs(calc, inputs, options.correlations);
-  const plan = trialPlan(prepared as unknown as PreparedInputs<string>, calc.title);
+  const plan = trialPlan(prepared, calc.title);
+  const maxSequences = Math.floor(maxTrials / m);
   const outs = calc.outputNames;
   const batches: Float64Array[][] = [];
   const seqStats = outs.map(() => ({
@@ -676,10 +674,8 @@ export function adaptiveRun<I extends string, O extends string>(
     get sequences() {
       return batches.length;
     },
-    get sequencesLeft() {
-      return stabilized ? 0 : Math.max(0, Math.floor(maxTrials / m) - batches.length);
-    },
-    wantsMore: () => !stabilized && (batches.length + 1) * m <= maxTrials,
+    maxSequences,
+    wantsMore: () => !stabilized && batches.length < maxSequences,
     add,
     finish,
   };

@@ -174,19 +174,24 @@ export async function createMonteCarloPool(
     }
     modules.push(url.href);
   }
-  let closed = false;
-  let failure: string | null = null;
-  const stop = (reason: string) => {
-    if (closed) return;
-    closed = true;
-    workers.forEach((w) => w.terminate(reason));
+  /** Why later calls are refused (null while the pool is open). */
+  let refusal: string | null = null;
+  /** Stops every worker: runs in flight are refused with `during`, later calls with `later`. */
+  const stop = (during: string, later: string) => {
+    if (refusal !== null) return;
+    refusal = later;
+    workers.forEach((w) => w.terminate(during));
   };
-  const close = () => stop("Monte Carlo pool: the pool was closed during the run");
+  const close = () =>
+    stop(
+      "Monte Carlo pool: the pool was closed during the run",
+      "Monte Carlo pool: the pool is closed; create a new one",
+    );
   // a worker that died leaves the pool unusable: stop the others, refuse later calls
   const workers = range(count).map(() =>
     new PoolWorker((message) => {
-      failure ??= message;
-      stop(`Monte Carlo pool: a worker failed (${message}); create a new pool`);
+      const reason = `Monte Carlo pool: a worker failed (${message}); create a new pool`;
+      stop(reason, reason);
     })
   );
   try {
@@ -213,15 +218,13 @@ export async function createMonteCarloPool(
     }
   };
   const ensureOpen = () => {
-    if (failure !== null) {
-      throw new Error(`Monte Carlo pool: a worker failed (${failure}); create a new pool`);
-    }
-    if (closed) throw new Error("Monte Carlo pool: the pool is closed; create a new one");
+    if (refusal !== null) throw new Error(refusal);
   };
 
   /** Sends each worker its tasks (skipping idle workers) and waits for every reply. */
   const dispatch = (
     calc: Calculation,
+    formula: string,
     plan: TrialPlan,
     shares: readonly (readonly WorkerTask[])[],
     coverage: number | null,
@@ -232,7 +235,7 @@ export async function createMonteCarloPool(
         workers[w]!.request<Done>({
           type: "run",
           id: calc.id,
-          formula: calc.formula.toString(),
+          formula,
           plan,
           tasks,
           coverage,
@@ -258,6 +261,7 @@ export async function createMonteCarloPool(
       const tailSize = coverageTailSize(m, run.coverage);
       const replies = await dispatch(
         calc as unknown as Calculation,
+        calc.formula.toString(),
         run.plan,
         shares,
         null,
@@ -294,9 +298,10 @@ export async function createMonteCarloPool(
       const state = adaptiveRun(calc, inputs, runOptions);
       const m = state.trialsPerSequence;
       const blocks = range(blockCount(m));
+      const formula = calc.formula.toString();
       // rounds of sequences; the next round is sent before this one is taken, so that the
       // workers never wait for the main thread (a round past the stopping point is discarded)
-      const lastSequence = state.sequences + state.sequencesLeft; // the trial limit's
+      const lastSequence = state.maxSequences;
       let next = state.sequences;
       const inFlight: { shares: WorkerTask[][]; replies: Promise<Done[]> }[] = [];
       const send = () => {
@@ -311,6 +316,7 @@ export async function createMonteCarloPool(
           const shares = split(tasks, count);
           const replies = dispatch(
             calc as unknown as Calculation,
+            formula,
             state.plan,
             shares,
             state.coverage,

@@ -38,7 +38,7 @@ export interface TrialPlan {
 
 /** The plan of a run: checks that correlated inputs are normal (JCGM 101 §6.4.8) and factors
  * their correlation matrix. */
-export function trialPlan(prepared: PreparedInputs<string>, where: string): TrialPlan {
+export function trialPlan<I extends string>(prepared: PreparedInputs<I>, where: string): TrialPlan {
   const { inputs, correlation, correlated } = prepared;
   if (!correlated) return { inputs, factor: null };
   inputs.forEach((input, i) => {

@@ -67,18 +67,14 @@ const scope = globalThis as unknown as {
   postMessage(message: WorkerReply, transfer?: Transferable[]): void;
   [key: symbol]: unknown;
 };
+// FORMULA_ONLY_WORKER of calc/core/units.ts, set before any module of the package is loaded
+// (importing units.ts to read it would load mathjs)
 scope[Symbol.for("sonorigor.formulaOnlyWorker")] = true;
 const { BLOCK_TRIALS, runBlocks } = await import("./trials.ts");
 const { sequenceStatistics, sortedTails } = await import("./montecarlo.ts");
+const { isCalculation } = await import("../core/define.ts");
 
 const calculations = new Map<string, Calculation>();
-
-function isCalculation(value: unknown): value is Calculation {
-  const v = value as Partial<Calculation> | null;
-  return typeof v === "object" && v !== null && typeof v.id === "string" &&
-    typeof v.formula === "function" && Array.isArray(v.inputNames) &&
-    Array.isArray(v.outputNames);
-}
 
 async function load(modules: readonly string[]): Promise<string[]> {
   for (const url of modules) {
