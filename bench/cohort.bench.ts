@@ -38,7 +38,7 @@ function syntheticRegistry(rows: number): string {
 }
 
 const clinic = await Deno.readTextFile(
-  new URL("../examples/data/pediatric-clinic.csv", import.meta.url),
+  new URL("../examples/data/pediatric_clinic.csv", import.meta.url),
 );
 const registry = syntheticRegistry(1_000_000);
 const registryTable = readCohortCsv(registry, OPTIONS);

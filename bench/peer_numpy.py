@@ -1,4 +1,4 @@
-"""Vectorised numpy peer of the sonorigor benchmark models (bench/compare-numpy.ts runs it).
+"""Vectorised numpy peer of the sonorigor benchmark models (bench/compare_numpy.ts runs it).
 
 Not part of the product: a side-by-side reference implementation for speed comparisons only.
 Prints one JSON object with the timings (seconds) of each repeated run.

@@ -521,7 +521,7 @@ async function main(): Promise<void> {
           title: `Bland–Altman: ${o} − ${reference}`,
         });
         const svg = await chart.toSVG();
-        const file = `bland-altman-${slug(o)}-vs-${slug(reference)}.svg`;
+        const file = `bland_altman_${slug(o)}-vs-${slug(reference)}.svg`;
         charts.push({ file, svg });
         report.figure(
           svg,

@@ -29,7 +29,7 @@ import {
 } from "../mod.ts";
 import { budgetChart, histogramChart, sensitivityChart } from "../plot/mod.ts";
 import { runNotebook } from "../cli/notebooks/runner.ts";
-import { findNotebooks } from "../cli/run-notebooks.ts";
+import { findNotebooks } from "../cli/run_notebooks.ts";
 
 const outDir = Deno.args[0] ?? "out/demo";
 await Deno.mkdir(outDir, { recursive: true });

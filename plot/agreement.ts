@@ -5,7 +5,7 @@
  * @module
  */
 import { Chart } from "./chart.ts";
-import type { BlandAltmanResult } from "../calc/agreement/bland-altman.ts";
+import type { BlandAltmanResult } from "../calc/agreement/bland_altman.ts";
 
 /** Options of {@linkcode blandAltmanChart}. */
 export interface BlandAltmanChartOptions {

@@ -6,7 +6,7 @@
  * @module
  */
 export type { Interval } from "./checks.ts";
-export { nonCentralTCdf, nonCentralTQuantile } from "./noncentral-t.ts";
+export { nonCentralTCdf, nonCentralTQuantile } from "./noncentral_t.ts";
 export {
   blandAltman,
   type BlandAltmanOptions,
@@ -17,7 +17,7 @@ export {
   type BlandAltmanResult,
   type LimitOfAgreement,
   type ProportionalBias,
-} from "./bland-altman.ts";
+} from "./bland_altman.ts";
 export {
   repeatability,
   type RepeatabilityOptions,

@@ -38,7 +38,7 @@ export {
   type SensitivityOptions,
   type SensitivityPoint,
 } from "./sensitivity.ts";
-export { calculationsOf, formatReference, referenceMarkdown } from "./reference-docs.ts";
+export { calculationsOf, formatReference, referenceMarkdown } from "./reference_docs.ts";
 export {
   escapeHtml,
   formatNumber,

@@ -32,7 +32,7 @@ export const DEFAULT_SOUND_SPEED_MPS = 1540;
  *
  * The cosine is @stdlib's JavaScript port of the FreeBSD/fdlibm routine (faithfully rounded, like
  * `Math.cos`, from which it differs by at most 1 ulp): the engine can inline it in Monte Carlo
- * and cohort loops, where it runs about 2.5 times faster than `Math.cos` (bench/ANALYSIS.md). */
+ * and cohort loops, where it runs about 2.5 times faster than `Math.cos` (bench/analysis.md). */
 export function cosDeg(angleDeg: number): number {
   return cosine((angleDeg * Math.PI) / 180);
 }

@@ -5,4 +5,4 @@
  */
 export * from "./adult.ts";
 export * from "./zscore.ts";
-export * from "./zscoreUncertainty.ts";
+export * from "./zscore_uncertainty.ts";

@@ -11,7 +11,7 @@
  *   of Doornik (2005, "An Improved Ziggurat Method to Generate Normal Random Samples"): 128 layers,
  *   a 53-bit uniform for the abscissa and separate bits for the layer, exact tail sampling. It is
  *   written here because the library ziggurat we tried (@stdlib) costs about four times as much
- *   per draw through its wrapper; it is checked in tests/uncertainty/random.test.ts against
+ *   per draw through its wrapper; it is checked in tests/uncertainty/random_test.ts against
  *   reference moments, a Kolmogorov–Smirnov test and a χ² goodness-of-fit test;
  * - Student t: Bailey's polar method (Bailey 1994, Math Comp 62:779–781), exact for any ν > 0.
  *

@@ -4,8 +4,8 @@
  * IEEE 754 bit pattern (sign bit flipped for non-negative values, all bits flipped for negative
  * ones). Same order as `Float64Array.prototype.sort` for values without NaN (−0 before +0), in
  * O(n) instead of O(n log n): about 2.5 times faster on the 50,000-value tails of a 10⁶-trial run
- * (bench/ANALYSIS.md). Checked against `Float64Array.prototype.sort` by property test
- * (tests/uncertainty/sort.test.ts).
+ * (bench/analysis.md). Checked against `Float64Array.prototype.sort` by property test
+ * (tests/uncertainty/sort_test.ts).
  *
  * Internal: not exported from the package.
  *

@@ -42,10 +42,10 @@ const PEDIATRIC_OPTIONS = {
 } as const;
 
 Deno.test("demo pediatric clinic list: every row computed, matching the per-patient path", async () => {
-  // examples/data/pediatric-clinic.csv is INVENTED demo data; the check is that the columnar path
+  // examples/data/pediatric_clinic.csv is INVENTED demo data; the check is that the columnar path
   // gives exactly what the validated one-patient path gives (same formulas, one definition each).
   const text = await Deno.readTextFile(
-    new URL("../../examples/data/pediatric-clinic.csv", import.meta.url),
+    new URL("../../examples/data/pediatric_clinic.csv", import.meta.url),
   );
   const table = readCohortCsv(text, PEDIATRIC_OPTIONS);
   assert.equal(table.rowCount, 20);

@@ -17,7 +17,7 @@ const kernelTest = (name: string, fn: () => Promise<void>) =>
 
 function cli(args: string[], env: Record<string, string> = {}): Deno.Command {
   return new Deno.Command(Deno.execPath(), {
-    args: ["run", "-A", "--quiet", `${ROOT}/cli/run-notebooks.ts`, ...args],
+    args: ["run", "-A", "--quiet", `${ROOT}/cli/run_notebooks.ts`, ...args],
     cwd: ROOT,
     env,
     stdin: "null",
@@ -32,12 +32,12 @@ async function run(args: string[], env: Record<string, string> = {}) {
 }
 
 kernelTest("CLI: each kind of bad input gives a clear message and a non-zero exit", async () => {
-  const dir = await copyFixtures("throws.ipynb", "invalid-json.ipynb", "python-kernel.ipynb");
+  const dir = await copyFixtures("throws.ipynb", "invalid_json.ipynb", "python_kernel.ipynb");
   const cases: [string[], Record<string, string>, number, RegExp][] = [
     [[`${dir}/missing.ipynb`], {}, 2, /Notebook not found: .*missing\.ipynb/],
-    [[`${dir}/invalid-json.ipynb`], {}, 2, /invalid-json\.ipynb: invalid JSON: /],
+    [[`${dir}/invalid_json.ipynb`], {}, 2, /invalid_json\.ipynb: invalid JSON: /],
     [
-      [`${dir}/python-kernel.ipynb`],
+      [`${dir}/python_kernel.ipynb`],
       {},
       2,
       /expected a Deno kernelspec \(name 'deno'\), got 'python3'/,

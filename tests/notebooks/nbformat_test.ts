@@ -17,7 +17,7 @@ const minimal = (cells: unknown[], extra: Record<string, unknown> = {}) =>
   JSON.stringify({ metadata: {}, nbformat: 4, nbformat_minor: 5, cells, ...extra });
 
 Deno.test("parseNotebook reads the fixture notebooks as valid nbformat 4.5", () => {
-  for (const name of ["ok.ipynb", "throws.ipynb", "hangs.ipynb", "python-kernel.ipynb"]) {
+  for (const name of ["ok.ipynb", "throws.ipynb", "hangs.ipynb", "python_kernel.ipynb"]) {
     const nb = parseNotebook(Deno.readTextFileSync(`${FIXTURES}/${name}`), name);
     assert.deepEqual(notebookProblems(nb), [], name);
   }
@@ -91,10 +91,10 @@ Deno.test("parseNotebook names the problem in invalid input", () => {
 });
 
 Deno.test("the invalid-JSON fixture is reported with the JSON parser's position", () => {
-  const text = Deno.readTextFileSync(`${FIXTURES}/invalid-json.ipynb`);
-  assert.throws(() => parseNotebook(text, "invalid-json.ipynb"), {
+  const text = Deno.readTextFileSync(`${FIXTURES}/invalid_json.ipynb`);
+  assert.throws(() => parseNotebook(text, "invalid_json.ipynb"), {
     name: "NotebookInputError",
-    message: /^Notebook invalid-json\.ipynb: invalid JSON: .*position \d+/,
+    message: /^Notebook invalid_json\.ipynb: invalid JSON: .*position \d+/,
   });
 });
 

@@ -261,13 +261,13 @@ kernelTest(
 kernelTest(
   "bad input: missing, invalid JSON, non-Deno kernelspec; no kernel, no files",
   async () => {
-    const dir = await copyFixtures("invalid-json.ipynb", "python-kernel.ipynb");
+    const dir = await copyFixtures("invalid_json.ipynb", "python_kernel.ipynb");
     const cases: [string, RegExp][] = [
       [`${dir}/missing.ipynb`, /^Notebook not found: .*missing\.ipynb$/],
-      [`${dir}/invalid-json.ipynb`, /^Notebook .*invalid-json\.ipynb: invalid JSON: .+/],
+      [`${dir}/invalid_json.ipynb`, /^Notebook .*invalid_json\.ipynb: invalid JSON: .+/],
       [
-        `${dir}/python-kernel.ipynb`,
-        /^Notebook .*python-kernel\.ipynb: expected a Deno kernelspec \(name 'deno'\), got 'python3'/,
+        `${dir}/python_kernel.ipynb`,
+        /^Notebook .*python_kernel\.ipynb: expected a Deno kernelspec \(name 'deno'\), got 'python3'/,
       ],
       [dir, /^Notebook path is a directory: /],
     ];
@@ -279,8 +279,8 @@ kernelTest(
       assert.equal(result.partialPath, undefined);
     }
     assert.deepEqual([...Deno.readDirSync(dir)].map((e) => e.name).sort(), [
-      "invalid-json.ipynb",
-      "python-kernel.ipynb",
+      "invalid_json.ipynb",
+      "python_kernel.ipynb",
     ]);
     await Deno.remove(dir, { recursive: true });
   },

@@ -27,7 +27,7 @@ async function runValidate(
 Deno.test("validate: demo table gives an HTML report with inline charts and a Markdown twin", async () => {
   const out = await Deno.makeTempDir();
   const r = await runValidate([
-    "examples/data/validation-demo.csv",
+    "examples/data/validation_demo.csv",
     "--subject",
     "patient",
     "--value",
@@ -57,7 +57,7 @@ Deno.test("validate: demo table gives an HTML report with inline charts and a Ma
   // provenance: the SHA-256 of the input as computed independently with WebCrypto
   const digest = await crypto.subtle.digest(
     "SHA-256",
-    await Deno.readFile(`${root}examples/data/validation-demo.csv`),
+    await Deno.readFile(`${root}examples/data/validation_demo.csv`),
   );
   const hex = [...new Uint8Array(digest)].map((b) => b.toString(16).padStart(2, "0")).join("");
   assert.match(md, new RegExp(`SHA-256 ${hex}`));
@@ -69,7 +69,7 @@ Deno.test("validate: demo table gives an HTML report with inline charts and a Ma
 Deno.test("validate: graded table gives Cohen's and Fleiss' kappa", async () => {
   const out = await Deno.makeTempDir();
   const r = await runValidate([
-    "examples/data/validation-grades.csv",
+    "examples/data/validation_grades.csv",
     "--subject",
     "patient",
     "--rater",
@@ -92,7 +92,7 @@ Deno.test("validate: graded table gives Cohen's and Fleiss' kappa", async () => 
 Deno.test("validate: defective table fails with line-numbered errors and writes nothing", async () => {
   const out = `${await Deno.makeTempDir()}/report`;
   const r = await runValidate([
-    "examples/data/validation-defects.csv",
+    "examples/data/validation_defects.csv",
     "--subject",
     "patient",
     "--value",
@@ -117,7 +117,7 @@ Deno.test("validate: defective table fails with line-numbered errors and writes 
 });
 
 Deno.test("validate: unknown column and missing file are reported", async () => {
-  const a = await runValidate(["examples/data/validation-demo.csv", "--value", "nope"]);
+  const a = await runValidate(["examples/data/validation_demo.csv", "--value", "nope"]);
   assert.equal(a.code, 1);
   assert.match(
     a.stderr,

@@ -47,7 +47,7 @@ Deno.test("pediatric chart rejects bad points naming the field", () => {
 
 Deno.test("cohort chart plots every row with a value; adult chart draws sex-specific limits", async () => {
   const text = await Deno.readTextFile(
-    new URL("../../examples/data/pediatric-clinic.csv", import.meta.url),
+    new URL("../../examples/data/pediatric_clinic.csv", import.meta.url),
   );
   const model = PHN_2017_MODELS.lvMass;
   const t = readCohortCsv(text, {

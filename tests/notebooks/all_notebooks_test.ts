@@ -3,7 +3,7 @@
  * (with the HTML export) and fails on any cell error. The test name carries the count it ran.
  */
 import assert from "node:assert/strict";
-import { findNotebooks } from "../../cli/run-notebooks.ts";
+import { findNotebooks } from "../../cli/run_notebooks.ts";
 import { runNotebook } from "../../cli/notebooks/runner.ts";
 import { CAN_RUN_KERNEL, processExists, ROOT } from "./helpers.ts";
 

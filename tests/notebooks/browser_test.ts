@@ -13,7 +13,7 @@ import { runNotebook } from "../../cli/notebooks/runner.ts";
 const CHROMIUM = Deno.env.get("SONORIGOR_CHROMIUM") ?? "/usr/bin/chromium";
 const available = await Deno.stat(CHROMIUM).then((s) => s.isFile).catch(() => false);
 const NOTEBOOK =
-  new URL("../../notebooks/01-phantom-lab-doppler-physics.ipynb", import.meta.url).pathname;
+  new URL("../../notebooks/01_phantom_lab_doppler_physics.ipynb", import.meta.url).pathname;
 const ARTIFACTS = new URL("../../out/test-artifacts/", import.meta.url).pathname;
 
 Deno.test({

@@ -17,12 +17,12 @@ import {
 import { mergeTails, sortedTails } from "../../calc/uncertainty/montecarlo.ts";
 import { monteCarloRun } from "../../calc/uncertainty/montecarlo.ts";
 import { BLOCK_TRIALS, range, runBlocks } from "../../calc/uncertainty/trials.ts";
-import { crashesLater, inverseRoot, rounded, sumAndProduct } from "./fixtures/pool-models.ts";
+import { crashesLater, inverseRoot, rounded, sumAndProduct } from "./fixtures/pool_models.ts";
 
-const fixtures = new URL("./fixtures/pool-models.ts", import.meta.url);
+const fixtures = new URL("./fixtures/pool_models.ts", import.meta.url);
 
 // Reference for every check below: the single-thread functions of this package, whose results
-// are checked against JCGM 101 in montecarlo.test.ts. The pool must reproduce them bit for bit.
+// are checked against JCGM 101 in montecarlo_test.ts. The pool must reproduce them bit for bit.
 
 const mixedInputs = {
   a: normal(1, 0.1),
@@ -177,7 +177,7 @@ Deno.test("pool: calculations the workers cannot load, and misuse, are clear err
     () =>
       createMonteCarloPool({
         workers: 1,
-        modules: [fixtures, new URL("./fixtures/pool-duplicate-id.ts", import.meta.url)],
+        modules: [fixtures, new URL("./fixtures/pool_duplicate_id.ts", import.meta.url)],
       }),
     { name: "TypeError", message: /two different calculations share the id 'testPoolInverseRoot'/ },
   );

@@ -1,7 +1,7 @@
 /**
  * Side-by-side speed comparison with a vectorised numpy implementation of the same models, in
  * one invocation on the same machine. Prints medians over repeated runs and the ratio
- * (sonorigor time / numpy time); with `--write` also writes bench/RESULTS.md.
+ * (sonorigor time / numpy time); with `--write` also writes bench/results.md.
  *
  * Models: (a) continuity valve area with uncertain LVOT diameter, two VTIs and a beam angle,
  * 10⁶ trials with 95 % symmetric and shortest intervals; (b) the JCGM 101 §7.9 adaptive
@@ -12,7 +12,7 @@
  * is absent the comparison is skipped with a clear message and the sonorigor times are still
  * printed.
  *
- * Run: deno run -A bench/compare-numpy.ts [--runs 15] [--write]
+ * Run: deno run -A bench/compare_numpy.ts [--runs 15] [--write]
  *
  * @module
  */
@@ -220,7 +220,7 @@ const report = [
   `Medians of ${runs} runs (range in brackets); ratio = sonorigor median / numpy median (below 1 is ` +
   "faster).",
   "",
-  "Reproduce: `npx -y deno@2.9.6 run -A bench/compare-numpy.ts --runs 15 --write` (or `deno task bench`)",
+  "Reproduce: `npx -y deno@2.9.6 run -A bench/compare_numpy.ts --runs 15 --write` (or `deno task bench`)",
   "",
   "| model | sonorigor | numpy | ratio | target |",
   "| --- | --- | --- | --- | --- |",
@@ -251,8 +251,8 @@ const report = [
     ours.poolStartMs.toFixed(0)
   } ms, once per session; it is not in the timings above, as numpy's import is not in its own.`,
   "The pool's results are identical, bit for bit, to the single-thread functions' for the same seed " +
-  "(tests/uncertainty/pool.test.ts).",
+  "(tests/uncertainty/pool_test.ts).",
   peer ? "" : `\nnumpy comparison skipped: ${peerNote}.`,
 ].join("\n");
 console.log(report);
-if (args.write) await Deno.writeTextFile(new URL("./RESULTS.md", import.meta.url), report + "\n");
+if (args.write) await Deno.writeTextFile(new URL("./results.md", import.meta.url), report + "\n");

@@ -7,7 +7,7 @@
  */
 import { checkConfidence, checkPairs, type Interval, mean, shown, sumSquares } from "./checks.ts";
 import { tCdf, tQuantile } from "../stats/distributions.ts";
-import { nonCentralTQuantile } from "./noncentral-t.ts";
+import { nonCentralTQuantile } from "./noncentral_t.ts";
 
 export type { Interval } from "./checks.ts";
 

@@ -206,7 +206,7 @@ Deno.test("property: the sweep self-intersection check agrees with a brute-force
 });
 
 Deno.test("property: disc volume of any placed half-ellipsoid matches (π/6)·L·D1·D2·(1 + 1/3200)", () => {
-  // Solid geometry and the midpoint-rule bias derived in volumes.test.ts; 2001-point contours
+  // Solid geometry and the midpoint-rule bias derived in volumes_test.ts; 2001-point contours
   // (polygon error < 2e-6), any rotation and translation.
   fc.assert(
     fc.property(

@@ -75,7 +75,7 @@ Deno.test("LV mass uncertainty budget from caliper errors", () => {
 Deno.test("geometry class probabilities from a joint Monte Carlo of one set of calipers", () => {
   // Exact inputs: every trial gives the same class as the deterministic rule (Lang 2015 limits):
   // IVSd 1.3, LVIDd 4.8, LVPWd 1.2 cm, BSA 1.9 m² → LVMi 122.2 g/m², RWT 0.5 → concentric
-  // hypertrophy for a man (hand-checked in linear.test.ts).
+  // hypertrophy for a man (hand-checked in linear_test.ts).
   const exact = lvGeometryProbabilities(
     {
       septalThicknessDiastoleCm: 1.3,
