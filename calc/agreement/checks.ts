@@ -6,13 +6,8 @@
  * @module
  */
 
-/** A two-sided interval. */
-export interface Interval {
-  /** Lower bound. */
-  readonly lower: number;
-  /** Upper bound. */
-  readonly upper: number;
-}
+/** The package's one interval shape. */
+export type { Interval } from "../uncertainty/types.ts";
 
 /** Short description of a value for messages. */
 export function shown(value: unknown): string {

@@ -5,7 +5,6 @@
  *
  * @module
  */
-export type { Interval } from "./checks.ts";
 export { nonCentralTCdf, nonCentralTQuantile } from "./noncentral_t.ts";
 export {
   blandAltman,

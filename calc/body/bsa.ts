@@ -4,31 +4,27 @@
  *
  * @module
  */
-import { defineCalculation } from "../core/define.ts";
-import type { Calculation, InputDefinition } from "../core/types.ts";
+import { defineCalculation, type InputRole } from "../core/calculation.ts";
+import type { Calculation } from "../core/types.ts";
+import { BODY_SURFACE_AREA, HEIGHT, WEIGHT } from "../quantities/body.ts";
 
-/** Height input shared by every BSA formula: centimetres, human valid range. */
-const HEIGHT_INPUT: InputDefinition = {
-  unit: "cm",
-  description: "Standing height (recumbent length in infants)",
-  // Valid domain: from the smallest viable preterm length to above the tallest recorded human
-  // (about 272 cm); common practice, no source.
-  range: { min: 15, max: 280 },
-  // Typical: term newborn to very tall adult; outside this the formulas are extrapolated.
+/** Height as the BSA formulas take it: the formulas are fitted from infancy to adulthood. */
+const HEIGHT_INPUT: InputRole = {
+  quantity: HEIGHT,
   typical: { min: 45, max: 220 },
+  typicalPediatric: { min: 45, max: 190 },
+  reason: "the range the BSA formulas were fitted on, term newborn to very tall adult",
 };
 
-/** Weight input shared by every BSA formula: kilograms, human valid range. */
-const WEIGHT_INPUT: InputDefinition = {
-  unit: "kg",
-  description: "Body weight",
-  // Valid domain: from the smallest viable preterm weight (about 0.25 kg) to above the heaviest
-  // recorded human (about 635 kg); common practice, no source.
-  range: { min: 0.2, max: 650 },
+/** Weight as the BSA formulas take it. */
+const WEIGHT_INPUT: InputRole = {
+  quantity: WEIGHT,
   typical: { min: 2, max: 200 },
+  typicalPediatric: { min: 2, max: 120 },
+  reason: "the range the BSA formulas were fitted on, term newborn to very heavy adult",
 };
 
-const BSA_OUTPUT = { bsaM2: { unit: "m^2", description: "Body surface area" } } as const;
+const BSA_OUTPUT = { bsaM2: BODY_SURFACE_AREA } as const;
 
 const BSA_CAUTIONS = [
   "BSA formulas were derived on small samples; values differ between formulas by a few percent, more at the extremes of body size",
@@ -43,9 +39,6 @@ const BSA_CAUTIONS = [
  * Source: Mosteller RD. Simplified calculation of body-surface area. N Engl J Med
  * 1987;317(17):1098.
  *
- * @param heightCm Height in cm, valid [15, 280], typical [45, 220].
- * @param weightKg Weight in kg, valid [0.2, 650], typical [2, 200].
- * @returns `bsaM2`, body surface area in m².
  * @throws {RangeError} (through `evaluate`) for height or weight outside the human range.
  *
  * @example
@@ -64,7 +57,7 @@ export const bsaMosteller: Calculation<"heightCm" | "weightKg", "bsaM2"> = defin
   outputs: BSA_OUTPUT,
   formula: ({ heightCm, weightKg }) => ({ bsaM2: Math.sqrt((heightCm * weightKg) / 3600) }),
   formulaText: "BSA = √(H·W / 3600)  (H in cm, W in kg, BSA in m²)",
-  sources: [{
+  citations: [{
     authors: "Mosteller RD",
     year: 1987,
     title: "Simplified calculation of body-surface area",
@@ -84,9 +77,6 @@ export const bsaMosteller: Calculation<"heightCm" | "weightKg", "bsaM2"> = defin
  * Source: DuBois D, DuBois EF. A formula to estimate the approximate surface area if height and
  * weight be known. Arch Intern Med 1916;17(6_2):863–871.
  *
- * @param heightCm Height in cm, valid [15, 280], typical [45, 220].
- * @param weightKg Weight in kg, valid [0.2, 650], typical [2, 200].
- * @returns `bsaM2`, body surface area in m².
  * @throws {RangeError} (through `evaluate`) for height or weight outside the human range.
  *
  * @example
@@ -108,7 +98,7 @@ export const bsaDuBois: Calculation<"heightCm" | "weightKg", "bsaM2"> = defineCa
     bsaM2: 0.007184 * weightKg ** 0.425 * heightCm ** 0.725,
   }),
   formulaText: "BSA = 0.007184 · W^0.425 · H^0.725  (H in cm, W in kg, BSA in m²)",
-  sources: [{
+  citations: [{
     authors: "DuBois D, DuBois EF",
     year: 1916,
     title: "A formula to estimate the approximate surface area if height and weight be known",
@@ -132,9 +122,6 @@ export const bsaDuBois: Calculation<"heightCm" | "weightKg", "bsaM2"> = defineCa
  * area: a height-weight formula validated in infants, children, and adults. J Pediatr
  * 1978;93(1):62–66.
  *
- * @param heightCm Height in cm, valid [15, 280], typical [45, 220].
- * @param weightKg Weight in kg, valid [0.2, 650], typical [2, 200].
- * @returns `bsaM2`, body surface area in m².
  * @throws {RangeError} (through `evaluate`) for height or weight outside the human range.
  *
  * @example
@@ -157,7 +144,7 @@ export const bsaHaycock: Calculation<"heightCm" | "weightKg", "bsaM2"> = defineC
     bsaM2: 0.024265 * weightKg ** 0.5378 * heightCm ** 0.3964,
   }),
   formulaText: "BSA = 0.024265 · W^0.5378 · H^0.3964  (H in cm, W in kg, BSA in m²)",
-  sources: [{
+  citations: [{
     authors: "Haycock GB, Schwartz GJ, Wisotsky DH",
     year: 1978,
     title:
@@ -177,9 +164,6 @@ export const bsaHaycock: Calculation<"heightCm" | "weightKg", "bsaM2"> = defineC
  * Source: Gehan EA, George SL. Estimation of human body surface area from height and weight.
  * Cancer Chemother Rep 1970;54(4):225–235.
  *
- * @param heightCm Height in cm, valid [15, 280], typical [45, 220].
- * @param weightKg Weight in kg, valid [0.2, 650], typical [2, 200].
- * @returns `bsaM2`, body surface area in m².
  * @throws {RangeError} (through `evaluate`) for height or weight outside the human range.
  *
  * @example
@@ -201,7 +185,7 @@ export const bsaGehanGeorge: Calculation<"heightCm" | "weightKg", "bsaM2"> = def
     bsaM2: 0.0235 * weightKg ** 0.51456 * heightCm ** 0.42246,
   }),
   formulaText: "BSA = 0.0235 · W^0.51456 · H^0.42246  (H in cm, W in kg, BSA in m²)",
-  sources: [{
+  citations: [{
     authors: "Gehan EA, George SL",
     year: 1970,
     title: "Estimation of human body surface area from height and weight",
@@ -221,9 +205,7 @@ export const bsaGehanGeorge: Calculation<"heightCm" | "weightKg", "bsaM2"> = def
  * Source: Boyd E. The Growth of the Surface Area of the Human Body. University of Minnesota
  * Press, Minneapolis, 1935 (Institute of Child Welfare Monograph Series No. 10).
  *
- * @param heightCm Height in cm, valid [15, 280], typical [45, 220].
  * @param weightKg Weight in kg (converted to grams inside), valid [0.2, 650], typical [2, 200].
- * @returns `bsaM2`, body surface area in m².
  * @throws {RangeError} (through `evaluate`) for height or weight outside the human range.
  *
  * @example
@@ -249,7 +231,7 @@ export const bsaBoyd: Calculation<"heightCm" | "weightKg", "bsaM2"> = defineCalc
   },
   formulaText:
     "BSA = 0.0003207 · H^0.3 · Wg^(0.7285 − 0.0188·log10 Wg)  (H in cm, Wg in g, BSA in m²)",
-  sources: [{
+  citations: [{
     authors: "Boyd E",
     year: 1935,
     title: "The Growth of the Surface Area of the Human Body",

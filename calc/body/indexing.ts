@@ -1,184 +1,161 @@
 /**
- * Indexing a measurement to body size: value / BSA, with the BSA formula reused from its one
- * definition, so that the uncertainty of height and weight reaches the indexed value.
+ * Indexing a measurement to body size: value / BSA, one family member per quantity. Chained after
+ * a BSA formula (`chain([bsaHaycock, indexedToBsa(LV_MASS)])`), the uncertainty of height and
+ * weight reaches the indexed value.
  *
  * @module
  */
-import { defineCalculation, evaluate } from "../core/define.ts";
-import type { Calculation } from "../core/types.ts";
-import { bsaCalculation, type BsaMethod } from "./bsa.ts";
+import type { Calculation, Citation, Quantity } from "../core/types.ts";
+import { defineQuantity } from "../core/quantity.ts";
+import { defineFamily, type Family } from "../core/family.ts";
+import { BODY_SURFACE_AREA } from "../quantities/body.ts";
+import {
+  LA_VOLUME,
+  LA_VOLUME_INDEX,
+  LV_END_DIASTOLIC_VOLUME,
+  LV_END_SYSTOLIC_VOLUME,
+  LV_MASS,
+  LV_MASS_INDEX,
+} from "../quantities/structure.ts";
+import {
+  AORTIC_VALVE_AREA,
+  AORTIC_VALVE_AREA_INDEX,
+  CARDIAC_INDEX,
+  CARDIAC_OUTPUT,
+  STROKE_VOLUME,
+  STROKE_VOLUME_INDEX,
+} from "../quantities/flow.ts";
+import { LANG_2015 } from "../references.ts";
 
-/** Valid domain of a measurement to be indexed, in its own unit (non-negative, finite). */
-const MEASUREMENT_RANGE = { min: 0, max: 1e6 } as const;
-/** Valid domain of a BSA: positive, below any human value. */
-const BSA_RANGE = { min: 0, max: 5, minExclusive: true } as const;
+/** Quantities whose indexed form the guidelines name and range (declared with them). */
+const NAMED_INDICES: ReadonlyMap<Quantity, Quantity> = new Map([
+  [LV_MASS, LV_MASS_INDEX],
+  [LA_VOLUME, LA_VOLUME_INDEX],
+  [STROKE_VOLUME, STROKE_VOLUME_INDEX],
+  [CARDIAC_OUTPUT, CARDIAC_INDEX],
+  [AORTIC_VALVE_AREA, AORTIC_VALVE_AREA_INDEX],
+]);
 
-const LANG_2015_INDEXING = {
-  authors: "Lang RM, Badano LP, Mor-Avi V, et al.",
-  year: 2015,
-  title:
-    "Recommendations for cardiac chamber quantification by echocardiography in adults: an update from the American Society of Echocardiography and the European Association of Cardiovascular Imaging",
-  publication: "J Am Soc Echocardiogr 2015;28(1):1–39",
-  locator: "indexing of chamber size to BSA",
-  doi: "10.1016/j.echo.2014.10.003",
-} as const;
-
-const indexCache = new Map<string, Calculation<"measurement" | "bsaM2", "indexed">>();
+const derived = new Map<string, Quantity>();
 
 /**
- * The calculation "measurement / BSA" for a measurement in `unit`, defined once per unit and
- * cached (the same object is returned for the same unit).
+ * The quantity "Q per m² of body surface area": the one the guidelines name where there is one
+ * (LV mass index, LA volume index, cardiac index, …), otherwise derived from Q's declaration
+ * (label "Q indexed to BSA", unit "Q's unit/m²", valid range from Q's over a positive BSA).
+ *
+ * @param q The quantity indexed.
+ * @returns Its indexed quantity.
+ *
+ * @example
+ * ```ts
+ * import { indexedQuantity, LV_END_DIASTOLIC_VOLUME, LV_MASS } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(indexedQuantity(LV_MASS).label, "LV mass index");
+ * assert.equal(indexedQuantity(LV_END_DIASTOLIC_VOLUME).unit, "mL/m^2");
+ * ```
+ */
+export function indexedQuantity(q: Quantity): Quantity {
+  const named = NAMED_INDICES.get(q);
+  if (named) return named;
+  let d = derived.get(q.id);
+  if (d === undefined) {
+    d = defineQuantity({
+      id: `${q.id}Index`,
+      label: `${q.label} indexed to BSA`,
+      symbol: `${q.symbol}i`,
+      unit: `${q.unit}/m^2`,
+      description: `${q.label} per m² of body surface area`,
+      valid: { min: q.valid.min >= 0 ? 0 : -Infinity, max: Infinity },
+      resolution: q.resolution,
+      rangeNote: `derived from ${q.label}: any value over a positive body surface area`,
+    });
+    derived.set(q.id, d);
+  }
+  return d;
+}
+
+const LANG_2015_INDEXING: Citation = { ...LANG_2015, locator: "indexing of chamber size to BSA" };
+
+/** Quantities registered for the indexing family (its documented members). */
+const MEMBERS: readonly Quantity[] = [
+  LV_MASS,
+  LV_END_DIASTOLIC_VOLUME,
+  LV_END_SYSTOLIC_VOLUME,
+  LA_VOLUME,
+  STROKE_VOLUME,
+  CARDIAC_OUTPUT,
+  AORTIC_VALVE_AREA,
+];
+
+/**
+ * The family "measurement / BSA", one member per quantity: input named by the quantity's id and
+ * `bsaM2`, output named by the indexed quantity's id.
  *
  * Formula: indexed [unit/m²] = measurement [unit] / BSA [m²]
  *
  * Source: indexing of chamber size to BSA as recommended by Lang RM et al., J Am Soc
  * Echocardiogr 2015;28:1–39.
  *
- * @param unit The measurement's unit (a mathjs unit string such as "mL", "g", "cm").
- * @returns A calculation with inputs `measurement` (unit) and `bsaM2` (m²) and output `indexed`.
- * @throws {TypeError} When `unit` is not a non-empty string.
- *
  * @example
  * ```ts
- * import { bsaIndexCalculation, evaluate } from "@sonorigor/sonorigor";
+ * import { evaluate, INDEXED_TO_BSA, LV_MASS } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
- * // 120 mL / 2 m² = 60 mL/m² (hand-checkable arithmetic)
- * const lvedvi = evaluate(bsaIndexCalculation("mL"), { measurement: 120, bsaM2: 2 });
- * assert.equal(lvedvi.outputs.indexed, 60);
+ * // 190 g / 1.9 m² = 100 g/m² (hand-checkable arithmetic)
+ * const r = evaluate(INDEXED_TO_BSA.calculation(LV_MASS), { lvMass: 190, bsaM2: 1.9 });
+ * assert.equal(r.outputs.lvMassIndex, 100);
  * ```
  */
-export function bsaIndexCalculation(
-  unit: string,
-): Calculation<"measurement" | "bsaM2", "indexed"> {
-  if (typeof unit !== "string" || unit.trim() === "") {
-    throw new TypeError(`Indexed measurement: expected a unit string, got ${JSON.stringify(unit)}`);
-  }
-  let calc = indexCache.get(unit);
-  if (calc === undefined) {
-    calc = defineCalculation({
-      id: `bsaIndexed(${unit})`,
-      title: `Measurement indexed to BSA (${unit}/m²)`,
-      description: "A measurement divided by body surface area.",
-      inputs: {
-        measurement: { unit, description: "Measurement to index", range: MEASUREMENT_RANGE },
-        bsaM2: {
-          unit: "m^2",
-          description: "Body surface area",
-          range: BSA_RANGE,
-          typical: { min: 0.1, max: 3 },
-        },
-      },
-      outputs: { indexed: { unit: `${unit}/m^2`, description: "Measurement per m² of BSA" } },
-      formula: ({ measurement, bsaM2 }) => ({ indexed: measurement / bsaM2 }),
-      formulaText: `indexed = measurement / BSA  (${unit}/m²)`,
-      sources: [LANG_2015_INDEXING],
+export const INDEXED_TO_BSA: Family<Quantity> = defineFamily<Quantity>({
+  id: "indexedToBsa",
+  title: "Indexed to body surface area",
+  description: "A measurement divided by body surface area, one calculation per quantity.",
+  members: MEMBERS,
+  key: (q) => q.id,
+  toData: (q) => q.id,
+  fromData: (id) => {
+    const q = MEMBERS.find((m) => m.id === id);
+    if (q === undefined) {
+      throw new TypeError(
+        `Indexed to BSA: expected a registered quantity (${
+          MEMBERS.map((m) => m.id).join(", ")
+        }), got ${JSON.stringify(id)}`,
+      );
+    }
+    return q;
+  },
+  define: (q) => {
+    const out = indexedQuantity(q);
+    return {
+      id: `indexedToBsa(${q.id})`,
+      title: `${out.label}`,
+      description: `${q.label} divided by body surface area.`,
+      inputs: { [q.id]: q, bsaM2: BODY_SURFACE_AREA },
+      outputs: { [out.id]: out },
+      formula: (x: Record<string, number>) => ({ [out.id]: x[q.id]! / x.bsaM2! }),
+      formulaText: `${out.symbol} = ${q.symbol} / BSA`,
+      citations: [LANG_2015_INDEXING],
       cautions: [
         "Ratio indexing assumes the measurement scales linearly with BSA; in obesity and in children this overcorrects",
       ],
       clinical: true,
-    });
-    indexCache.set(unit, calc);
-  }
-  return calc;
-}
-
-const bodyIndexCache = new Map<
-  string,
-  Calculation<"measurement" | "heightCm" | "weightKg", "bsaM2" | "indexed">
->();
+    };
+  },
+});
 
 /**
- * The calculation "measurement / BSA(height, weight)": BSA by the chosen formula, then the
- * index, so that height and weight uncertainties propagate (GUM or Monte Carlo) into the
- * indexed value. Defined once per (unit, method) and cached. Both steps call the formulas of
- * their one definitions ({@linkcode bsaCalculation} and {@linkcode bsaIndexCalculation}).
+ * The calculation "q / BSA" (a member of {@linkcode INDEXED_TO_BSA}).
  *
- * Formula: BSA = f(H, W); indexed = measurement / BSA
- *
- * Source: the BSA formula's own paper; indexing per Lang RM et al., J Am Soc Echocardiogr
- * 2015;28:1–39.
- *
- * @param unit Unit of the measurement ("mL", "g", "cm", ...).
- * @param method BSA formula. @default "mosteller"
- * @returns A calculation with inputs `measurement`, `heightCm`, `weightKg` and outputs `bsaM2`,
- * `indexed`.
- * @throws {TypeError} For an empty unit or an unknown method.
+ * @param q The quantity to index.
+ * @returns The calculation with inputs `q.id` and `bsaM2` and output the indexed quantity's id.
  *
  * @example
  * ```ts
- * import { bodySizeIndexCalculation, evaluate } from "@sonorigor/sonorigor";
+ * import { evaluate, indexedToBsa, LA_VOLUME } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
- * // Mosteller BSA at 180 cm, 80 kg is exactly 2 m²; 120 mL / 2 m² = 60 mL/m²
- * const calc = bodySizeIndexCalculation("mL", "mosteller");
- * const r = evaluate(calc, { measurement: 120, heightCm: 180, weightKg: 80 });
- * assert.equal(r.outputs.indexed, 60);
+ * // 60 mL / 2 m² = 30 mL/m²
+ * assert.equal(evaluate(indexedToBsa(LA_VOLUME), { laVolume: 60, bsaM2: 2 }).outputs.laVolumeIndex, 30);
  * ```
  */
-export function bodySizeIndexCalculation(
-  unit: string,
-  method: BsaMethod = "mosteller",
-): Calculation<"measurement" | "heightCm" | "weightKg", "bsaM2" | "indexed"> {
-  const bsa = bsaCalculation(method);
-  const index = bsaIndexCalculation(unit);
-  const key = `${method}\u0000${unit}`;
-  let calc = bodyIndexCache.get(key);
-  if (calc === undefined) {
-    calc = defineCalculation({
-      id: `bodySizeIndexed(${unit}, ${method})`,
-      title: `Measurement indexed to BSA by ${bsa.title.replace(/^Body surface area /, "")}`,
-      description: "BSA from height and weight, then the measurement divided by it.",
-      inputs: {
-        measurement: index.inputs.measurement,
-        heightCm: bsa.inputs.heightCm,
-        weightKg: bsa.inputs.weightKg,
-      },
-      outputs: { bsaM2: bsa.outputs.bsaM2, indexed: index.outputs.indexed },
-      formula: ({ measurement, heightCm, weightKg }) => {
-        const { bsaM2 } = bsa.formula({ heightCm, weightKg });
-        return { bsaM2, indexed: index.formula({ measurement, bsaM2 }).indexed };
-      },
-      formulaText: `BSA = ${bsa.formulaText}; indexed = measurement / BSA`,
-      sources: [...bsa.sources, ...index.sources],
-      cautions: [...bsa.cautions, ...index.cautions],
-      clinical: true,
-    });
-    bodyIndexCache.set(key, calc);
-  }
-  return calc;
-}
-
-/** A measurement indexed to BSA, with its unit. */
-export interface IndexedValue {
-  /** Measurement / BSA. */
-  readonly value: number;
-  /** Unit of the indexed value, e.g. "mL/m^2". */
-  readonly unit: string;
-  /** Flags (e.g. BSA outside the usual human range). */
-  readonly flags: readonly string[];
-}
-
-/**
- * Indexes a measurement to a known BSA (validated; evaluates {@linkcode bsaIndexCalculation}).
- *
- * @param measurement Value in `unit` (a number or a quantity string such as "120 mL").
- * @param bsaM2 Body surface area in m², in (0, 5].
- * @param unit Unit of the measurement.
- * @returns The indexed value with unit `${unit}/m^2` and any flags.
- * @throws {TypeError} For a value of the wrong type or unit.
- * @throws {RangeError} For a negative measurement or a BSA outside (0, 5] m².
- *
- * @example
- * ```ts
- * import { indexToBsa } from "@sonorigor/sonorigor";
- * import assert from "node:assert/strict";
- * assert.deepEqual(indexToBsa(190, 1.9, "g"), { value: 100, unit: "g/m^2", flags: [] });
- * ```
- */
-export function indexToBsa(
-  measurement: number | string,
-  bsaM2: number | string,
-  unit: string,
-): IndexedValue {
-  const r = evaluate(bsaIndexCalculation(unit), { measurement, bsaM2 });
-  return { value: r.outputs.indexed, unit: `${unit}/m^2`, flags: r.flags };
+export function indexedToBsa(q: Quantity): Calculation {
+  return INDEXED_TO_BSA.calculation(q);
 }

@@ -5,4 +5,3 @@
  */
 export * from "./bsa.ts";
 export * from "./indexing.ts";
-export * from "./uncertainty.ts";

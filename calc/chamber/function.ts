@@ -6,7 +6,8 @@
  * @module
  */
 import { CLINICAL_CAUTION, defineCalculation, notAbove } from "../core/define.ts";
-import type { Calculation, InputDefinition, Reference } from "../core/types.ts";
+import type { Calculation, Reference } from "../core/types.ts";
+import type { InlineInput } from "../core/calculation.ts";
 import {
   HU_2013,
   KAUL_1984,
@@ -41,13 +42,13 @@ export function percentReduction(diastolic: number, systolic: number): number {
 
 // Typical ranges below are the adult span seen in practice (common practice, no source); they
 // only raise a flag. Valid ranges are physical limits.
-const endDiastolicVolume: InputDefinition = {
+const endDiastolicVolume: InlineInput = {
   unit: "mL",
   description: "End-diastolic volume",
   range: { min: 0, max: 2000, minExclusive: true },
   typical: { min: 20, max: 500 },
 };
-const endSystolicVolume: InputDefinition = {
+const endSystolicVolume: InlineInput = {
   unit: "mL",
   description: "End-systolic volume",
   range: { min: 0, max: 2000 },
@@ -174,7 +175,7 @@ function annularExcursionMm(depthEndDiastoleMm: number, depthEndSystoleMm: numbe
   return depthEndSystoleMm <= depthEndDiastoleMm ? depthEndDiastoleMm - depthEndSystoleMm : NaN;
 }
 
-const annulusDepth = (site: string, phase: string): InputDefinition => ({
+const annulusDepth = (site: string, phase: string): InlineInput => ({
   unit: "mm",
   description: `Depth of the ${site} annulus on the apical M-mode trace at ${phase}`,
   range: { min: 0, max: 400 },
@@ -293,7 +294,7 @@ export const mapse: Calculation<
   clinical: true,
 });
 
-const interval = (description: string, typical: { min: number; max: number }): InputDefinition => ({
+const interval = (description: string, typical: { min: number; max: number }): InlineInput => ({
   unit: "ms",
   description,
   range: { min: 0, max: 1000 },

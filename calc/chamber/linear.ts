@@ -9,37 +9,40 @@
  * @module
  */
 import { CLINICAL_CAUTION, defineCalculation, notAbove } from "../core/define.ts";
-import type { Calculation, InputDefinition } from "../core/types.ts";
+import type { Calculation } from "../core/types.ts";
+import type { InlineInput } from "../core/calculation.ts";
 import { DEVEREUX_1986, GANAU_1992, LANG_2015, TEICHHOLZ_1976 } from "./sources.ts";
 import { ejectionFraction, percentReduction } from "./function.ts";
-import { monteCarlo, type MonteCarloOptions } from "../uncertainty/montecarlo.ts";
+import { monteCarlo } from "../uncertainty/legacy.ts";
+import type { PropagateOptions } from "../uncertainty/propagate.ts";
 import type { UncertainInputs } from "../uncertainty/prepare.ts";
-import { bsaIndexCalculation } from "../body/indexing.ts";
+import { indexedToBsa } from "../body/indexing.ts";
+import { LV_MASS } from "../quantities/structure.ts";
 
 /** Measurement / BSA for grams: the one indexing definition of the body-size module. */
-const indexByGrams = bsaIndexCalculation("g");
+const indexLvMass = indexedToBsa(LV_MASS);
 
 // Valid domains are physical limits; typical ranges are the adult span seen in practice
 // (common practice, no source) and only raise a flag.
-const lvidDiastole: InputDefinition = {
+const lvidDiastole: InlineInput = {
   unit: "cm",
   description: "LV internal diameter at end-diastole (LVIDd)",
   range: { min: 0, max: 12, minExclusive: true },
   typical: { min: 3, max: 7.5 },
 };
-const lvidSystole: InputDefinition = {
+const lvidSystole: InlineInput = {
   unit: "cm",
   description: "LV internal diameter at end-systole (LVIDs)",
   range: { min: 0, max: 12, minExclusive: true },
   typical: { min: 1.5, max: 6.5 },
 };
-const septumDiastole: InputDefinition = {
+const septumDiastole: InlineInput = {
   unit: "cm",
   description: "Interventricular septal thickness at end-diastole (IVSd)",
   range: { min: 0, max: 5, minExclusive: true },
   typical: { min: 0.5, max: 2 },
 };
-const posteriorWallDiastole: InputDefinition = {
+const posteriorWallDiastole: InlineInput = {
   unit: "cm",
   description: "LV posterior (inferolateral) wall thickness at end-diastole (LVPWd)",
   range: { min: 0, max: 5, minExclusive: true },
@@ -48,7 +51,7 @@ const posteriorWallDiastole: InputDefinition = {
 /** Body surface area input shared by the indexed chamber calculations (BSA itself is computed in
  * the body-size module). Typical range: adults, to which the guideline limits apply (common
  * practice, no source). */
-export const bodySurfaceAreaInput: InputDefinition = {
+export const bodySurfaceAreaInput: InlineInput = {
   unit: "m^2",
   description: "Body surface area",
   range: { min: 0, max: 5, minExclusive: true },
@@ -260,7 +263,7 @@ export const lvMassLinear: Calculation<
 
 /**
  * LV mass indexed to body surface area; composes {@linkcode lvMassLinear} and the body-size
- * module's indexing calculation (`bsaIndexCalculation("g")`).
+ * module's indexing calculation (`indexedToBsa(LV_MASS)`).
  *
  * Formula: LV mass index [g/m²] = LV mass / BSA
  *
@@ -296,12 +299,12 @@ export const lvMassIndex: Calculation<
   },
   formula: (x) => {
     const { lvMassG } = lvMassLinear.formula(x);
-    const { indexed } = indexByGrams.formula({ measurement: lvMassG, bsaM2: x.bodySurfaceAreaM2 });
-    return { lvMassG, lvMassIndexGPerM2: indexed };
+    const { lvMassIndex } = indexLvMass.formula({ lvMass: lvMassG, bsaM2: x.bodySurfaceAreaM2 });
+    return { lvMassG, lvMassIndexGPerM2: lvMassIndex! };
   },
   formulaText: "LVMi = LV mass / BSA",
   sources: [LANG_2015],
-  cautions: [...lvMassLinear.cautions, ...indexByGrams.cautions],
+  cautions: [...lvMassLinear.cautions, ...indexLvMass.cautions],
   clinical: true,
 });
 
@@ -617,7 +620,7 @@ export type LvGeometryUncertainInputs = UncertainInputs<
 export function lvGeometryProbabilities(
   inputs: LvGeometryUncertainInputs,
   sex: Sex,
-  options: Omit<MonteCarloOptions, "keepSamples" | "coverage"> = {},
+  options: Pick<PropagateOptions, "trials" | "seed" | "correlations"> = {},
 ): {
   probabilities: Record<LvGeometry, number>;
   mostProbable: LvGeometry;
@@ -636,7 +639,7 @@ export function lvGeometryProbabilities(
     ...options,
     keepSamples: true,
   });
-  const codes = mc.outputs.geometryCode.samples;
+  const codes = mc.outputs.geometryCode.samples!;
   const counts = [0, 0, 0, 0];
   for (let k = 0; k < codes.length; k++) counts[codes[k]!]!++;
   const probabilities = {} as Record<LvGeometry, number>;
@@ -648,8 +651,8 @@ export function lvGeometryProbabilities(
   return {
     probabilities,
     mostProbable,
-    trials: mc.trials,
-    seed: mc.seed,
+    trials: mc.monteCarlo!.trials,
+    seed: mc.monteCarlo!.seed,
     warnings: mc.warnings,
     cautions: mc.cautions,
   };

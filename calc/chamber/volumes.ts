@@ -23,10 +23,11 @@ import {
 } from "./contour.ts";
 import { ejectionFraction } from "./function.ts";
 import { LANG_2015, SCHILLER_1989 } from "./sources.ts";
-import { bsaIndexCalculation } from "../body/indexing.ts";
+import { indexedToBsa } from "../body/indexing.ts";
+import { LA_VOLUME } from "../quantities/structure.ts";
 
 /** Measurement / BSA for millilitres: the one indexing definition of the body-size module. */
-const indexByMl = bsaIndexCalculation("mL");
+const indexLaVolume = indexedToBsa(LA_VOLUME);
 
 /**
  * The number of discs of the guideline method.
@@ -629,14 +630,14 @@ export function leftAtrialVolume(
     ],
   };
   if (bsa === undefined) return out;
-  const areaLengthIndex = evaluate(indexByMl, { measurement: out.areaLengthMl, bsaM2: bsa });
-  const discsIndex = evaluate(indexByMl, { measurement: out.discsMl, bsaM2: bsa });
+  const areaLengthIndex = evaluate(indexLaVolume, { laVolume: out.areaLengthMl, bsaM2: bsa });
+  const discsIndex = evaluate(indexLaVolume, { laVolume: out.discsMl, bsaM2: bsa });
   return {
     ...out,
-    areaLengthIndexMlPerM2: areaLengthIndex.outputs.indexed,
-    discsIndexMlPerM2: discsIndex.outputs.indexed,
+    areaLengthIndexMlPerM2: areaLengthIndex.outputs.laVolumeIndex!,
+    discsIndexMlPerM2: discsIndex.outputs.laVolumeIndex!,
     flags: [...out.flags, ...discsIndex.flags],
-    cautions: [...out.cautions, ...indexByMl.cautions],
+    cautions: [...out.cautions, ...indexLaVolume.cautions],
   };
 }
 

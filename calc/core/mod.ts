@@ -1,37 +1,92 @@
 /**
- * The one-definition architecture: types, definition, validated evaluation, units.
+ * The one-definition architecture: quantities, calculations, the one validator, evaluation,
+ * chains, families, the catalog, units and sensitivity curves.
  *
  * @module
  */
 export type {
   Calculation,
-  CalculationSpec,
+  Citation,
+  Evaluation,
   InputConstraint,
   InputDefinition,
   InputSchema,
   InputsOf,
   InputValues,
+  IssueKind,
+  MimeBundle,
   OutputDefinition,
   OutputsOf,
   OutputValues,
+  Population,
+  Quantity,
+  Recipe,
   Reference,
+  ValidationIssue,
   ValueRange,
 } from "./types.ts";
 export {
+  defineQuantity,
+  headerMatches,
+  isQuantity,
+  normalizeHeader,
+  type QuantitySpec,
+  typicalRange,
+} from "./quantity.ts";
+export { formatRange, inRange, rangeWithin } from "./range.ts";
+export { describeValue, formatUnit, withUnit } from "./text.ts";
+export {
   cautionsOf,
+  type CalculationSpec,
   CLINICAL_CAUTION,
+  defineArguments,
   defineCalculation,
-  evaluate,
-  type Evaluation,
-  formatRange,
-  type InputArguments,
-  inRange,
+  type InlineInput,
+  type InlineOutput,
+  type InputRole,
+  type InputSpec,
   isCalculation,
   notAbove,
+  type OutputRole,
+  type OutputSpec,
+} from "./calculation.ts";
+export {
+  InputRangeError,
+  InputTypeError,
+  issueError,
+  renderIssue,
+  throwIfErrors,
+} from "./issues.ts";
+export {
+  type CheckContext,
+  type CheckedField,
+  type CheckedValue,
+  checkConstraints,
+  checkInputs,
+  checkValue,
+  quantityField,
+  type ValidateOptions,
   validateInputs,
-} from "./define.ts";
-export { type MathJsUnit, type QuantityInput, toCanonical } from "./units.ts";
-export { JUPYTER_DISPLAY, type MimeBundle } from "./display.ts";
+} from "./validate.ts";
+export { checkOutputs, evaluate, type EvaluateOptions, type InputArguments } from "./evaluate.ts";
+export { chain, type Chained, type ChainOptions, type ChainStep } from "./chain.ts";
+export { defineFamily, type Family, type FamilySpec } from "./family.ts";
+export {
+  type Catalog,
+  catalogCalculations,
+  type CatalogSpec,
+  combineCatalogs,
+  defineCatalog,
+  fingerprint,
+  rebuild,
+} from "./catalog.ts";
+export {
+  type AmountProblem,
+  type MathJsUnit,
+  type QuantityInput,
+  readAmount,
+  toCanonical,
+} from "./units.ts";
 export {
   type SensitivityCurve,
   sensitivityCurve,
@@ -39,14 +94,4 @@ export {
   type SensitivityPoint,
 } from "./sensitivity.ts";
 export { calculationsOf, formatReference, referenceMarkdown } from "./reference_docs.ts";
-export {
-  escapeHtml,
-  formatNumber,
-  formatUnit,
-  htmlNotes,
-  htmlTable,
-  type TableDisplay,
-  tableDisplay,
-  textTable,
-} from "./display.ts";
-export { evaluateColumns } from "./kernel.ts";
+export { evaluateColumns } from "./columns.ts";

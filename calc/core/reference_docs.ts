@@ -67,7 +67,7 @@ export function referenceMarkdown(calc: Calculation): string {
     ),
     "",
     "Sources:",
-    ...calc.sources.map((s) => `- ${formatReference(s)}`),
+    ...calc.citations.map((s) => `- ${formatReference(s)}`),
   ];
   const cautions = cautionsOf(calc);
   if (cautions.length > 0) lines.push("", "Cautions:", ...cautions.map((c) => `- ${c}`));

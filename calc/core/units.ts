@@ -5,6 +5,7 @@
  * @module
  */
 import type { MathJsInstance, Unit } from "mathjs";
+import { describeValue } from "./text.ts";
 
 /** The part of a mathjs Unit this library uses (any mathjs Unit satisfies it). */
 export interface MathJsUnit {
@@ -67,6 +68,62 @@ export function isMathUnit(value: unknown): value is MathJsUnit {
     typeof (value as { toNumber?: unknown }).toNumber === "function";
 }
 
+/** Why a value could not be read as an amount of a unit. */
+export interface AmountProblem {
+  /** "type": not a number, string or Unit; "unit": another dimension or an unreadable unit. */
+  readonly problem: "type" | "unit";
+}
+
+const DECIMAL = /^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/;
+
+/**
+ * Reads a value as a number in `unit`, without throwing: a number is taken as already in `unit`;
+ * a string is a plain decimal or a quantity ("21 mm"); a mathjs Unit is converted.
+ *
+ * @param value The value as given.
+ * @param unit The canonical unit.
+ * @returns The number, or why it could not be read.
+ *
+ * @example
+ * ```ts
+ * import { readAmount } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(readAmount("21 mm", "cm"), 2.1);
+ * assert.deepEqual(readAmount("21 mmHg", "cm"), { problem: "unit" });
+ * assert.deepEqual(readAmount(true, "cm"), { problem: "type" });
+ * ```
+ */
+export function readAmount(value: unknown, unit: string): number | AmountProblem {
+  if (typeof value === "number") return value;
+  if (typeof value === "string") {
+    const text = value.trim();
+    if (DECIMAL.test(text)) return Number(text);
+    const target = mathUnitOf(unit);
+    if (target === null) {
+      // a label mathjs does not know ("%", "bpm", "dB"): accept "63 %" or "63%"
+      const label = unit === "1" ? "" : unit;
+      if (label !== "" && text.endsWith(label)) {
+        const head = text.slice(0, text.length - label.length).trim();
+        if (DECIMAL.test(head)) return Number(head);
+      }
+      return { problem: "unit" };
+    }
+    let parsed: Unit;
+    try {
+      parsed = math.unit(text) as Unit;
+    } catch {
+      return { problem: "unit" };
+    }
+    return convert(parsed, target, unit);
+  }
+  if (isMathUnit(value)) {
+    const target = mathUnitOf(unit);
+    if (target === null) return { problem: "unit" };
+    return convert(value as unknown as Unit, target, unit);
+  }
+  return { problem: "type" };
+}
+
 /**
  * Converts a quantity to a number in `unit`.
  *
@@ -86,60 +143,27 @@ export function isMathUnit(value: unknown): value is MathJsUnit {
  * ```
  */
 export function toCanonical(value: QuantityInput, unit: string, where: string): number {
-  if (typeof value === "number") return value;
-  const target = mathUnitOf(unit);
-  if (typeof value === "string") {
-    const text = value.trim();
-    if (/^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/.test(text)) return Number(text);
-    if (target === null) {
-      const label = unit === "1" ? "" : unit;
-      if (label !== "" && text.endsWith(label)) {
-        const head = text.slice(0, text.length - label.length).trim();
-        if (/^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/.test(head)) return Number(head);
-      }
-      throw new TypeError(
-        `${where}: expected a number in ${unit === "1" ? "no unit" : unit}, got "${value}"`,
-      );
-    }
-    let parsed: Unit;
-    try {
-      parsed = math.unit(text) as Unit;
-    } catch {
-      throw new TypeError(
-        `${where}: expected a quantity in ${unit} such as "1 ${unit}", got "${value}"`,
-      );
-    }
-    return convert(parsed, target, unit, where, `"${value}"`);
-  }
-  if (isMathUnit(value)) {
-    if (target === null) {
-      throw new TypeError(
-        `${where}: expected a plain number in ${unit}, got the unit ${value.toString()}`,
-      );
-    }
-    return convert(value as unknown as Unit, target, unit, where, value.toString());
-  }
+  const read = readAmount(value, unit);
+  if (typeof read === "number") return read;
+  const shown = typeof value === "string"
+    ? `"${value}"`
+    : isMathUnit(value)
+    ? value.toString()
+    : describeValue(value);
   throw new TypeError(
-    `${where}: expected a number or a quantity string in ${unit}, got ${describe(value)}`,
+    read.problem === "type"
+      ? `${where}: expected a number or a quantity string in ${unit}, got ${shown}`
+      : `${where}: expected a quantity convertible to ${unit}, got ${shown}`,
   );
 }
 
-function convert(parsed: Unit, target: Unit, unit: string, where: string, shown: string): number {
-  if (!parsed.equalBase(target)) {
-    throw new TypeError(`${where}: expected a quantity convertible to ${unit}, got ${shown}`);
-  }
+function convert(parsed: Unit, target: Unit, unit: string): number | AmountProblem {
+  if (!parsed.equalBase(target)) return { problem: "unit" };
   // mathjs converts through SI base units; round to 15 significant digits so that "3.5 cm" stays
   // 3.5 and "21 mm" becomes 2.1 cm rather than 2.1000000000000001 (far below any measurement
   // resolution)
   return Number(parsed.toNumber(unit).toPrecision(15));
 }
 
-/** Short description of an unexpected value for error messages. */
-export function describe(value: unknown): string {
-  if (value === null) return "null";
-  if (value === undefined) return "undefined";
-  if (typeof value === "string") return `"${value}"`;
-  if (typeof value === "number" || typeof value === "boolean") return String(value);
-  if (Array.isArray(value)) return "an array";
-  return `a value of type ${typeof value}`;
-}
+/** Short description of an unexpected value for error messages (see `describeValue`). */
+export const describe: (value: unknown) => string = describeValue;

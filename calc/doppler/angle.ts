@@ -10,7 +10,8 @@
  * @module
  */
 import { defineCalculation } from "../core/define.ts";
-import type { Calculation, InputDefinition } from "../core/types.ts";
+import type { Calculation } from "../core/types.ts";
+import type { InlineInput } from "../core/calculation.ts";
 import { angleCorrectedVelocity } from "../physics/doppler.ts";
 import { simplifiedBernoulli } from "./bernoulli.ts";
 import { continuityValveAreaPeakVelocity } from "./valve_area.ts";
@@ -21,7 +22,7 @@ function trueVelocityAt(measuredVelocity: number, angleDeg: number): number {
   return angleCorrectedVelocity.formula({ measuredVelocity, angleDeg }).trueVelocity;
 }
 
-function signedAngle(description: string): InputDefinition {
+function signedAngle(description: string): InlineInput {
   return {
     unit: "deg",
     description,

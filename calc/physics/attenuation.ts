@@ -4,10 +4,11 @@
  * @module
  */
 import { defineCalculation } from "../core/define.ts";
-import type { Calculation, InputDefinition } from "../core/types.ts";
+import type { Calculation } from "../core/types.ts";
+import type { InlineInput } from "../core/calculation.ts";
 import { BUSHBERG, depthInput, HOSKINS, KREMKAU, transmitFrequencyInput } from "./shared.ts";
 
-const attenuationInput: InputDefinition = {
+const attenuationInput: InlineInput = {
   unit: "dB/cm/MHz",
   description:
     "Attenuation coefficient per cm and per MHz (soft-tissue rule of thumb 0.5; see the tissue table)",

@@ -5,7 +5,8 @@
  * @module
  */
 import { defineCalculation } from "../core/define.ts";
-import type { Calculation, InputDefinition } from "../core/types.ts";
+import type { Calculation } from "../core/types.ts";
+import type { InlineInput } from "../core/calculation.ts";
 import { depthInput, HOSKINS, soundSpeedInput, SZABO, transmitFrequencyInput } from "./shared.ts";
 import { wavelengthAndPeriod } from "./wave.ts";
 
@@ -13,7 +14,7 @@ import { wavelengthAndPeriod } from "./wave.ts";
  * root of sinc²(u) = 1/2 is u = 0.4429, so the full width is 0.8859·λ·F/D. */
 const LINE_APERTURE_WIDTH_FACTOR = 0.8859;
 
-const apertureInput: InputDefinition = {
+const apertureInput: InlineInput = {
   unit: "mm",
   description: "Active aperture width of the probe in the scan plane",
   range: { min: 0, max: 200, minExclusive: true },

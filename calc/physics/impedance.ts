@@ -4,7 +4,8 @@
  * @module
  */
 import { defineCalculation } from "../core/define.ts";
-import type { Calculation, InputDefinition } from "../core/types.ts";
+import type { Calculation } from "../core/types.ts";
+import type { InlineInput } from "../core/calculation.ts";
 import { BUSHBERG, KREMKAU, soundSpeedInput } from "./shared.ts";
 
 /**
@@ -52,7 +53,7 @@ export const acousticImpedance: Calculation<
   cautions: [],
 });
 
-const impedanceInput = (which: string): InputDefinition => ({
+const impedanceInput = (which: string): InlineInput => ({
   unit: "MRayl",
   description: `Acoustic impedance of the ${which} medium`,
   range: { min: 0, max: 100, minExclusive: true },

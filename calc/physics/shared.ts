@@ -8,8 +8,9 @@
  *
  * @module
  */
-import type { InputDefinition, InputSchema, InputValues, Reference } from "../core/types.ts";
-import { type InputArguments, validateInputs } from "../core/define.ts";
+import type { InputValues, Reference } from "../core/types.ts";
+import { defineArguments, type InlineInput } from "../core/calculation.ts";
+import { validateInputs } from "../core/validate.ts";
 import { HATLE_ANGELSEN_1985 as HATLE_ANGELSEN, QUINONES_2002 } from "../references.ts";
 import cosine from "@stdlib/math-base-special-cos";
 
@@ -63,7 +64,7 @@ export function depthForRoundTripCm(timeS: number, soundSpeedMps: number): numbe
 }
 
 /** Speed-of-sound input, default 1540 m/s. */
-export const soundSpeedInput: InputDefinition = {
+export const soundSpeedInput: InlineInput = {
   unit: "m/s",
   description: "Speed of sound in the medium (scanner assumption for soft tissue: 1540 m/s)",
   range: { min: 0, max: 10000, minExclusive: true },
@@ -72,7 +73,7 @@ export const soundSpeedInput: InputDefinition = {
 };
 
 /** Transmit (carrier) frequency input in MHz. */
-export const transmitFrequencyInput: InputDefinition = {
+export const transmitFrequencyInput: InlineInput = {
   unit: "MHz",
   description: "Transmit (carrier) frequency of the probe",
   range: { min: 0, max: 100, minExclusive: true },
@@ -80,7 +81,7 @@ export const transmitFrequencyInput: InputDefinition = {
 };
 
 /** Insonation angle input: between the beam and the flow direction. */
-export const angleInput: InputDefinition = {
+export const angleInput: InlineInput = {
   unit: "deg",
   description: "Insonation angle between the ultrasound beam and the flow direction",
   range: { min: 0, max: 90, maxExclusive: true },
@@ -88,7 +89,7 @@ export const angleInput: InputDefinition = {
 };
 
 /** Imaging or sample depth in cm. */
-export function depthInput(description: string): InputDefinition {
+export function depthInput(description: string): InlineInput {
   return {
     unit: "cm",
     description,
@@ -141,15 +142,14 @@ export const BUSHBERG: Reference = {
  */
 export function validateArguments<I extends string>(
   title: string,
-  inputs: { readonly [K in I]: InputDefinition },
+  inputs: { readonly [K in I]: InlineInput },
   args: unknown,
 ): { values: InputValues<I>; flags: string[] } {
-  const schema: InputSchema<I> = { title, inputs, inputNames: Object.keys(inputs) as I[] };
-  return validateInputs(schema, args as InputArguments<I>);
+  return validateInputs(defineArguments(title, inputs), args);
 }
 
 /** Pulse repetition frequency input in Hz. */
-export const prfInput: InputDefinition = {
+export const prfInput: InlineInput = {
   unit: "Hz",
   description: "Pulse repetition frequency",
   range: { min: 0, max: 1e6, minExclusive: true },

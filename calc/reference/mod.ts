@@ -4,5 +4,5 @@
  * @module
  */
 export * from "./adult.ts";
+export * from "./zscore_models.ts";
 export * from "./zscore.ts";
-export * from "./zscore_uncertainty.ts";

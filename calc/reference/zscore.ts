@@ -1,600 +1,216 @@
 /**
- * Pediatric Z-scores against body surface area: model families as data, the PHN 2017 models,
- * Z ↔ measurement in both directions, percentiles, normal limits and side-by-side comparison.
- *
- * A Z-score model reduces to three functions of BSA: a transform T(X, BSA), a mean μ(BSA) and a
- * standard deviation σ(BSA) of the transformed measurement, so that Z = (T(X, BSA) − μ) / σ and
- * X = T⁻¹(μ + Z·σ, BSA). Each family fills these in from its coefficients; a new published model
- * of an existing family is added as data, a new family by one entry in {@linkcode ZSCORE_FAMILIES}.
+ * Pediatric Z-scores: one calculation per model (a family registered in the catalog), and one
+ * entry point for a Z-score with or without uncertainty, from the BSA or from height and weight
+ * (a chain of the model's BSA formula and its Z-score). Percentiles, the measurement at a Z,
+ * normal limits, and side-by-side comparison of models.
  *
  * @module
  */
-import * as z from "zod";
-import { defineCalculation, evaluate, formatRange, inRange } from "../core/define.ts";
-import type { Calculation, Reference, ValueRange } from "../core/types.ts";
-import { mathUnitOf, type QuantityInput } from "../core/units.ts";
-import { bsaCalculation, type BsaMethod } from "../body/bsa.ts";
-import { normalCdf } from "../stats/distributions.ts";
-
-/** Fields shared by every Z-score model. */
-export interface ZScoreModelBase {
-  /** Stable identifier, e.g. "phn2017.lvEndDiastolicDimension". */
-  readonly id: string;
-  /** What is measured, in words a practitioner reads without a glossary. */
-  readonly measurement: string;
-  /** Unit of the raw measurement X (mathjs unit string: "cm", "mL", "g"). */
-  readonly unit: string;
-  /** The BSA formula the model was built with. */
-  readonly bsaMethod: BsaMethod;
-  /** BSA range (m²) of the population the model was built on; outside it Z is flagged. */
-  readonly bsaRange: ValueRange;
-  /** Where the BSA range comes from (and how sure we are of it). */
-  readonly bsaRangeNote: string;
-  /** Valid domain of the raw measurement in `unit` (outside → RangeError). */
-  readonly measurementRange: ValueRange;
-  /** Published source of the model. */
-  readonly source: Reference;
-  /** How the coefficients reached this table (transcription, memory, synthetic). */
-  readonly provenance: string;
-  /** True for synthetic models used only in tests and demos; never published coefficients. */
-  readonly synthetic?: boolean;
-}
-
-/**
- * Allometric index with constant SD (the PHN 2017 form):
- * Z = (X / BSA^α − M) / S.
- */
-export interface AllometricConstantSdModel extends ZScoreModelBase {
-  /** Family discriminator. */
-  readonly family: "allometricConstantSd";
-  /** Exponent α of BSA. */
-  readonly alpha: number;
-  /** Mean M of X / BSA^α. */
-  readonly mean: number;
-  /** Standard deviation S of X / BSA^α (> 0). */
-  readonly sd: number;
-}
-
-/**
- * Log-normal model with mean and SD polynomial in BSA:
- * Z = (ln X − Σ aᵢ·BSAⁱ) / Σ sᵢ·BSAⁱ (X in `unit`; a single SD coefficient means constant SD).
- */
-export interface LogPolynomialBsaModel extends ZScoreModelBase {
-  /** Family discriminator. */
-  readonly family: "logPolynomialBsa";
-  /** a₀, a₁, … of the mean of ln X. */
-  readonly meanCoefficients: readonly number[];
-  /** s₀, s₁, … of the SD of ln X. */
-  readonly sdCoefficients: readonly number[];
-}
-
-/**
- * Allometric mean with modelled (heteroscedastic) SD:
- * Z = (X − a·BSA^b) / (c·BSA^d).
- */
-export interface AllometricModelledSdModel extends ZScoreModelBase {
-  /** Family discriminator. */
-  readonly family: "allometricModelledSd";
-  /** a of the mean a·BSA^b. */
-  readonly meanScale: number;
-  /** b of the mean a·BSA^b. */
-  readonly meanExponent: number;
-  /** c of the SD c·BSA^d. */
-  readonly sdScale: number;
-  /** d of the SD c·BSA^d. */
-  readonly sdExponent: number;
-}
-
-/** Any Z-score model. */
-export type ZScoreModel =
-  | AllometricConstantSdModel
-  | LogPolynomialBsaModel
-  | AllometricModelledSdModel;
-
-/** The names of the model families. */
-export type ZScoreFamilyName = ZScoreModel["family"];
-
-/** The three functions a family provides (all pure, allocation-free). */
-export interface ZScoreFamily<M extends ZScoreModel = ZScoreModel> {
-  /** Formula in words for docs. */
-  readonly formulaText: string;
-  /** T(X, BSA): the transformed measurement. */
-  transform(model: M, x: number, bsa: number): number;
-  /** T⁻¹(y, BSA): the measurement from a transformed value. */
-  inverse(model: M, y: number, bsa: number): number;
-  /** μ(BSA): mean of the transformed measurement. */
-  mean(model: M, bsa: number): number;
-  /** σ(BSA): SD of the transformed measurement. */
-  sd(model: M, bsa: number): number;
-}
-
-function polynomial(coefficients: readonly number[], x: number): number {
-  let sum = 0;
-  for (let i = coefficients.length - 1; i >= 0; i--) sum = sum * x + coefficients[i]!;
-  return sum;
-}
-
-/**
- * The Z-score model families, keyed by name. Adding a family is adding one entry here (and its
- * model type to {@linkcode ZScoreModel}); adding a model is adding data.
- *
- * @example
- * ```ts
- * import { ZSCORE_FAMILIES } from "@sonorigor/sonorigor";
- * import assert from "node:assert/strict";
- * assert.deepEqual(Object.keys(ZSCORE_FAMILIES), [
- *   "allometricConstantSd", "logPolynomialBsa", "allometricModelledSd",
- * ]);
- * ```
- */
-export const ZSCORE_FAMILIES: {
-  readonly allometricConstantSd: ZScoreFamily<AllometricConstantSdModel>;
-  readonly logPolynomialBsa: ZScoreFamily<LogPolynomialBsaModel>;
-  readonly allometricModelledSd: ZScoreFamily<AllometricModelledSdModel>;
-} = Object.freeze({
-  allometricConstantSd: {
-    formulaText: "Z = (X / BSA^α − M) / S",
-    transform: (m, x, bsa) => x / bsa ** m.alpha,
-    inverse: (m, y, bsa) => y * bsa ** m.alpha,
-    mean: (m) => m.mean,
-    sd: (m) => m.sd,
-  },
-  logPolynomialBsa: {
-    formulaText: "Z = (ln X − Σ aᵢ·BSAⁱ) / Σ sᵢ·BSAⁱ",
-    transform: (_m, x) => Math.log(x),
-    inverse: (_m, y) => Math.exp(y),
-    mean: (m, bsa) => polynomial(m.meanCoefficients, bsa),
-    sd: (m, bsa) => polynomial(m.sdCoefficients, bsa),
-  },
-  allometricModelledSd: {
-    formulaText: "Z = (X − a·BSA^b) / (c·BSA^d)",
-    transform: (_m, x) => x,
-    inverse: (_m, y) => y,
-    mean: (m, bsa) => m.meanScale * bsa ** m.meanExponent,
-    sd: (m, bsa) => m.sdScale * bsa ** m.sdExponent,
-  },
-});
-
-function familyOf(model: ZScoreModel): ZScoreFamily {
-  return ZSCORE_FAMILIES[model.family] as ZScoreFamily;
-}
-
-/**
- * The Z-score of a measurement for a model: the one Z formula (no validation; used by the
- * calculations below, by cohorts and by charts).
- *
- * Formula: Z = (T(X, BSA) − μ(BSA)) / σ(BSA), per family (see {@linkcode ZSCORE_FAMILIES}).
- *
- * @param model The model.
- * @param measurement X in the model's unit.
- * @param bsaM2 BSA in m² by the model's BSA method.
- * @returns Z (NaN only if an input is NaN: validate before calling).
- *
- * @example
- * ```ts
- * import { PHN_2017_MODELS, zScoreFormula } from "@sonorigor/sonorigor";
- * import assert from "node:assert/strict";
- * // PHN form: X = M·BSA^α gives Z = 0 (hand-checkable: 3.89 · 1^0.45 = 3.89 cm)
- * assert.equal(zScoreFormula(PHN_2017_MODELS.lvEndDiastolicDimension, 3.89, 1), 0);
- * ```
- */
-export function zScoreFormula(model: ZScoreModel, measurement: number, bsaM2: number): number {
-  const f = familyOf(model);
-  return (f.transform(model, measurement, bsaM2) - f.mean(model, bsaM2)) / f.sd(model, bsaM2);
-}
-
-/**
- * The measurement at a given Z for a model: the inverse of {@linkcode zScoreFormula}.
- *
- * Formula: X = T⁻¹(μ(BSA) + Z·σ(BSA), BSA); for PHN: X = (M + Z·S)·BSA^α.
- *
- * @param model The model.
- * @param zScore Z.
- * @param bsaM2 BSA in m².
- * @returns X in the model's unit (no validation).
- *
- * @example
- * ```ts
- * import { measurementFormula, PHN_2017_MODELS } from "@sonorigor/sonorigor";
- * import assert from "node:assert/strict";
- * // PHN aortic annulus at BSA 1 m²: (1.48 + 2·0.14)·1^0.5 = 1.76 cm
- * const x = measurementFormula(PHN_2017_MODELS.aorticAnnulus, 2, 1);
- * assert.ok(Math.abs(x - 1.76) < 1e-12);
- * ```
- */
-export function measurementFormula(model: ZScoreModel, zScore: number, bsaM2: number): number {
-  const f = familyOf(model);
-  return f.inverse(model, f.mean(model, bsaM2) + zScore * f.sd(model, bsaM2), bsaM2);
-}
-
-// ---------------------------------------------------------------------------------------------
-// Model definition (validated data)
-
-const rangeSchema = z.object({
-  min: z.number(),
-  max: z.number(),
-  minExclusive: z.boolean().optional(),
-  maxExclusive: z.boolean().optional(),
-}).refine((r) => r.min <= r.max, "expected min <= max");
-
-const baseShape = {
-  id: z.string().min(1),
-  measurement: z.string().min(1),
-  unit: z.string().min(1),
-  bsaMethod: z.enum(["mosteller", "duBois", "haycock", "gehanGeorge", "boyd"]),
-  bsaRange: rangeSchema,
-  bsaRangeNote: z.string(),
-  measurementRange: rangeSchema,
-  source: z.object({
-    authors: z.string(),
-    year: z.number(),
-    title: z.string(),
-    publication: z.string(),
-    locator: z.string().optional(),
-    doi: z.string().optional(),
-  }),
-  provenance: z.string().min(1),
-  synthetic: z.boolean().optional(),
-};
-const finite = z.number().refine(Number.isFinite, "expected a finite number");
-const positive = z.number().refine(
-  (v) => v > 0 && Number.isFinite(v),
-  "expected a finite number > 0",
-);
-
-const modelSchema = z.discriminatedUnion("family", [
-  z.object({
-    ...baseShape,
-    family: z.literal("allometricConstantSd"),
-    alpha: finite,
-    mean: finite,
-    sd: positive,
-  }),
-  z.object({
-    ...baseShape,
-    family: z.literal("logPolynomialBsa"),
-    meanCoefficients: z.array(finite).min(1),
-    sdCoefficients: z.array(finite).min(1),
-  }),
-  z.object({
-    ...baseShape,
-    family: z.literal("allometricModelledSd"),
-    meanScale: positive,
-    meanExponent: finite,
-    sdScale: positive,
-    sdExponent: finite,
-  }),
-]);
-
-/**
- * Validates and freezes a Z-score model given as data. Use it to add a published model (or a
- * clearly labelled synthetic one for tests) without touching code.
- *
- * @param model The model data.
- * @returns The same data, frozen.
- * @throws {TypeError} Naming the field when the data do not match the family's shape (unknown
- * family, missing or non-finite coefficient, SD ≤ 0, empty range).
- * @throws {RangeError} When the SD is not positive across the model's BSA range.
- *
- * @example
- * ```ts
- * import { defineZScoreModel, zScoreFormula } from "@sonorigor/sonorigor";
- * import assert from "node:assert/strict";
- * // A SYNTHETIC model (invented numbers) showing the data shape of a log-polynomial family
- * const model = defineZScoreModel({
- *   id: "synthetic.demo", measurement: "Demo diameter", unit: "cm", bsaMethod: "haycock",
- *   bsaRange: { min: 0.2, max: 2 }, bsaRangeNote: "synthetic",
- *   measurementRange: { min: 0, max: 10, minExclusive: true },
- *   source: { authors: "none", year: 2026, title: "Synthetic test model", publication: "none" },
- *   provenance: "synthetic: invented for this example", synthetic: true,
- *   family: "logPolynomialBsa", meanCoefficients: [0, 0.5], sdCoefficients: [0.1],
- * });
- * // ln X = 0.5 at BSA 1 → X = e^0.5 gives Z = 0
- * assert.ok(Math.abs(zScoreFormula(model, Math.exp(0.5), 1)) < 1e-12);
- * ```
- */
-export function defineZScoreModel<M extends ZScoreModel>(model: M): M {
-  const parsed = modelSchema.safeParse(model);
-  if (!parsed.success) {
-    const issue = parsed.error.issues[0]!;
-    const path = issue.path.join(".");
-    let value: unknown = model;
-    for (const key of issue.path) {
-      value = typeof value === "object" && value !== null
-        ? (value as Record<PropertyKey, unknown>)[key as PropertyKey]
-        : undefined;
-    }
-    const id = typeof (model as { id?: unknown })?.id === "string"
-      ? (model as { id: string }).id
-      : "?";
-    throw new TypeError(
-      `Z-score model '${id}': field '${path}' ${issue.message.toLowerCase()}, got ${
-        JSON.stringify(value) ?? "undefined"
-      }`,
-    );
-  }
-  const f = familyOf(model);
-  for (
-    const bsa of [
-      model.bsaRange.min,
-      (model.bsaRange.min + model.bsaRange.max) / 2,
-      model.bsaRange.max,
-    ]
-  ) {
-    if (bsa > 0 && !(f.sd(model, bsa) > 0)) {
-      throw new RangeError(
-        `Z-score model '${model.id}': expected a positive SD across the BSA range, got ${
-          f.sd(model, bsa)
-        } at BSA ${bsa} m²`,
-      );
-    }
-  }
-  return Object.freeze({ ...model }) as unknown as M;
-}
-
-// ---------------------------------------------------------------------------------------------
-// PHN 2017 models
-
-/**
- * Lopez L, Colan S, Stylianou M, et al. Circ Cardiovasc Imaging 2017;10:e006979.
- *
- * @example
- * ```ts
- * import { LOPEZ_2017 } from "@sonorigor/sonorigor";
- * import assert from "node:assert/strict";
- * assert.equal(LOPEZ_2017.year, 2017);
- * ```
- */
-export const LOPEZ_2017: Reference = Object.freeze({
-  authors: "Lopez L, Colan S, Stylianou M, Granger S, Trachtenberg F, Frommelt P, et al.",
-  year: 2017,
-  title:
-    "Relationship of echocardiographic Z scores adjusted for body surface area to age, sex, race, and ethnicity: the Pediatric Heart Network Normal Echocardiogram Database",
-  publication: "Circ Cardiovasc Imaging 2017;10(11):e006979",
-  doi: "10.1161/CIRCIMAGING.117.006979",
-});
-
-const PHN_PROVENANCE =
-  "Coefficients (α, M, S) as listed in the project's issue 4, which attributes them to Lopez et al. 2017; not re-checked against the paper's table here";
-const PHN_BSA_RANGE_NOTE =
-  "Assumed span of the PHN reference population (healthy non-obese children 0–18 years, BSA by Haycock); the paper's exact BSA range was not available here: verify before relying on the out-of-range flag";
-const PHN_BSA_RANGE: ValueRange = { min: 0.15, max: 2.4 };
-
-function phn(
-  key: string,
-  measurement: string,
-  alpha: number,
-  mean: number,
-  sd: number,
-  unit = "cm",
-): AllometricConstantSdModel {
-  const max = unit === "cm" ? 15 : 1000;
-  return defineZScoreModel({
-    id: `phn2017.${key}`,
-    measurement,
-    unit,
-    bsaMethod: "haycock",
-    bsaRange: PHN_BSA_RANGE,
-    bsaRangeNote: PHN_BSA_RANGE_NOTE,
-    measurementRange: { min: 0, max, minExclusive: true },
-    source: LOPEZ_2017,
-    provenance: PHN_PROVENANCE,
-    family: "allometricConstantSd",
-    alpha,
-    mean,
-    sd,
-  });
-}
-
-/**
- * The Pediatric Heart Network 2017 Z-score models (Lopez et al., Circ Cardiovasc Imaging
- * 2017;10:e006979): Z = (X / BSA^α − M) / S with BSA by Haycock; X in cm unless stated
- * (LV end-diastolic volume in mL, LV mass in g). Coefficients as listed in issue 4.
- *
- * @example
- * ```ts
- * import { PHN_2017_MODELS } from "@sonorigor/sonorigor";
- * import assert from "node:assert/strict";
- * const m = PHN_2017_MODELS.lvEndDiastolicDimension;
- * assert.deepEqual([m.alpha, m.mean, m.sd], [0.45, 3.89, 0.33]);
- * ```
- */
-export const PHN_2017_MODELS: {
-  readonly aorticAnnulus: AllometricConstantSdModel;
-  readonly aorticRootSinus: AllometricConstantSdModel;
-  readonly sinotubularJunction: AllometricConstantSdModel;
-  readonly ascendingAorta: AllometricConstantSdModel;
-  readonly mainPulmonaryArtery: AllometricConstantSdModel;
-  readonly rightPulmonaryArtery: AllometricConstantSdModel;
-  readonly leftPulmonaryArtery: AllometricConstantSdModel;
-  readonly mitralAnnulusAp: AllometricConstantSdModel;
-  readonly tricuspidAnnulusAp: AllometricConstantSdModel;
-  readonly lvEndDiastolicDimension: AllometricConstantSdModel;
-  readonly lvPosteriorWallDiastole: AllometricConstantSdModel;
-  readonly interventricularSeptumDiastole: AllometricConstantSdModel;
-  readonly lvEndDiastolicVolume: AllometricConstantSdModel;
-  readonly lvMass: AllometricConstantSdModel;
-} = Object.freeze({
-  aorticAnnulus: phn("aorticAnnulus", "Aortic valve annulus", 0.5, 1.48, 0.14),
-  aorticRootSinus: phn("aorticRootSinus", "Aortic root at the sinuses", 0.5, 2.06, 0.18),
-  sinotubularJunction: phn("sinotubularJunction", "Sinotubular junction", 0.5, 1.69, 0.16),
-  ascendingAorta: phn("ascendingAorta", "Ascending aorta", 0.5, 1.79, 0.18),
-  mainPulmonaryArtery: phn("mainPulmonaryArtery", "Main pulmonary artery", 0.5, 1.82, 0.24),
-  rightPulmonaryArtery: phn("rightPulmonaryArtery", "Right pulmonary artery", 0.5, 1.07, 0.18),
-  leftPulmonaryArtery: phn("leftPulmonaryArtery", "Left pulmonary artery", 0.5, 1.1, 0.18),
-  mitralAnnulusAp: phn(
-    "mitralAnnulusAp",
-    "Mitral valve annulus (anteroposterior)",
-    0.5,
-    2.31,
-    0.24,
-  ),
-  tricuspidAnnulusAp: phn(
-    "tricuspidAnnulusAp",
-    "Tricuspid valve annulus (anteroposterior)",
-    0.5,
-    2.36,
-    0.28,
-  ),
-  lvEndDiastolicDimension: phn(
-    "lvEndDiastolicDimension",
-    "LV end-diastolic dimension",
-    0.45,
-    3.89,
-    0.33,
-  ),
-  lvPosteriorWallDiastole: phn(
-    "lvPosteriorWallDiastole",
-    "LV posterior wall thickness (diastole)",
-    0.4,
-    0.57,
-    0.09,
-  ),
-  interventricularSeptumDiastole: phn(
-    "interventricularSeptumDiastole",
-    "Interventricular septal thickness (diastole)",
-    0.4,
-    0.58,
-    0.09,
-  ),
-  lvEndDiastolicVolume: phn(
-    "lvEndDiastolicVolume",
-    "LV end-diastolic volume",
-    1.3,
-    62.02,
-    11.94,
-    "mL",
-  ),
-  lvMass: phn("lvMass", "LV mass", 1.25, 53.02, 9.06, "g"),
-});
-
-// ---------------------------------------------------------------------------------------------
-// Calculations (one per model, cached): validated, propagatable
-
-const fromBsaCache = new WeakMap<ZScoreModel, Calculation<"measurement" | "bsaM2", "zScore">>();
-const fromBodyCache = new WeakMap<
-  ZScoreModel,
-  Calculation<"measurement" | "heightCm" | "weightKg", "bsaM2" | "zScore">
->();
+import type { Calculation, Population, Quantity } from "../core/types.ts";
+import { defineQuantity } from "../core/quantity.ts";
+import { formatRange, inRange } from "../core/range.ts";
+import { defineFamily, type Family } from "../core/family.ts";
+import { chain } from "../core/chain.ts";
+import { evaluate } from "../core/evaluate.ts";
+import { checkValue, quantityField } from "../core/validate.ts";
+import { throwIfErrors } from "../core/issues.ts";
+import { readAmount } from "../core/units.ts";
+import { bsaCalculation } from "../body/bsa.ts";
+import { BODY_SURFACE_AREA } from "../quantities/body.ts";
+import { QUANTITIES } from "../quantities/mod.ts";
+import { normalCdf, tCdf } from "../stats/distributions.ts";
+import { isUncertainValue } from "../uncertainty/uncertain_value.ts";
+import { propagate, type PropagateOptions } from "../uncertainty/propagate.ts";
+import type { UncertainArgument } from "../uncertainty/prepare.ts";
+import { isUncertainInput } from "../uncertainty/distributions.ts";
+import type { Interval, UncertainValue } from "../uncertainty/types.ts";
+import {
+  defineZScoreModel,
+  measurementFormula,
+  PHN_2017_MODELS,
+  type ZScoreForm,
+  ZSCORE_FORMS,
+  type ZScoreFormName,
+  type ZScoreModel,
+  zScoreFormula,
+} from "./zscore_models.ts";
+import { displayZScore, JUPYTER_DISPLAY } from "../../display/reference.ts";
 
 const Z_CAUTIONS = [
   "A Z-score is only as good as the model's reference population and its BSA formula; compare models before acting on a borderline value",
 ];
 
+const measured = new Map<string, Quantity>();
+
 /**
- * The Z-score of a model as a calculation of (measurement, BSA), defined once per model and
- * cached. The BSA input's typical range is the model's BSA range, so BSA outside it is flagged.
- *
- * Formula: {@linkcode zScoreFormula}.
- *
- * @param model The Z-score model.
- * @returns Calculation with inputs `measurement` (model unit) and `bsaM2` (m²), output `zScore`.
+ * The quantity a model measures: the package's quantity of that id, or one declared from the
+ * model's own label, unit and range (for a model of a measurement the package does not name).
  *
  * @example
  * ```ts
- * import { evaluate, PHN_2017_MODELS, zScoreCalculation } from "@sonorigor/sonorigor";
+ * import { AORTIC_ROOT, measuredQuantity, PHN_2017_MODELS } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
- * const calc = zScoreCalculation(PHN_2017_MODELS.aorticAnnulus);
+ * assert.equal(measuredQuantity(PHN_2017_MODELS.aorticRootSinus), AORTIC_ROOT);
+ * ```
+ */
+export function measuredQuantity(model: ZScoreModel): Quantity {
+  const known = model.quantity === undefined ? undefined : QUANTITIES.get(model.quantity);
+  if (known !== undefined) return known;
+  let q = measured.get(model.id);
+  if (q === undefined) {
+    q = defineQuantity({
+      id: model.id.replace(/[^A-Za-z0-9]+/g, "_"),
+      label: model.measurement,
+      unit: model.unit,
+      description: `${model.measurement} (as measured for the model ${model.id})`,
+      valid: model.measurementRange,
+      resolution: 0.01,
+      rangeNote: `the valid range given with the model ${model.id}`,
+    });
+    measured.set(model.id, q);
+  }
+  return q;
+}
+
+const zQuantities = new Map<string, Quantity>();
+
+/**
+ * The Z-score of a model's measurement as a quantity: "Aortic root at the sinuses Z-score
+ * (Lopez 2017)", dimensionless, with a " — coefficients not verified" mark where the model's
+ * provenance says so.
+ *
+ * @example
+ * ```ts
+ * import { PHN_2017_MODELS, zScoreQuantity } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.match(zScoreQuantity(PHN_2017_MODELS.lvMass).label, /^LV mass Z-score/);
+ * ```
+ */
+export function zScoreQuantity(model: ZScoreModel): Quantity {
+  let q = zQuantities.get(model.id);
+  if (q === undefined) {
+    const m = measuredQuantity(model);
+    q = defineQuantity({
+      id: `zScore.${model.id}`,
+      label: `${m.label} Z-score (${model.source.authors.split(/[ ,]/)[0]} ${model.source.year})`,
+      symbol: `Z(${m.symbol})`,
+      unit: "1",
+      description: `Standard deviations of the ${m.label.toLowerCase()} from the mean for body surface area (model ${model.id})`,
+      valid: { min: -Infinity, max: Infinity },
+      resolution: 0.01,
+      rangeNote: "any real number",
+    });
+    zQuantities.set(model.id, q);
+  }
+  return q;
+}
+
+function formOf(model: ZScoreModel): ZScoreForm {
+  return ZSCORE_FORMS[model.form] as ZScoreForm;
+}
+
+/**
+ * The family of Z-score calculations, one member per model: inputs the measurement (named by its
+ * quantity's id) and `bsaM2` (typical range: the model's BSA range), output `zScore`. Its
+ * documented members are the PHN 2017 models.
+ *
+ * @example
+ * ```ts
+ * import { evaluate, PHN_2017_MODELS, Z_SCORE } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const calc = Z_SCORE.calculation(PHN_2017_MODELS.aorticAnnulus);
  * // (1.48 + 2·0.14)·1^0.5 = 1.76 cm at BSA 1 m² gives Z = 2 (hand-checkable from the model)
- * const z = evaluate(calc, { measurement: "17.6 mm", bsaM2: 1 }).outputs.zScore;
+ * const z = evaluate(calc, { aorticAnnulus: "17.6 mm", bsaM2: 1 }).outputs.zScore;
  * assert.ok(Math.abs(z - 2) < 1e-12);
  * ```
  */
-export function zScoreCalculation(
-  model: ZScoreModel,
-): Calculation<"measurement" | "bsaM2", "zScore"> {
-  let calc = fromBsaCache.get(model);
-  if (calc === undefined) {
-    calc = defineCalculation({
+export const Z_SCORE: Family<ZScoreModel> = defineFamily<ZScoreModel>({
+  id: "zScore",
+  title: "Pediatric Z-score",
+  description:
+    "Z-score of a measurement for body surface area, one calculation per published model.",
+  members: Object.values(PHN_2017_MODELS),
+  key: (model) => JSON.stringify(model),
+  fromData: (data) => defineZScoreModel(data as ZScoreModel),
+  define: (model) => {
+    const m = measuredQuantity(model);
+    return {
       id: `zScore(${model.id})`,
       title: `Z-score: ${model.measurement} (${model.id})`,
       description: `Z-score of the ${model.measurement.toLowerCase()} for body surface area.`,
       inputs: {
-        measurement: {
-          unit: model.unit,
-          description: model.measurement,
-          range: model.measurementRange,
-        },
+        [m.id]: m,
         bsaM2: {
-          unit: "m^2",
-          description: `Body surface area (${model.bsaMethod})`,
-          range: { min: 0, max: 5, minExclusive: true },
+          quantity: BODY_SURFACE_AREA,
+          description: `Body surface area by the ${model.bsaMethod} formula`,
           typical: model.bsaRange,
+          typicalPediatric: model.bsaRange,
+          reason: `the BSA range of the population the model ${model.id} was built on`,
         },
       },
-      outputs: { zScore: { unit: "1", description: "Z-score (SDs from the mean for BSA)" } },
-      formula: ({ measurement, bsaM2 }) => ({ zScore: zScoreFormula(model, measurement, bsaM2) }),
-      formulaText: familyOf(model).formulaText,
-      sources: [model.source],
-      cautions: model.synthetic
-        ? [
-          "SYNTHETIC model: invented coefficients for tests and demos, not for patients",
-          ...Z_CAUTIONS,
-        ]
-        : Z_CAUTIONS,
+      outputs: { zScore: zScoreQuantity(model) },
+      formula: (x: Record<string, number>) => ({
+        zScore: zScoreFormula(model, x[m.id]!, x.bsaM2!),
+      }),
+      formulaText: formOf(model).formulaText,
+      citations: [model.source],
+      cautions: [
+        ...(model.synthetic
+          ? ["SYNTHETIC model: invented coefficients for tests and demos, not for patients"]
+          : []),
+        ...(/not re-checked|from memory|not verified/i.test(model.provenance)
+          ? [`Coefficients not verified against the publication: ${model.provenance}`]
+          : []),
+        ...Z_CAUTIONS,
+      ],
       clinical: true,
-    });
-    fromBsaCache.set(model, calc);
-  }
-  return calc;
-}
+    };
+  },
+});
 
 /**
- * The Z-score of a model as a calculation of (measurement, height, weight): BSA by the model's
- * BSA formula, then Z, so height and weight uncertainty propagates into Z. Defined once per
- * model and cached; both steps call the formulas of their one definitions.
- *
- * @param model The Z-score model.
- * @returns Calculation with inputs `measurement`, `heightCm`, `weightKg`; outputs `bsaM2`,
- * `zScore`.
+ * The Z-score calculation of a model (a member of {@linkcode Z_SCORE}).
  *
  * @example
  * ```ts
- * import { evaluate, PHN_2017_MODELS, zScoreFromBodySizeCalculation } from "@sonorigor/sonorigor";
+ * import { PHN_2017_MODELS, zScoreCalculation } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
- * const calc = zScoreFromBodySizeCalculation(PHN_2017_MODELS.lvEndDiastolicDimension);
- * const r = evaluate(calc, { measurement: 3.5, heightCm: 120, weightKg: 22 });
+ * assert.deepEqual(zScoreCalculation(PHN_2017_MODELS.lvMass).inputNames, ["lvMass", "bsaM2"]);
+ * ```
+ */
+export function zScoreCalculation(model: ZScoreModel): Calculation {
+  return Z_SCORE.calculation(model);
+}
+
+const fromBodySize = new Map<Calculation, Calculation>();
+
+/**
+ * The chain "BSA by the model's formula, then the Z-score" of a model: inputs height, weight and
+ * the measurement; outputs `bsaM2` and `zScore`.
+ *
+ * @example
+ * ```ts
+ * import { evaluate, PHN_2017_MODELS, zScoreFromBodySize } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const c = zScoreFromBodySize(PHN_2017_MODELS.lvEndDiastolicDimension);
+ * const r = evaluate(c, { lvEndDiastolicDiameter: 3.5, heightCm: 120, weightKg: 22 });
  * assert.ok(r.outputs.bsaM2 > 0.8 && r.outputs.bsaM2 < 0.9);
  * ```
  */
-export function zScoreFromBodySizeCalculation(
-  model: ZScoreModel,
-): Calculation<"measurement" | "heightCm" | "weightKg", "bsaM2" | "zScore"> {
-  let calc = fromBodyCache.get(model);
-  if (calc === undefined) {
-    const bsa = bsaCalculation(model.bsaMethod);
-    const zCalc = zScoreCalculation(model);
-    calc = defineCalculation({
-      id: `zScoreFromBodySize(${model.id})`,
+export function zScoreFromBodySize(model: ZScoreModel): Calculation {
+  const z = zScoreCalculation(model);
+  let c = fromBodySize.get(z);
+  if (c === undefined) {
+    c = chain([bsaCalculation(model.bsaMethod), z], {
       title: `Z-score from height and weight: ${model.measurement} (${model.id})`,
-      description:
-        `BSA by ${bsa.title}, then the Z-score of the ${model.measurement.toLowerCase()}.`,
-      inputs: {
-        measurement: zCalc.inputs.measurement,
-        heightCm: bsa.inputs.heightCm,
-        weightKg: bsa.inputs.weightKg,
-      },
-      outputs: { bsaM2: bsa.outputs.bsaM2, zScore: zCalc.outputs.zScore },
-      formula: ({ measurement, heightCm, weightKg }) => {
-        const { bsaM2 } = bsa.formula({ heightCm, weightKg });
-        return { bsaM2, zScore: zCalc.formula({ measurement, bsaM2 }).zScore };
-      },
-      formulaText: `BSA = ${bsa.formulaText}; ${zCalc.formulaText}`,
-      sources: [...zCalc.sources, ...bsa.sources],
-      cautions: [...zCalc.cautions, ...bsa.cautions],
-      clinical: true,
     });
-    fromBodyCache.set(model, calc);
+    fromBodySize.set(z, c);
   }
-  return calc;
+  return c;
 }
 
-// ---------------------------------------------------------------------------------------------
-// User-facing helpers
-
 /**
- * Percentile (0–100) of a Z-score under the normal distribution (standard normal CDF from
- * @stdlib).
+ * Percentile (0–100) of a Z-score under the normal distribution.
  *
  * Formula: P = 100 · Φ(Z)
  *
@@ -617,39 +233,6 @@ export function percentileFromZ(zScore: number): number {
   return 100 * normalCdf(zScore);
 }
 
-/** A measurement with its BSA, or with the height and weight that give the BSA. */
-export type ZScoreArguments =
-  | { readonly measurement: QuantityInput; readonly bsaM2: QuantityInput }
-  | {
-    readonly measurement: QuantityInput;
-    readonly heightCm: QuantityInput;
-    readonly weightKg: QuantityInput;
-  };
-
-/** The result of {@linkcode zScore}. */
-export interface ZScoreResult {
-  /** The model used. */
-  readonly model: ZScoreModel;
-  /** The measurement in the model's unit. */
-  readonly measurement: number;
-  /** The BSA used, m². */
-  readonly bsaM2: number;
-  /** Z. */
-  readonly zScore: number;
-  /** Percentile, 100·Φ(Z). */
-  readonly percentile: number;
-  /** The expected measurement (Z = 0) for this BSA. */
-  readonly expected: number;
-  /** The measurements at Z = −2 and Z = +2 for this BSA. */
-  readonly normalRange: readonly [number, number];
-  /** True when the BSA lies outside the model's BSA range. */
-  readonly bsaOutsideModelRange: boolean;
-  /** Flags: inputs outside typical ranges, BSA outside the model's range. */
-  readonly flags: readonly string[];
-  /** Cautions (with the clinical caution). */
-  readonly cautions: readonly string[];
-}
-
 /**
  * The flag text for a BSA outside a model's range.
  *
@@ -668,77 +251,186 @@ export function bsaOutsideModelFlag(model: ZScoreModel, bsaM2: number): string {
   }: the Z-score is an extrapolation`;
 }
 
+/** A measurement with its BSA, or with the height and weight that give the BSA; each exact, a
+ * distribution, or an uncertain value of an earlier step. */
+export interface ZScoreArguments {
+  /** The measurement, in the model's unit or as a quantity string ("17.6 mm"). */
+  readonly measurement: UncertainArgument;
+  /** BSA by the model's formula, m² (give this, or height and weight). */
+  readonly bsaM2?: UncertainArgument;
+  /** Height, cm. */
+  readonly heightCm?: UncertainArgument;
+  /** Weight, kg. */
+  readonly weightKg?: UncertainArgument;
+}
+
+/** Options of {@linkcode zScore}: the propagation's, when an input is uncertain. */
+export type ZScoreOptions = PropagateOptions;
+
+/** A Z-score with its context and, when an input was uncertain, its uncertainty. */
+export interface ZScoreResult {
+  /** Brand for displays. */
+  readonly kind: "sonorigor.zScore";
+  /** The model used. */
+  readonly model: ZScoreModel;
+  /** The measurement in the model's unit (estimate). */
+  readonly measurement: number;
+  /** The BSA used, m² (estimate). */
+  readonly bsaM2: number;
+  /** Z: at the estimates (exact and GUM) or the average of the samples (Monte Carlo). */
+  readonly zScore: number;
+  /** Percentile, 100·Φ(Z). */
+  readonly percentile: number;
+  /** The expected measurement (Z = 0) for this BSA. */
+  readonly expected: number;
+  /** The measurements at Z = −2 and Z = +2 for this BSA. */
+  readonly normalRange: Interval;
+  /** True when the BSA lies outside the model's BSA range. */
+  readonly bsaOutsideModelRange: boolean;
+  /** Z as an uncertain value (u, interval, budget), or null when every input was exact. */
+  readonly uncertainty: UncertainValue | null;
+  /** Percentiles at the ends of Z's coverage interval, or null. */
+  readonly percentileInterval: Interval | null;
+  /** Probability that the true Z exceeds +2, from the distribution that gives the interval
+   * (scaled t with ν_eff for the GUM law, the samples for Monte Carlo), or null. */
+  readonly probabilityAbovePlus2: number | null;
+  /** Probability that the true Z falls below −2, likewise, or null. */
+  readonly probabilityBelowMinus2: number | null;
+  /** Flags: inputs outside typical ranges, BSA outside the model's range, Monte Carlo notes. */
+  readonly flags: readonly string[];
+  /** Cautions (with the clinical caution and the coefficients' provenance). */
+  readonly cautions: readonly string[];
+}
+
+function isUncertain(v: unknown): boolean {
+  return isUncertainValue(v) || (isUncertainInput(v) && v.kind !== "exact");
+}
+
+/** P(true Z > 2) and P(true Z < −2) from the distribution of the interval. */
+function tailProbabilities(z: UncertainValue): { above: number; below: number } {
+  if (z.samples !== null) {
+    let a = 0, b = 0;
+    for (let i = 0; i < z.samples.length; i++) {
+      const s = z.samples[i]!;
+      if (s > 2) a++;
+      else if (s < -2) b++;
+    }
+    return { above: a / z.samples.length, below: b / z.samples.length };
+  }
+  const u = z.standardUncertainty;
+  if (!(u > 0)) return { above: z.value > 2 ? 1 : 0, below: z.value < -2 ? 1 : 0 };
+  // the interval is z ± t_p(ν)·u: the same scaled t gives the tail probabilities
+  const nu = z.effectiveDof === null || !Number.isFinite(z.effectiveDof)
+    ? Infinity
+    : Math.max(1, Math.floor(z.effectiveDof));
+  const cdf = (t: number) => (nu === Infinity ? normalCdf(t) : tCdf(t, nu));
+  return { above: 1 - cdf((2 - z.value) / u), below: cdf((-2 - z.value) / u) };
+}
+
 /**
- * The Z-score of one measurement for a model, with percentile, expected value, ±2 limits and
- * flags. Give either the BSA (by the model's BSA method) or the height and weight.
+ * The Z-score of a measurement for a model: the one entry point, with or without uncertainty.
+ * Give the BSA (by the model's formula) or the height and weight; each exact, a distribution
+ * (`normal(…)`), or an uncertain value of an earlier step. With any uncertain input the Z-score
+ * is propagated (GUM by default; `method: "monteCarlo"` for Monte Carlo) through the model's
+ * calculation, or through the chain BSA → Z when height and weight are given.
  *
- * Formula: {@linkcode zScoreFormula}; percentile = 100·Φ(Z).
+ * Formula: Z = (T(X, BSA) − μ(BSA)) / σ(BSA) of the model's form; percentile = 100·Φ(Z).
  *
  * Source: the model's (for PHN: Lopez L et al., Circ Cardiovasc Imaging 2017;10:e006979).
  *
  * @param model The Z-score model.
- * @param args `{ measurement, bsaM2 }` or `{ measurement, heightCm, weightKg }`; numbers in
- * canonical units or quantity strings ("3.6 cm").
- * @returns Z with its context.
+ * @param args The measurement and the BSA, or the measurement, height and weight.
+ * @param options Propagation options (used when an input is uncertain).
+ * @returns Z with its context and uncertainty; it displays itself in a notebook.
  * @throws {TypeError} For missing, unknown or mistyped inputs.
- * @throws {RangeError} For a measurement, BSA, height or weight outside its valid domain.
+ * @throws {RangeError} For a value outside its valid range.
  *
  * @example
  * ```ts
- * import { PHN_2017_MODELS, zScore } from "@sonorigor/sonorigor";
+ * import { normal, PHN_2017_MODELS, zScore } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
  * // LVEDD (M + 2S)·BSA^α = (3.89 + 0.66)·1 = 4.55 cm at BSA 1 m² → Z = 2
  * const r = zScore(PHN_2017_MODELS.lvEndDiastolicDimension, { measurement: 4.55, bsaM2: 1 });
  * assert.ok(Math.abs(r.zScore - 2) < 1e-12);
- * assert.equal(r.bsaOutsideModelRange, false);
+ * // Aortic annulus 1.76 ± 0.05 cm at BSA 1 m²: u(Z) = 0.05/0.14 (JCGM 100 eq. (10), ∂Z/∂X = 1/S)
+ * const u = zScore(PHN_2017_MODELS.aorticAnnulus, { measurement: normal(1.76, 0.05), bsaM2: 1 });
+ * assert.ok(Math.abs(u.uncertainty!.standardUncertainty - 0.05 / 0.14) < 1e-6);
+ * assert.ok(Math.abs(u.probabilityAbovePlus2! - 0.5) < 1e-6);
  * ```
  */
-export function zScore(model: ZScoreModel, args: ZScoreArguments): ZScoreResult {
+export function zScore(
+  model: ZScoreModel,
+  args: ZScoreArguments,
+  options: ZScoreOptions = {},
+): ZScoreResult {
+  const where = `Z-score (${model.id})`;
   if (typeof args !== "object" || args === null) {
-    throw new TypeError(`Z-score (${model.id}): expected an object of inputs, got ${String(args)}`);
+    throw new TypeError(`${where}: expected an object of inputs, got ${String(args)}`);
   }
-  let bsaM2: number;
-  let measurement: number;
-  let zValue: number;
+  const { measurement, ...body } = args;
+  const byBsa = body.bsaM2 !== undefined;
+  const calc = byBsa ? zScoreCalculation(model) : zScoreFromBodySize(model);
+  const key = measuredQuantity(model).id;
+  const inputs: Record<string, UncertainArgument | undefined> = { [key]: measurement, ...body };
+  const uncertain = options.method !== undefined || Object.values(inputs).some(isUncertain);
+  const population: Population = options.population ?? "pediatric";
+  let z: number, bsaM2: number, x: number;
   let flags: string[];
   let cautions: readonly string[];
-  if ("bsaM2" in args) {
-    const r = evaluate(zScoreCalculation(model), args);
-    ({ bsaM2, measurement } = r.inputs);
-    zValue = r.outputs.zScore;
-    flags = r.flags.filter((f) => !f.startsWith("'bsaM2'"));
-    cautions = r.cautions;
-  } else {
-    const r = evaluate(zScoreFromBodySizeCalculation(model), args);
-    measurement = r.inputs.measurement;
-    bsaM2 = r.outputs.bsaM2;
-    zValue = r.outputs.zScore;
+  let uncertainty: UncertainValue | null = null;
+  if (!uncertain) {
+    const r = evaluate(calc, inputs as Record<string, never>, { population });
+    z = r.outputs.zScore!;
+    x = r.inputs[key]!;
+    bsaM2 = byBsa ? r.inputs.bsaM2! : r.outputs.bsaM2!;
     flags = [...r.flags];
     cautions = r.cautions;
+  } else {
+    const r = propagate(calc, inputs, { ...options, population });
+    uncertainty = r.outputs.zScore!;
+    z = uncertainty.value;
+    x = r.inputs[key]!.value;
+    bsaM2 = byBsa ? r.inputs.bsaM2!.value : r.outputs.bsaM2!.value;
+    flags = [...r.warnings];
+    cautions = r.cautions;
   }
+  // the model's BSA range flag says more than the generic typical-range flag of bsaM2
+  flags = flags.filter((f) => !f.includes("'bsaM2'"));
   const outside = !inRange(bsaM2, model.bsaRange);
   if (outside) flags.push(bsaOutsideModelFlag(model, bsaM2));
-  return {
+  const tails = uncertainty ? tailProbabilities(uncertainty) : null;
+  const result: ZScoreResult = {
+    kind: "sonorigor.zScore",
     model,
-    measurement,
+    measurement: x,
     bsaM2,
-    zScore: zValue,
-    percentile: percentileFromZ(zValue),
+    zScore: z,
+    percentile: percentileFromZ(z),
     expected: measurementFormula(model, 0, bsaM2),
-    normalRange: [measurementFormula(model, -2, bsaM2), measurementFormula(model, 2, bsaM2)],
+    normalRange: {
+      lower: measurementFormula(model, -2, bsaM2),
+      upper: measurementFormula(model, 2, bsaM2),
+    },
     bsaOutsideModelRange: outside,
+    uncertainty,
+    percentileInterval: uncertainty
+      ? {
+        lower: percentileFromZ(uncertainty.interval.lower),
+        upper: percentileFromZ(uncertainty.interval.upper),
+      }
+      : null,
+    probabilityAbovePlus2: tails?.above ?? null,
+    probabilityBelowMinus2: tails?.below ?? null,
     flags,
     cautions,
   };
+  return Object.assign(result, { [JUPYTER_DISPLAY]: () => displayZScore(result) });
 }
 
-function checkBsa(where: string, bsaM2: number): void {
-  if (typeof bsaM2 !== "number") {
-    throw new TypeError(`${where}: expected 'bsaM2' as a number in m², got ${typeof bsaM2}`);
-  }
-  if (!(bsaM2 > 0 && bsaM2 <= 5)) {
-    throw new RangeError(`${where}: expected 'bsaM2' in (0, 5] m², got ${bsaM2}`);
-  }
+function checkBsa(where: string, bsaM2: unknown): number {
+  const r = checkValue("bsaM2", quantityField(BODY_SURFACE_AREA), bsaM2, { where });
+  throwIfErrors(r.issues);
+  return r.value!;
 }
 
 /**
@@ -748,10 +440,10 @@ function checkBsa(where: string, bsaM2: number): void {
  *
  * @param model The Z-score model.
  * @param zScore Z, finite.
- * @param bsaM2 BSA in m², in (0, 5].
+ * @param bsaM2 BSA in m² (a number or a quantity string).
  * @returns X in the model's unit.
  * @throws {TypeError} For a non-number Z or BSA.
- * @throws {RangeError} For a non-finite Z, a BSA outside (0, 5] m², or a Z giving a
+ * @throws {RangeError} For a non-finite Z, a BSA outside its valid range, or a Z giving a
  * non-positive measurement.
  *
  * @example
@@ -762,7 +454,7 @@ function checkBsa(where: string, bsaM2: number): void {
  * assert.equal(measurementAtZ(PHN_2017_MODELS.lvMass, 0, 1), 53.02);
  * ```
  */
-export function measurementAtZ(model: ZScoreModel, zScore: number, bsaM2: number): number {
+export function measurementAtZ(model: ZScoreModel, zScore: number, bsaM2: number | string): number {
   const where = `Measurement at Z (${model.id})`;
   if (typeof zScore !== "number") {
     throw new TypeError(`${where}: expected 'zScore' as a number, got ${typeof zScore}`);
@@ -770,11 +462,11 @@ export function measurementAtZ(model: ZScoreModel, zScore: number, bsaM2: number
   if (!Number.isFinite(zScore)) {
     throw new RangeError(`${where}: expected a finite 'zScore', got ${zScore}`);
   }
-  checkBsa(where, bsaM2);
-  const x = measurementFormula(model, zScore, bsaM2);
+  const bsa = checkBsa(where, bsaM2);
+  const x = measurementFormula(model, zScore, bsa);
   if (!(x > 0 && Number.isFinite(x))) {
     throw new RangeError(
-      `${where}: Z = ${zScore} at BSA ${bsaM2} m² gives no positive measurement, got ${x}`,
+      `${where}: Z = ${zScore} at BSA ${bsa} m² gives no positive measurement, got ${x}`,
     );
   }
   return x;
@@ -798,9 +490,9 @@ export interface NormalLimits {
  * The mean and the Z = ±2 measurements of a model at a BSA.
  *
  * @param model The Z-score model.
- * @param bsaM2 BSA in m², in (0, 5].
+ * @param bsaM2 BSA in m².
  * @returns Mean, lower (Z = −2), upper (Z = +2) and whether the BSA is outside the model's range.
- * @throws {RangeError} For a BSA outside (0, 5] m².
+ * @throws {RangeError} For a BSA outside its valid range.
  *
  * @example
  * ```ts
@@ -811,14 +503,14 @@ export interface NormalLimits {
  * assert.ok(Math.abs(l.lower - 1.53) < 1e-12 && Math.abs(l.upper - 2.178) < 1e-12);
  * ```
  */
-export function normalLimits(model: ZScoreModel, bsaM2: number): NormalLimits {
-  checkBsa(`Normal limits (${model.id})`, bsaM2);
+export function normalLimits(model: ZScoreModel, bsaM2: number | string): NormalLimits {
+  const bsa = checkBsa(`Normal limits (${model.id})`, bsaM2);
   return {
-    bsaM2,
-    mean: measurementFormula(model, 0, bsaM2),
-    lower: measurementFormula(model, -2, bsaM2),
-    upper: measurementFormula(model, 2, bsaM2),
-    bsaOutsideModelRange: !inRange(bsaM2, model.bsaRange),
+    bsaM2: bsa,
+    mean: measurementFormula(model, 0, bsa),
+    lower: measurementFormula(model, -2, bsa),
+    upper: measurementFormula(model, 2, bsa),
+    bsaOutsideModelRange: !inRange(bsa, model.bsaRange),
   };
 }
 
@@ -826,16 +518,16 @@ export function normalLimits(model: ZScoreModel, bsaM2: number): NormalLimits {
 export interface ZScoreComparisonRow {
   /** Model identifier. */
   readonly modelId: string;
-  /** Model family. */
-  readonly family: ZScoreFamilyName;
+  /** Model form. */
+  readonly form: ZScoreFormName;
   /** Source, "Authors year". */
   readonly source: string;
-  /** Z, or NaN when the model could not be applied (see `error`). */
-  readonly zScore: number;
-  /** Percentile, or NaN. */
-  readonly percentile: number;
-  /** BSA used by this model (its own BSA formula), m². */
-  readonly bsaM2: number;
+  /** Z, or null when the model could not be applied (see `error`). */
+  readonly zScore: number | null;
+  /** Percentile, or null. */
+  readonly percentile: number | null;
+  /** BSA used by this model (its own BSA formula), m², or null. */
+  readonly bsaM2: number | null;
   /** Flags of this model (BSA outside range, ...). */
   readonly flags: readonly string[];
   /** Why the model could not be applied (unit mismatch, value out of domain), if so. */
@@ -850,7 +542,7 @@ export interface ZScoreComparisonRow {
  *
  * @param models The models to compare (typically of the same measurement).
  * @param args `{ measurement, heightCm, weightKg }` (preferred: each model gets its own BSA) or
- * `{ measurement, bsaM2 }`.
+ * `{ measurement, bsaM2 }`; exact values.
  * @returns One row per model, in the order given.
  * @throws {TypeError} When `models` is empty or not an array.
  *
@@ -863,7 +555,7 @@ export interface ZScoreComparisonRow {
  *   { measurement: "2.0 cm", bsaM2: 1 },
  * );
  * assert.equal(rows.length, 2);
- * assert.ok(rows[0]!.zScore < rows[1]!.zScore);
+ * assert.ok(rows[0]!.zScore! < rows[1]!.zScore!);
  * ```
  */
 export function compareZScoreModels(
@@ -878,23 +570,19 @@ export function compareZScoreModels(
     );
   }
   const first = models[0]!;
-  const firstUnit = mathUnitOf(first.unit);
   return models.map((model) => {
     const source = `${model.source.authors.split(",")[0]} ${model.source.year}`;
-    const unit = mathUnitOf(model.unit);
-    const comparable = model.unit === first.unit ||
-      (unit !== null && firstUnit !== null && unit.equalBase(firstUnit));
     const failed = (error: string): ZScoreComparisonRow => ({
       modelId: model.id,
-      family: model.family,
+      form: model.form,
       source,
-      zScore: NaN,
-      percentile: NaN,
-      bsaM2: NaN,
+      zScore: null,
+      percentile: null,
+      bsaM2: null,
       flags: [],
       error,
     });
-    if (!comparable) {
+    if (model.unit !== first.unit && typeof readAmount(`1 ${model.unit}`, first.unit) !== "number") {
       return failed(
         `Z-score comparison: model '${model.id}' measures in ${model.unit}, not comparable with ${first.unit} of '${first.id}', got ${model.unit}`,
       );
@@ -903,7 +591,7 @@ export function compareZScoreModels(
       const r = zScore(model, args);
       return {
         modelId: model.id,
-        family: model.family,
+        form: model.form,
         source,
         zScore: r.zScore,
         percentile: r.percentile,

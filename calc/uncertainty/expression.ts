@@ -6,7 +6,8 @@
  */
 import type { MathNode } from "mathjs";
 import { defineCalculation } from "../core/define.ts";
-import type { Calculation, InputDefinition, InputValues, Reference } from "../core/types.ts";
+import type { Calculation, Citation, InputValues } from "../core/types.ts";
+import type { InputSpec } from "../core/calculation.ts";
 import { math } from "../core/units.ts";
 
 /** The id every expression model carries (they are made at run time, not exported by a module). */
@@ -18,20 +19,20 @@ export interface ExpressionModelSpec<I extends string, O extends string> {
    * trigonometric functions are in radians. */
   readonly expression: string;
   /** Inputs by name, each with its canonical unit and valid range. */
-  readonly inputs: { readonly [K in I]: InputDefinition };
+  readonly inputs: { readonly [K in I]: InputSpec };
   /** The output's name, unit and description. */
   readonly output: { readonly name: O; readonly unit: string; readonly description: string };
   /** Title. @default "Expression model: <expression>" */
   readonly title?: string;
   /** Sources. @default a "user-supplied model" entry */
-  readonly sources?: readonly Reference[];
+  readonly citations?: readonly Citation[];
   /** Cautions. @default none */
   readonly cautions?: readonly string[];
   /** Whether the result could reach a patient decision. @default false */
   readonly clinical?: boolean;
 }
 
-const USER_SOURCE: Reference = {
+const USER_SOURCE: Citation = {
   authors: "the user",
   year: 0, // no publication year: shown as "n.d."
   title: "User-supplied measurement model",
@@ -119,7 +120,11 @@ export function expressionModel<I extends string, O extends string>(
     },
     formula: (x) => ({ [out]: Number(compiled.evaluate({ ...x })) }) as Record<O, number>,
     formulaText: `${spec.output.name} = ${spec.expression}`,
-    sources: spec.sources ?? [USER_SOURCE],
+    citations: spec.citations ?? [USER_SOURCE],
+    recipe: {
+      kind: "local",
+      why: "an expression model is made at run time and needs mathjs, which workers do not load",
+    },
     cautions: spec.cautions ?? [],
     clinical: spec.clinical ?? false,
     partial,

@@ -1,37 +1,31 @@
 /**
  * Monte Carlo on several cores: a pool of workers with an explicit lifecycle
  * ({@linkcode createMonteCarloPool} … `close()`). The pool runs the same trial engine and the
- * same stream layout as {@linkcode monteCarlo} and {@linkcode monteCarloAdaptive} (block b of a
- * run keyed k draws from MT19937 keyed [...k, b]), so its results are identical, bit for bit, to
- * the single-thread functions for any number of workers.
+ * same stream layout as {@linkcode propagate}, so its results are identical, bit for bit, to one
+ * thread's for any number of workers. Workers make each calculation again from the catalog by its
+ * recipe and refuse it when its fingerprint differs from the caller's copy.
  *
  * @module
  */
 import type { Calculation } from "../core/types.ts";
-import {
-  type AdaptiveOptions,
-  type AdaptiveResult,
-  adaptiveRun,
-  coverageTailSize,
-  finishMonteCarlo,
-  mergeTails,
-  type MonteCarloOptions,
-  type MonteCarloResult,
-  monteCarloRun,
-  type SequenceRun,
-} from "./montecarlo.ts";
+import { fingerprint } from "../core/catalog.ts";
+import type { AdaptiveRun, SequenceRun } from "./adaptive.ts";
+import { coverageTailSize, mergeTails } from "./intervals.ts";
+import { finishMonteCarlo, type MonteCarloRun } from "./monte_carlo.ts";
 import type { UncertainInputs } from "./prepare.ts";
-import { EXPRESSION_MODEL_ID } from "./expression.ts";
-import { BLOCK_TRIALS, blockCount, range, type TrialPlan } from "./trials.ts";
-import type { WorkerReply, WorkerRequest, WorkerTask } from "./worker.ts";
+import { displayable, planPropagation, type PropagateOptions } from "./propagate.ts";
+import { propagateGum } from "./gum.ts";
+import { BLOCK_TRIALS, blockCount, type PlanInput, range, type TrialPlan } from "./sampling.ts";
+import type { Propagation } from "./types.ts";
+import type { PlainError, WorkerReply, WorkerRequest, WorkerTask } from "./worker.ts";
 
 /** Options of {@linkcode createMonteCarloPool}. */
 export interface MonteCarloPoolOptions {
   /** Number of workers, an integer in [1, 64]. @default navigator.hardwareConcurrency (at most 64) */
   readonly workers?: number;
-  /** Absolute URLs of modules whose exported calculations the workers may run, besides the
-   * package's own (mod.ts). A calculation defined in a notebook cell cannot run in a worker:
-   * define it in a module and list the module here. */
+  /** Absolute URLs of modules whose exported calculations, families or catalogs the workers may
+   * run, besides the package's catalog. A calculation defined in a notebook cell cannot run in a
+   * worker: define it in a module and list the module here. */
   readonly modules?: readonly (string | URL)[];
 }
 
@@ -39,19 +33,13 @@ export interface MonteCarloPoolOptions {
 export interface MonteCarloPool {
   /** Number of workers. */
   readonly workers: number;
-  /** {@linkcode monteCarlo} with the blocks of trials shared among the workers. */
-  monteCarlo<I extends string, O extends string>(
+  /** {@linkcode propagate} with the trials (or the adaptive sequences) shared among the workers;
+   * the GUM law runs on the calling thread. */
+  propagate<I extends string, O extends string>(
     calc: Calculation<I, O>,
     inputs: UncertainInputs<I>,
-    options?: MonteCarloOptions,
-  ): Promise<MonteCarloResult<O>>;
-  /** {@linkcode monteCarloAdaptive} with sequences computed ahead in parallel and taken in order
-   * (sequences past the stopping point are discarded). */
-  monteCarloAdaptive<I extends string, O extends string>(
-    calc: Calculation<I, O>,
-    inputs: UncertainInputs<I>,
-    options?: AdaptiveOptions,
-  ): Promise<AdaptiveResult<O>>;
+    options?: PropagateOptions,
+  ): Promise<Propagation<I, O>>;
   /** Stops the workers; later calls are refused. */
   close(): void;
   /** Same as `close()`, for `using`. */
@@ -64,6 +52,7 @@ const SEQUENCES_PER_WORKER = 4;
 const ROUNDS_IN_FLIGHT = 2;
 
 type Done = Extract<WorkerReply, { type: "done" }>;
+type DistributiveOmit<T, K extends PropertyKey> = T extends unknown ? Omit<T, K> : never;
 
 /** One worker with request/reply bookkeeping. */
 class PoolWorker {
@@ -106,10 +95,8 @@ class PoolWorker {
   }
 }
 
-type DistributiveOmit<T, K extends PropertyKey> = T extends unknown ? Omit<T, K> : never;
-
 /** The error a worker reported, as the same class. */
-function rebuild(error: { name: string; message: string }): Error {
+function rebuildError(error: PlainError): Error {
   if (error.name === "RangeError") return new RangeError(error.message);
   if (error.name === "TypeError") return new TypeError(error.message);
   return new Error(error.message);
@@ -123,31 +110,41 @@ function split<T>(items: readonly T[], parts: number): T[][] {
   return out;
 }
 
+/** The plan of a share of blocks: sample inputs cut to the share's trials. */
+function sharePlan(plan: TrialPlan, first: number, n: number): TrialPlan {
+  return {
+    groups: plan.groups,
+    inputs: plan.inputs.map((p): PlanInput =>
+      p.kind === "samples" ? { kind: "samples", samples: p.samples.slice(first, first + n) } : p
+    ),
+  };
+}
+
 /**
- * Starts a pool of Monte Carlo workers. Each worker loads the package and the given modules once
- * (about 0.2 s and 15–25 MB per worker; mathjs is not loaded in workers); the pool then runs
- * {@linkcode monteCarlo} and {@linkcode monteCarloAdaptive} across them with results identical to
- * the single-thread functions, bit for bit, whatever the number of workers.
- *
- * Inputs are prepared (units converted, distributions checked) on the calling thread; workers
- * only draw and evaluate. Worth it for runs of about 10⁵ trials and more.
+ * Starts a pool of Monte Carlo workers. Each worker loads the package's catalog and the given
+ * modules once (mathjs is not loaded in workers); the pool then runs {@linkcode propagate} by
+ * Monte Carlo across them with results identical to one thread, bit for bit, whatever the number
+ * of workers. Inputs are prepared (units converted, distributions checked) on the calling thread;
+ * workers only draw and evaluate. Worth it for runs of about 10⁵ trials and more on a machine
+ * with free cores.
  *
  * @param options Number of workers and extra modules with calculations.
  * @returns The pool; close it when done.
  * @throws {RangeError} For a bad number of workers.
  * @throws {TypeError} For a module that is not an absolute URL, or one that fails to load.
  *
- * @example Same result as the single-thread function
+ * @example Same result as one thread
  * ```ts
- * import { continuityValveArea, createMonteCarloPool, monteCarlo, normal } from "@sonorigor/sonorigor";
+ * import { continuityValveArea, createMonteCarloPool, normal, propagate } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
  * const inputs = { lvotDiameterCm: normal(2.0, 0.1), lvotVtiCm: normal(20, 1), avVtiCm: normal(80, 3) };
+ * const options = { method: "monteCarlo", trials: 200_000, seed: 5 } as const;
  * const pool = await createMonteCarloPool({ workers: 2 });
  * try {
- *   const parallel = await pool.monteCarlo(continuityValveArea, inputs, { trials: 200_000, seed: 5 });
- *   const single = monteCarlo(continuityValveArea, inputs, { trials: 200_000, seed: 5 });
- *   assert.equal(parallel.outputs.avaCm2.estimate, single.outputs.avaCm2.estimate);
- *   assert.deepEqual(parallel.outputs.avaCm2.symmetricInterval, single.outputs.avaCm2.symmetricInterval);
+ *   const parallel = await pool.propagate(continuityValveArea, inputs, options);
+ *   const single = propagate(continuityValveArea, inputs, options);
+ *   assert.equal(parallel.outputs.avaCm2.value, single.outputs.avaCm2.value);
+ *   assert.deepEqual(parallel.outputs.avaCm2.interval, single.outputs.avaCm2.interval);
  * } finally {
  *   pool.close();
  * }
@@ -162,7 +159,7 @@ export async function createMonteCarloPool(
       `Monte Carlo pool: expected workers to be an integer in [1, 64], got ${count}`,
     );
   }
-  const modules = [new URL("../../mod.ts", import.meta.url).href];
+  const modules: string[] = [];
   for (const m of options.modules ?? []) {
     let url: URL;
     try {
@@ -176,7 +173,6 @@ export async function createMonteCarloPool(
   }
   /** Why later calls are refused (null while the pool is open). */
   let refusal: string | null = null;
-  /** Stops every worker: runs in flight are refused with `during`, later calls with `later`. */
   const stop = (during: string, later: string) => {
     if (refusal !== null) return;
     refusal = later;
@@ -187,7 +183,6 @@ export async function createMonteCarloPool(
       "Monte Carlo pool: the pool was closed during the run",
       "Monte Carlo pool: the pool is closed; create a new one",
     );
-  // a worker that died leaves the pool unusable: stop the others, refuse later calls
   const workers = range(count).map(() =>
     new PoolWorker((message) => {
       const reason = `Monte Carlo pool: a worker failed (${message}); create a new pool`;
@@ -201,9 +196,7 @@ export async function createMonteCarloPool(
       ),
     );
     const failed = loaded.find((r) => r.error);
-    if (failed?.error) {
-      throw new TypeError(`Monte Carlo pool: ${failed.error.message}`);
-    }
+    if (failed?.error) throw new TypeError(`Monte Carlo pool: ${failed.error.message}`);
   } catch (e) {
     close();
     throw e;
@@ -211,147 +204,153 @@ export async function createMonteCarloPool(
 
   /** Refuses what the workers cannot run, before any work is sent. */
   const checkRunnable = (calc: Calculation) => {
-    if (calc.id === EXPRESSION_MODEL_ID) {
+    if (calc.recipe.kind === "local") {
       throw new TypeError(
-        `Monte Carlo pool: expression models need mathjs, which workers do not load; run '${calc.title}' with monteCarlo or monteCarloAdaptive on this thread`,
+        `Monte Carlo pool: '${calc.title}' cannot run in a worker (${calc.recipe.why}); run it with propagate() on this thread`,
       );
     }
   };
   const ensureOpen = () => {
     if (refusal !== null) throw new Error(refusal);
   };
-
-  /** Sends each worker its tasks (skipping idle workers) and waits for every reply. */
   const dispatch = (
     calc: Calculation,
-    formula: string,
-    plan: TrialPlan,
     shares: readonly (readonly WorkerTask[])[],
-    coverage: number | null,
-    tailSize: number | null,
-  ): Promise<Done[]> =>
-    Promise.all(
+    extra: Pick<
+      Extract<WorkerRequest, { type: "run" }>,
+      "keepDraws" | "statistics" | "tailSize"
+    >,
+  ): Promise<Done[]> => {
+    const recipe = calc.recipe, print = fingerprint(calc);
+    return Promise.all(
       shares.map((tasks, w) =>
-        workers[w]!.request<Done>({
-          type: "run",
-          id: calc.id,
-          formula,
-          plan,
-          tasks,
-          coverage,
-          tailSize,
-        })
+        workers[w]!.request<Done>({ type: "run", recipe, fingerprint: print, tasks, ...extra })
       ),
     );
+  };
+
+  const fixed = async <I extends string, O extends string>(
+    calc: Calculation<I, O>,
+    run: MonteCarloRun<I>,
+  ): Promise<Propagation<I, O>> => {
+    const m = run.trials;
+    const shares = split(range(blockCount(m)), count).map((blocks) => {
+      const first = blocks[0]! * BLOCK_TRIALS;
+      const n = Math.min(m, (blocks.at(-1)! + 1) * BLOCK_TRIALS) - first;
+      return [{ runKey: [run.seed], m, blocks, plan: sharePlan(run.plan, first, n) }];
+    });
+    const tailSize = coverageTailSize(m, run.coverage);
+    const replies = await dispatch(calc as unknown as Calculation, shares, {
+      keepDraws: run.keepSamples,
+      statistics: null,
+      tailSize,
+    });
+    // the failure of the earliest blocks, as the single-thread run would report it
+    const failed = replies.find((r) => r.error);
+    if (failed?.error) throw rebuildError(failed.error);
+    const at = (w: number) => shares[w]![0]!.blocks[0]! * BLOCK_TRIALS;
+    const outputs = calc.outputNames.map((_, k) => {
+      const all = new Float64Array(m);
+      replies.forEach((r, w) => all.set(r.results[0]![k]!, at(w)));
+      return all;
+    });
+    const draws = run.plan.inputs.map((p, i) => {
+      if (p.kind !== "source" || !run.keepSamples) return null;
+      const all = new Float64Array(m);
+      replies.forEach((r, w) => all.set(r.draws[0]![i]!, at(w)));
+      return all;
+    });
+    const counts = {
+      inputsOutside: calc.inputNames.map((_, i) =>
+        replies.reduce((n, r) => n + r.counts[0]!.inputsOutside[i]!, 0)
+      ),
+      outputsOutside: calc.outputNames.map((_, k) =>
+        replies.reduce((n, r) => n + r.counts[0]!.outputsOutside[k]!, 0)
+      ),
+    };
+    // the intervals need only the tails: merge the workers' own (exact, as from one sort)
+    const tails = calc.outputNames.map((_, k) => ({
+      low: mergeTails(replies.map((r) => r.tails[0]![k]!.low), tailSize, "low"),
+      high: mergeTails(replies.map((r) => r.tails[0]![k]!.high), tailSize, "high"),
+    }));
+    return finishMonteCarlo(calc, run, { outputs, draws, firstTrial: 0 }, counts, { tails });
+  };
+
+  const adaptive = async <O extends string>(
+    calc: Calculation,
+    state: AdaptiveRun<O>,
+  ): Promise<Propagation<string, O>> => {
+    const m = state.trialsPerSequence;
+    const blocks = range(blockCount(m));
+    // rounds of sequences; the next round is sent before this one is taken, so that the workers
+    // never wait for the main thread (a round past the stopping point is discarded)
+    let next = state.sequences;
+    const inFlight: { shares: WorkerTask[][]; replies: Promise<Done[]> }[] = [];
+    const send = () => {
+      while (inFlight.length < ROUNDS_IN_FLIGHT && next < state.maxSequences) {
+        const batch = Math.min(count * SEQUENCES_PER_WORKER, state.maxSequences - next);
+        const first = next;
+        const tasks: WorkerTask[] = range(batch).map((i) => ({
+          runKey: [state.seed, first + i],
+          m,
+          blocks,
+          plan: state.plan,
+        }));
+        const shares = split(tasks, count);
+        const replies = dispatch(calc, shares, {
+          keepDraws: false,
+          statistics: { coverage: state.coverage, interval: state.interval },
+          tailSize: null,
+        });
+        replies.catch(() => {}); // a discarded round may fail unobserved; a taken one rethrows
+        inFlight.push({ shares, replies });
+        next += batch;
+      }
+    };
+    while (state.wantsMore()) {
+      send();
+      const round = inFlight.shift()!;
+      const replies = await round.replies;
+      let stopped = false;
+      for (const [w, reply] of replies.entries()) {
+        for (let t = 0; t < round.shares[w]!.length; t++) {
+          if (t === reply.failedTask) throw rebuildError(reply.error!);
+          const sequence: SequenceRun = {
+            results: reply.results[t]! as Float64Array[],
+            inputsOutside: reply.counts[t]!.inputsOutside,
+            outputsOutside: reply.counts[t]!.outputsOutside,
+            stats: reply.stats[t]!,
+          };
+          if (state.add(sequence) || !state.wantsMore()) {
+            stopped = true;
+            break;
+          }
+        }
+        if (stopped) break;
+      }
+    }
+    return state.finish();
+  };
 
   return {
     workers: count,
-    async monteCarlo<I extends string, O extends string>(
+    async propagate<I extends string, O extends string>(
       calc: Calculation<I, O>,
       inputs: UncertainInputs<I>,
-      runOptions: MonteCarloOptions = {},
-    ): Promise<MonteCarloResult<O>> {
+      runOptions: PropagateOptions = {},
+    ): Promise<Propagation<I, O>> {
       ensureOpen();
-      checkRunnable(calc as unknown as Calculation);
-      const run = monteCarloRun(calc, inputs, runOptions);
-      const m = run.trials;
-      const shares = split(range(blockCount(m)), count).map((blocks) => [
-        { key: [run.seed], m, blocks },
-      ]);
-      const tailSize = coverageTailSize(m, run.coverage);
-      const replies = await dispatch(
-        calc as unknown as Calculation,
-        calc.formula.toString(),
-        run.plan,
-        shares,
-        null,
-        tailSize,
-      );
-      // the failure of the earliest blocks, as the single-thread run would report it
-      const failed = replies.find((r) => r.error);
-      if (failed?.error) throw rebuild(failed.error);
-      const outside = run.plan.inputs.map((_, i) =>
-        replies.reduce((n, r) => n + r.outside[0]![i]!, 0)
-      );
-      const results = calc.outputNames.map((_, k) => {
-        const all = new Float64Array(m);
-        replies.forEach((r, w) =>
-          all.set(r.results[0]![k]!, shares[w]![0]!.blocks[0]! * BLOCK_TRIALS)
-        );
-        return all;
-      });
-      // the intervals need only the tails: merge the workers' own (exact, as from one sort)
-      const tails = calc.outputNames.map((_, k) => ({
-        low: mergeTails(replies.map((r) => r.tails[0]![k]!.low), tailSize, "low"),
-        high: mergeTails(replies.map((r) => r.tails[0]![k]!.high), tailSize, "high"),
-      }));
-      return finishMonteCarlo(calc, run, results, outside, tails);
-    },
-
-    async monteCarloAdaptive<I extends string, O extends string>(
-      calc: Calculation<I, O>,
-      inputs: UncertainInputs<I>,
-      runOptions: AdaptiveOptions = {},
-    ): Promise<AdaptiveResult<O>> {
-      ensureOpen();
-      checkRunnable(calc as unknown as Calculation);
-      const state = adaptiveRun(calc, inputs, runOptions);
-      const m = state.trialsPerSequence;
-      const blocks = range(blockCount(m));
-      const formula = calc.formula.toString();
-      // rounds of sequences; the next round is sent before this one is taken, so that the
-      // workers never wait for the main thread (a round past the stopping point is discarded)
-      const lastSequence = state.maxSequences;
-      let next = state.sequences;
-      const inFlight: { shares: WorkerTask[][]; replies: Promise<Done[]> }[] = [];
-      const send = () => {
-        while (inFlight.length < ROUNDS_IN_FLIGHT && next < lastSequence) {
-          const batch = Math.min(count * SEQUENCES_PER_WORKER, lastSequence - next);
-          const first = next;
-          const tasks: WorkerTask[] = range(batch).map((i) => ({
-            key: [state.seed, first + i],
-            m,
-            blocks,
-          }));
-          const shares = split(tasks, count);
-          const replies = dispatch(
-            calc as unknown as Calculation,
-            formula,
-            state.plan,
-            shares,
-            state.coverage,
-            null,
-          );
-          replies.catch(() => {}); // a discarded round may fail unobserved; a taken one rethrows
-          inFlight.push({ shares, replies });
-          next += batch;
-        }
-      };
-      while (state.wantsMore()) {
-        send();
-        const round = inFlight.shift()!;
-        const replies = await round.replies;
-        // take the sequences in order until the procedure stops
-        let stopped = false;
-        for (const [w, reply] of replies.entries()) {
-          for (let t = 0; t < round.shares[w]!.length; t++) {
-            if (t === reply.failedTask) throw rebuild(reply.error!);
-            const sequence: SequenceRun = {
-              results: reply.results[t]! as Float64Array[],
-              outside: reply.outside[t]!,
-              stats: reply.stats[t]!,
-            };
-            if (state.add(sequence) || !state.wantsMore()) {
-              stopped = true;
-              break;
-            }
-          }
-          if (stopped) break;
-        }
+      const planned = planPropagation(calc, inputs, runOptions);
+      if (planned.kind === "gum") {
+        return displayable(propagateGum(calc, planned.prepared, planned.options));
       }
-      return state.finish();
+      checkRunnable(calc as unknown as Calculation);
+      if (planned.kind === "adaptive") {
+        const result = await adaptive(calc as unknown as Calculation, planned.state);
+        return displayable(result as unknown as Propagation<I, O>);
+      }
+      return displayable(await fixed(calc, planned.run));
     },
-
     close,
     [Symbol.dispose]: close,
   };

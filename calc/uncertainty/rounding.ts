@@ -1,6 +1,7 @@
 /**
- * Reporting a result: rounding per JCGM 100:2008 §7.2.6 (uncertainty to at most two significant
- * digits, the estimate to the same decimal position).
+ * The decimal position of a reported uncertainty (JCGM 100:2008 §7.2.6) and the numerical
+ * tolerance of JCGM 101:2008 §7.9.2 built on it. The rounding of displayed numbers lives in the one
+ * formatting module, display/format.ts.
  *
  * @module
  */
@@ -29,38 +30,4 @@ export function lastDigitExponent(u: number, digits: number): number {
 export function numericalTolerance(u: number, significantDigits: number): number {
   const l = lastDigitExponent(u, significantDigits);
   return Number((0.5 * 10 ** l).toPrecision(12));
-}
-
-function fixed(value: number, l: number): string {
-  if (l >= 0) return String(Math.round(value / 10 ** l) * 10 ** l);
-  return value.toFixed(-l);
-}
-
-/**
- * Rounds an estimate and its uncertainty for reporting (JCGM 100:2008 §7.2.6): the uncertainty
- * to `digits` significant digits, the estimate to the same decimal position.
- *
- * @param value The estimate.
- * @param uncertainty Standard or expanded uncertainty, ≥ 0.
- * @param digits Significant digits of the uncertainty. @default 2
- * @returns Both as strings.
- *
- * @example
- * ```ts
- * import { roundForReport } from "@sonorigor/sonorigor";
- * import assert from "node:assert/strict";
- * // JCGM 100:2008 §7.2.2: m_s = 100.021 47 g, u_c = 0.35 mg
- * assert.deepEqual(roundForReport(100.02147, 0.00035), { value: "100.02147", uncertainty: "0.00035" });
- * ```
- */
-export function roundForReport(
-  value: number,
-  uncertainty: number,
-  digits = 2,
-): { value: string; uncertainty: string } {
-  if (!(uncertainty > 0) || !Number.isFinite(uncertainty)) {
-    return { value: String(value), uncertainty: String(uncertainty) };
-  }
-  const l = lastDigitExponent(uncertainty, digits);
-  return { value: fixed(value, l), uncertainty: fixed(uncertainty, l) };
 }

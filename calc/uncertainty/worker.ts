@@ -1,8 +1,9 @@
 /**
- * The Monte Carlo worker behind {@linkcode createMonteCarloPool}: loads the modules that export
- * calculations, then draws and evaluates the blocks of trials it is sent and transfers the model
- * values back (with each part's tails, or each sequence's statistics). It runs the same trial
- * engine (trials.ts) as the main thread, so a block's values do not depend on where it runs.
+ * The Monte Carlo worker behind {@linkcode createMonteCarloPool}: loads the package's catalog and
+ * the modules it is given, makes each requested calculation again from its recipe, refuses it
+ * when its fingerprint differs from the caller's copy, then draws and evaluates the blocks of
+ * trials it is sent and transfers the model values back. It runs the same trial engine
+ * (sampling.ts) as the main thread, so a block's values do not depend on where it runs.
  *
  * The worker never handles units: it marks itself formula-only before loading any module of the
  * package, which then skips loading mathjs (calc/core/units.ts).
@@ -11,15 +12,18 @@
  *
  * @module
  */
-import type { Calculation } from "../core/types.ts";
-import type { SequenceStatistics } from "./montecarlo.ts";
-import type { TrialPlan } from "./trials.ts";
+import type { Calculation, Recipe } from "../core/types.ts";
+import type { Catalog } from "../core/catalog.ts";
+import type { SequenceStatistics } from "./adaptive.ts";
+import type { RunCounts, TrialPlan } from "./sampling.ts";
 
-/** One piece of work: the given blocks (consecutive) of the run keyed `key` of m trials. */
+/** One piece of work: the given blocks (consecutive) of the run keyed `runKey` of m trials;
+ * sample inputs of the plan are indexed from the first block's first trial. */
 export interface WorkerTask {
-  readonly key: readonly number[];
+  readonly runKey: readonly number[];
   readonly m: number;
   readonly blocks: readonly number[];
+  readonly plan: TrialPlan;
 }
 
 /** Messages to a worker. */
@@ -28,17 +32,24 @@ export type WorkerRequest =
   | {
     readonly type: "run";
     readonly job: number;
-    /** Calculation id and the source text of its formula (checked against the worker's copy). */
-    readonly id: string;
-    readonly formula: string;
-    readonly plan: TrialPlan;
+    /** How to make the calculation from the catalog, and the caller's fingerprint of it. */
+    readonly recipe: Recipe;
+    readonly fingerprint: string;
     readonly tasks: readonly WorkerTask[];
+    /** Keep the draws of source inputs (returned). */
+    readonly keepDraws: boolean;
     /** When set, also return each task's sequence statistics at this coverage probability. */
-    readonly coverage: number | null;
+    readonly statistics: { coverage: number; interval: "symmetric" | "shortest" } | null;
     /** When set, also return this many of the smallest and of the largest values of each
      * output. */
     readonly tailSize: number | null;
   };
+
+/** A plain error for a reply. */
+export interface PlainError {
+  readonly name: string;
+  readonly message: string;
+}
 
 /** Replies from a worker. Tasks run in order; on a failure, `failedTask` is its index and the
  * tasks before it are complete. */
@@ -46,20 +57,21 @@ export type WorkerReply =
   | {
     readonly type: "loaded";
     readonly job: number;
-    readonly ids: readonly string[];
-    readonly error: { readonly name: string; readonly message: string } | null;
+    readonly error: PlainError | null;
   }
   | {
     readonly type: "done";
     readonly job: number;
     /** Per task: the model values of its trials, one array per output (transferred). */
     readonly results: readonly (readonly Float64Array[])[];
-    readonly outside: readonly (readonly number[])[];
+    /** Per task: the draws of each input (null where not a kept source). */
+    readonly draws: readonly (readonly (Float64Array | null)[])[];
+    readonly counts: readonly RunCounts[];
     readonly stats: readonly (readonly SequenceStatistics[])[];
-    /** Per task and output: its `tailSize` smallest and largest values, ascending (transferred). */
+    /** Per task and output: its `tailSize` smallest and largest values, ascending. */
     readonly tails: readonly (readonly { low: Float64Array; high: Float64Array }[])[];
     readonly failedTask: number;
-    readonly error: { readonly name: string; readonly message: string } | null;
+    readonly error: PlainError | null;
   };
 
 const scope = globalThis as unknown as {
@@ -70,13 +82,19 @@ const scope = globalThis as unknown as {
 // FORMULA_ONLY_WORKER of calc/core/units.ts, set before any module of the package is loaded
 // (importing units.ts to read it would load mathjs)
 scope[Symbol.for("sonorigor.formulaOnlyWorker")] = true;
-const { BLOCK_TRIALS, runBlocks } = await import("./trials.ts");
-const { sequenceStatistics, sortedTails } = await import("./montecarlo.ts");
-const { isCalculation } = await import("../core/define.ts");
+const { BLOCK_TRIALS, runBlocks } = await import("./sampling.ts");
+const { sequenceStatistics } = await import("./adaptive.ts");
+const { sortedTails } = await import("./intervals.ts");
+const { combineCatalogs, defineCatalog, fingerprint, rebuild } = await import(
+  "../core/catalog.ts"
+);
+const { isCalculation } = await import("../core/calculation.ts");
+const { CATALOG } = await import("../catalog.ts");
 
-const calculations = new Map<string, Calculation>();
+let catalog: Catalog = CATALOG;
 
-async function load(modules: readonly string[]): Promise<string[]> {
+async function load(modules: readonly string[]): Promise<void> {
+  const found: Catalog[] = [catalog];
   for (const url of modules) {
     let module: Record<string, unknown>;
     try {
@@ -84,64 +102,105 @@ async function load(modules: readonly string[]): Promise<string[]> {
     } catch (e) {
       throw new TypeError(`module ${url} failed to load in a worker: ${plain(e).message}`);
     }
-    for (const value of Object.values(module)) {
-      if (!isCalculation(value)) continue;
-      const known = calculations.get(value.id);
-      // the same object exported twice is fine; two calculations under one id are not
-      if (known && known !== value) {
-        throw new TypeError(
-          `two different calculations share the id '${value.id}' (the second in ${url}); give each its own id`,
-        );
-      }
-      calculations.set(value.id, value);
-    }
+    const values = Object.values(module);
+    const kindOf = (v: unknown) => (v as { kind?: unknown } | null)?.kind;
+    found.push(
+      ...values.filter((v) => kindOf(v) === "sonorigor.catalog") as Catalog[],
+      defineCatalog({
+        calculations: values.filter(isCalculation),
+        families: values.filter((v) => kindOf(v) === "sonorigor.family") as never[],
+      }),
+    );
   }
-  return [...calculations.keys()];
+  catalog = combineCatalogs(found);
 }
 
 /** An error as plain data for the reply. */
-function plain(e: unknown): { name: string; message: string } {
+function plain(e: unknown): PlainError {
   const error = e instanceof Error ? e : new Error(String(e));
   return { name: error.name, message: error.message };
 }
 
+function resolve(request: Extract<WorkerRequest, { type: "run" }>): Calculation {
+  let calc: Calculation;
+  try {
+    calc = rebuild(catalog, request.recipe);
+  } catch (e) {
+    throw new TypeError(
+      `Monte Carlo pool: ${
+        plain(e).message
+      }; define the calculation in a module and list it in createMonteCarloPool({ modules })`,
+    );
+  }
+  const mine = fingerprint(calc);
+  if (mine !== request.fingerprint) {
+    throw new TypeError(
+      `Monte Carlo pool: the workers' copy of '${calc.id}' differs from the one given (fingerprint ${
+        mine.slice(0, 12)
+      }… against ${
+        request.fingerprint.slice(0, 12)
+      }…): same id, another definition; give each calculation its own id and list the module that defines it`,
+    );
+  }
+  return calc;
+}
+
 function run(request: Extract<WorkerRequest, { type: "run" }>): WorkerReply {
-  const calc = calculations.get(request.id);
-  const done: Float64Array[][] = [];
-  const outside: number[][] = [];
+  const results: Float64Array[][] = [];
+  const draws: (Float64Array | null)[][] = [];
+  const counts: RunCounts[] = [];
   const stats: SequenceStatistics[][] = [];
   const tails: { low: Float64Array; high: Float64Array }[][] = [];
-  const reply = (failedTask: number, error: ReturnType<typeof plain> | null): WorkerReply => ({
+  const reply = (failedTask: number, error: PlainError | null): WorkerReply => ({
     type: "done",
     job: request.job,
-    results: done,
-    outside,
+    results,
+    draws,
+    counts,
     stats,
     tails,
     failedTask,
     error,
   });
-  if (!calc || calc.formula.toString() !== request.formula) {
-    const message = calc
-      ? `Monte Carlo pool: the workers' calculation '${request.id}' has a different formula from the one given; give each calculation a unique id`
-      : `Monte Carlo pool: calculation '${request.id}' is not exported by the modules the pool loaded; define it in a module and list that module in createMonteCarloPool({ modules })`;
-    return reply(0, { name: "TypeError", message });
+  let calc: Calculation;
+  try {
+    calc = resolve(request);
+  } catch (e) {
+    return reply(0, plain(e));
   }
   for (const [t, task] of request.tasks.entries()) {
-    const counts = calc.inputNames.map(() => 0);
     const firstTrial = task.blocks[0]! * BLOCK_TRIALS;
     const n = Math.min(task.m, (task.blocks.at(-1)! + 1) * BLOCK_TRIALS) - firstTrial;
-    const results = calc.outputNames.map(() => new Float64Array(n));
+    const targets = {
+      outputs: calc.outputNames.map(() => new Float64Array(n)),
+      draws: task.plan.inputs.map((p) =>
+        p.kind === "source" && request.keepDraws ? new Float64Array(n) : null
+      ),
+      firstTrial,
+    };
+    const c: RunCounts = {
+      inputsOutside: calc.inputNames.map(() => 0),
+      outputsOutside: calc.outputNames.map(() => 0),
+    };
     try {
-      runBlocks(calc, request.plan, task.key, task.m, task.blocks, results, counts, firstTrial);
+      runBlocks(calc, task.plan, task.runKey, task.m, task.blocks, targets, c);
     } catch (e) {
       return reply(t, plain(e));
     }
-    done.push(results);
-    outside.push(counts);
-    if (request.coverage !== null) stats.push(sequenceStatistics(results, request.coverage));
+    results.push(targets.outputs);
+    draws.push(targets.draws);
+    counts.push(c);
+    if (request.statistics !== null) {
+      stats.push(
+        sequenceStatistics(
+          targets.outputs,
+          request.statistics.coverage,
+          request.statistics.interval,
+        ),
+      );
+    }
     const tailSize = request.tailSize;
-    if (tailSize !== null) tails.push(results.map((col) => sortedTails(col, tailSize)));
+    if (tailSize !== null) tails.push(targets.outputs.map((col) => sortedTails(col, tailSize)));
   }
   return reply(-1, null);
 }
@@ -149,18 +208,18 @@ function run(request: Extract<WorkerRequest, { type: "run" }>): WorkerReply {
 scope.onmessage = async ({ data }) => {
   if (data.type === "load") {
     try {
-      scope.postMessage({
-        type: "loaded",
-        job: data.job,
-        ids: await load(data.modules),
-        error: null,
-      });
+      await load(data.modules);
+      scope.postMessage({ type: "loaded", job: data.job, error: null });
     } catch (e) {
-      scope.postMessage({ type: "loaded", job: data.job, ids: [], error: plain(e) });
+      scope.postMessage({ type: "loaded", job: data.job, error: plain(e) });
     }
   } else {
     const reply = run(data) as Extract<WorkerReply, { type: "done" }>;
-    const arrays = [...reply.results.flat(), ...reply.tails.flat().flatMap((t) => [t.low, t.high])];
+    const arrays = [
+      ...reply.results.flat(),
+      ...reply.draws.flat().filter((d): d is Float64Array => d !== null),
+      ...reply.tails.flat().flatMap((t) => [t.low, t.high]),
+    ];
     scope.postMessage(reply, [...new Set(arrays.map((a) => a.buffer as ArrayBuffer))]);
   }
 };

@@ -7,7 +7,13 @@
  *
  * @module
  */
-import { describe, type QuantityInput, toCanonical } from "../core/units.ts";
+import { type QuantityInput, readAmount } from "../core/units.ts";
+import { describeValue } from "../core/text.ts";
+import type { ValidationIssue } from "../core/types.ts";
+import type { Interval, ResolvedDistribution } from "./types.ts";
+import { normalQuantile, tQuantile } from "../stats/distributions.ts";
+
+export type { ResolvedDistribution };
 
 /** A value in the input's canonical unit or a quantity string. */
 export type Amount = number | string;
@@ -86,7 +92,7 @@ export type UncertainInput =
   | StudentTInput
   | ExactInput;
 
-/** What callers may give for one input of a propagation: a distribution or an exact value. */
+/** What callers may give for one input: a distribution or an exact value. */
 export type InputEstimate = UncertainInput | QuantityInput;
 
 /**
@@ -215,7 +221,9 @@ export function studentT(value: Amount, standardUncertainty: Amount, dof: number
 export function typeA(readings: readonly number[]): StudentTInput {
   if (!Array.isArray(readings) || readings.length < 2) {
     throw new RangeError(
-      `Type A input: expected at least 2 readings, got ${readings?.length ?? describe(readings)}`,
+      `Type A input: expected at least 2 readings, got ${
+        readings?.length ?? describeValue(readings)
+      }`,
     );
   }
   readings.forEach((r, i) => {
@@ -260,153 +268,242 @@ export function isUncertainInput(value: unknown): value is UncertainInput {
       k === "studentT" || k === "exact");
 }
 
-/** An input resolved to canonical numbers: what GUM and Monte Carlo consume. */
-export interface ResolvedInput {
-  /** Input name. */
-  readonly name: string;
-  /** Distribution tag. */
-  readonly kind: UncertainInput["kind"];
-  /** Expectation used as the estimate. */
-  readonly estimate: number;
-  /** Standard uncertainty. */
-  readonly standardUncertainty: number;
-  /** Degrees of freedom (Infinity for Type B without stated reliability). */
-  readonly dof: number;
-  /** Lower bound of a bounded shape (the estimate otherwise), canonical unit. */
-  readonly lower: number;
-  /** Upper bound of a bounded shape (the estimate otherwise), canonical unit. */
-  readonly upper: number;
-  /** Mode of a triangular shape (the estimate otherwise), canonical unit. */
-  readonly mode: number;
-}
-
 /**
- * Resolves one input: converts units and computes estimate, standard uncertainty and degrees of
- * freedom.
+ * Resolves a distribution given for one input to canonical numbers: converts every amount to the
+ * input's unit and computes the estimate, standard uncertainty and degrees of freedom (JCGM 100
+ * §4.3, JCGM 101 §6.4). Problems come back as issues naming the input and the part of the
+ * distribution at fault; the estimate's range is checked by the caller.
  *
- * @throws {TypeError} For an unrecognised input shape or a wrong unit.
- * @throws {RangeError} For a negative or non-finite uncertainty, reversed bounds or dof ≤ 0.
+ * @param input A distribution or an exact value (number or quantity string).
+ * @param field The input name.
+ * @param unit The canonical unit.
+ * @param where Who checks (the calculation title).
+ * @returns The resolved distribution, or the issues found.
  *
  * @example
  * ```ts
- * import { rectangular, resolveInput } from "@sonorigor/sonorigor";
+ * import { rectangular, resolveDistribution } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
  * // u = (b − a)/√12 (JCGM 100:2008 §4.3.7), bounds converted from mm to cm
- * const r = resolveInput("d", "cm", rectangular("20 mm", "22 mm"), "Example");
- * assert.ok(Math.abs(r.standardUncertainty - 0.2 / Math.sqrt(12)) < 1e-15);
+ * const r = resolveDistribution(rectangular("20 mm", "22 mm"), "d", "cm", "Example");
+ * assert.ok(Math.abs(r.distribution!.standardUncertainty - 0.2 / Math.sqrt(12)) < 1e-15);
  * ```
  */
-export function resolveInput(
-  name: string,
-  unit: string,
+export function resolveDistribution(
   input: InputEstimate,
+  field: string,
+  unit: string,
   where: string,
-): ResolvedInput {
-  const at = `${where}: '${name}'`;
-  const num = (v: Amount, field: string) => {
-    const x = toCanonical(v, unit, `${at} ${field}`);
-    if (!Number.isFinite(x)) throw new RangeError(`${at}: expected a finite ${field}, got ${x}`);
-    return x;
+): { distribution?: ResolvedDistribution; issues: ValidationIssue[] } {
+  const issues: ValidationIssue[] = [];
+  const problem = (
+    part: string,
+    received: string,
+    expected: string,
+    kind: "type" | "unit" | "range",
+  ) =>
+    issues.push({
+      kind,
+      severity: "error",
+      where,
+      field,
+      ...(part === "" ? {} : { label: part }),
+      received,
+      unit,
+      expected,
+    });
+  const amount = (v: unknown, part: string, finiteOnly = true): number => {
+    const read = readAmount(v, unit);
+    if (typeof read !== "number") {
+      problem(
+        part,
+        describeValue(v),
+        read.problem === "type"
+          ? `as a number or a quantity in ${unit}`
+          : `in a unit convertible to ${unit}`,
+        read.problem,
+      );
+      return NaN;
+    }
+    if (finiteOnly && !Number.isFinite(read)) {
+      problem(part, String(read), "a finite number", "range");
+    }
+    return read;
   };
-  const dofOf = (d: number | undefined) => {
+  const dofOf = (d: number | undefined): number => {
     if (d === undefined) return Infinity;
-    if (!(d > 0)) throw new RangeError(`${at}: expected degrees of freedom > 0, got ${d}`);
+    if (!(typeof d === "number" && d > 0)) {
+      problem("degrees of freedom", describeValue(d), "> 0", "range");
+      return NaN;
+    }
     return d;
   };
+  const exactly = (v: number): ResolvedDistribution => ({
+    kind: "exact",
+    estimate: v,
+    standardUncertainty: 0,
+    dof: Infinity,
+    lower: v,
+    upper: v,
+    mode: v,
+  });
   if (!isUncertainInput(input)) {
-    const value = num(input as QuantityInput as Amount, "value");
-    return {
-      name,
-      kind: "exact",
-      estimate: value,
-      standardUncertainty: 0,
-      dof: Infinity,
-      lower: value,
-      upper: value,
-      mode: value,
-    };
+    // a plain value: the estimate's own check (type, unit, range) is the caller's
+    const read = readAmount(input, unit);
+    return typeof read === "number" ? { distribution: exactly(read), issues } : { issues };
   }
   switch (input.kind) {
     case "exact": {
-      const v = num(input.value, "value");
-      return {
-        name,
-        kind: "exact",
-        estimate: v,
-        standardUncertainty: 0,
-        dof: Infinity,
-        lower: v,
-        upper: v,
-        mode: v,
-      };
+      const read = readAmount(input.value, unit);
+      return typeof read === "number" ? { distribution: exactly(read), issues } : { issues };
     }
     case "normal":
     case "studentT": {
-      const v = num(input.value, "value");
-      const u = toCanonical(input.standardUncertainty, unit, `${at} standard uncertainty`);
-      if (!(u >= 0) || !Number.isFinite(u)) {
-        throw new RangeError(`${at}: expected a standard uncertainty >= 0, got ${u}`);
+      const v = readAmount(input.value, unit);
+      const u = amount(input.standardUncertainty, "standard uncertainty");
+      if (Number.isFinite(u) && !(u >= 0)) {
+        problem("standard uncertainty", String(u), ">= 0", "range");
       }
       const dof = dofOf(input.dof);
+      if (typeof v !== "number" || issues.length > 0) return { issues };
       return {
-        name,
-        kind: input.kind,
-        estimate: v,
-        standardUncertainty: u,
-        dof,
-        lower: v,
-        upper: v,
-        mode: v,
+        distribution: {
+          kind: input.kind,
+          estimate: v,
+          standardUncertainty: u,
+          dof,
+          lower: v,
+          upper: v,
+          mode: v,
+        },
+        issues,
       };
     }
     case "rectangular":
     case "arcsine":
     case "triangular": {
-      const a = num(input.lower, "lower bound");
-      const b = num(input.upper, "upper bound");
-      if (!(b >= a)) {
-        throw new RangeError(`${at}: expected upper bound >= lower bound ${a}, got ${b}`);
+      const a = amount(input.lower, "lower bound");
+      const b = amount(input.upper, "upper bound");
+      if (Number.isFinite(a) && Number.isFinite(b) && !(b >= a)) {
+        problem("upper bound", String(b), `>= the lower bound ${a}`, "range");
       }
       const dof = dofOf(input.dof);
+      const c = input.kind === "triangular" && input.mode !== undefined
+        ? amount(input.mode, "mode")
+        : (a + b) / 2;
+      if (input.kind === "triangular" && Number.isFinite(c) && !(c >= a && c <= b)) {
+        problem("mode", String(c), `in [${a}, ${b}]`, "range");
+      }
+      if (issues.length > 0) return { issues };
       if (input.kind === "rectangular") {
         return {
-          name,
-          kind: "rectangular",
-          estimate: (a + b) / 2,
-          standardUncertainty: (b - a) / Math.sqrt(12),
-          dof,
-          lower: a,
-          upper: b,
-          mode: (a + b) / 2,
+          distribution: {
+            kind: "rectangular",
+            estimate: (a + b) / 2,
+            standardUncertainty: (b - a) / Math.sqrt(12),
+            dof,
+            lower: a,
+            upper: b,
+            mode: (a + b) / 2,
+          },
+          issues,
         };
       }
       if (input.kind === "arcsine") {
         return {
-          name,
-          kind: "arcsine",
-          estimate: (a + b) / 2,
-          standardUncertainty: (b - a) / (2 * Math.SQRT2),
-          dof,
-          lower: a,
-          upper: b,
-          mode: (a + b) / 2,
+          distribution: {
+            kind: "arcsine",
+            estimate: (a + b) / 2,
+            standardUncertainty: (b - a) / (2 * Math.SQRT2),
+            dof,
+            lower: a,
+            upper: b,
+            mode: (a + b) / 2,
+          },
+          issues,
         };
-      }
-      const c = input.mode === undefined ? (a + b) / 2 : num(input.mode, "mode");
-      if (!(c >= a && c <= b)) {
-        throw new RangeError(`${at}: expected the mode in [${a}, ${b}], got ${c}`);
       }
       const variance = (a * a + b * b + c * c - a * b - a * c - b * c) / 18;
       return {
-        name,
-        kind: "triangular",
-        estimate: (a + b + c) / 3,
-        standardUncertainty: Math.sqrt(variance),
-        dof,
-        lower: a,
-        upper: b,
-        mode: c,
+        distribution: {
+          kind: "triangular",
+          estimate: (a + b + c) / 3,
+          standardUncertainty: Math.sqrt(variance),
+          dof,
+          lower: a,
+          upper: b,
+          mode: c,
+        },
+        issues,
       };
     }
   }
+}
+
+/**
+ * An exact value as a resolved distribution (u = 0).
+ *
+ * @example
+ * ```ts
+ * import { exactDistribution } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(exactDistribution(1540).standardUncertainty, 0);
+ * ```
+ */
+export function exactDistribution(value: number): ResolvedDistribution {
+  return {
+    kind: "exact",
+    estimate: value,
+    standardUncertainty: 0,
+    dof: Infinity,
+    lower: value,
+    upper: value,
+    mode: value,
+  };
+}
+
+/** The quantile function of a resolved distribution, for probability q in (0, 1). */
+export function distributionQuantile(d: ResolvedDistribution, q: number): number {
+  const { estimate: x, standardUncertainty: u, lower: a, upper: b, mode: c } = d;
+  switch (d.kind) {
+    case "exact":
+      return x;
+    case "normal":
+      return x + u * normalQuantile(q);
+    case "studentT":
+      return x + u * tQuantile(q, d.dof);
+    case "rectangular":
+      return a + q * (b - a);
+    case "arcsine":
+      return (a + b) / 2 + ((b - a) / 2) * Math.sin(Math.PI * (q - 0.5));
+    case "triangular": {
+      const w = b - a;
+      const fc = w > 0 ? (c - a) / w : 0.5;
+      return q < fc ? a + Math.sqrt(q * w * (c - a)) : b - Math.sqrt((1 - q) * w * (b - c));
+    }
+  }
+}
+
+/**
+ * The probabilistically symmetric coverage interval of a distribution: its (1 − p)/2 and
+ * (1 + p)/2 quantiles (JCGM 101:2008 §5.3.4 for the definition).
+ *
+ * @param d The distribution.
+ * @param coverage Coverage probability p.
+ * @returns The interval.
+ *
+ * @example
+ * ```ts
+ * import { distributionInterval, rectangular, resolveDistribution } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const d = resolveDistribution(rectangular(0, 10), "x", "1", "Demo").distribution!;
+ * // a rectangular distribution on [0, 10]: the central 95 % lie in [0.25, 9.75]
+ * assert.deepEqual(distributionInterval(d, 0.95), { lower: 0.25, upper: 9.75 });
+ * ```
+ */
+export function distributionInterval(d: ResolvedDistribution, coverage: number): Interval {
+  return {
+    lower: distributionQuantile(d, (1 - coverage) / 2),
+    upper: distributionQuantile(d, (1 + coverage) / 2),
+  };
 }

@@ -1,8 +1,8 @@
 /**
- * Column kernels: the Monte Carlo loop that evaluates a calculation's formula over input columns,
- * generated once per calculation so that the formula call site sees one function only (the
- * JavaScript engine can then inline the formula and drop the per-trial argument and result
- * objects). The kernel only loops and copies; the formula is the calculation's own.
+ * Column loops: the loop that evaluates a calculation's formula over input columns (Monte Carlo
+ * trials, table rows), generated once per calculation so that the formula call site sees one
+ * function only (the JavaScript engine can then inline the formula and drop the per-row argument
+ * and result objects). The loop only copies; the formula is the calculation's own.
  *
  * @module
  */
@@ -11,24 +11,24 @@ import type { Calculation, InputValues } from "./types.ts";
 /** Evaluates `formula` for rows 0 … m − 1; in strict mode returns the first row with a
  * non-finite output (−1 when none), in lenient mode writes every value (NaN included) and
  * returns −1. */
-export type ColumnKernel = (
+export type ColumnLoop = (
   formula: Calculation["formula"],
   columns: readonly Float64Array[],
   results: readonly Float64Array[],
   m: number,
 ) => number;
 
-const strictKernels = new WeakMap<Calculation, ColumnKernel>();
-const lenientKernels = new WeakMap<Calculation, ColumnKernel>();
+const strictLoops = new WeakMap<Calculation, ColumnLoop>();
+const lenientLoops = new WeakMap<Calculation, ColumnLoop>();
 
-/** The column kernel of a calculation (built on first use, then cached). */
-export function columnKernel(
+/** The column loop of a calculation (built on first use, then cached). */
+export function columnLoop(
   calc: Calculation,
   mode: "strict" | "lenient" = "strict",
-): ColumnKernel {
-  const kernels = mode === "strict" ? strictKernels : lenientKernels;
-  let kernel = kernels.get(calc);
-  if (kernel) return kernel;
+): ColumnLoop {
+  const loops = mode === "strict" ? strictLoops : lenientLoops;
+  let loop = loops.get(calc);
+  if (loop) return loop;
   const key = (name: string) => JSON.stringify(name);
   const ins = calc.inputNames;
   const outs = calc.outputNames;
@@ -48,14 +48,14 @@ export function columnKernel(
     "}",
     "return -1;",
   ].join("\n");
-  kernel = new Function("formula", "columns", "results", "m", source) as ColumnKernel;
-  kernels.set(calc, kernel);
-  return kernel;
+  loop = new Function("formula", "columns", "results", "m", source) as ColumnLoop;
+  loops.set(calc, loop);
+  return loop;
 }
 
 /**
  * Evaluates a calculation over columns of inputs (one typed array per input, canonical units),
- * row by row through its own formula, without validation: the fast path for cohorts. Rows with a
+ * row by row through its own formula, without validation: the fast path for tables. Rows with a
  * NaN input give NaN outputs; validate or flag rows before or after as the caller's policy says.
  *
  * @param calc The calculation.
@@ -97,7 +97,7 @@ export function evaluateColumns<I extends string, O extends string>(
   });
   const results = calc.outputNames.map(() => new Float64Array(n));
   const c = calc as unknown as Calculation;
-  columnKernel(c, "lenient")(c.formula as (x: InputValues<string>) => never, cols, results, n);
+  columnLoop(c, "lenient")(c.formula as (x: InputValues<string>) => never, cols, results, n);
   return Object.fromEntries(calc.outputNames.map((o, k) => [o, results[k]!])) as Record<
     O,
     Float64Array

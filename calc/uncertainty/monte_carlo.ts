@@ -1,0 +1,407 @@
+/**
+ * Propagation of distributions by the Monte Carlo method (JCGM 101:2008 §7) for a fixed number
+ * of trials: every elementary source drawn from its own keyed stream (calc/uncertainty/
+ * sampling.ts), values of earlier steps taken trial by trial from their samples, the model values
+ * summarised as uncertain values that keep their samples so that the next step uses the same
+ * draws.
+ *
+ * @module
+ */
+import type { Calculation, InputDefinition, OutputDefinition } from "../core/types.ts";
+import { cautionsOf } from "../core/calculation.ts";
+import { checkSeed } from "./random.ts";
+import { type KnownTails, sampleCovariance } from "./intervals.ts";
+import { coverageIntervals, intervalsFromTails, meanAndStandardDeviation } from "./intervals.ts";
+import { outsideDrawsWarning, outsideOutputsWarning, warningMessages } from "./prepare.ts";
+import type { PreparedInputs } from "./prepare.ts";
+import { keyWords, NO_SOURCES, sourceCorrelation } from "./sources.ts";
+import { distributionInterval, exactDistribution } from "./distributions.ts";
+import {
+  blockCount,
+  type PlanInput,
+  planGroups,
+  range,
+  type RunCounts,
+  runBlocks,
+  type RunTargets,
+  type TrialPlan,
+} from "./sampling.ts";
+import { correlationFromCovariance } from "./gum.ts";
+import type {
+  AdaptiveSummary,
+  Interval,
+  Propagation,
+  ResolvedDistribution,
+  SourceSet,
+  TrialLayout,
+  UncertainValue,
+} from "./types.ts";
+
+/**
+ * Default number of Monte Carlo trials (JCGM 101:2008 §7.2.2 suggests 10⁶ for 95 % coverage).
+ *
+ * @example
+ * ```ts
+ * import { DEFAULT_TRIALS } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(DEFAULT_TRIALS, 1_000_000);
+ * ```
+ */
+export const DEFAULT_TRIALS = 1_000_000;
+
+/**
+ * Default seed, used when none is given, so that every run is reproducible.
+ *
+ * @example
+ * ```ts
+ * import { DEFAULT_SEED } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.ok(Number.isInteger(DEFAULT_SEED) && DEFAULT_SEED > 0);
+ * ```
+ */
+export const DEFAULT_SEED = 20080101;
+
+/** Options of a fixed-size Monte Carlo run. */
+export interface MonteCarloRunOptions {
+  /** Coverage probability. */
+  readonly coverage: number;
+  /** Number of trials M (taken from the earlier step's values when they carry samples). */
+  readonly trials?: number;
+  /** Seed (taken from the earlier step's values when they carry samples). */
+  readonly seed?: number;
+  /** Keep the samples of every input and output in the result (needed to chain). @default true */
+  readonly keepSamples?: boolean;
+  /** Which coverage interval is `interval`. @default "symmetric" */
+  readonly interval?: "symmetric" | "shortest";
+}
+
+/** A checked run: everything that can fail before the first draw has been checked. */
+export interface MonteCarloRun<I extends string = string> {
+  readonly prepared: PreparedInputs<I>;
+  readonly plan: TrialPlan;
+  readonly coverage: number;
+  readonly trials: number;
+  readonly seed: number;
+  readonly keepSamples: boolean;
+  readonly interval: "symmetric" | "shortest";
+}
+
+/** Checks a number of trials for a coverage probability (M ≥ 1/(1 − p), JCGM 101 §7.2.2). */
+export function checkTrials(trials: number, coverage: number, where: string): number {
+  if (!(Number.isInteger(trials) && trials >= 2)) {
+    throw new RangeError(`${where}: expected trials to be an integer >= 2, got ${trials}`);
+  }
+  // M ≥ 1/(1 − p), with a margin for the rounding of 1 − p (p = 0.9999 allows M = 10⁴)
+  if (trials * (1 - coverage) < 1 - 1e-9) {
+    throw new RangeError(
+      `${where}: expected at least 1/(1 − p) = ${
+        Math.ceil(1 / (1 - coverage) - 1e-6)
+      } trials for coverage ${coverage}, got ${trials}`,
+    );
+  }
+  return trials;
+}
+
+/** The plan inputs of prepared inputs: exact values, sources to draw (or already drawn in an
+ * earlier step), samples of earlier values. */
+export function planInputs<I extends string>(
+  calc: Calculation<I, string>,
+  prepared: PreparedInputs<I>,
+): TrialPlan {
+  const inputs: PlanInput[] = prepared.inputs.map((p): PlanInput => {
+    if (p.given !== null) {
+      const s = p.given.samples!;
+      return { kind: "samples", samples: p.factor === 1 ? s : s.map((v) => v * p.factor) };
+    }
+    if (p.fresh !== null) {
+      const drawn = prepared.sources.samples.get(p.fresh.key);
+      if (drawn) return { kind: "samples", samples: drawn };
+      return {
+        kind: "source",
+        key: p.fresh.key,
+        words: keyWords(p.fresh.key),
+        distribution: p.fresh.distribution,
+        group: -1,
+      };
+    }
+    return { kind: "exact", value: p.estimate };
+  });
+  const keys = inputs.map((p) => (p.kind === "source" ? p.key : null));
+  return planGroups(
+    inputs,
+    (i, j) =>
+      keys[i] && keys[j] ? sourceCorrelation(prepared.sources, keys[i]!, keys[j]!) : 0,
+    calc.title,
+    calc.inputNames,
+  );
+}
+
+/** Checks the options of a fixed-size run against its inputs and plans it. */
+export function monteCarloRun<I extends string>(
+  calc: Calculation<I, string>,
+  prepared: PreparedInputs<I>,
+  options: MonteCarloRunOptions,
+): MonteCarloRun<I> {
+  const where = calc.title;
+  const layouts = prepared.inputs.flatMap((p) => (p.given?.layout ? [p.given.layout] : []));
+  for (const s of prepared.sources.samples.values()) {
+    if (layouts.length === 0) break;
+    if (s.length !== layouts[0]!.trials) {
+      throw new RangeError(`${where}: inputs from Monte Carlo runs of different sizes`);
+    }
+  }
+  const fromInputs = layouts[0];
+  for (const l of layouts) {
+    if (l.seed !== fromInputs!.seed || l.trials !== fromInputs!.trials) {
+      throw new RangeError(
+        `${where}: expected the inputs of one chain to come from Monte Carlo runs with one seed and one number of trials, got seeds ${fromInputs!.seed} and ${l.seed}, ${
+          fromInputs!.trials
+        } and ${l.trials} trials`,
+      );
+    }
+  }
+  const seed = checkSeed(options.seed ?? fromInputs?.seed ?? DEFAULT_SEED);
+  const trials = checkTrials(
+    options.trials ?? fromInputs?.trials ?? DEFAULT_TRIALS,
+    options.coverage,
+    where,
+  );
+  if (fromInputs && (seed !== fromInputs.seed || trials !== fromInputs.trials)) {
+    throw new RangeError(
+      `${where}: expected the seed ${fromInputs.seed} and ${fromInputs.trials} trials of the inputs' Monte Carlo run (a chain runs with one seed), got seed ${seed} and ${trials} trials`,
+    );
+  }
+  return {
+    prepared,
+    plan: planInputs(calc, prepared),
+    coverage: options.coverage,
+    trials,
+    seed,
+    keepSamples: options.keepSamples ?? true,
+    interval: options.interval ?? "symmetric",
+  };
+}
+
+/** The arrays a run writes: one per output, one per drawn source when samples are kept. */
+export function runTargets(run: MonteCarloRun, outputs: number): RunTargets {
+  return {
+    outputs: range(outputs).map(() => new Float64Array(run.trials)),
+    draws: run.plan.inputs.map((p) =>
+      p.kind === "source" && run.keepSamples ? new Float64Array(run.trials) : null
+    ),
+    firstTrial: 0,
+  };
+}
+
+/** Zero counts for a run. */
+export function emptyCounts(inputs: number, outputs: number): RunCounts {
+  return { inputsOutside: range(inputs).map(() => 0), outputsOutside: range(outputs).map(() => 0) };
+}
+
+/** An uncertain value of the Monte Carlo method from model values. */
+export function sampledValue(parts: {
+  readonly name: string;
+  readonly def: InputDefinition | OutputDefinition;
+  readonly samples: Float64Array;
+  readonly coverage: number;
+  readonly sources: SourceSet;
+  readonly layout: TrialLayout;
+  readonly keep: boolean;
+  readonly interval: "symmetric" | "shortest";
+  readonly tails?: { readonly low: Float64Array; readonly high: Float64Array };
+}): UncertainValue {
+  const { samples, coverage } = parts;
+  const { mean, sd } = meanAndStandardDeviation(samples);
+  let intervals: { symmetric: Interval; shortest: Interval } | undefined;
+  const get = () =>
+    intervals ??= parts.tails
+      ? intervalsFromTails(parts.tails.low, parts.tails.high, samples.length, coverage)
+      : coverageIntervals(samples, coverage);
+  const value = {
+    kind: "sonorigor.uncertainValue" as const,
+    name: parts.name,
+    label: parts.def.label,
+    quantity: parts.def.quantity,
+    unit: parts.def.unit,
+    method: "monteCarlo" as const,
+    value: mean,
+    standardUncertainty: sd,
+    coverage,
+    get interval(): Interval {
+      const i = get();
+      return parts.interval === "shortest" ? i.shortest : i.symmetric;
+    },
+    expandedUncertainty: null,
+    coverageFactor: null,
+    effectiveDof: null,
+    budget: [],
+    correlationShare: 0,
+    secondOrderShare: 0,
+    firstOrderAdequate: true,
+    sensitivities: new Map<string, number>(),
+    sources: parts.sources,
+    samples: parts.keep ? samples : null,
+    get shortestInterval(): Interval {
+      return get().shortest;
+    },
+    layout: parts.layout,
+  };
+  return Object.freeze(value);
+}
+
+/** An uncertain value of the Monte Carlo method for an input given as a distribution: its exact
+ * estimate, standard uncertainty and probabilistically symmetric interval, with its draws. */
+export function distributionValue(parts: {
+  readonly name: string;
+  readonly def: InputDefinition;
+  readonly distribution: ResolvedDistribution;
+  readonly coverage: number;
+  readonly sources: SourceSet;
+  readonly samples: Float64Array | null;
+  readonly layout: TrialLayout;
+}): UncertainValue {
+  const d = parts.distribution;
+  const interval = distributionInterval(d, parts.coverage);
+  return Object.freeze({
+    kind: "sonorigor.uncertainValue" as const,
+    name: parts.name,
+    label: parts.def.label,
+    quantity: parts.def.quantity,
+    unit: parts.def.unit,
+    method: "monteCarlo" as const,
+    value: d.estimate,
+    standardUncertainty: d.standardUncertainty,
+    coverage: parts.coverage,
+    interval,
+    expandedUncertainty: null,
+    coverageFactor: null,
+    effectiveDof: null,
+    budget: [],
+    correlationShare: 0,
+    secondOrderShare: 0,
+    firstOrderAdequate: true,
+    sensitivities: new Map<string, number>(),
+    sources: parts.sources,
+    samples: parts.samples,
+    // the shortest interval of an asymmetric triangle is not the symmetric one: not computed
+    shortestInterval: d.kind === "triangular" && d.mode !== d.estimate ? null : interval,
+    layout: parts.layout,
+  });
+}
+
+/** The propagation result of a finished run. */
+export function finishMonteCarlo<I extends string, O extends string>(
+  calc: Calculation<I, O>,
+  run: MonteCarloRun<I>,
+  targets: RunTargets,
+  counts: RunCounts,
+  extra: { readonly tails?: KnownTails; readonly adaptive?: AdaptiveSummary } = {},
+): Propagation<I, O> {
+  const { prepared, coverage, trials, seed, keepSamples } = run;
+  const chainable = keepSamples && extra.adaptive == null;
+  const layout: TrialLayout = { seed, trials, chainable };
+  const drawn = new Map<string, Float64Array>();
+  prepared.inputs.forEach((p, i) => {
+    const d = targets.draws[i];
+    if (p.fresh && d) drawn.set(p.fresh.key, d);
+  });
+  const sources: SourceSet = prepared.sources.sources.size === 0 ? NO_SOURCES : Object.freeze({
+    sources: prepared.sources.sources,
+    correlations: prepared.sources.correlations,
+    samples: new Map([...prepared.sources.samples, ...drawn]),
+  });
+  const warnings = warningMessages(prepared.warnings);
+  prepared.inputs.forEach((p, i) => {
+    const n = counts.inputsOutside[i]!;
+    if (n > 0) warnings.push(outsideDrawsWarning(calc, p.name, n, trials));
+  });
+  calc.outputNames.forEach((o, k) => {
+    const n = counts.outputsOutside[k]!;
+    if (n > 0) warnings.push(outsideOutputsWarning(calc, o, n, trials));
+  });
+  const outputs = {} as Record<O, UncertainValue>;
+  calc.outputNames.forEach((o, k) => {
+    outputs[o] = sampledValue({
+      name: o,
+      def: calc.outputs[o],
+      samples: targets.outputs[k]!,
+      coverage,
+      sources,
+      layout,
+      keep: keepSamples,
+      interval: run.interval,
+      ...(extra.tails ? { tails: extra.tails[k]! } : {}),
+    });
+  });
+  const inputs = {} as Record<I, UncertainValue>;
+  prepared.inputs.forEach((p, i) => {
+    const def = calc.inputs[p.name as I];
+    if (p.given !== null && p.factor === 1) {
+      inputs[p.name as I] = p.given;
+      return;
+    }
+    const plan = run.plan.inputs[i]!;
+    if (p.given !== null) {
+      // an earlier value in another unit: its samples, converted
+      inputs[p.name as I] = sampledValue({
+        name: p.name,
+        def,
+        samples: (plan as Extract<typeof plan, { kind: "samples" }>).samples,
+        coverage,
+        sources,
+        layout,
+        keep: keepSamples,
+        interval: run.interval,
+      });
+      return;
+    }
+    const samples = plan.kind === "samples" ? plan.samples : targets.draws[i] ?? null;
+    inputs[p.name as I] = distributionValue({
+      name: p.name,
+      def,
+      distribution: p.fresh?.distribution ?? exactDistribution(p.estimate),
+      coverage,
+      sources: p.fresh ? sources : NO_SOURCES,
+      samples: keepSamples ? samples : null,
+      layout,
+    });
+  });
+  const covariance = calc.outputNames.length > 1
+    ? sampleCovariance(targets.outputs)
+    : [[outputs[calc.outputNames[0]!].standardUncertainty ** 2]];
+  return {
+    kind: "sonorigor.propagation",
+    calculation: calc,
+    method: "monteCarlo",
+    coverage,
+    inputs,
+    outputs,
+    outputNames: calc.outputNames,
+    covariance,
+    correlation: correlationFromCovariance(covariance),
+    warnings,
+    cautions: cautionsOf(calc),
+    monteCarlo: { trials, seed, interval: run.interval, adaptive: extra.adaptive ?? null },
+  };
+}
+
+/**
+ * Runs a checked Monte Carlo run on this thread: all blocks of trials keyed [seed].
+ */
+export function runMonteCarlo<I extends string, O extends string>(
+  calc: Calculation<I, O>,
+  run: MonteCarloRun<I>,
+): Propagation<I, O> {
+  const targets = runTargets(run, calc.outputNames.length);
+  const counts = emptyCounts(calc.inputNames.length, calc.outputNames.length);
+  runBlocks(
+    calc as unknown as Calculation,
+    run.plan,
+    [run.seed],
+    run.trials,
+    range(blockCount(run.trials)),
+    targets,
+    counts,
+  );
+  return finishMonteCarlo(calc, run, targets, counts);
+}
