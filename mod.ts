@@ -20,4 +20,5 @@ export * from "./calc/chamber/mod.ts";
 export * from "./calc/doppler/mod.ts";
 export * from "./calc/agreement/mod.ts";
 export * from "./calc/quantities/mod.ts";
+export * from "./calc/table/mod.ts";
 export * from "./calc/catalog.ts";

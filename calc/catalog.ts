@@ -1,82 +1,19 @@
 /**
- * The package's catalog: every calculation, family and quantity registered explicitly, one list
- * per domain. Reference docs, the worker pool and tables resolve calculations here; a new
- * calculation is registered by adding it to its domain's list.
+ * The package's catalog: every calculation, family and quantity registered explicitly. Each
+ * domain lists its calculations in its own catalog.ts; reference docs, the worker pool and tables
+ * resolve calculations here.
  *
  * @module
  */
 import { type Catalog, defineCatalog } from "./core/catalog.ts";
 import type { Family } from "./core/family.ts";
 import { QUANTITIES } from "./quantities/mod.ts";
-import {
-  acousticImpedance,
-  angleCorrectedVelocity,
-  attenuationLoss,
-  axialResolution,
-  deratedPressure,
-  dopplerShiftFromVelocity,
-  frameRate,
-  interfaceReflection,
-  lateralResolution,
-  maximumPrfForDepth,
-  mechanicalIndex,
-  nearFieldLength,
-  nyquistVelocity,
-  nyquistVelocityAtDepth,
-  penetrationDepth,
-  unambiguousDepthForPrf,
-  velocityFromDopplerShift,
-  wavelengthAndPeriod,
-} from "./physics/mod.ts";
-import {
-  cardiacIndex,
-  cardiacOutput,
-  continuityValveArea,
-  continuityValveAreaPeakVelocity,
-  continuityValveAreaWithAngles,
-  crossSectionalArea,
-  dimensionlessIndex,
-  effectiveRegurgitantOrificeArea,
-  indexedValveArea,
-  insonationAngleEffect,
-  mitralValveAreaPressureHalfTime,
-  modifiedBernoulli,
-  pisaFlowRate,
-  pisaRegurgitation,
-  pressureHalfTimeFromDecelerationTime,
-  pressureHalfTimeFromSlope,
-  pulmonarySystemicFlowRatio,
-  regurgitantFraction,
-  regurgitantFractionPisa,
-  regurgitantVolume,
-  rightAtrialPressureFromIvc,
-  rvSystolicPressure,
-  rvSystolicPressureFromIvc,
-  simplifiedBernoulli,
-  strokeVolume,
-  volumetricRegurgitation,
-} from "./doppler/mod.ts";
-import {
-  areaLengthVolume,
-  biplaneAreaLengthVolume,
-  discSummationVolume,
-  ejectionFraction,
-  fractionalAreaChange,
-  fractionalShortening,
-  lvGeometryMeasures,
-  lvMassIndex,
-  lvMassLinear,
-  mapse,
-  myocardialPerformanceIndex,
-  myocardialPerformanceIndexFromClosureTime,
-  relativeWallThickness,
-  tapse,
-  teichholzEjectionFraction,
-  teichholzVolume,
-} from "./chamber/mod.ts";
-import { bsaBoyd, bsaDuBois, bsaGehanGeorge, bsaHaycock, bsaMosteller } from "./body/mod.ts";
-import { INDEXED_TO_BSA } from "./body/mod.ts";
-import { Z_SCORE } from "./reference/mod.ts";
+import { PHYSICS_CALCULATIONS } from "./physics/catalog.ts";
+import { DOPPLER_CALCULATIONS } from "./doppler/catalog.ts";
+import { CHAMBER_CALCULATIONS } from "./chamber/catalog.ts";
+import { BODY_CALCULATIONS } from "./body/catalog.ts";
+import { INDEXED_TO_BSA } from "./body/indexing.ts";
+import { Z_SCORE } from "./reference/zscore.ts";
 
 /**
  * Every calculation, family and quantity of the package.
@@ -91,75 +28,10 @@ import { Z_SCORE } from "./reference/mod.ts";
  */
 export const CATALOG: Catalog = defineCatalog({
   calculations: [
-    // physics
-    acousticImpedance,
-    angleCorrectedVelocity,
-    attenuationLoss,
-    axialResolution,
-    deratedPressure,
-    dopplerShiftFromVelocity,
-    frameRate,
-    interfaceReflection,
-    lateralResolution,
-    maximumPrfForDepth,
-    mechanicalIndex,
-    nearFieldLength,
-    nyquistVelocity,
-    nyquistVelocityAtDepth,
-    penetrationDepth,
-    unambiguousDepthForPrf,
-    velocityFromDopplerShift,
-    wavelengthAndPeriod,
-    // doppler
-    cardiacIndex,
-    cardiacOutput,
-    continuityValveArea,
-    continuityValveAreaPeakVelocity,
-    continuityValveAreaWithAngles,
-    crossSectionalArea,
-    dimensionlessIndex,
-    effectiveRegurgitantOrificeArea,
-    indexedValveArea,
-    insonationAngleEffect,
-    mitralValveAreaPressureHalfTime,
-    modifiedBernoulli,
-    pisaFlowRate,
-    pisaRegurgitation,
-    pressureHalfTimeFromDecelerationTime,
-    pressureHalfTimeFromSlope,
-    pulmonarySystemicFlowRatio,
-    regurgitantFraction,
-    regurgitantFractionPisa,
-    regurgitantVolume,
-    rightAtrialPressureFromIvc,
-    rvSystolicPressure,
-    rvSystolicPressureFromIvc,
-    simplifiedBernoulli,
-    strokeVolume,
-    volumetricRegurgitation,
-    // chamber
-    areaLengthVolume,
-    biplaneAreaLengthVolume,
-    discSummationVolume,
-    ejectionFraction,
-    fractionalAreaChange,
-    fractionalShortening,
-    lvGeometryMeasures,
-    lvMassIndex,
-    lvMassLinear,
-    mapse,
-    myocardialPerformanceIndex,
-    myocardialPerformanceIndexFromClosureTime,
-    relativeWallThickness,
-    tapse,
-    teichholzEjectionFraction,
-    teichholzVolume,
-    // body
-    bsaBoyd,
-    bsaDuBois,
-    bsaGehanGeorge,
-    bsaHaycock,
-    bsaMosteller,
+    ...PHYSICS_CALCULATIONS,
+    ...DOPPLER_CALCULATIONS,
+    ...CHAMBER_CALCULATIONS,
+    ...BODY_CALCULATIONS,
   ],
   families: [INDEXED_TO_BSA, Z_SCORE] as Family<never>[],
   quantities: [...QUANTITIES.values()],

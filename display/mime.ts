@@ -125,7 +125,10 @@ export function tableBundle(
   notes: Readonly<Record<string, readonly string[]>> = {},
 ): MimeBundle {
   const text = [title, textTable(header, rows)];
-  const html = [`<div><p style="margin:4px 0"><b>${escapeHtml(title)}</b></p>`, htmlTable(header, rows)];
+  const html = [
+    `<div><p style="margin:4px 0"><b>${escapeHtml(title)}</b></p>`,
+    htmlTable(header, rows),
+  ];
   for (const [heading, list] of Object.entries(notes)) {
     const singular = heading.replace(/s$/, "");
     text.push(...list.map((n) => `${singular}: ${n}`));

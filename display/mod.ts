@@ -33,3 +33,9 @@ export {
   labelWithUnit,
 } from "./uncertainty.ts";
 export { displayEvaluation, type TableDisplay, tableDisplay } from "./results.ts";
+export { columnHeader, displayTable, reportedCell } from "./table.ts";
+export { displayZScore } from "./reference.ts";
+export * from "./physics.ts";
+export * from "./doppler.ts";
+export * from "./chamber.ts";
+export * from "./agreement.ts";

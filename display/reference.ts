@@ -21,20 +21,29 @@ export function displayZScore(r: ZScoreResult): MimeBundle {
     ["Body surface area", withUnit(formatNumber(r.bsaM2, 3), "m^2")],
     [
       "Z-score",
-      z ? `${roundLike(z.value, z.standardUncertainty)} (u = ${formatNumber(z.standardUncertainty, 2)})` : r.zScore.toFixed(2),
+      z
+        ? `${roundLike(z.value, z.standardUncertainty)} (u = ${
+          formatNumber(z.standardUncertainty, 2)
+        })`
+        : r.zScore.toFixed(2),
     ],
     ["Percentile", r.percentile.toFixed(1)],
     ["Expected (Z = 0)", withUnit(formatNumber(r.expected, 3), unit)],
     [
       "Normal range (Z = −2 to +2)",
-      withUnit(`${formatNumber(r.normalRange.lower, 3)} to ${formatNumber(r.normalRange.upper, 3)}`, unit),
+      withUnit(
+        `${formatNumber(r.normalRange.lower, 3)} to ${formatNumber(r.normalRange.upper, 3)}`,
+        unit,
+      ),
     ],
   ];
   if (z) {
     rows.push(
       [
         `${formatNumber(z.coverage * 100, 3)} % interval of Z`,
-        `${roundLike(z.interval.lower, z.standardUncertainty)} to ${roundLike(z.interval.upper, z.standardUncertainty)}`,
+        `${roundLike(z.interval.lower, z.standardUncertainty)} to ${
+          roundLike(z.interval.upper, z.standardUncertainty)
+        }`,
       ],
       ["P(true Z > +2)", formatShare(r.probabilityAbovePlus2!)],
       ["P(true Z < −2)", formatShare(r.probabilityBelowMinus2!)],

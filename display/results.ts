@@ -17,11 +17,19 @@ export function displayEvaluation(result: Evaluation): MimeBundle {
   const rows = [
     ...calc.inputNames.map((n) => {
       const d = calc.inputs[n]!;
-      return ["input", labelWithUnit(d.label, d.unit), formatResolution(result.inputs[n]!, d.quantity.resolution)];
+      return [
+        "input",
+        labelWithUnit(d.label, d.unit),
+        formatResolution(result.inputs[n]!, d.quantity.resolution),
+      ];
     }),
     ...calc.outputNames.map((n) => {
       const d = calc.outputs[n]!;
-      return ["output", labelWithUnit(d.label, d.unit), formatResolution(result.outputs[n]!, d.quantity.resolution)];
+      return [
+        "output",
+        labelWithUnit(d.label, d.unit),
+        formatResolution(result.outputs[n]!, d.quantity.resolution),
+      ];
     }),
   ];
   return tableBundle(calc.title, ["", "Quantity", "Value"], rows, {

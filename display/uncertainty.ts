@@ -53,9 +53,9 @@ export function formatUncertainValue(v: UncertainValue): string {
     }, p = ${p} %)`;
   }
   const u = v.standardUncertainty;
-  return `${v.label} = ${roundLike(v.value, u)}${unitSuffix(v.unit)}, u = ${
-    roundLike(u, u)
-  }${unitSuffix(v.unit)}, ${p} % interval ${formatInterval(v.interval, u, v.unit)}`;
+  return `${v.label} = ${roundLike(v.value, u)}${unitSuffix(v.unit)}, u = ${roundLike(u, u)}${
+    unitSuffix(v.unit)
+  }, ${p} % interval ${formatInterval(v.interval, u, v.unit)}`;
 }
 
 function unitSuffix(unit: string): string {
@@ -147,7 +147,11 @@ export function displayPropagation(result: Propagation): MimeBundle {
       }`
       : "";
     const rows = budgetRows(v);
-    text.push(line, ...(extra ? [extra] : []), ...(rows.length ? [textTable(BUDGET_HEADER, rows)] : []));
+    text.push(
+      line,
+      ...(extra ? [extra] : []),
+      ...(rows.length ? [textTable(BUDGET_HEADER, rows)] : []),
+    );
     html.push(
       `<p style="margin:6px 0 2px"><b>${escapeHtml(line)}</b>${
         extra ? `<br>${escapeHtml(extra)}` : ""

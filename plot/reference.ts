@@ -10,9 +10,10 @@ import {
   type AdultReferenceRow,
   adultReferenceRow,
 } from "../calc/reference/adult.ts";
-import { measurementFormula, type ZScoreModel } from "../calc/reference/zscore.ts";
-import { bsaCalculation } from "../calc/body/bsa.ts";
-import type { CohortResult } from "../calc/cohort/compute.ts";
+import type { ZScoreModel } from "../calc/reference/zscore_models.ts";
+import { measuredQuantity, zScoreBands } from "../calc/reference/zscore.ts";
+import type { Table } from "../calc/table/types.ts";
+import { rowLabels } from "../calc/table/evaluate.ts";
 import { Chart } from "./chart.ts";
 
 /** One patient on a pediatric normal-range chart. */
@@ -104,14 +105,7 @@ export function zScoreChart(model: ZScoreModel, options: ZScoreChartOptions = {}
   if (!(lo > 0 && hi > lo)) {
     throw new RangeError(`${where}: expected a BSA range 0 < min < max, got [${lo}, ${hi}]`);
   }
-  const n = Math.max(2, Math.floor(options.gridPoints ?? 121));
-  const grid: Record<string, number>[] = [];
-  for (let i = 0; i < n; i++) {
-    const bsa = lo + ((hi - lo) * i) / (n - 1);
-    const row: Record<string, number> = { bsa };
-    for (const z of [-3, -2, -1, 0, 1, 2, 3]) row[`z${z}`] = measurementFormula(model, z, bsa);
-    grid.push(row);
-  }
+  const grid = zScoreBands(model, lo, hi, Math.max(2, Math.floor(options.gridPoints ?? 121)));
   const unit = model.unit;
   const x = {
     field: "bsa",
@@ -212,58 +206,55 @@ export function zScoreChart(model: ZScoreModel, options: ZScoreChartOptions = {}
 }
 
 /**
- * A cohort's measurements on the model's normal-range chart: one point per row with a finite
- * value, BSA by the model's BSA formula (the formula of its one definition).
+ * A table's measurements on a model's normal-range chart: one point per row with a finite
+ * measurement and BSA. The measurement is the table's column of the model's quantity; the BSA is
+ * the table's BSA column (computed with the model's BSA formula, e.g. by `bsaHaycock` for PHN).
  *
- * @param result A computed cohort.
- * @param measurement Measurement name with a Z-score model in the result.
- * @param options Chart options (points are taken from the cohort); `valueUncertainty` applies to
- * every point.
+ * @param table A table with the measurement and BSA columns.
+ * @param model The Z-score model.
+ * @param options Chart options (points come from the table); `valueUncertainty` applies to every
+ * point.
  * @returns The chart.
- * @throws {TypeError} When the measurement has no Z-score model in the result.
+ * @throws {TypeError} When the table has no column of the model's measurement or no BSA column.
  *
  * @example
  * ```ts
- * import { computeCohort, PHN_2017_MODELS, readCohortCsv } from "@sonorigor/sonorigor";
- * import { cohortZScoreChart } from "@sonorigor/sonorigor/plot";
+ * import { bsaHaycock, evaluateTable, PHN_2017_MODELS, readTable } from "@sonorigor/sonorigor";
+ * import { tableZScoreChart } from "@sonorigor/sonorigor/plot";
  * import assert from "node:assert/strict";
- * const m = PHN_2017_MODELS.aorticRootSinus;
- * const t = readCohortCsv("height [cm],weight [kg],root [cm]\n120,22,2.0\n150,40,2.5\n", {
- *   height: "height", weight: "weight", measurements: [{ column: "root", canonicalUnit: "cm" }],
- * });
- * const chart = cohortZScoreChart(computeCohort(t, { zScores: { root: m } }), "root");
+ * const t = evaluateTable(
+ *   readTable("id,height [cm],weight [kg],aortic root [cm]\nA,120,22,2.0\nB,150,40,2.5\n"),
+ *   bsaHaycock,
+ * );
+ * const chart = tableZScoreChart(t, PHN_2017_MODELS.aorticRootSinus);
  * assert.match(await chart.toSVG(), /^<svg/);
  * ```
  */
-export function cohortZScoreChart(
-  result: CohortResult,
-  measurement: string,
+export function tableZScoreChart(
+  table: Table,
+  model: ZScoreModel,
   options: Omit<ZScoreChartOptions, "points"> & { readonly valueUncertainty?: number } = {},
 ): Chart {
-  const model = result.models[measurement];
-  if (model === undefined) {
+  const q = measuredQuantity(model);
+  const column = table.columns.get(q.id);
+  const bsa = table.columns.get("bsa");
+  if (column?.kind !== "numeric" || bsa?.kind !== "numeric") {
     throw new TypeError(
-      `Cohort chart: expected a measurement with a Z-score model (${
-        Object.keys(result.models).join(", ") || "none"
-      }), got '${measurement}'`,
+      `Table chart (${model.id}): expected columns '${q.id}' (${q.label}) and 'bsa' (body surface area), got ${
+        [...table.columns.keys()].join(", ")
+      }`,
     );
   }
-  const t = result.table;
-  const calc = bsaCalculation(model.bsaMethod);
-  const values = t.measurements[measurement]!.values;
+  const labels = rowLabels(table);
   const points: ReferenceChartPoint[] = [];
-  for (let i = 0; i < t.rowCount; i++) {
-    const h = t.heightCm.values[i]!;
-    const w = t.weightKg.values[i]!;
-    const v = values[i]!;
-    if (!(Number.isFinite(h) && Number.isFinite(w) && Number.isFinite(v))) continue;
-    const bsaM2 = model.bsaMethod === result.bsaMethod
-      ? result.bsaM2[i]!
-      : calc.formula({ heightCm: h, weightKg: w }).bsaM2;
+  for (let i = 0; i < table.rowCount; i++) {
+    const v = column.values[i]!;
+    const b = bsa.values[i]!;
+    if (!(Number.isFinite(v) && Number.isFinite(b))) continue;
     points.push({
-      bsaM2,
+      bsaM2: b,
       value: v,
-      label: t.ids?.[i] ?? `line ${t.lines[i]}`,
+      label: labels[i]!,
       ...(options.valueUncertainty === undefined
         ? {}
         : { valueUncertainty: options.valueUncertainty }),

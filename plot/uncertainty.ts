@@ -4,26 +4,22 @@
  *
  * @module
  */
-import type { GumResult } from "../calc/uncertainty/gum.ts";
-import { coverageIntervals, type MonteCarloResult } from "../calc/uncertainty/montecarlo.ts";
+import type { Propagation } from "../calc/uncertainty/types.ts";
+import { densityHistogram, gumDensity, histogramRange } from "../calc/uncertainty/histogram.ts";
 import type { SensitivityCurve } from "../calc/core/sensitivity.ts";
-import { formatUnit } from "../calc/core/display.ts";
+import { labelWithUnit } from "../display/uncertainty.ts";
 import { Chart } from "./chart.ts";
 
 /** Options of {@linkcode histogramChart}. */
 export interface HistogramOptions {
   /** Output to show. @default the first output */
   readonly output?: string;
-  /** GUM result for the same calculation: its normal (or scaled t) curve and interval are overlaid. */
-  readonly gum?: GumResult;
+  /** GUM result for the same calculation: its normal curve and interval are overlaid. */
+  readonly gum?: Propagation;
   /** Number of bins. @default 60 */
   readonly bins?: number;
   /** Width in pixels. @default 480 */
   readonly width?: number;
-}
-
-function unitLabel(unit: string): string {
-  return unit === "1" ? "" : ` [${formatUnit(unit)}]`;
 }
 
 /**
@@ -37,7 +33,7 @@ function unitLabel(unit: string): string {
  *
  * @example
  * ```ts
- * import { expressionModel, gum, monteCarlo, normal } from "@sonorigor/sonorigor";
+ * import { expressionModel, normal, propagate } from "@sonorigor/sonorigor";
  * import { histogramChart } from "@sonorigor/sonorigor/plot";
  * import assert from "node:assert/strict";
  * const model = expressionModel({
@@ -46,11 +42,12 @@ function unitLabel(unit: string): string {
  *   output: { name: "gradient", unit: "mmHg", description: "Peak gradient" },
  * });
  * const inputs = { v: normal(4, 0.2) };
- * const chart = histogramChart(monteCarlo(model, inputs, { trials: 10_000, seed: 1 }), { gum: gum(model, inputs) });
+ * const mc = propagate(model, inputs, { method: "monteCarlo", trials: 10_000, seed: 1 });
+ * const chart = histogramChart(mc, { gum: propagate(model, inputs) });
  * assert.match(await chart.toSVG(), /<path/);
  * ```
  */
-export function histogramChart(mc: MonteCarloResult, options: HistogramOptions = {}): Chart {
+export function histogramChart(mc: Propagation, options: HistogramOptions = {}): Chart {
   const name = options.output ?? mc.outputNames[0]!;
   const o = mc.outputs[name];
   if (!o) {
@@ -58,27 +55,17 @@ export function histogramChart(mc: MonteCarloResult, options: HistogramOptions =
       `Histogram: unknown output '${name}'; expected one of ${mc.outputNames.join(", ")}`,
     );
   }
-  const s = o.samples;
-  if (s.length === 0) {
+  if (mc.method !== "monteCarlo" || o.samples === null) {
     throw new TypeError(
-      `Histogram: the Monte Carlo result holds no samples (keepSamples was false)`,
+      `Histogram: expected a Monte Carlo result with its samples, got ${
+        mc.method === "gum" ? "a GUM result" : "a result without samples (keepSamples was false)"
+      }`,
     );
   }
-  const bins = options.bins ?? 60;
-  // plotting range: the 99.9 % probabilistically symmetric interval, widened to show both intervals
-  const wide = coverageIntervals(s, 0.999).symmetric;
-  const lo = Math.min(wide[0], o.symmetricInterval[0], o.shortestInterval[0]);
-  const hi = Math.max(wide[1], o.symmetricInterval[1], o.shortestInterval[1]);
-  const width = (hi - lo) / bins || 1;
-  const counts = new Array<number>(bins).fill(0);
-  for (let i = 0; i < s.length; i++) {
-    const b = Math.floor((s[i]! - lo) / width);
-    if (b >= 0 && b < bins) counts[b]!++;
-  }
-  const bars = counts.map((c, b) => ({
-    start: lo + b * width,
-    end: lo + (b + 1) * width,
-    density: c / (s.length * width),
+  const g = options.gum?.outputs[name];
+  const range = histogramRange(o, ...(g && g.standardUncertainty > 0 ? [g.interval] : []));
+  const bars = densityHistogram(o.samples, range, options.bins ?? 60).map((b) => ({
+    ...b,
     series: "Monte Carlo",
   }));
   const layers: Record<string, unknown>[] = [{
@@ -88,7 +75,7 @@ export function histogramChart(mc: MonteCarloResult, options: HistogramOptions =
       x: {
         field: "start",
         type: "quantitative",
-        title: `${name}${unitLabel(o.unit)}`,
+        title: labelWithUnit(o.label, o.unit),
         scale: { zero: false },
       },
       x2: { field: "end" },
@@ -96,20 +83,11 @@ export function histogramChart(mc: MonteCarloResult, options: HistogramOptions =
     },
   }];
   const rules: Record<string, unknown>[] = [
-    { value: o.symmetricInterval[0], label: "MC symmetric interval" },
-    { value: o.symmetricInterval[1], label: "MC symmetric interval" },
+    { value: o.interval.lower, label: "Monte Carlo interval" },
+    { value: o.interval.upper, label: "Monte Carlo interval" },
   ];
-  const g = options.gum?.outputs[name];
   if (g && g.standardUncertainty > 0) {
-    const curve = [];
-    for (let k = 0; k <= 200; k++) {
-      const x = lo + ((hi - lo) * k) / 200;
-      const z = (x - g.value) / g.standardUncertainty;
-      curve.push({
-        x,
-        density: Math.exp(-0.5 * z * z) / (g.standardUncertainty * Math.sqrt(2 * Math.PI)),
-      });
-    }
+    const curve = gumDensity(g, range);
     layers.push({
       data: { values: curve },
       mark: { type: "line", color: "#d62728", strokeWidth: 2 },
@@ -118,8 +96,8 @@ export function histogramChart(mc: MonteCarloResult, options: HistogramOptions =
         y: { field: "density", type: "quantitative" },
       },
     });
-    rules.push({ value: g.interval[0], label: "GUM interval" }, {
-      value: g.interval[1],
+    rules.push({ value: g.interval.lower, label: "GUM interval" }, {
+      value: g.interval.upper,
       label: "GUM interval",
     });
   }
@@ -132,12 +110,14 @@ export function histogramChart(mc: MonteCarloResult, options: HistogramOptions =
         field: "label",
         type: "nominal",
         title: null,
-        scale: { domain: ["MC symmetric interval", "GUM interval"], range: ["#08519c", "#d62728"] },
+        scale: { domain: ["Monte Carlo interval", "GUM interval"], range: ["#08519c", "#d62728"] },
         legend: { orient: "bottom", labelLimit: 400 },
       },
     },
   });
-  const title = `${mc.title}: ${name}, ${mc.trials} trials${g ? " with GUM normal curve" : ""}`;
+  const title = `${mc.calculation.title}: ${o.label}, ${mc.monteCarlo!.trials} trials${
+    g ? " with the GUM normal curve" : ""
+  }`;
   return new Chart({ title, width: options.width ?? 480, height: 260, layer: layers }, { title });
 }
 
@@ -146,7 +126,7 @@ export function histogramChart(mc: MonteCarloResult, options: HistogramOptions =
  *
  * @example
  * ```ts
- * import { expressionModel, gum, normal } from "@sonorigor/sonorigor";
+ * import { expressionModel, normal, propagate } from "@sonorigor/sonorigor";
  * import { budgetChart } from "@sonorigor/sonorigor/plot";
  * import assert from "node:assert/strict";
  * const model = expressionModel({
@@ -154,11 +134,11 @@ export function histogramChart(mc: MonteCarloResult, options: HistogramOptions =
  *   inputs: { a: { unit: "1", description: "a", range: { min: 0, max: 9 } }, b: { unit: "1", description: "b", range: { min: 0, max: 9 } } },
  *   output: { name: "y", unit: "1", description: "y" },
  * });
- * const chart = budgetChart(gum(model, { a: normal(2, 0.1), b: normal(3, 0.3) }));
+ * const chart = budgetChart(propagate(model, { a: normal(2, 0.1), b: normal(3, 0.3) }));
  * assert.equal((chart.spec.data as { values: unknown[] }).values.length, 2);
  * ```
  */
-export function budgetChart(result: GumResult, output?: string): Chart {
+export function budgetChart(result: Propagation, output?: string): Chart {
   const name = output ?? result.outputNames[0]!;
   const o = result.outputs[name];
   if (!o) {
@@ -166,16 +146,28 @@ export function budgetChart(result: GumResult, output?: string): Chart {
       `Budget chart: unknown output '${name}'; expected one of ${result.outputNames.join(", ")}`,
     );
   }
-  const values = o.budget.map((b) => ({ input: b.input, sharePercent: 100 * b.share }));
-  const title = `${result.title}: variance shares of ${name}`;
+  if (result.method !== "gum") {
+    throw new TypeError(
+      `Budget chart: expected a GUM result (Monte Carlo has no budget), got ${result.method}`,
+    );
+  }
+  const values = o.budget.map((b) => ({
+    source: labelWithUnit(b.label, b.unit),
+    sharePercent: 100 * b.share,
+  }));
+  const title = `${result.calculation.title}: variance shares of ${o.label}`;
   return new Chart({
     title,
     width: 420,
     data: { values },
     mark: "bar",
     encoding: {
-      y: { field: "input", type: "nominal", sort: "-x", title: null },
-      x: { field: "sharePercent", type: "quantitative", title: "share of u²(y) [%]" },
+      y: { field: "source", type: "nominal", sort: "-x", title: null },
+      x: {
+        field: "sharePercent",
+        type: "quantitative",
+        title: `Share of the variance of ${o.label} (%)`,
+      },
     },
   }, { title });
 }
@@ -215,10 +207,10 @@ export function sensitivityChart(
     c.points.map((p) => ({
       x: p.x,
       y: relative ? p.relativeChangePercent : p.y,
-      curve: options.labels?.[i] ?? `${c.title}: ${c.output}`,
+      curve: options.labels?.[i] ?? `${c.title}: ${c.outputLabel}`,
     }))
   );
-  const title = options.title ?? `Sensitivity of ${first.output} to ${first.input}`;
+  const title = options.title ?? `Sensitivity of ${first.outputLabel} to ${first.inputLabel}`;
   return new Chart({
     title,
     width: 480,
@@ -226,13 +218,17 @@ export function sensitivityChart(
     data: { values },
     mark: { type: "line" },
     encoding: {
-      x: { field: "x", type: "quantitative", title: `${first.input}${unitLabel(first.inputUnit)}` },
+      x: {
+        field: "x",
+        type: "quantitative",
+        title: labelWithUnit(first.inputLabel, first.inputUnit),
+      },
       y: {
         field: "y",
         type: "quantitative",
         title: relative
-          ? `change of ${first.output} [%]`
-          : `${first.output}${unitLabel(first.outputUnit)}`,
+          ? `Change of ${first.outputLabel} from its reference value (%)`
+          : labelWithUnit(first.outputLabel, first.outputUnit),
       },
       color: {
         field: "curve",

@@ -5,3 +5,4 @@
  */
 export * from "./bsa.ts";
 export * from "./indexing.ts";
+export { BODY_CALCULATIONS } from "./catalog.ts";

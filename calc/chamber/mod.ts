@@ -61,3 +61,4 @@ export {
   singlePlaneDiscVolume,
   type TracedView,
 } from "./volumes.ts";
+export { CHAMBER_CALCULATIONS } from "./catalog.ts";

@@ -334,7 +334,12 @@ export function defineCalculation<I extends string, O extends string>(
 export function defineArguments<I extends string>(
   title: string,
   inputs: { readonly [K in I]: InputSpec },
-): { title: string; inputs: { readonly [K in I]: InputDefinition }; inputNames: readonly I[]; constraints: readonly InputConstraint<I>[] } {
+): {
+  title: string;
+  inputs: { readonly [K in I]: InputDefinition };
+  inputNames: readonly I[];
+  constraints: readonly InputConstraint<I>[];
+} {
   const inputNames = Object.keys(inputs) as I[];
   const resolved = {} as Record<I, InputDefinition>;
   for (const name of inputNames) resolved[name] = resolveInput(title, name, inputs[name]);

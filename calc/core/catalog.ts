@@ -170,7 +170,9 @@ export function rebuild(catalog: Catalog, recipe: Recipe): Calculation {
       return chain(steps, options);
     }
     case "local":
-      throw new TypeError(`Catalog: this calculation cannot be made again elsewhere: ${recipe.why}`);
+      throw new TypeError(
+        `Catalog: this calculation cannot be made again elsewhere: ${recipe.why}`,
+      );
   }
 }
 

@@ -5,9 +5,9 @@
  * @module
  */
 export {
+  type CalculationSpec,
   cautionsOf,
   CLINICAL_CAUTION,
-  type CalculationSpec,
   defineArguments,
   defineCalculation,
   type InlineInput,

@@ -49,7 +49,9 @@ export function renderIssue(issue: ValidationIssue): string {
     case "constraint":
       return `${lead}${at}expected ${issue.expected}, got ${issue.received}`;
     case "format":
-      return `${lead}${at}${issue.field === "" ? "" : `${field}: `}expected ${issue.expected}, got ${issue.received}`;
+      return `${lead}${at}${
+        issue.field === "" ? "" : `${field}: `
+      }expected ${issue.expected}, got ${issue.received}`;
     default:
       return `${lead}${at}expected ${field} ${issue.expected}, got ${issue.received}`;
   }

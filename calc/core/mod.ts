@@ -36,8 +36,8 @@ export {
 export { formatRange, inRange, rangeWithin } from "./range.ts";
 export { describeValue, formatUnit, withUnit } from "./text.ts";
 export {
-  cautionsOf,
   type CalculationSpec,
+  cautionsOf,
   CLINICAL_CAUTION,
   defineArguments,
   defineCalculation,
@@ -58,15 +58,15 @@ export {
   throwIfErrors,
 } from "./issues.ts";
 export {
+  checkConstraints,
   type CheckContext,
   type CheckedField,
   type CheckedValue,
-  checkConstraints,
   checkInputs,
   checkValue,
   quantityField,
-  type ValidateOptions,
   validateInputs,
+  type ValidateOptions,
 } from "./validate.ts";
 export { checkOutputs, evaluate, type EvaluateOptions, type InputArguments } from "./evaluate.ts";
 export { chain, type Chained, type ChainOptions, type ChainStep } from "./chain.ts";

@@ -4,7 +4,8 @@
  *
  * @module
  */
-import { evaluate, formatRange, type InputArguments, inRange } from "./define.ts";
+import { evaluate, type InputArguments } from "./evaluate.ts";
+import { formatRange, inRange } from "./range.ts";
 import type { Calculation } from "./types.ts";
 
 /** Options of {@linkcode sensitivityCurve}. */
@@ -37,10 +38,14 @@ export interface SensitivityCurve {
   readonly title: string;
   /** Swept input name. */
   readonly input: string;
+  /** Label of the swept input (its quantity's). */
+  readonly inputLabel: string;
   /** Unit of the swept input. */
   readonly inputUnit: string;
   /** Followed output name. */
   readonly output: string;
+  /** Label of the followed output (its quantity's). */
+  readonly outputLabel: string;
   /** Unit of the followed output. */
   readonly outputUnit: string;
   /** Reference value of the swept input and of the output. */
@@ -118,8 +123,10 @@ export function sensitivityCurve<I extends string, O extends string>(
   return {
     title: calc.title,
     input: vary,
+    inputLabel: def.label,
     inputUnit: def.unit,
     output,
+    outputLabel: calc.outputs[output].label,
     outputUnit: calc.outputs[output].unit,
     reference: { x: base.inputs[vary], y: y0 },
     points,

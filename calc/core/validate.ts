@@ -43,10 +43,12 @@ export interface CheckedValue {
 
 /** The parts of an input definition a check needs (a quantity satisfies it too, via
  * {@linkcode quantityField}). */
-export type CheckedField = Pick<
-  InputDefinition,
-  "label" | "unit" | "range" | "typical" | "typicalPediatric" | "default"
-> & { readonly integer?: boolean };
+export type CheckedField =
+  & Pick<
+    InputDefinition,
+    "label" | "unit" | "range" | "typical" | "typicalPediatric" | "default"
+  >
+  & { readonly integer?: boolean };
 
 /**
  * The checked field of a quantity used directly (a table column, a command-line option).

@@ -70,3 +70,4 @@ export {
   type PulmonaryHypertensionTables,
   type RegurgitationTables,
 } from "./grading_tables.ts";
+export { DOPPLER_CALCULATIONS } from "./catalog.ts";

@@ -45,3 +45,4 @@ export {
   type TissueName,
   tissueProperties,
 } from "./tissues.ts";
+export { PHYSICS_CALCULATIONS } from "./catalog.ts";

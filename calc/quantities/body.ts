@@ -108,3 +108,20 @@ export const BODY_SURFACE_AREA: Quantity = defineQuantity({
   headers: ["body surface area", "bsa m2", "bsaM2"],
   rangeNote: "common practice, no source",
 });
+
+/**
+ * The body-size quantities, listed for the package's quantity lookup (tables, models).
+ *
+ * @example
+ * ```ts
+ * import { BODY_QUANTITIES } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.ok(BODY_QUANTITIES.length > 0);
+ * ```
+ */
+export const BODY_QUANTITIES: readonly Quantity[] = [
+  HEIGHT,
+  WEIGHT,
+  AGE,
+  BODY_SURFACE_AREA,
+];

@@ -151,3 +151,22 @@ export const AORTIC_VALVE_AREA_INDEX: Quantity = defineQuantity({
   headers: ["avai", "ava index"],
   rangeNote: NOTE,
 });
+
+/**
+ * The flow and hemodynamic quantities, listed for the package's quantity lookup (tables, models).
+ *
+ * @example
+ * ```ts
+ * import { FLOW_QUANTITIES } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.ok(FLOW_QUANTITIES.length > 0);
+ * ```
+ */
+export const FLOW_QUANTITIES: readonly Quantity[] = [
+  STROKE_VOLUME,
+  STROKE_VOLUME_INDEX,
+  CARDIAC_OUTPUT,
+  CARDIAC_INDEX,
+  AORTIC_VALVE_AREA,
+  AORTIC_VALVE_AREA_INDEX,
+];

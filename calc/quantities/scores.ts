@@ -26,3 +26,17 @@ export const PERCENTILE: Quantity = defineQuantity({
   resolution: 0.1,
   rangeNote: "by definition",
 });
+
+/**
+ * The score quantities, listed for the package's quantity lookup (tables, models).
+ *
+ * @example
+ * ```ts
+ * import { SCORE_QUANTITIES } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.ok(SCORE_QUANTITIES.length > 0);
+ * ```
+ */
+export const SCORE_QUANTITIES: readonly Quantity[] = [
+  PERCENTILE,
+];

@@ -499,3 +499,38 @@ export const TRICUSPID_ANNULUS: Quantity = vessel(
   { min: 0.8, max: 4 },
   ["tricuspid annulus", "tv annulus"],
 );
+
+/**
+ * The cardiac structure and function quantities, listed for the package's quantity lookup (tables, models).
+ *
+ * @example
+ * ```ts
+ * import { STRUCTURE_QUANTITIES } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.ok(STRUCTURE_QUANTITIES.length > 0);
+ * ```
+ */
+export const STRUCTURE_QUANTITIES: readonly Quantity[] = [
+  LV_END_DIASTOLIC_DIAMETER,
+  LV_END_SYSTOLIC_DIAMETER,
+  SEPTAL_THICKNESS,
+  POSTERIOR_WALL_THICKNESS,
+  LV_END_DIASTOLIC_VOLUME,
+  LV_END_SYSTOLIC_VOLUME,
+  EJECTION_FRACTION,
+  LV_MASS,
+  LV_MASS_INDEX,
+  LA_VOLUME,
+  LA_VOLUME_INDEX,
+  LVOT_DIAMETER,
+  RVOT_DIAMETER,
+  AORTIC_ANNULUS,
+  AORTIC_ROOT,
+  SINOTUBULAR_JUNCTION,
+  ASCENDING_AORTA,
+  MAIN_PULMONARY_ARTERY,
+  RIGHT_PULMONARY_ARTERY,
+  LEFT_PULMONARY_ARTERY,
+  MITRAL_ANNULUS,
+  TRICUSPID_ANNULUS,
+];

@@ -28,11 +28,11 @@ import {
   defineZScoreModel,
   measurementFormula,
   PHN_2017_MODELS,
-  type ZScoreForm,
   ZSCORE_FORMS,
+  type ZScoreForm,
   type ZScoreFormName,
-  type ZScoreModel,
   zScoreFormula,
+  type ZScoreModel,
 } from "./zscore_models.ts";
 import { displayZScore, JUPYTER_DISPLAY } from "../../display/reference.ts";
 
@@ -95,7 +95,8 @@ export function zScoreQuantity(model: ZScoreModel): Quantity {
       label: `${m.label} Z-score (${model.source.authors.split(/[ ,]/)[0]} ${model.source.year})`,
       symbol: `Z(${m.symbol})`,
       unit: "1",
-      description: `Standard deviations of the ${m.label.toLowerCase()} from the mean for body surface area (model ${model.id})`,
+      description:
+        `Standard deviations of the ${m.label.toLowerCase()} from the mean for body surface area (model ${model.id})`,
       valid: { min: -Infinity, max: Infinity },
       resolution: 0.01,
       rangeNote: "any real number",
@@ -582,7 +583,9 @@ export function compareZScoreModels(
       flags: [],
       error,
     });
-    if (model.unit !== first.unit && typeof readAmount(`1 ${model.unit}`, first.unit) !== "number") {
+    if (
+      model.unit !== first.unit && typeof readAmount(`1 ${model.unit}`, first.unit) !== "number"
+    ) {
       return failed(
         `Z-score comparison: model '${model.id}' measures in ${model.unit}, not comparable with ${first.unit} of '${first.id}', got ${model.unit}`,
       );
@@ -603,4 +606,58 @@ export function compareZScoreModels(
       return failed(error.message);
     }
   });
+}
+
+/** One row of {@linkcode zScoreBands}: the measurement at Z = −3 … +3 for one BSA. */
+export interface ZScoreBandRow {
+  /** BSA, m². */
+  readonly bsa: number;
+  /** Measurement at Z = −3, −2, −1, 0, 1, 2, 3 (keys "z-3" … "z3"). */
+  readonly [z: `z${number}`]: number;
+}
+
+/**
+ * The measurements at Z = −3 … +3 of a model across a BSA range: the data of a normal-range
+ * chart, from the model's one inverse formula.
+ *
+ * @param model The Z-score model.
+ * @param from First BSA, m² (> 0).
+ * @param to Last BSA, m² (> from).
+ * @param points Number of BSA grid points, ≥ 2. @default 121
+ * @returns One row per BSA.
+ * @throws {RangeError} For an empty or non-positive BSA range or fewer than 2 points.
+ *
+ * @example
+ * ```ts
+ * import { PHN_2017_MODELS, zScoreBands } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const [row] = zScoreBands(PHN_2017_MODELS.aorticAnnulus, 1, 2, 2);
+ * // (1.48 + 2·0.14)·1^0.5 = 1.76 cm at Z = 2, BSA 1 m² (hand-checkable)
+ * assert.ok(Math.abs(row!["z2"] - 1.76) < 1e-12);
+ * ```
+ */
+export function zScoreBands(
+  model: ZScoreModel,
+  from: number,
+  to: number,
+  points = 121,
+): ZScoreBandRow[] {
+  if (!(from > 0 && to > from)) {
+    throw new RangeError(
+      `Z-score bands (${model.id}): expected a BSA range 0 < from < to, got [${from}, ${to}]`,
+    );
+  }
+  if (!(Number.isInteger(points) && points >= 2)) {
+    throw new RangeError(
+      `Z-score bands (${model.id}): expected at least 2 grid points, got ${points}`,
+    );
+  }
+  const rows: ZScoreBandRow[] = [];
+  for (let i = 0; i < points; i++) {
+    const bsa = from + ((to - from) * i) / (points - 1);
+    const row: Record<string, number> = { bsa };
+    for (const z of [-3, -2, -1, 0, 1, 2, 3]) row[`z${z}`] = measurementFormula(model, z, bsa);
+    rows.push(row as unknown as ZScoreBandRow);
+  }
+  return rows;
 }

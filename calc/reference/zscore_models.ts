@@ -487,4 +487,3 @@ export const PHN_2017_MODELS: {
   ),
   lvMass: phn("lvMass", "LV mass", 1.25, 53.02, 9.06, "g"),
 });
-

@@ -10,12 +10,7 @@
 import type { Calculation } from "../core/types.ts";
 import { coverageIntervals, meanAndStandardDeviation } from "./intervals.ts";
 import { numericalTolerance } from "./rounding.ts";
-import {
-  emptyCounts,
-  finishMonteCarlo,
-  type MonteCarloRun,
-  planInputs,
-} from "./monte_carlo.ts";
+import { emptyCounts, finishMonteCarlo, type MonteCarloRun, planInputs } from "./monte_carlo.ts";
 import type { PreparedInputs } from "./prepare.ts";
 import { checkSeed } from "./random.ts";
 import type { TrialPlan } from "./sampling.ts";

@@ -214,7 +214,9 @@ export function propagateGum<I extends string, O extends string>(
     warnings.push(...inadequate);
     if (dofNote) warnings.push(dofNote);
   });
-  const covariance = linearParts.map((a) => linearParts.map((b) => linearCovariance(sources, a, b)));
+  const covariance = linearParts.map((a) =>
+    linearParts.map((b) => linearCovariance(sources, a, b))
+  );
   const inputValues = {} as Record<I, UncertainValue>;
   for (const p of inputs) inputValues[p.name as I] = inputValue(c, p, sources, coverage);
   return {

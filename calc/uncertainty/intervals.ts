@@ -197,4 +197,3 @@ export function sampleCovariance(columns: readonly Float64Array[]): number[][] {
     })
   );
 }
-

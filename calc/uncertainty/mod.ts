@@ -42,7 +42,13 @@ export {
 } from "./distributions.ts";
 export { correlationFromReadings, type CorrelationPair, type Correlations } from "./correlation.ts";
 export { type UncertainArgument, type UncertainInputs } from "./prepare.ts";
-export { keyWords, linearCovariance, mergeSources, sourceKey, welchSatterthwaite } from "./sources.ts";
+export {
+  keyWords,
+  linearCovariance,
+  mergeSources,
+  sourceKey,
+  welchSatterthwaite,
+} from "./sources.ts";
 export { correlation, covariance, isUncertainValue } from "./uncertain_value.ts";
 export { planPropagation, propagate, type PropagateOptions } from "./propagate.ts";
 export { type AdaptiveOptions } from "./adaptive.ts";
@@ -53,4 +59,11 @@ export { expressionModel, type ExpressionModelSpec } from "./expression.ts";
 export { numericalTolerance } from "./rounding.ts";
 export { type RandomStream, randomStream } from "./random.ts";
 export { createMonteCarloPool, type MonteCarloPool, type MonteCarloPoolOptions } from "./pool.ts";
-export { gum, type GumResult, monteCarlo, monteCarloAdaptive, type MonteCarloResult } from "./legacy.ts";
+export {
+  gum,
+  type GumResult,
+  monteCarlo,
+  monteCarloAdaptive,
+  type MonteCarloResult,
+} from "./legacy.ts";
+export { densityHistogram, gumDensity, type HistogramBar, histogramRange } from "./histogram.ts";

@@ -18,11 +18,11 @@ import { keyWords, NO_SOURCES, sourceCorrelation } from "./sources.ts";
 import { distributionInterval, exactDistribution } from "./distributions.ts";
 import {
   blockCount,
-  type PlanInput,
   planGroups,
+  type PlanInput,
   range,
-  type RunCounts,
   runBlocks,
+  type RunCounts,
   type RunTargets,
   type TrialPlan,
 } from "./sampling.ts";
@@ -129,8 +129,7 @@ export function planInputs<I extends string>(
   const keys = inputs.map((p) => (p.kind === "source" ? p.key : null));
   return planGroups(
     inputs,
-    (i, j) =>
-      keys[i] && keys[j] ? sourceCorrelation(prepared.sources, keys[i]!, keys[j]!) : 0,
+    (i, j) => keys[i] && keys[j] ? sourceCorrelation(prepared.sources, keys[i]!, keys[j]!) : 0,
     calc.title,
     calc.inputNames,
   );
@@ -154,9 +153,9 @@ export function monteCarloRun<I extends string>(
   for (const l of layouts) {
     if (l.seed !== fromInputs!.seed || l.trials !== fromInputs!.trials) {
       throw new RangeError(
-        `${where}: expected the inputs of one chain to come from Monte Carlo runs with one seed and one number of trials, got seeds ${fromInputs!.seed} and ${l.seed}, ${
-          fromInputs!.trials
-        } and ${l.trials} trials`,
+        `${where}: expected the inputs of one chain to come from Monte Carlo runs with one seed and one number of trials, got seeds ${
+          fromInputs!.seed
+        } and ${l.seed}, ${fromInputs!.trials} and ${l.trials} trials`,
       );
     }
   }

@@ -248,7 +248,9 @@ export function prepareInputs<I extends string>(
         for (const p of [a, b]) {
           if (p && p.fresh === null) {
             throw new TypeError(
-              `${where}: correlation of '${names[i]}' and '${names[j]}' names '${p.name}', which is ${
+              `${where}: correlation of '${names[i]}' and '${
+                names[j]
+              }' names '${p.name}', which is ${
                 p.given ? "a value from an earlier step" : "exact"
               }; expected correlations only between inputs given as distributions here, got ${rho}`,
             );

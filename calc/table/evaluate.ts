@@ -1,0 +1,376 @@
+/**
+ * Evaluating catalog calculations and chains over every row of a table: inputs wired to columns
+ * by name or by quantity, exact evaluation through the calculation's own column loop, or
+ * propagation row by row (GUM law by default, Monte Carlo on request) from per-column uncertainty
+ * models. Results are new columns (value, and standard uncertainty and interval ends when
+ * propagated); every row that cannot be computed keeps NaN with an issue saying why.
+ *
+ * @module
+ */
+import type { Calculation, ValidationIssue } from "../core/types.ts";
+import type { Population } from "../core/types.ts";
+import { cautionsOf } from "../core/calculation.ts";
+import { evaluateColumns } from "../core/columns.ts";
+import { formatRange, inRange } from "../core/range.ts";
+import { withUnit } from "../core/text.ts";
+import { renderIssue } from "../core/issues.ts";
+import { normal } from "../uncertainty/distributions.ts";
+import type { UncertainInput } from "../uncertainty/distributions.ts";
+import { propagate } from "../uncertainty/propagate.ts";
+import type { UncertainArgument } from "../uncertainty/prepare.ts";
+import { readAmount } from "../core/units.ts";
+import type { Column, NumericColumn, Table, UncertaintyModel } from "./types.ts";
+import { makeTable } from "./read.ts";
+import { labelWithUnit } from "../../display/uncertainty.ts";
+
+/** Options of {@linkcode evaluateTable}. */
+export interface EvaluateTableOptions {
+  /** Inputs wired by hand: input name → column name. Others are wired by name, then by
+   * quantity. */
+  readonly inputs?: Readonly<Record<string, string>>;
+  /** Uncertainty of columns (by column name): absolute, relative or any distribution. */
+  readonly uncertainty?: Readonly<Record<string, UncertaintyModel>>;
+  /** "exact", "gum" or "monteCarlo". @default "gum" with uncertainty models, else "exact" */
+  readonly method?: "exact" | "gum" | "monteCarlo";
+  /** Coverage probability of the intervals. @default 0.95 */
+  readonly coverage?: number;
+  /** Monte Carlo trials per row. @default 10_000 */
+  readonly trials?: number;
+  /** Monte Carlo seed (each row's sources are keyed by the row's label, so rows differ). */
+  readonly seed?: number;
+  /** Which typical ranges flag inputs. @default "adult" */
+  readonly population?: Population;
+  /** Text column that names the rows (sources and messages). @default the first text column */
+  readonly rowLabels?: string;
+}
+
+function numericColumns(table: Table): NumericColumn[] {
+  return [...table.columns.values()].filter((c): c is NumericColumn =>
+    c.kind === "numeric" && c.role === "value"
+  );
+}
+
+/** The column feeding each input of a calculation, or null for an input left to its default. */
+function wire(
+  table: Table,
+  calc: Calculation,
+  byHand: Readonly<Record<string, string>>,
+): (NumericColumn | null)[] {
+  const numeric = numericColumns(table);
+  return calc.inputNames.map((name) => {
+    const def = calc.inputs[name]!;
+    const wanted = byHand[name];
+    if (wanted !== undefined) {
+      const c = table.columns.get(wanted);
+      if (c === undefined || c.kind !== "numeric") {
+        throw new TypeError(
+          `${calc.title}: input '${name}' is wired to column '${wanted}', which the table has not as numbers; expected one of ${
+            numeric.map((c) => c.name).join(", ")
+          }`,
+        );
+      }
+      return c;
+    }
+    const same = table.columns.get(name);
+    if (same?.kind === "numeric") return same;
+    const byQuantity = numeric.filter((c) => c.quantity.id === def.quantity.id);
+    if (byQuantity.length === 1) return byQuantity[0]!;
+    if (def.default !== undefined) return null;
+    throw new TypeError(
+      `${calc.title}: no column for input '${name}' (${def.label}); expected a column of ${
+        labelWithUnit(def.label, def.unit)
+      }${
+        byQuantity.length > 1 ? ` (several match: ${byQuantity.map((c) => c.name).join(", ")})` : ""
+      }, got columns ${[...table.columns.keys()].join(", ")}; wire it with the option inputs`,
+    );
+  });
+}
+
+/** The distribution of one cell under a column's uncertainty model. */
+function distributionOf(model: UncertaintyModel, value: number, unit: string): UncertainInput {
+  if (typeof model === "function") return model(value);
+  if ("relative" in model) return normal(value, Math.abs(model.relative * value));
+  const u = readAmount(model.standardUncertainty, unit);
+  if (typeof u !== "number") {
+    throw new TypeError(
+      `Uncertainty model: expected a standard uncertainty convertible to ${unit}, got ${
+        JSON.stringify(model.standardUncertainty)
+      }`,
+    );
+  }
+  return normal(value, u);
+}
+
+/** Result columns are keyed by their quantity, like the columns read (two outputs of one
+ * quantity, or a quantity already in the table: "calculation id.output"). */
+function outputName(table: Table, calc: Calculation, o: string): string {
+  const q = calc.outputs[o]!.quantity.id;
+  const shared = calc.outputNames.filter((n) => calc.outputs[n]!.quantity.id === q).length > 1;
+  return shared || table.columns.has(q) ? `${calc.id}.${o}` : q;
+}
+
+/**
+ * Evaluates calculations (or chains) on every row of a table: each input is wired to the column
+ * of the same name, or else to the one column of the same quantity (or by hand); results are
+ * added as columns. Exactly, through the calculation's own column loop; or with uncertainty,
+ * propagating each row by the GUM law (default) or Monte Carlo from the columns' uncertainty
+ * models, adding for each output its standard uncertainty and coverage interval. Several
+ * calculations run in order, each seeing the columns the earlier ones added.
+ *
+ * @param table The table (from {@linkcode readTable} or an earlier evaluation).
+ * @param calculations A calculation or chain, or several in order.
+ * @param options Wiring, uncertainty models, method, coverage, population.
+ * @returns A new table with the result columns and the issues of every row not computed.
+ * @throws {TypeError} For an input no column can feed, or a bad uncertainty model.
+ *
+ * @example Continuity valve area on every row, with the uncertainty of each input
+ * ```ts
+ * import { continuityValveArea, evaluateTable, readTable } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const table = readTable("patient,lvot diameter [mm],lvot vti [cm],av vti [cm]\nA,20,20,80\n");
+ * const r = evaluateTable(table, continuityValveArea, {
+ *   uncertainty: { lvotDiameter: { standardUncertainty: "0.8 mm" }, lvotVti: { relative: 0.06 } },
+ * });
+ * const ava = r.columns.get("aorticValveArea")!;
+ * // π·(2/2)²·20/80 = 0.785 cm² (hand-checkable)
+ * assert.ok(ava.kind === "numeric" && Math.abs(ava.values[0]! - Math.PI / 4) < 1e-12);
+ * assert.ok(r.columns.has("aorticValveArea u"));
+ * ```
+ */
+export function evaluateTable(
+  table: Table,
+  calculations: Calculation | readonly Calculation[],
+  options: EvaluateTableOptions = {},
+): Table {
+  const list = Array.isArray(calculations) ? calculations : [calculations as Calculation];
+  const method = options.method ?? (options.uncertainty ? "gum" : "exact");
+  let current = table;
+  for (const calc of list) current = evaluateOne(current, calc, method, options);
+  return current;
+}
+
+function evaluateOne(
+  table: Table,
+  calc: Calculation,
+  method: "exact" | "gum" | "monteCarlo",
+  options: EvaluateTableOptions,
+): Table {
+  const wired = wire(table, calc, options.inputs ?? {});
+  const n = table.rowCount;
+  const issues: ValidationIssue[] = [];
+  const where = calc.title;
+  const at = (i: number) => ({ row: i, ...(table.lines[i] ? { line: table.lines[i]! } : {}) });
+  const inputs = calc.inputNames.map((name, k) => {
+    const col = wired[k];
+    return col ? col.values : new Float64Array(n).fill(calc.inputs[name]!.default!);
+  });
+  // rows that cannot be computed: a missing or invalid input, a value outside the calculation's
+  // own (narrower) range, a broken relation between inputs
+  const skip = new Uint8Array(n);
+  for (let i = 0; i < n; i++) {
+    const x: Record<string, number> = {};
+    for (let k = 0; k < inputs.length; k++) {
+      const name = calc.inputNames[k]!;
+      const def = calc.inputs[name]!;
+      const v = inputs[k]![i]!;
+      x[name] = v;
+      if (v !== v) {
+        skip[i] = 1;
+        issues.push({
+          kind: "notMeasured",
+          severity: "warning",
+          where,
+          field: calc.outputNames.join(", "),
+          received: `no value of '${name}' (${def.label})`,
+          expected: "every input",
+          ...at(i),
+        });
+        break;
+      }
+      if (!inRange(v, def.range)) {
+        skip[i] = 1;
+        issues.push({
+          kind: "range",
+          severity: "error",
+          where,
+          field: name,
+          label: def.label,
+          received: withUnit(String(v), def.unit),
+          value: v,
+          expected: `in ${formatRange(def.range, def.unit)}`,
+          ...at(i),
+        });
+        break;
+      }
+    }
+    if (skip[i]) continue;
+    for (const c of calc.constraints) {
+      if (!c.holds(x)) {
+        skip[i] = 1;
+        issues.push({
+          kind: "constraint",
+          severity: "error",
+          where,
+          field: c.inputs.join(", "),
+          received: c.inputs.map((name) =>
+            `${name} = ${withUnit(String(x[name]), calc.inputs[name]!.unit)}`
+          ).join(", "),
+          expected: c.description,
+          ...at(i),
+        });
+        break;
+      }
+    }
+  }
+  const outs = calc.outputNames;
+  const value = outs.map(() => new Float64Array(n).fill(NaN));
+  const u = outs.map(() => new Float64Array(n).fill(NaN));
+  const lower = outs.map(() => new Float64Array(n).fill(NaN));
+  const upper = outs.map(() => new Float64Array(n).fill(NaN));
+  if (method === "exact") {
+    const results = evaluateColumns(
+      calc,
+      Object.fromEntries(calc.inputNames.map((name, k) => [name, inputs[k]!])),
+    );
+    outs.forEach((o, k) => {
+      const col = results[o]!;
+      const range = calc.outputs[o]!.quantity.valid;
+      for (let i = 0; i < n; i++) {
+        if (skip[i]) continue;
+        const v = col[i]!;
+        if (Number.isFinite(v) && inRange(v, range)) value[k]![i] = v;
+        else {
+          issues.push({
+            kind: "output",
+            severity: "error",
+            where,
+            field: o,
+            label: calc.outputs[o]!.label,
+            received: String(v),
+            expected: `in ${formatRange(range, calc.outputs[o]!.unit)}`,
+            ...at(i),
+          });
+        }
+      }
+    });
+  } else {
+    const models = options.uncertainty ?? {};
+    const labels = rowLabels(table, options.rowLabels);
+    for (let i = 0; i < n; i++) {
+      if (skip[i]) continue;
+      const args: Record<string, UncertainArgument> = {};
+      calc.inputNames.forEach((name, k) => {
+        const col = wired[k];
+        const v = inputs[k]![i]!;
+        const model = col ? models[col.name] ?? models[col.header] : undefined;
+        args[name] = model ? distributionOf(model, v, calc.inputs[name]!.unit) : v;
+      });
+      try {
+        const r = propagate(calc, args, {
+          method,
+          label: labels[i]!,
+          ...(options.coverage !== undefined ? { coverage: options.coverage } : {}),
+          ...(options.population !== undefined ? { population: options.population } : {}),
+          ...(method === "monteCarlo"
+            ? { trials: options.trials ?? 10_000, keepSamples: false }
+            : {}),
+          ...(options.seed !== undefined ? { seed: options.seed } : {}),
+        });
+        outs.forEach((o, k) => {
+          const y = r.outputs[o]!;
+          value[k]![i] = y.value;
+          u[k]![i] = y.standardUncertainty;
+          lower[k]![i] = y.interval.lower;
+          upper[k]![i] = y.interval.upper;
+        });
+      } catch (e) {
+        if (!(e instanceof TypeError || e instanceof RangeError)) throw e;
+        const found = (e as { issues?: ValidationIssue[] }).issues;
+        if (found) issues.push(...found.map((issue) => ({ ...issue, ...at(i) })));
+        else {
+          issues.push({
+            kind: "output",
+            severity: "error",
+            where,
+            field: outs.join(", "),
+            received: e.message,
+            expected: "a result",
+            ...at(i),
+          });
+        }
+      }
+    }
+  }
+  const columns = new Map<string, Column>(table.columns);
+  outs.forEach((o, k) => {
+    const def = calc.outputs[o]!;
+    const name = outputName(table, calc, o);
+    const base = {
+      kind: "numeric" as const,
+      quantity: def.quantity,
+      sourceUnit: def.unit,
+      computed: true,
+    };
+    columns.set(name, {
+      ...base,
+      name,
+      header: labelWithUnit(def.label, def.unit),
+      role: "value",
+      values: value[k]!,
+    });
+    if (method !== "exact") {
+      const p = `${Math.round((options.coverage ?? 0.95) * 1000) / 10} %`;
+      for (
+        const [suffix, role, values, header] of [
+          ["u", "standardUncertainty", u[k]!, `${def.label} standard uncertainty`],
+          ["lower", "lower", lower[k]!, `${def.label} ${p} interval lower end`],
+          ["upper", "upper", upper[k]!, `${def.label} ${p} interval upper end`],
+        ] as const
+      ) {
+        columns.set(`${name} ${suffix}`, {
+          ...base,
+          name: `${name} ${suffix}`,
+          header: labelWithUnit(header, def.unit),
+          role,
+          of: name,
+          values,
+        });
+      }
+    }
+  });
+  const cautions = [...table.cautions];
+  for (const c of cautionsOf(calc)) if (!cautions.includes(c)) cautions.push(c);
+  return makeTable({
+    source: table.source,
+    rowCount: n,
+    lines: table.lines,
+    columns,
+    issues: [...table.issues, ...issues].sort((a, b) => (a.row ?? -1) - (b.row ?? -1)),
+    blankLines: table.blankLines,
+    cautions,
+  });
+}
+
+/** A label per row: the row-label column's cells (or the first text column's), else the row
+ * number. */
+export function rowLabels(table: Table, column?: string): string[] {
+  const c = column !== undefined
+    ? table.columns.get(column)
+    : [...table.columns.values()].find((x) => x.kind === "text");
+  if (column !== undefined && c?.kind !== "text") {
+    throw new TypeError(
+      `Table: expected '${column}' to be a text column naming the rows, got ${
+        c === undefined ? "no such column" : "a numeric column"
+      }`,
+    );
+  }
+  return Array.from(
+    { length: table.rowCount },
+    (_, i) => c?.kind === "text" && c.values[i]! !== "" ? c.values[i]! : `row ${i + 1}`,
+  );
+}
+
+/** The issues of one row, as messages (for a flags cell). */
+export function rowIssues(table: Table, row: number): string[] {
+  return table.issues.filter((i) => i.row === row).map(renderIssue);
+}

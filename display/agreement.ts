@@ -1,0 +1,6 @@
+/**
+ * Notebook displays of agreement results.
+ *
+ * @module
+ */
+export {};

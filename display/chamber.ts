@@ -1,0 +1,6 @@
+/**
+ * Notebook displays of chamber results.
+ *
+ * @module
+ */
+export {};

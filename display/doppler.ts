@@ -1,0 +1,6 @@
+/**
+ * Notebook displays of doppler results.
+ *
+ * @module
+ */
+export {};

@@ -1,0 +1,6 @@
+/**
+ * Notebook displays of physics results.
+ *
+ * @module
+ */
+export {};
