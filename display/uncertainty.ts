@@ -135,7 +135,7 @@ export function displayPropagation(result: Propagation): MimeBundle {
     const v = result.outputs[name]!;
     const adequate = v.firstOrderAdequate
       ? ""
-      : " — NOT ADEQUATE: the first-order result is biased here (see warnings); use Monte Carlo";
+      : " — NOT ADEQUATE: first-order result, see the warnings; use Monte Carlo";
     const line = formatUncertainValue(v) + adequate;
     const extra = v.method === "gum" && v.standardUncertainty > 0
       ? `u = ${formatNumber(v.standardUncertainty, 2)}${unitSuffix(v.unit)}, ν_eff = ${

@@ -28,8 +28,7 @@ import {
   validateGumWithMonteCarlo,
 } from "../mod.ts";
 import { budgetChart, histogramChart, sensitivityChart } from "../plot/mod.ts";
-import { runNotebook } from "../cli/notebooks/runner.ts";
-import { findNotebooks } from "../cli/run_notebooks.ts";
+import { findNotebooks, runNotebook } from "@sonorigor/notebook-runner";
 
 const outDir = Deno.args[0] ?? "out/demo";
 await Deno.mkdir(outDir, { recursive: true });

@@ -308,7 +308,10 @@ export function defineCalculation<I extends string, O extends string>(
     cautions: Object.freeze([...spec.cautions]),
     constraints: Object.freeze([...(spec.constraints ?? [])]),
     clinical: spec.clinical ?? false,
-    recipe: spec.recipe ?? { kind: "catalog" as const, id: spec.id },
+    // a spread calculation brings its own recipe: a catalog recipe always names this id
+    recipe: spec.recipe && spec.recipe.kind !== "catalog"
+      ? spec.recipe
+      : { kind: "catalog" as const, id: spec.id },
     ...(spec.partial ? { partial: spec.partial } : {}),
   });
 }

@@ -33,15 +33,16 @@ export function renderIssue(issue: ValidationIssue): string {
     : issue.row !== undefined
     ? `row ${issue.row + 1}, `
     : "";
-  const field = `'${issue.field}'${
+  const field = `${issue.part ? `the ${issue.part} of ` : ""}'${issue.field}'${
     issue.label && issue.label !== issue.field ? ` (${issue.label})` : ""
   }`;
   const lead = issue.where === "" ? "" : `${issue.where}: `;
+  const noun = issue.line !== undefined || issue.row !== undefined ? "column" : "input";
   switch (issue.kind) {
     case "missing":
-      return `${lead}${at}missing ${field}: expected ${issue.expected}, got ${issue.received}`;
+      return `${lead}${at}missing ${noun} ${field}: expected ${issue.expected}, got ${issue.received}`;
     case "unknown":
-      return `${lead}${at}unknown ${field}: expected ${issue.expected}, got ${issue.received}`;
+      return `${lead}${at}unknown ${noun} ${field}: expected ${issue.expected}, got ${issue.received}`;
     case "typical":
       return `${lead}${at}${field} = ${issue.received} lies outside the typical range ${issue.expected}: interpret with care`;
     case "notMeasured":

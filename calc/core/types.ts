@@ -224,6 +224,9 @@ export interface ValidationIssue {
   readonly field: string;
   /** The quantity's label, when the field is a quantity. */
   readonly label?: string;
+  /** The part of the value at fault, for a distribution: "standard uncertainty", "lower
+   * bound", "degrees of freedom". */
+  readonly part?: string;
   /** The value as received, shown: "0", "\"21 mmHg\"", "nothing". */
   readonly received: string;
   /** The value in the canonical unit, when one could be read. */

@@ -14,6 +14,29 @@ import type { Quantity } from "../core/types.ts";
 const NOTE = "common practice, no source";
 
 /**
+ * Blood velocity along the flow direction (negative: away from the probe).
+ *
+ * @example
+ * ```ts
+ * import { BLOOD_VELOCITY } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(BLOOD_VELOCITY.unit, "m/s");
+ * ```
+ */
+export const BLOOD_VELOCITY: Quantity = defineQuantity({
+  id: "bloodVelocity",
+  label: "Blood velocity",
+  symbol: "v",
+  unit: "m/s",
+  description: "Velocity of blood along the flow direction (negative: away from the probe)",
+  valid: { min: -20, max: 20 },
+  typical: { min: -7, max: 7 },
+  resolution: 0.01,
+  headers: ["velocity"],
+  rangeNote: NOTE,
+});
+
+/**
  * Stroke volume: blood ejected per beat.
  *
  * @example
@@ -163,6 +186,7 @@ export const AORTIC_VALVE_AREA_INDEX: Quantity = defineQuantity({
  * ```
  */
 export const FLOW_QUANTITIES: readonly Quantity[] = [
+  BLOOD_VELOCITY,
   STROKE_VOLUME,
   STROKE_VOLUME_INDEX,
   CARDIAC_OUTPUT,

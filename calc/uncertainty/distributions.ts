@@ -307,7 +307,7 @@ export function resolveDistribution(
       severity: "error",
       where,
       field,
-      ...(part === "" ? {} : { label: part }),
+      ...(part === "" ? {} : { part }),
       received,
       unit,
       expected,
@@ -326,7 +326,7 @@ export function resolveDistribution(
       return NaN;
     }
     if (finiteOnly && !Number.isFinite(read)) {
-      problem(part, String(read), "a finite number", "range");
+      problem(part, String(read), "as a finite number", "range");
     }
     return read;
   };

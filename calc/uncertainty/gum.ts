@@ -178,7 +178,7 @@ export function propagateGum<I extends string, O extends string>(
     const linear = new Map<string, number>();
     inputs.forEach((p, i) => {
       const ci = row[i]!;
-      if (ci === 0) return;
+      // a zero sensitivity still lists the source (with no contribution), as budgets do
       for (const [k, s] of p.linear) linear.set(k, (linear.get(k) ?? 0) + ci * s);
     });
     linearParts.push(linear);

@@ -287,7 +287,8 @@ export function outsideDrawsWarning(
   trials: number,
 ): string {
   const def = calc.inputs[name]!;
-  return `${count} of ${trials} draws of '${name}' (${def.label}) fell outside its valid range ${
+  const label = def.label === name ? "" : ` (${def.label})`;
+  return `${count} of ${trials} draws of '${name}'${label} fell outside its valid range ${
     formatRange(def.range, def.unit)
   }: its distribution puts mass where the quantity cannot be`;
 }
@@ -300,7 +301,8 @@ export function outsideOutputsWarning(
   trials: number,
 ): string {
   const def = calc.outputs[name]!;
-  return `${count} of ${trials} model values of '${name}' (${def.label}) fell outside its valid range ${
+  const label = def.label === name ? "" : ` (${def.label})`;
+  return `${count} of ${trials} model values of '${name}'${label} fell outside its valid range ${
     formatRange(def.quantity.valid, def.unit)
   }: some combinations of input draws are physically inconsistent`;
 }

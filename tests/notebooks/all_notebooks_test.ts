@@ -3,9 +3,12 @@
  * (with the HTML export) and fails on any cell error. The test name carries the count it ran.
  */
 import assert from "node:assert/strict";
-import { findNotebooks } from "../../cli/run_notebooks.ts";
-import { runNotebook } from "../../cli/notebooks/runner.ts";
-import { CAN_RUN_KERNEL, processExists, ROOT } from "./helpers.ts";
+import { fileURLToPath } from "node:url";
+import { findNotebooks, runNotebook } from "@sonorigor/notebook-runner";
+import { canRunKernel, processExists } from "@sonorigor/notebook-runner/testing";
+
+/** The repository root (absolute, no trailing slash). */
+const ROOT = fileURLToPath(new URL("../../", import.meta.url)).replace(/\/$/, "");
 
 const notebooks = await findNotebooks([`${ROOT}/notebooks`, `${ROOT}/examples`]);
 const label = (path: string) => path.slice(ROOT.length + 1);
@@ -13,7 +16,7 @@ const label = (path: string) => path.slice(ROOT.length + 1);
 Deno.test({
   name:
     `every notebook in notebooks/ and examples/ runs without a cell error (${notebooks.length} found)`,
-  ignore: !CAN_RUN_KERNEL,
+  ignore: !canRunKernel(),
   async fn(t) {
     console.error(
       `all-notebooks: running ${notebooks.length} notebook(s): ${

@@ -8,7 +8,7 @@
  */
 import assert from "node:assert/strict";
 import { chromium } from "playwright-core";
-import { runNotebook } from "../../cli/notebooks/runner.ts";
+import { runNotebook } from "@sonorigor/notebook-runner";
 
 const CHROMIUM = Deno.env.get("SONORIGOR_CHROMIUM") ?? "/usr/bin/chromium";
 const available = await Deno.stat(CHROMIUM).then((s) => s.isFile).catch(() => false);

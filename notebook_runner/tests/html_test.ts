@@ -4,8 +4,8 @@ import {
   notebookToHtml,
   renderMimeBundle,
   stripAnsi,
-} from "../../cli/notebooks/html.ts";
-import type { Notebook } from "../../cli/notebooks/nbformat.ts";
+} from "../html.ts";
+import type { Notebook } from "../nbformat.ts";
 
 Deno.test("stripAnsi removes SGR colours, OSC hyperlinks and cursor sequences", () => {
   // ECMA-48 (5th ed., 1991), 5.4: CSI sequences are ESC [ parameters intermediates final byte;

@@ -6,7 +6,7 @@ import {
   PROTOCOL_VERSION,
   serializeMessage,
   signFrames,
-} from "../../cli/notebooks/protocol.ts";
+} from "../protocol.ts";
 
 const encode = (frames: (string | Uint8Array)[]) =>
   frames.map((f) => (typeof f === "string" ? new TextEncoder().encode(f) : f));

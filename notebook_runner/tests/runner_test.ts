@@ -3,17 +3,11 @@
  * run takes a few seconds; the hanging fixture uses a 2 s cell limit.
  */
 import assert from "node:assert/strict";
-import { stripAnsi } from "../../cli/notebooks/html.ts";
-import { joinText, type Notebook, notebookProblems } from "../../cli/notebooks/nbformat.ts";
-import { runNotebook } from "../../cli/notebooks/runner.ts";
-import {
-  CAN_RUN_KERNEL,
-  copyFixtures,
-  FIXTURES,
-  processExists,
-  processGroupAlive,
-  readJson,
-} from "./helpers.ts";
+import { stripAnsi } from "../html.ts";
+import { joinText, type Notebook, notebookProblems } from "../nbformat.ts";
+import { partialPathOf, runNotebook } from "../runner.ts";
+import { processExists, processGroupAlive } from "../testing.ts";
+import { CAN_RUN_KERNEL, copyFixtures, FIXTURES, readJson } from "./helpers.ts";
 
 const kernelTest = (name: string, fn: () => Promise<void>) =>
   Deno.test({ name, ignore: !CAN_RUN_KERNEL, fn });
@@ -24,28 +18,9 @@ function assertKernelGone(pid: number | undefined): void {
   assert.equal(processGroupAlive(pid), false, `processes left in the kernel's group ${pid}`);
 }
 
-Deno.test({
-  name: "the process checks used below see a live process and its group, then their end",
-  ignore: !CAN_RUN_KERNEL,
-  async fn() {
-    const sleeper = new Deno.Command("sleep", {
-      args: ["30"],
-      detached: true,
-      stdout: "null",
-      stderr: "null",
-    })
-      .spawn();
-    assert.equal(processExists(sleeper.pid), true);
-    // the child becomes a group leader (setsid) just after fork: under load that can lag the spawn
-    for (let i = 0; i < 100 && !processGroupAlive(sleeper.pid); i++) {
-      await new Promise((r) => setTimeout(r, 20));
-    }
-    assert.equal(processGroupAlive(sleeper.pid), true);
-    Deno.kill(-sleeper.pid, "SIGKILL");
-    await sleeper.status;
-    assert.equal(processExists(sleeper.pid), false);
-    assert.equal(processGroupAlive(sleeper.pid), false);
-  },
+Deno.test("partialPathOf puts the partial notebook beside the original", () => {
+  assert.equal(partialPathOf("notebooks/01-phantom.ipynb"), "notebooks/01-phantom.partial.ipynb");
+  assert.equal(partialPathOf("/tmp/a.b.ipynb"), "/tmp/a.b.partial.ipynb");
 });
 
 const code = (nb: Notebook) => nb.cells.filter((c) => c.cell_type === "code");

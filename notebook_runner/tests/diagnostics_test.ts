@@ -1,10 +1,5 @@
 import assert from "node:assert/strict";
-import {
-  diagnoseSyntax,
-  formatFailure,
-  locateErrorLine,
-  partialPathOf,
-} from "../../cli/notebooks/runner.ts";
+import { diagnoseSyntax, formatFailure, locateErrorLine } from "../diagnostics.ts";
 import { CAN_RUN_KERNEL } from "./helpers.ts";
 
 // The kernel's traceback positions refer to the transpiled cell, so names from the message win
@@ -86,11 +81,6 @@ Deno.test("formatFailure prints the cell number, the line and the traceback", ()
   });
   assert.match(timeout, /^h\.ipynb: cell 2 of 2 timed out \(id x\)\n/);
   assert.ok(timeout.endsWith("\n  near line 4 of the cell: loop()"));
-});
-
-Deno.test("partialPathOf puts the partial notebook beside the original", () => {
-  assert.equal(partialPathOf("notebooks/01-phantom.ipynb"), "notebooks/01-phantom.partial.ipynb");
-  assert.equal(partialPathOf("/tmp/a.b.ipynb"), "/tmp/a.b.partial.ipynb");
 });
 
 Deno.test({

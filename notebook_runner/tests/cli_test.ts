@@ -3,22 +3,16 @@
  * and Ctrl-C (SIGINT) during a hanging cell, all on the real kernel.
  */
 import assert from "node:assert/strict";
-import {
-  CAN_RUN_KERNEL,
-  copyFixtures,
-  FIXTURES,
-  processExists,
-  processGroupAlive,
-  ROOT,
-} from "./helpers.ts";
+import { processExists, processGroupAlive } from "../testing.ts";
+import { CAN_RUN_KERNEL, copyFixtures, FIXTURES, PACKAGE } from "./helpers.ts";
 
 const kernelTest = (name: string, fn: () => Promise<void>) =>
   Deno.test({ name, ignore: !CAN_RUN_KERNEL, fn });
 
 function cli(args: string[], env: Record<string, string> = {}): Deno.Command {
   return new Deno.Command(Deno.execPath(), {
-    args: ["run", "-A", "--quiet", `${ROOT}/cli/run_notebooks.ts`, ...args],
-    cwd: ROOT,
+    args: ["run", "-A", "--quiet", `${PACKAGE}/cli.ts`, ...args],
+    cwd: PACKAGE,
     env,
     stdin: "null",
     stdout: "piped",
@@ -34,7 +28,7 @@ async function run(args: string[], env: Record<string, string> = {}) {
 kernelTest("CLI: each kind of bad input gives a clear message and a non-zero exit", async () => {
   const dir = await copyFixtures("throws.ipynb", "invalid_json.ipynb", "python_kernel.ipynb");
   const cases: [string[], Record<string, string>, number, RegExp][] = [
-    [[`${dir}/missing.ipynb`], {}, 2, /Notebook not found: .*missing\.ipynb/],
+    [[`${dir}/missing.ipynb`], {}, 2, /Notebook not found: missing\.ipynb \(looked in \/.+\)/],
     [[`${dir}/invalid_json.ipynb`], {}, 2, /invalid_json\.ipynb: invalid JSON: /],
     [
       [`${dir}/python_kernel.ipynb`],
@@ -75,6 +69,40 @@ kernelTest("CLI: each kind of bad input gives a clear message and a non-zero exi
   }
   await Deno.stat(`${dir}/throws.partial.ipynb`);
   await Deno.remove(dir, { recursive: true });
+});
+
+kernelTest(
+  "CLI: relative paths come from the caller's folder (INIT_CWD, as deno task sets it)",
+  async () => {
+    // `deno task` runs the command in the folder of its deno.json and passes the folder the
+    // user typed it in as INIT_CWD; the process here runs in the package folder, the caller is
+    // elsewhere, so only resolution from the caller finds the notebook and the output folder.
+    const caller = await copyFixtures("ok.ipynb");
+    const result = await run(["ok.ipynb", "--out", "executed", "--html", "--timeout", "60"], {
+      INIT_CWD: caller,
+    });
+    assert.equal(result.code, 0, result.stderr);
+    assert.match(await Deno.readTextFile(`${caller}/executed/ok.html`), /<rect id="fixture-rect"/);
+    assert.equal(JSON.parse(await Deno.readTextFile(`${caller}/executed/ok.ipynb`)).nbformat, 4);
+    await Deno.remove(caller, { recursive: true });
+  },
+);
+
+kernelTest("CLI: a notebook not found names the folder it was looked for in", async () => {
+  const caller = await copyFixtures("ok.ipynb");
+  const result = await run(["researcher.ipynb"], { INIT_CWD: caller });
+  assert.equal(result.code, 2, result.stderr);
+  assert.ok(
+    result.stderr.includes(`Notebook not found: researcher.ipynb (looked in ${caller})`),
+    result.stderr,
+  );
+  // a sub-folder of the caller's folder is reported as the folder searched
+  const nested = await run(["sub/researcher.ipynb"], { INIT_CWD: caller });
+  assert.ok(
+    nested.stderr.includes(`Notebook not found: researcher.ipynb (looked in ${caller}/sub)`),
+    nested.stderr,
+  );
+  await Deno.remove(caller, { recursive: true });
 });
 
 kernelTest("CLI: Ctrl-C during a hanging cell stops the kernel and exits 130", async () => {

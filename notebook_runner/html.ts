@@ -8,8 +8,16 @@
  * @module
  */
 import { Marked, type Tokens } from "marked";
-import { escapeHtml } from "../../calc/core/display.ts";
 import { type Cell, joinText, type MimeData, type Notebook, type Output } from "./nbformat.ts";
+
+/**
+ * Escapes the five HTML-significant characters. The runner is a package of its own and imports
+ * nothing from the echo library, so it keeps this one-liner rather than sharing the library's.
+ */
+function escapeHtml(text: string): string {
+  return text.replaceAll("&", "&amp;").replaceAll("<", "&lt;").replaceAll(">", "&gt;")
+    .replaceAll('"', "&quot;").replaceAll("'", "&#39;");
+}
 
 // ESC [ params intermediates final  |  ESC ] ... BEL/ST  |  other two-byte ESC sequences
 // deno-lint-ignore no-control-regex -- matching ESC is the point of this pattern

@@ -10,7 +10,7 @@ import {
   parseNotebook,
   splitLines,
   storedMimeData,
-} from "../../cli/notebooks/nbformat.ts";
+} from "../nbformat.ts";
 import { FIXTURES } from "./helpers.ts";
 
 const minimal = (cells: unknown[], extra: Record<string, unknown> = {}) =>

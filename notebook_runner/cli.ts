@@ -2,15 +2,20 @@
  * `deno task notebooks [paths...] [--out DIR] [--in-place] [--timeout SECONDS] [--html]
  * [--deno PATH]`: executes notebooks on the real Deno Jupyter kernel, without Python.
  *
- * With no paths, every `*.ipynb` in notebooks/ and examples/ is run. Exit status: 0 when every
- * notebook ran; 1 when a cell failed, timed out or the kernel died; 2 for bad input (usage, a
- * missing notebook, invalid JSON, a non-Deno kernelspec); 3 when the kernel could not be started
- * (e.g. the deno binary is missing); 130 when interrupted (Ctrl-C) or terminated.
+ * With no paths, every `*.ipynb` in notebooks/ and examples/ is run. Relative paths given on the
+ * command line are taken from the folder the command was typed in (`INIT_CWD` under `deno task`);
+ * the defaults (notebooks/, examples/, out/notebooks) from the current folder of the process,
+ * which `deno task` sets to the folder of the deno.json defining the task. Exit status: 0 when
+ * every notebook ran; 1 when a cell failed, timed out or the kernel died; 2 for bad input (usage,
+ * a missing notebook, invalid JSON, a non-Deno kernelspec); 3 when the kernel could not be
+ * started (e.g. the deno binary is missing); 130 when interrupted (Ctrl-C) or terminated.
  *
  * @module
  */
 import { parseArgs } from "node:util";
-import { runNotebook, type RunResult } from "./notebooks/runner.ts";
+import { isAbsolute, relative, resolve } from "node:path";
+import { findNotebooks } from "./find_notebooks.ts";
+import { runNotebook, type RunResult } from "./runner.ts";
 
 const USAGE = `Usage: deno task notebooks [paths...] [options]
 
@@ -24,7 +29,9 @@ Options:
   --deno PATH        deno binary for the kernel (default: $SONORIGOR_DENO, else this deno)
   -h, --help         show this help
 
-With no paths, runs every *.ipynb in notebooks/ and examples/ (skipping *.partial.ipynb).`;
+With no paths, runs every *.ipynb in notebooks/ and examples/ (skipping *.partial.ipynb).
+Relative paths you give (notebooks, --out, --deno) are taken from the folder you are in; the
+defaults (notebooks/, examples/, out/notebooks) from the project folder where the task is defined.`;
 
 /** Exit status per outcome. */
 export const EXIT_CODES: Readonly<Record<RunResult["status"], number>> = {
@@ -36,27 +43,36 @@ export const EXIT_CODES: Readonly<Record<RunResult["status"], number>> = {
 };
 
 /**
- * Lists the notebooks in the given folders (sorted, partial notebooks excluded).
- *
- * @param folders Folders to scan (missing ones are skipped).
- * @returns Paths such as "notebooks/01-x.ipynb".
+ * The folder the user typed the command in: `INIT_CWD` when started by `deno task` (which runs a
+ * task in the folder of its deno.json and passes the caller's folder in that variable), else the
+ * current folder of this process.
  */
-export async function findNotebooks(folders: readonly string[]): Promise<string[]> {
-  const found: string[] = [];
-  for (const folder of folders) {
-    try {
-      for await (const entry of Deno.readDir(folder)) {
-        if (
-          entry.isFile && entry.name.endsWith(".ipynb") && !entry.name.endsWith(".partial.ipynb")
-        ) {
-          found.push(`${folder}/${entry.name}`);
-        }
-      }
-    } catch (error) {
-      if (!(error instanceof Deno.errors.NotFound)) throw error;
-    }
-  }
-  return found.sort();
+function callerFolder(): string {
+  const fromTask = Deno.env.get("INIT_CWD");
+  return fromTask !== undefined && fromTask !== "" ? fromTask : Deno.cwd();
+}
+
+/**
+ * A path typed by the user, resolved from the caller's folder and then written relative to the
+ * current folder when it lies inside it (short labels in logs and reports), else absolute.
+ *
+ * @param path The path as typed.
+ * @param caller The caller's folder (absolute).
+ * @returns The path to open from the current folder.
+ *
+ * @example
+ * ```ts
+ * import { pathFromCaller } from "@sonorigor/notebook-runner/cli";
+ * import assert from "node:assert/strict";
+ * const here = Deno.cwd();
+ * assert.equal(pathFromCaller("a.ipynb", `${here}/notebooks`), "notebooks/a.ipynb");
+ * assert.equal(pathFromCaller("/tmp/b.ipynb", `${here}/notebooks`), "/tmp/b.ipynb");
+ * ```
+ */
+export function pathFromCaller(path: string, caller: string): string {
+  const absolute = resolve(caller, path);
+  const inside = relative(Deno.cwd(), absolute);
+  return inside !== "" && !inside.startsWith("..") && !isAbsolute(inside) ? inside : absolute;
 }
 
 /**
@@ -100,8 +116,9 @@ export async function main(args: string[]): Promise<number> {
   if (values.out !== undefined && values["in-place"] && !values.html) {
     console.error("note: --out only matters with --html when --in-place is set");
   }
+  const caller = callerFolder();
   const paths = positionals.length > 0
-    ? positionals
+    ? positionals.map((path) => pathFromCaller(path, caller))
     : await findNotebooks(["notebooks", "examples"]);
   if (paths.length === 0) {
     console.error("No notebooks to run (none given, none in notebooks/ or examples/)");
@@ -127,8 +144,8 @@ export async function main(args: string[]): Promise<number> {
         inPlace: values["in-place"],
         html: values.html,
         signal: controller.signal,
-        ...(values.out === undefined ? {} : { outDir: values.out }),
-        ...(values.deno === undefined ? {} : { denoPath: values.deno }),
+        ...(values.out === undefined ? {} : { outDir: pathFromCaller(values.out, caller) }),
+        ...(values.deno === undefined ? {} : { denoPath: denoFromCaller(values.deno, caller) }),
       });
       results.push(result);
       if (result.status === "invalid" || result.status === "kernel") {
@@ -150,6 +167,11 @@ export async function main(args: string[]): Promise<number> {
   }
   if (controller.signal.aborted) return EXIT_CODES.interrupted;
   return Math.max(0, ...results.map((r) => EXIT_CODES[r.status]));
+}
+
+/** A deno binary given by path is taken from the caller's folder; a bare name is looked up. */
+function denoFromCaller(deno: string, caller: string): string {
+  return deno.includes("/") ? pathFromCaller(deno, caller) : deno;
 }
 
 if (import.meta.main) {

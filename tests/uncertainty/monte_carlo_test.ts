@@ -1,10 +1,8 @@
 import assert from "node:assert/strict";
 import {
   expressionModel,
-  gum,
-  monteCarlo,
-  monteCarloAdaptive,
   normal,
+  propagate,
   rectangular,
   validateGumWithMonteCarlo,
 } from "../../mod.ts";
@@ -23,17 +21,17 @@ const additive = expressionModel({
 
 Deno.test("JCGM 101 §9.2.2 additive model, normal inputs: MC agrees with GUM", () => {
   const inputs = { x1: normal(0, 1), x2: normal(0, 1), x3: normal(0, 1), x4: normal(0, 1) };
-  const g = gum(additive, inputs);
-  const m = monteCarlo(additive, inputs, { seed: 11 });
+  const g = propagate(additive, inputs);
+  const m = propagate(additive, inputs, { method: "monteCarlo", seed: 11 });
   // JCGM 101:2008 Table 2: GUF and MCM (10⁶ trials): y = 0.00, u(y) = 2.00, interval [−3.92, 3.92]
   assert.equal(g.outputs.y.standardUncertainty, 2);
-  assert.equal(g.outputs.y.interval[1].toFixed(2), "3.92");
+  assert.equal(g.outputs.y.interval.upper.toFixed(2), "3.92");
   // Monte Carlo tolerance: the standard error of a 97.5 % quantile at M = 10⁶ is about 0.005, so
   // endpoints are checked to ±0.02 (4 standard errors), u and y to ±0.01
   assert.ok(Math.abs(m.outputs.y.standardUncertainty - 2) < 0.01);
-  assert.ok(Math.abs(m.outputs.y.estimate) < 0.01);
-  assert.ok(Math.abs(m.outputs.y.symmetricInterval[0] + 3.92) < 0.02);
-  assert.ok(Math.abs(m.outputs.y.symmetricInterval[1] - 3.92) < 0.02);
+  assert.ok(Math.abs(m.outputs.y.value) < 0.01);
+  assert.ok(Math.abs(m.outputs.y.interval.lower + 3.92) < 0.02);
+  assert.ok(Math.abs(m.outputs.y.interval.upper - 3.92) < 0.02);
   // JCGM 101:2008 §9.2.2.4: the GUF is validated (n_dig = 2) by the MCM result
   const [v] = validateGumWithMonteCarlo(g, m, 2);
   assert.ok(v!.validated, v!.verdict);
@@ -48,15 +46,15 @@ Deno.test("JCGM 101 §9.2.3 additive model, rectangular inputs: MC interval ±3.
     x3: rectangular(-h, h),
     x4: rectangular(-h, h),
   };
-  const g = gum(additive, inputs);
-  const m = monteCarlo(additive, inputs, { seed: 12 });
+  const g = propagate(additive, inputs);
+  const m = propagate(additive, inputs, { method: "monteCarlo", seed: 12 });
   // JCGM 101:2008 Table 3: GUF [−3.92, 3.92]; MCM 10⁶: u = 2.00, [−3.88, 3.88]. The exact endpoint
   // is 2√3·(4 − 2 − 0.6^(1/4)) = 3.8795 from the Irwin–Hall CDF 1 − (4 − s)⁴/24 (analytic).
-  assert.equal(g.outputs.y.interval[1].toFixed(2), "3.92");
+  assert.equal(g.outputs.y.interval.upper.toFixed(2), "3.92");
   assert.ok(Math.abs(m.outputs.y.standardUncertainty - 2) < 0.01);
   const exact = 2 * h * (2 - 0.6 ** 0.25);
-  assert.ok(Math.abs(m.outputs.y.symmetricInterval[1] - exact) < 0.02);
-  assert.ok(Math.abs(m.outputs.y.symmetricInterval[0] + exact) < 0.02);
+  assert.ok(Math.abs(m.outputs.y.interval.upper - exact) < 0.02);
+  assert.ok(Math.abs(m.outputs.y.interval.lower + exact) < 0.02);
 });
 
 const comparisonLoss = expressionModel({
@@ -70,7 +68,7 @@ const comparisonLoss = expressionModel({
 
 Deno.test("JCGM 101 §9.4 comparison loss at x = 0: first order fails, MC and second order do not", () => {
   const inputs = { x1: normal(0, 0.005), x2: normal(0, 0.005) };
-  const first = gum(comparisonLoss, inputs);
+  const first = propagate(comparisonLoss, inputs);
   // JCGM 101:2008 Table 10 (x1 = 0, from memory): first-order GUF u(δY) = 0
   assert.equal(first.outputs.dY.standardUncertainty, 0);
   assert.ok(
@@ -84,15 +82,15 @@ Deno.test("JCGM 101 §9.4 comparison loss at x = 0: first order fails, MC and se
   ]!();
   assert.match(shown["text/plain"]!, /NOT ADEQUATE: first-order result/);
   // Second-order GUF: u = 2u² = 5.0 × 10⁻⁵ (JCGM 101 Table 10, GUF with higher-order terms)
-  const second = gum(comparisonLoss, inputs, { secondOrder: true });
+  const second = propagate(comparisonLoss, inputs, { secondOrder: true });
   assert.ok(Math.abs(second.outputs.dY.standardUncertainty - 5e-5) < 1e-12);
   // MCM: δY/u² ~ χ²₂ (analytic): mean 2u² = 5.0e-5, sd 2u² = 5.0e-5, shortest 95 % interval
   // [0, −2u²·ln 0.05] = [0, 1.50e-4]; JCGM 101 Table 10 prints 0.000 050, 0.000 050, [0.000 000, 0.000 150]
-  const m = monteCarlo(comparisonLoss, inputs, { seed: 13 });
-  assert.ok(Math.abs(m.outputs.dY.estimate - 5e-5) < 2e-7);
+  const m = propagate(comparisonLoss, inputs, { method: "monteCarlo", seed: 13 });
+  assert.ok(Math.abs(m.outputs.dY.value - 5e-5) < 2e-7);
   assert.ok(Math.abs(m.outputs.dY.standardUncertainty - 5e-5) < 5e-7);
-  assert.ok(m.outputs.dY.shortestInterval[0] < 1e-8);
-  assert.ok(Math.abs(m.outputs.dY.shortestInterval[1] - -2 * 25e-6 * Math.log(0.05)) < 1.5e-6);
+  assert.ok(m.outputs.dY.shortestInterval!.lower < 1e-8);
+  assert.ok(Math.abs(m.outputs.dY.shortestInterval!.upper - -2 * 25e-6 * Math.log(0.05)) < 1.5e-6);
   const [v] = validateGumWithMonteCarlo(first, m, 2);
   assert.equal(v!.validated, false);
   assert.match(v!.verdict, /NOT validated/);
@@ -100,22 +98,26 @@ Deno.test("JCGM 101 §9.4 comparison loss at x = 0: first order fails, MC and se
 
 Deno.test("Monte Carlo: the same seed gives bit-identical results; another seed differs", () => {
   const inputs = { x1: normal(1, 0.1), x2: rectangular(0, 1), x3: normal(0, 1), x4: 2 };
-  const a = monteCarlo(additive, inputs, { trials: 20_000, seed: 99 });
-  const b = monteCarlo(additive, inputs, { trials: 20_000, seed: 99 });
-  const c = monteCarlo(additive, inputs, { trials: 20_000, seed: 100 });
+  const a = propagate(additive, inputs, { method: "monteCarlo", trials: 20_000, seed: 99 });
+  const b = propagate(additive, inputs, { method: "monteCarlo", trials: 20_000, seed: 99 });
+  const c = propagate(additive, inputs, { method: "monteCarlo", trials: 20_000, seed: 100 });
   assert.deepEqual(a.outputs.y.samples, b.outputs.y.samples);
-  assert.notEqual(a.outputs.y.estimate, c.outputs.y.estimate);
+  assert.notEqual(a.outputs.y.value, c.outputs.y.value);
 });
 
 Deno.test("Adaptive Monte Carlo (JCGM 101 §7.9) stabilises and agrees with the GUM on a linear model", () => {
   const inputs = { x1: normal(0, 1), x2: normal(0, 1), x3: normal(0, 1), x4: normal(0, 1) };
-  const r = monteCarloAdaptive(additive, inputs, { significantDigits: 2, seed: 5 });
-  assert.ok(r.stabilized);
-  assert.ok(r.sequences >= 2);
+  const r = propagate(additive, inputs, {
+    method: "monteCarlo",
+    adaptive: { significantDigits: 2 },
+    seed: 5,
+  });
+  assert.ok(r.monteCarlo!.adaptive!.stabilized);
+  assert.ok(r.monteCarlo!.adaptive!.sequences >= 2);
   // JCGM 101 §7.9.4: M = max(⌈100/(1 − p)⌉, 10⁴) = 10⁴ for p = 0.95
-  assert.equal(r.trialsPerSequence, 10_000);
+  assert.equal(r.monteCarlo!.adaptive!.trialsPerSequence, 10_000);
   // δ for u = 2.0 at 2 digits is 0.05 (JCGM 101 §7.9.2 rule); the result lies within it of the GUM value
-  assert.equal(r.tolerance.y, 0.05);
+  assert.equal(r.monteCarlo!.adaptive!.tolerance.y, 0.05);
   assert.ok(Math.abs(r.outputs.y.standardUncertainty - 2) < 0.05);
 });
 
@@ -125,10 +127,14 @@ Deno.test("Monte Carlo: non-finite model values are an error naming the output a
     inputs: { x: { unit: "1", description: "x", range: { min: 0, max: 10 } } },
     output: { name: "y", unit: "1", description: "y" },
   });
-  assert.throws(() => monteCarlo(inverse, { x: normal(0.01, 1) }, { trials: 1000, seed: 1 }), {
-    name: "RangeError",
-    message: /output 'y' is not finite at Monte Carlo trial \d+/,
-  });
+  assert.throws(
+    () =>
+      propagate(inverse, { x: normal(0.01, 1) }, { method: "monteCarlo", trials: 1000, seed: 1 }),
+    {
+      name: "RangeError",
+      message: /output 'y' is not finite at Monte Carlo trial \d+/,
+    },
+  );
 });
 
 Deno.test("Monte Carlo: draws outside an input's valid range are reported", () => {
@@ -137,7 +143,11 @@ Deno.test("Monte Carlo: draws outside an input's valid range are reported", () =
     inputs: { x: { unit: "1", description: "x", range: { min: 0, max: 10 } } },
     output: { name: "y", unit: "1", description: "y" },
   });
-  const r = monteCarlo(sq, { x: normal(0.1, 0.1) }, { trials: 10_000, seed: 3 });
+  const r = propagate(sq, { x: normal(0.1, 0.1) }, {
+    method: "monteCarlo",
+    trials: 10_000,
+    seed: 3,
+  });
   assert.ok(r.warnings.some((w) => /draws of 'x' fell outside its valid range \[0, 10\]/.test(w)));
 });
 
@@ -145,7 +155,11 @@ Deno.test("adaptive Monte Carlo: a trial limit below two sequences is refused wi
   // JCGM 101:2008 §7.9.4: M = max(⌈100/(1 − p)⌉, 10⁴) trials per sequence and h ≥ 2 sequences
   for (const maxTrials of [5000, 19_999, NaN, -1, 25_000.5]) {
     assert.throws(
-      () => monteCarloAdaptive(additive, { x1: normal(0, 1), x2: 0, x3: 0, x4: 0 }, { maxTrials }),
+      () =>
+        propagate(additive, { x1: normal(0, 1), x2: 0, x3: 0, x4: 0 }, {
+          method: "monteCarlo",
+          adaptive: { maxTrials },
+        }),
       {
         name: "RangeError",
         message: new RegExp(
@@ -154,12 +168,12 @@ Deno.test("adaptive Monte Carlo: a trial limit below two sequences is refused wi
       },
     );
   }
-  const r = monteCarloAdaptive(additive, { x1: normal(0, 1), x2: 0, x3: 0, x4: 0 }, {
-    maxTrials: 20_000,
-    significantDigits: 4,
+  const r = propagate(additive, { x1: normal(0, 1), x2: 0, x3: 0, x4: 0 }, {
+    method: "monteCarlo",
+    adaptive: { maxTrials: 20_000, significantDigits: 4 },
   });
-  assert.equal(r.trials, 20_000);
-  assert.equal(r.stabilized, false);
+  assert.equal(r.monteCarlo!.trials, 20_000);
+  assert.equal(r.monteCarlo!.adaptive!.stabilized, false);
 });
 
 Deno.test("Monte Carlo: M ≥ 1/(1 − p) holds at the boundary despite the rounding of 1 − p", () => {
@@ -167,11 +181,21 @@ Deno.test("Monte Carlo: M ≥ 1/(1 − p) holds at the boundary despite the roun
   // though 1/(1 − 0.9999) evaluates to 10000.0000000011 in double precision (Node.js check)
   const inputs = { x1: normal(0, 1), x2: 0, x3: 0, x4: 0 };
   assert.equal(
-    monteCarlo(additive, inputs, { trials: 10_000, coverage: 0.9999, seed: 1 }).trials,
+    propagate(additive, inputs, { method: "monteCarlo", trials: 10_000, coverage: 0.9999, seed: 1 })
+      .monteCarlo!.trials,
     10_000,
   );
-  assert.throws(() => monteCarlo(additive, inputs, { trials: 9_999, coverage: 0.9999, seed: 1 }), {
-    name: "RangeError",
-    message: /expected at least 1\/\(1 − p\) = 10000 trials for coverage 0\.9999, got 9999/,
-  });
+  assert.throws(
+    () =>
+      propagate(additive, inputs, {
+        method: "monteCarlo",
+        trials: 9_999,
+        coverage: 0.9999,
+        seed: 1,
+      }),
+    {
+      name: "RangeError",
+      message: /expected at least 1\/\(1 − p\) = 10000 trials for coverage 0\.9999, got 9999/,
+    },
+  );
 });

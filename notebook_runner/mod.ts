@@ -1,0 +1,82 @@
+/**
+ * Executes Jupyter notebooks (.ipynb) on the real Deno kernel over ZeroMQ, without Python or
+ * Jupyter installed, and exports them as self-contained HTML.
+ *
+ * - {@linkcode runNotebook} runs one notebook in a child process: code cells in order, outputs
+ *   stored as nbformat 4.5, the first failing cell reported with its source line and traceback,
+ *   the kernel's process group always stopped; a failed run leaves `*.partial.ipynb` beside it.
+ * - {@linkcode findNotebooks} lists the notebooks of a project's folders.
+ * - {@linkcode parseNotebook}, {@linkcode notebookProblems} and {@linkcode assertValidNotebook}
+ *   read and check nbformat 4 documents; {@linkcode notebookToHtml} renders one offline.
+ * - {@linkcode DenoKernel} is the kernel client itself (connection file, signed messages).
+ *
+ * The command line is the `./cli` entry (`deno task notebooks` in this repository; `--help` lists
+ * its options); process checks for tests are in `./testing`.
+ *
+ * @example Render a notebook to HTML without running it
+ * ```ts
+ * import { notebookToHtml, parseNotebook } from "@sonorigor/notebook-runner";
+ * import assert from "node:assert/strict";
+ * const notebook = parseNotebook(
+ *   JSON.stringify({
+ *     metadata: { kernelspec: { name: "deno", display_name: "Deno", language: "typescript" } },
+ *     nbformat: 4,
+ *     nbformat_minor: 5,
+ *     cells: [{ id: "a", cell_type: "markdown", metadata: {}, source: "# Velocity <check>" }],
+ *   }),
+ *   "example.ipynb",
+ * );
+ * const html = notebookToHtml(notebook);
+ * assert.match(html, /<title>Velocity &lt;check&gt;<\/title>/);
+ * assert.match(html, /<h1[^>]*>Velocity &lt;check&gt;<\/h1>/);
+ * ```
+ *
+ * @module
+ */
+export {
+  type CellFailure,
+  diagnoseSyntax,
+  formatFailure,
+  locateErrorLine,
+  type SourceLine,
+} from "./diagnostics.ts";
+export { findNotebooks } from "./find_notebooks.ts";
+export { type HtmlExportOptions, notebookTitle, notebookToHtml, renderMimeBundle, stripAnsi } from "./html.ts";
+export {
+  type ConnectionInfo,
+  DenoKernel,
+  type ExecuteOptions,
+  type ExecuteOutcome,
+  KernelError,
+  type KernelStartOptions,
+  resolveDenoPath,
+} from "./kernel.ts";
+export {
+  assertValidNotebook,
+  type Cell,
+  checkDenoKernelspec,
+  type CodeCell,
+  type DisplayDataOutput,
+  type ErrorOutput,
+  type ExecuteResultOutput,
+  joinText,
+  type MarkdownCell,
+  type MimeData,
+  type MultilineString,
+  type Notebook,
+  NotebookInputError,
+  notebookProblems,
+  type Output,
+  parseNotebook,
+  type RawCell,
+  type StreamOutput,
+} from "./nbformat.ts";
+export { type JupyterMessage, type MessageHeader, PROTOCOL_VERSION } from "./protocol.ts";
+export {
+  partialPathOf,
+  runNotebook,
+  runNotebookInProcess,
+  type RunOptions,
+  type RunResult,
+  writeNotebook,
+} from "./runner.ts";
