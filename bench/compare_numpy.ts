@@ -17,15 +17,8 @@
  * @module
  */
 import { parseArgs } from "node:util";
-import {
-  createMonteCarloPool,
-  gum,
-  monteCarlo,
-  monteCarloAdaptive,
-  PHN_2017_MODELS,
-  randomStream,
-} from "../mod.ts";
-import { computeCohort, readCohortCsv } from "../mod.ts";
+import { createMonteCarloPool, PHN_2017_MODELS, propagate, randomStream } from "../mod.ts";
+import { bsaHaycock, evaluateTable, readTable, zScoreCalculation } from "../mod.ts";
 import { continuityInputs, continuityWithJetAngle, tenInputModel, tenUncertain } from "./models.ts";
 
 const { values: args } = parseArgs({
@@ -55,8 +48,16 @@ const workers = navigator.hardwareConcurrency;
 if (args["memory-probe"]) {
   if (args.pool) {
     using pool = await createMonteCarloPool({ workers, modules: [modelsModule] });
-    await pool.monteCarlo(continuityWithJetAngle, continuityInputs, { trials: 1_000_000, seed: 1 });
-  } else monteCarlo(continuityWithJetAngle, continuityInputs, { trials: 1_000_000, seed: 1 });
+    await pool.propagate(continuityWithJetAngle, continuityInputs, {
+      method: "monteCarlo",
+      trials: 1_000_000,
+      seed: 1,
+    });
+  } else {propagate(continuityWithJetAngle, continuityInputs, {
+      method: "monteCarlo",
+      trials: 1_000_000,
+      seed: 1,
+    });}
   console.log(JSON.stringify({ peakMb: await peakMemoryMb() }));
   Deno.exit(0);
 }
@@ -87,22 +88,41 @@ const t0 = performance.now();
 const pool = await createMonteCarloPool({ workers, modules: [modelsModule] });
 ours.poolStartMs = performance.now() - t0;
 // one untimed round of each, as numpy's imports and first calls are outside its timings
-await pool.monteCarlo(continuityWithJetAngle, continuityInputs, { trials: 1_000_000, seed: 99 });
-await pool.monteCarloAdaptive(continuityWithJetAngle, continuityInputs, { seed: 99 });
+await pool.propagate(continuityWithJetAngle, continuityInputs, {
+  method: "monteCarlo",
+  trials: 1_000_000,
+  seed: 99,
+});
+await pool.propagate(continuityWithJetAngle, continuityInputs, {
+  method: "monteCarlo",
+  adaptive: true,
+  seed: 99,
+});
 for (let k = 0; k < runs; k++) {
   const options = { trials: 1_000_000, seed: 1 + k };
-  ours.a.push(await time(() => monteCarlo(continuityWithJetAngle, continuityInputs, options)));
-  ours.aPool.push(
-    await time(() => pool.monteCarlo(continuityWithJetAngle, continuityInputs, options)),
+  ours.a.push(
+    await time(() =>
+      propagate(continuityWithJetAngle, continuityInputs, { method: "monteCarlo", ...options })
+    ),
   );
-  const adaptive = { significantDigits: 2, seed: 1 + k };
+  ours.aPool.push(
+    await time(() =>
+      pool.propagate(continuityWithJetAngle, continuityInputs, { method: "monteCarlo", ...options })
+    ),
+  );
+  const adaptive = {
+    method: "monteCarlo",
+    adaptive: { significantDigits: 2 },
+    seed: 1 + k,
+  } as const;
   ours.b.push(
     await time(() => {
-      ours.bTrials = monteCarloAdaptive(continuityWithJetAngle, continuityInputs, adaptive).trials;
+      ours.bTrials =
+        propagate(continuityWithJetAngle, continuityInputs, adaptive).monteCarlo!.trials;
     }),
   );
   ours.bPool.push(
-    await time(() => pool.monteCarloAdaptive(continuityWithJetAngle, continuityInputs, adaptive)),
+    await time(() => pool.propagate(continuityWithJetAngle, continuityInputs, adaptive)),
   );
 }
 pool.close();
@@ -121,19 +141,18 @@ for (let i = 0; i < rows; i++) {
 const model = PHN_2017_MODELS.lvEndDiastolicDimension;
 const csv = ["height [cm],weight [kg],lvedd [cm]"];
 for (let i = 0; i < rows; i++) csv.push(`${height[i]},${weight[i]},${lvedd[i]}`);
-const table = readCohortCsv(csv.join("\n") + "\n", {
-  height: "height",
-  weight: "weight",
-  measurements: [{ column: "lvedd", canonicalUnit: model.unit, range: model.measurementRange }],
-});
+const table = readTable(csv.join("\n") + "\n", { population: "pediatric" });
+const cohortCalculations = [bsaHaycock, zScoreCalculation(model)];
 
 for (let k = 0; k < runs; k++) {
-  ours.c.push(await time(() => computeCohort(table, { zScores: { lvedd: model } })));
+  ours.c.push(
+    await time(() => evaluateTable(table, cohortCalculations, { population: "pediatric" })),
+  );
 }
 const calls = 20_000;
-for (let i = 0; i < 2_000; i++) gum(tenInputModel, tenUncertain); // warm-up
+for (let i = 0; i < 2_000; i++) propagate(tenInputModel, tenUncertain); // warm-up
 const tGum = performance.now();
-for (let i = 0; i < calls; i++) gum(tenInputModel, tenUncertain);
+for (let i = 0; i < calls; i++) propagate(tenInputModel, tenUncertain);
 ours.d = ((performance.now() - tGum) / calls) * 1000; // µs
 
 /** Peak resident memory (MB) of a fresh process running (a) once, single-thread or pooled. */
@@ -230,7 +249,7 @@ const report = [
     ours.aPool,
     peer?.a,
   ),
-  line("(a) the same, single thread (`monteCarlo`)", "—", ours.a, peer?.a),
+  line("(a) the same, single thread (`propagate`, Monte Carlo)", "—", ours.a, peer?.a),
   line(
     `(b) adaptive Monte Carlo, 2 digits (${ours.bTrials} trials here${
       peer ? `, ${peer.b_trials} numpy` : ""
@@ -239,7 +258,7 @@ const report = [
     ours.bPool,
     peer?.b,
   ),
-  line("(b) the same, single thread (`monteCarloAdaptive`)", "—", ours.b, peer?.b),
+  line("(b) the same, single thread (`propagate`, adaptive Monte Carlo)", "—", ours.b, peer?.b),
   line("(c) Haycock BSA + PHN Z-score, 10⁶ cohort rows", "ratio ≤ 1.0", ours.c, peer?.c),
   `| (d) GUM law, 10-input model, per call | ${ours.d.toFixed(1)} µs | — | — | < 50 µs |`,
   "",

@@ -38,7 +38,7 @@ export const continuityWithJetAngle: Calculation<
         .trueVelocity,
     }),
   formulaText: "AVA = π·d²/4 · VTI_LVOT / (VTI_AV / cos θ)",
-  sources: continuityValveArea.sources,
+  citations: continuityValveArea.citations,
   cautions: [],
 });
 
@@ -69,7 +69,7 @@ export const tenInputModel: Calculation<Ten, "y"> = defineCalculation({
       x.i ** 2 - x.j,
   }),
   formulaText: "y = ab + c/d + √(e² + f²) + g·cos(h/10) + i² − j",
-  sources: [{ authors: "benchmark", year: 2026, title: "synthetic model", publication: "bench" }],
+  citations: [{ authors: "benchmark", year: 2026, title: "synthetic model", publication: "bench" }],
   cautions: [],
 });
 

@@ -1,29 +1,28 @@
 /**
- * Cohort throughput: the same read → compute → write path on a 20-row clinic list (the demo
+ * Table throughput: the same read → evaluate → write path on a 20-row clinic list (the demo
  * file) and on a synthetic 10^6-row registry extract (deterministic, invented values).
- * Run: npx -y deno@2.9.6 bench -A bench/cohort.bench.ts
+ * Run: npx -y deno@2.9.6 bench -A bench/table.bench.ts
  */
-import { cohortToCsv, computeCohort, PHN_2017_MODELS, readCohortCsv } from "../mod.ts";
+import {
+  bsaHaycock,
+  evaluateTable,
+  indexedToBsa,
+  LV_MASS,
+  PHN_2017_MODELS,
+  readTable,
+  writeTableCsv,
+  zScoreCalculation,
+} from "../mod.ts";
 
-const LVEDD = PHN_2017_MODELS.lvEndDiastolicDimension;
-const MASS = PHN_2017_MODELS.lvMass;
-const OPTIONS = {
-  id: "patient",
-  height: "height",
-  weight: "weight",
-  measurements: [
-    { column: "lvedd", canonicalUnit: LVEDD.unit, range: LVEDD.measurementRange },
-    { column: "lv mass", name: "lvMass", canonicalUnit: MASS.unit, range: MASS.measurementRange },
-  ],
-} as const;
-const COMPUTE = {
-  bsaMethod: "haycock",
-  index: ["lvMass"],
-  zScores: { lvedd: LVEDD, lvMass: MASS },
-} as const;
+const CALCULATIONS = [
+  bsaHaycock,
+  zScoreCalculation(PHN_2017_MODELS.lvEndDiastolicDimension),
+  zScoreCalculation(PHN_2017_MODELS.lvMass),
+  indexedToBsa(LV_MASS),
+];
 
 /** Invented registry rows from a fixed linear congruential stream (demo data only). */
-function syntheticRegistry(rows: number): string {
+export function syntheticRegistry(rows: number): string {
   let state = 12345;
   const next = () => (state = (Math.imul(state, 1664525) + 1013904223) >>> 0) / 2 ** 32;
   const lines = ["patient,height [cm],weight [kg],lvedd [mm],lv mass [g]"];
@@ -37,37 +36,35 @@ function syntheticRegistry(rows: number): string {
   return lines.join("\n") + "\n";
 }
 
-const clinic = await Deno.readTextFile(
-  new URL("../examples/data/pediatric_clinic.csv", import.meta.url),
-);
-const registry = syntheticRegistry(1_000_000);
-const registryTable = readCohortCsv(registry, OPTIONS);
-const registryResult = computeCohort(registryTable, COMPUTE);
+if (import.meta.main) {
+  const clinic = await Deno.readTextFile(
+    new URL("../examples/data/pediatric_clinic.csv", import.meta.url),
+  );
+  const registry = syntheticRegistry(1_000_000);
+  const registryTable = readTable(registry, { population: "pediatric" });
+  const registryResult = evaluateTable(registryTable, CALCULATIONS, { population: "pediatric" });
 
-Deno.bench("clinic list, 20 rows: read + compute + write", { group: "clinic" }, () => {
-  cohortToCsv(computeCohort(readCohortCsv(clinic, { ...OPTIONS, sex: "sex" }), COMPUTE));
-});
+  Deno.bench("clinic list, 20 rows: read + evaluate + write", { group: "clinic" }, () => {
+    writeTableCsv(evaluateTable(readTable(clinic, { population: "pediatric" }), CALCULATIONS));
+  });
 
-Deno.bench("registry, 10^6 rows: read CSV (papaparse + zod cell checks)", {
-  group: "registry",
-  n: 3,
-  warmup: 1,
-}, () => {
-  readCohortCsv(registry, OPTIONS);
-});
+  Deno.bench("registry, 10^6 rows: read CSV", { group: "registry", n: 3, warmup: 1 }, () => {
+    readTable(registry, { population: "pediatric" });
+  });
 
-Deno.bench("registry, 10^6 rows: compute BSA, index, 2 Z-scores (columnar)", {
-  group: "registry",
-  n: 5,
-  warmup: 1,
-}, () => {
-  computeCohort(registryTable, COMPUTE);
-});
+  Deno.bench("registry, 10^6 rows: BSA, 2 Z-scores, LV mass index", {
+    group: "registry",
+    n: 5,
+    warmup: 1,
+  }, () => {
+    evaluateTable(registryTable, CALCULATIONS, { population: "pediatric" });
+  });
 
-Deno.bench(
-  "registry, 10^6 rows: write CSV with flags",
-  { group: "registry", n: 3, warmup: 1 },
-  () => {
-    cohortToCsv(registryResult);
-  },
-);
+  Deno.bench("registry, 10^6 rows: write CSV with flags", {
+    group: "registry",
+    n: 3,
+    warmup: 1,
+  }, () => {
+    writeTableCsv(registryResult);
+  });
+}

@@ -3,7 +3,7 @@
  * with an uncertain insonation angle (10⁶ trials, 95 % intervals), the adaptive procedure on the
  * same model, and GUM propagation of a 10-input model. Run with `deno task bench`.
  */
-import { gum, monteCarlo, monteCarloAdaptive } from "../mod.ts";
+import { propagate } from "../mod.ts";
 import { continuityInputs, continuityWithJetAngle, tenInputModel, tenUncertain } from "./models.ts";
 
 Deno.bench({
@@ -11,7 +11,11 @@ Deno.bench({
   group: "monte-carlo",
   n: 5,
   fn() {
-    monteCarlo(continuityWithJetAngle, continuityInputs, { trials: 1_000_000, seed: 1 });
+    propagate(continuityWithJetAngle, continuityInputs, {
+      method: "monteCarlo",
+      trials: 1_000_000,
+      seed: 1,
+    });
   },
 });
 
@@ -20,7 +24,11 @@ Deno.bench({
   group: "monte-carlo",
   n: 5,
   fn() {
-    monteCarloAdaptive(continuityWithJetAngle, continuityInputs, { significantDigits: 2, seed: 1 });
+    propagate(continuityWithJetAngle, continuityInputs, {
+      method: "monteCarlo",
+      adaptive: { significantDigits: 2 },
+      seed: 1,
+    });
   },
 });
 
@@ -28,6 +36,6 @@ Deno.bench({
   name: "GUM propagation, 10-input model (time per call)",
   group: "gum",
   fn() {
-    gum(tenInputModel, tenUncertain);
+    propagate(tenInputModel, tenUncertain);
   },
 });

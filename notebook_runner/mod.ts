@@ -22,13 +22,13 @@
  *     metadata: { kernelspec: { name: "deno", display_name: "Deno", language: "typescript" } },
  *     nbformat: 4,
  *     nbformat_minor: 5,
- *     cells: [{ id: "a", cell_type: "markdown", metadata: {}, source: "# Velocity <check>" }],
+ *     cells: [{ id: "a", cell_type: "markdown", metadata: {}, source: "# Velocity & pressure" }],
  *   }),
  *   "example.ipynb",
  * );
  * const html = notebookToHtml(notebook);
- * assert.match(html, /<title>Velocity &lt;check&gt;<\/title>/);
- * assert.match(html, /<h1[^>]*>Velocity &lt;check&gt;<\/h1>/);
+ * assert.match(html, /<title>Velocity &amp; pressure<\/title>/);
+ * assert.match(html, /<h1[^>]*>Velocity &amp; pressure<\/h1>/);
  * ```
  *
  * @module
@@ -41,7 +41,13 @@ export {
   type SourceLine,
 } from "./diagnostics.ts";
 export { findNotebooks } from "./find_notebooks.ts";
-export { type HtmlExportOptions, notebookTitle, notebookToHtml, renderMimeBundle, stripAnsi } from "./html.ts";
+export {
+  type HtmlExportOptions,
+  notebookTitle,
+  notebookToHtml,
+  renderMimeBundle,
+  stripAnsi,
+} from "./html.ts";
 export {
   type ConnectionInfo,
   DenoKernel,

@@ -24,16 +24,18 @@ let warned = false;
  *
  * @returns True when every permission is granted.
  *
- * @example
+ * @example Without FFI (the zeromq addon) the kernel cannot be reached
  * ```ts
  * import { canRunKernel } from "@sonorigor/notebook-runner/testing";
  * import assert from "node:assert/strict";
- * const granted = Deno.permissions.querySync({ name: "ffi" }).state === "granted";
- * if (!granted) assert.equal(canRunKernel(), false); // no FFI, no zeromq, no kernel
+ * await Deno.permissions.revoke({ name: "ffi" });
+ * assert.equal(canRunKernel(), false);
  * ```
  */
 export function canRunKernel(): boolean {
-  const granted = KERNEL_PERMISSIONS.every((p) => Deno.permissions.querySync(p).state === "granted");
+  const granted = KERNEL_PERMISSIONS.every((p) =>
+    Deno.permissions.querySync(p).state === "granted"
+  );
   if (!granted && !warned) {
     warned = true;
     console.error(

@@ -13,6 +13,8 @@ import {
 import type { ZScoreModel } from "../calc/reference/zscore_models.ts";
 import { measuredQuantity, zScoreBands } from "../calc/reference/zscore.ts";
 import type { Table } from "../calc/table/types.ts";
+import { BODY_SURFACE_AREA } from "../calc/quantities/body.ts";
+import { labelWithUnit } from "../display/uncertainty.ts";
 import { rowLabels } from "../calc/table/evaluate.ts";
 import { Chart } from "./chart.ts";
 
@@ -106,18 +108,19 @@ export function zScoreChart(model: ZScoreModel, options: ZScoreChartOptions = {}
     throw new RangeError(`${where}: expected a BSA range 0 < min < max, got [${lo}, ${hi}]`);
   }
   const grid = zScoreBands(model, lo, hi, Math.max(2, Math.floor(options.gridPoints ?? 121)));
-  const unit = model.unit;
+  const measured = measuredQuantity(model);
+  const unit = measured.unit;
   const x = {
     field: "bsa",
     type: "quantitative",
-    title: "BSA [m²]",
+    title: labelWithUnit(BODY_SURFACE_AREA.label, BODY_SURFACE_AREA.unit),
     scale: { domain: [lo, hi], nice: false },
   };
   const band = (z: number, opacity: number) => ({
     mark: { type: "area", color: "#4c78a8", opacity },
     encoding: {
       x,
-      y: { field: `z${-z}`, type: "quantitative", title: `${model.measurement} [${unit}]` },
+      y: { field: `z${-z}`, type: "quantitative", title: labelWithUnit(measured.label, unit) },
       y2: { field: `z${z}` },
     },
   });

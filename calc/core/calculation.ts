@@ -64,11 +64,13 @@ export interface OutputRole {
   readonly description?: string;
 }
 
-/** Legacy inline input (before quantities): converted to a quantity of its own. Kept only while
- * the domains move to declared quantities. @deprecated declare a quantity */
+/** An input declared on the spot (a user's own model): it becomes an ad-hoc quantity of this
+ * calculation only. The package's own calculations use declared quantities instead. */
 export interface InlineInput {
   /** Canonical unit. */
   readonly unit: string;
+  /** Label. @default the description */
+  readonly label?: string;
   /** Description. */
   readonly description: string;
   /** Valid range. */
@@ -79,10 +81,12 @@ export interface InlineInput {
   readonly default?: number;
 }
 
-/** Legacy inline output. @deprecated declare a quantity */
+/** An output declared on the spot (a user's own model): an ad-hoc quantity of this calculation. */
 export interface InlineOutput {
   /** Unit. */
   readonly unit: string;
+  /** Label. @default the description */
+  readonly label?: string;
   /** Description. */
   readonly description: string;
 }
@@ -197,9 +201,10 @@ function resolveInput(id: string, name: string, spec: InputSpec): InputDefinitio
     };
   }
   const inline = spec as InlineInput;
+  const label = inline.label ?? (inline.description || name);
   const q = defineQuantity({
     id: `${id}.${name}`,
-    label: name,
+    label,
     unit: inline.unit,
     description: inline.description,
     valid: inline.range,
@@ -208,7 +213,7 @@ function resolveInput(id: string, name: string, spec: InputSpec): InputDefinitio
   });
   return {
     quantity: q,
-    label: name,
+    label,
     unit: inline.unit,
     description: inline.description,
     range: inline.range,
@@ -231,15 +236,16 @@ function resolveOutput(id: string, name: string, spec: OutputSpec): OutputDefini
     };
   }
   const inline = spec as InlineOutput;
+  const label = inline.label ?? (inline.description || name);
   const q = defineQuantity({
     id: `${id}.${name}`,
-    label: name,
+    label,
     unit: inline.unit,
     description: inline.description,
     valid: UNBOUNDED,
     resolution: 1e-9,
   });
-  return { quantity: q, label: name, unit: inline.unit, description: inline.description };
+  return { quantity: q, label, unit: inline.unit, description: inline.description };
 }
 
 /**

@@ -1,49 +1,51 @@
 /**
- * Reference documentation derived from calculation definitions: one Markdown section per
- * calculation with its formula, inputs (units, valid and validated ranges), outputs, sources and
- * cautions.
+ * Documentation derived from the definitions: one Markdown section per calculation (formula,
+ * inputs and outputs with their quantities, units, valid and typical ranges, citations and
+ * cautions), and the whole catalog with every family member.
  *
  * @module
  */
-import { cautionsOf, formatRange, isCalculation } from "./define.ts";
-import type { Calculation, Reference } from "./types.ts";
+import { cautionsOf } from "./calculation.ts";
+import { formatRange } from "./range.ts";
+import { formatUnit } from "./text.ts";
+import { type Catalog, catalogCalculations } from "./catalog.ts";
+import type { Calculation, Citation } from "./types.ts";
 
-/** Formats a reference as "Authors (year). Title. Publication, locator. doi:…". *
+/**
+ * Formats a citation as "Authors (year). Title. Publication, locator. doi:…".
+ *
  * @example
  * ```ts
- * import { formatReference } from "@sonorigor/sonorigor";
+ * import { formatCitation } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
  * assert.equal(
- *   formatReference({ authors: "Hatle L, Angelsen B", year: 1985, title: "Doppler Ultrasound in Cardiology", publication: "Lea & Febiger" }),
+ *   formatCitation({ authors: "Hatle L, Angelsen B", year: 1985, title: "Doppler Ultrasound in Cardiology", publication: "Lea & Febiger" }),
  *   "Hatle L, Angelsen B (1985). Doppler Ultrasound in Cardiology. Lea & Febiger.",
  * );
  * ```
  */
-export function formatReference(ref: Reference): string {
-  const locator = ref.locator ? `, ${ref.locator}` : "";
-  const doi = ref.doi ? ` doi:${ref.doi}` : "";
-  const year = ref.year > 0 ? String(ref.year) : "n.d.";
-  return `${ref.authors} (${year}). ${ref.title}. ${ref.publication}${locator}.${doi}`;
+export function formatCitation(c: Citation): string {
+  const locator = c.locator ? `, ${c.locator}` : "";
+  const doi = c.doi ? ` doi:${c.doi}` : "";
+  const year = c.year > 0 ? String(c.year) : "n.d.";
+  return `${c.authors} (${year}). ${c.title}. ${c.publication}${locator}.${doi}`;
 }
 
-const cell = (s: string) => s.replace(/\|/g, "\\|");
+const cell = (s: string) => s.replace(/\|/g, "\\|").replace(/\n/g, " ");
 
 /**
- * The Markdown reference section of one calculation.
+ * The Markdown section of one calculation.
  *
  * @example
  * ```ts
- * import { expressionModel, referenceMarkdown } from "@sonorigor/sonorigor";
+ * import { calculationMarkdown, simplifiedBernoulli } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
- * const model = expressionModel({
- *   expression: "4 * v^2",
- *   inputs: { v: { unit: "m/s", description: "Peak velocity", range: { min: 0, max: 10 } } },
- *   output: { name: "gradient", unit: "mmHg", description: "Peak gradient" },
- * });
- * assert.match(referenceMarkdown(model), /\| v \| m\/s \| \[0, 10\] m\/s \|/);
+ * const md = calculationMarkdown(simplifiedBernoulli);
+ * assert.match(md, /^### Simplified Bernoulli gradient \(`simplifiedBernoulli`\)/);
+ * assert.match(md, /\| `peakVelocity` \|/);
  * ```
  */
-export function referenceMarkdown(calc: Calculation): string {
+export function calculationMarkdown(calc: Calculation): string {
   const lines = [
     `### ${calc.title} (\`${calc.id}\`)`,
     "",
@@ -51,23 +53,32 @@ export function referenceMarkdown(calc: Calculation): string {
     "",
     `Formula: \`${calc.formulaText}\``,
     "",
-    "| input | unit | valid range | validated range | description |",
-    "| --- | --- | --- | --- | --- |",
+    "| input | quantity | unit | valid range | typical range (adult; children) | description |",
+    "| --- | --- | --- | --- | --- | --- |",
     ...calc.inputNames.map((n) => {
       const d = calc.inputs[n]!;
-      return `| ${n} | ${cell(d.unit)} | ${formatRange(d.range, d.unit)} | ${
-        d.typical ? formatRange(d.typical, d.unit) : "—"
-      } | ${cell(d.description)}${d.default !== undefined ? ` (default ${d.default})` : ""} |`;
+      const typical = [d.typical, d.typicalPediatric !== d.typical ? d.typicalPediatric : undefined]
+        .filter((r) => r !== undefined).map((r) => formatRange(r!, d.unit)).join("; ") || "—";
+      const notes = [
+        d.default !== undefined ? `default ${d.default}` : "",
+        d.narrowedBecause ? `ranges narrowed: ${d.narrowedBecause}` : "",
+      ].filter(Boolean).join("; ");
+      return `| \`${n}\` | ${cell(d.label)} | ${cell(formatUnit(d.unit) || "—")} | ${
+        cell(formatRange(d.range, d.unit))
+      } | ${cell(typical)} | ${cell(d.description)}${notes ? ` (${cell(notes)})` : ""} |`;
     }),
     "",
-    "| output | unit | description |",
-    "| --- | --- | --- |",
-    ...calc.outputNames.map((n) =>
-      `| ${n} | ${cell(calc.outputs[n]!.unit)} | ${cell(calc.outputs[n]!.description)} |`
-    ),
+    "| output | quantity | unit | valid range | description |",
+    "| --- | --- | --- | --- | --- |",
+    ...calc.outputNames.map((n) => {
+      const d = calc.outputs[n]!;
+      return `| \`${n}\` | ${cell(d.label)} | ${cell(formatUnit(d.unit) || "—")} | ${
+        cell(formatRange(d.quantity.valid, d.unit))
+      } | ${cell(d.description)} |`;
+    }),
     "",
-    "Sources:",
-    ...calc.citations.map((s) => `- ${formatReference(s)}`),
+    "Citations:",
+    ...calc.citations.map((s) => `- ${formatCitation(s)}`),
   ];
   const cautions = cautionsOf(calc);
   if (cautions.length > 0) lines.push("", "Cautions:", ...cautions.map((c) => `- ${c}`));
@@ -75,16 +86,37 @@ export function referenceMarkdown(calc: Calculation): string {
 }
 
 /**
- * Collects the calculations exported by a module namespace, sorted by id.
+ * The Markdown reference of a whole catalog: every calculation and every documented family
+ * member, sorted by id, after a list of the families.
  *
  * @example
  * ```ts
- * import * as sonorigor from "@sonorigor/sonorigor";
- * import { calculationsOf } from "@sonorigor/sonorigor";
+ * import { CATALOG, catalogMarkdown } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
- * assert.ok(Array.isArray(calculationsOf(sonorigor)));
+ * const md = catalogMarkdown(CATALOG);
+ * assert.match(md, /zScore\(phn2017\.lvMass\)/);
+ * assert.match(md, /indexedToBsa\(lvMass\)/);
  * ```
  */
-export function calculationsOf(namespace: Record<string, unknown>): Calculation[] {
-  return Object.values(namespace).filter(isCalculation).sort((a, b) => a.id.localeCompare(b.id));
+export function catalogMarkdown(catalog: Catalog): string {
+  const calcs = catalogCalculations(catalog);
+  const families = [...catalog.families.values()];
+  return [
+    "# Calculations",
+    "",
+    "Generated by `deno task docs` from the calculation definitions; do not edit by hand.",
+    "Every input is checked against its valid range; values outside the typical range are flagged.",
+    "",
+    `${calcs.length} calculations, of which ${
+      calcs.filter((c) => c.recipe.kind === "family").length
+    } are members of ${families.length} families:`,
+    "",
+    ...families.map((f) =>
+      `- **${f.title}** (\`${f.id}\`): ${f.description} Members: ${
+        f.members.map((m) => `\`${f.calculation(m).id}\``).join(", ")
+      }.`
+    ),
+    "",
+    ...calcs.map(calculationMarkdown),
+  ].join("\n");
 }

@@ -44,7 +44,9 @@ export function renderIssue(issue: ValidationIssue): string {
     case "unknown":
       return `${lead}${at}unknown ${noun} ${field}: expected ${issue.expected}, got ${issue.received}`;
     case "typical":
-      return `${lead}${at}${field} = ${issue.received} lies outside the typical range ${issue.expected}: interpret with care`;
+      return `${lead}${at}${field} = ${issue.received} lies outside the typical range ${issue.expected}${
+        issue.note ? ` (${issue.note})` : ""
+      }: interpret with care`;
     case "notMeasured":
       return `${lead}${at}${field} not measured (empty cell)`;
     case "constraint":

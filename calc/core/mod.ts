@@ -93,5 +93,5 @@ export {
   type SensitivityOptions,
   type SensitivityPoint,
 } from "./sensitivity.ts";
-export { calculationsOf, formatReference, referenceMarkdown } from "./reference_docs.ts";
+export { calculationMarkdown, catalogMarkdown, formatCitation } from "./docs.ts";
 export { evaluateColumns } from "./columns.ts";

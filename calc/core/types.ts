@@ -241,6 +241,9 @@ export interface ValidationIssue {
   readonly row?: number;
   /** 1-based line of a file. */
   readonly line?: number;
+  /** Why the range is what it is, when a calculation narrows it ("the BSA range of the
+   * population the model was built on"). */
+  readonly note?: string;
 }
 
 /** The validated result of one evaluation. */

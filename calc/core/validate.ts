@@ -46,7 +46,7 @@ export interface CheckedValue {
 export type CheckedField =
   & Pick<
     InputDefinition,
-    "label" | "unit" | "range" | "typical" | "typicalPediatric" | "default"
+    "label" | "unit" | "range" | "typical" | "typicalPediatric" | "default" | "narrowedBecause"
   >
   & { readonly integer?: boolean };
 
@@ -197,6 +197,7 @@ export function checkValue(
         value: read,
         range: typical,
         expected: formatRange(typical, def.unit),
+        ...(def.narrowedBecause ? { note: def.narrowedBecause } : {}),
       }],
     };
   }

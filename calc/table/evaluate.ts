@@ -12,6 +12,8 @@ import type { Population } from "../core/types.ts";
 import { cautionsOf } from "../core/calculation.ts";
 import { evaluateColumns } from "../core/columns.ts";
 import { formatRange, inRange } from "../core/range.ts";
+import { typicalRange } from "../core/quantity.ts";
+import { checkValue } from "../core/validate.ts";
 import { withUnit } from "../core/text.ts";
 import { renderIssue } from "../core/issues.ts";
 import { normal } from "../uncertainty/distributions.ts";
@@ -204,6 +206,19 @@ function evaluateOne(
       }
     }
     if (skip[i]) continue;
+    for (let k = 0; k < inputs.length; k++) {
+      const name = calc.inputNames[k]!;
+      const def = calc.inputs[name]!;
+      const typical = typicalRange(def, options.population ?? "adult");
+      // the table checked each column against its quantity; a calculation may narrow the range
+      if (typical && wired[k] && !inRange(x[name]!, typical) && typical !== wired[k]!.quantity.typical) {
+        issues.push(...checkValue(name, def, x[name], {
+          where,
+          population: options.population ?? "adult",
+          ...at(i),
+        }).issues);
+      }
+    }
     for (const c of calc.constraints) {
       if (!c.holds(x)) {
         skip[i] = 1;
@@ -373,4 +388,115 @@ export function rowLabels(table: Table, column?: string): string[] {
 /** The issues of one row, as messages (for a flags cell). */
 export function rowIssues(table: Table, row: number): string[] {
   return table.issues.filter((i) => i.row === row).map(renderIssue);
+}
+
+/** One row of a table as a record: numbers for numeric columns (NaN where missing), text for
+ * text columns. */
+export type TableRow = Record<string, number | string>;
+
+/**
+ * One row of a table as a record keyed by column name.
+ *
+ * @example
+ * ```ts
+ * import { readTable, tableRow } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const t = readTable("id,height [m]\nA,1.8\n");
+ * assert.deepEqual(tableRow(t, 0), { id: "A", height: 180 });
+ * ```
+ */
+export function tableRow(table: Table, row: number): TableRow {
+  if (!(Number.isInteger(row) && row >= 0 && row < table.rowCount)) {
+    throw new RangeError(
+      `${table.source}: expected a row in [0, ${table.rowCount - 1}], got ${row}`,
+    );
+  }
+  const out: TableRow = {};
+  for (const [name, c] of table.columns) out[name] = c.values[row]!;
+  return out;
+}
+
+/**
+ * The rows of a table that satisfy a condition, as a table (their lines, issues and cautions
+ * kept).
+ *
+ * @param table The table.
+ * @param keep Called with each row as a record and its index.
+ * @returns A table of the kept rows.
+ *
+ * @example
+ * ```ts
+ * import { readTable, selectRows } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const t = readTable("id,height [cm]\nA,180\nB,120\n");
+ * const tall = selectRows(t, (r) => (r.height as number) > 150);
+ * assert.equal(tall.rowCount, 1);
+ * assert.deepEqual(Array.from(tall.lines), [2]);
+ * ```
+ */
+export function selectRows(
+  table: Table,
+  keep: (row: TableRow, index: number) => boolean,
+): Table {
+  const kept: number[] = [];
+  for (let i = 0; i < table.rowCount; i++) if (keep(tableRow(table, i), i)) kept.push(i);
+  const newIndex = new Map(kept.map((old, i) => [old, i]));
+  const columns = new Map<string, Column>();
+  for (const [name, c] of table.columns) {
+    columns.set(
+      name,
+      c.kind === "numeric"
+        ? { ...c, values: Float64Array.from(kept, (i) => c.values[i]!) }
+        : { ...c, values: kept.map((i) => c.values[i]!) },
+    );
+  }
+  return makeTable({
+    source: table.source,
+    rowCount: kept.length,
+    lines: Int32Array.from(kept, (i) => table.lines[i]!),
+    columns,
+    issues: table.issues.flatMap((issue) =>
+      issue.row === undefined
+        ? [issue]
+        : newIndex.has(issue.row)
+        ? [{ ...issue, row: newIndex.get(issue.row)! }]
+        : []
+    ),
+    blankLines: table.blankLines,
+    cautions: table.cautions,
+  });
+}
+
+/**
+ * Some columns of a table, in the order given (rows, lines, issues and cautions kept).
+ *
+ * @param table The table.
+ * @param names Column names.
+ * @returns The narrower table.
+ * @throws {TypeError} For a name the table does not have.
+ *
+ * @example
+ * ```ts
+ * import { readTable, selectColumns } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const t = selectColumns(readTable("id,height [cm],weight [kg]\nA,180,80\n"), ["weight", "id"]);
+ * assert.deepEqual([...t.columns.keys()], ["weight", "id"]);
+ * ```
+ */
+export function selectColumns(table: Table, names: readonly string[]): Table {
+  const columns = new Map<string, Column>();
+  for (const name of names) {
+    const c = table.columns.get(name);
+    if (c === undefined) {
+      throw new TypeError(
+        `${table.source}: unknown column '${name}'; expected one of ${
+          [...table.columns.keys()].join(", ")
+        }`,
+      );
+    }
+    columns.set(name, c);
+    const related = [...table.columns.values()].filter((x) => x.kind === "numeric" && x.of === name);
+    for (const r of related) columns.set(r.name, r);
+  }
+  return makeTable({ ...table, columns });
 }

@@ -7,5 +7,14 @@
  */
 export type { Column, NumericColumn, Table, TextColumn, UncertaintyModel } from "./types.ts";
 export { decodeUtf8, detectDelimiter, readTable, type ReadTableOptions } from "./read.ts";
-export { evaluateTable, type EvaluateTableOptions, rowIssues, rowLabels } from "./evaluate.ts";
+export {
+  evaluateTable,
+  type EvaluateTableOptions,
+  rowIssues,
+  rowLabels,
+  selectColumns,
+  selectRows,
+  tableRow,
+  type TableRow,
+} from "./evaluate.ts";
 export { csvTextCell, writeTableCsv, type WriteTableOptions } from "./write.ts";

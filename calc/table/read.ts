@@ -14,6 +14,7 @@ import { headerMatches, normalizeHeader } from "../core/quantity.ts";
 import { checkValue, quantityField } from "../core/validate.ts";
 import { readAmount } from "../core/units.ts";
 import { formatUnit, withUnit } from "../core/text.ts";
+import { formatRange } from "../core/range.ts";
 import { throwIfErrors } from "../core/issues.ts";
 import { QUANTITIES } from "../quantities/mod.ts";
 import type { Column, NumericColumn, Table, TextColumn } from "./types.ts";
@@ -373,7 +374,8 @@ export function readTable(input: string | Uint8Array, options: ReadTableOptions 
       const p = plans[c]!;
       const cell = fields[p.index] ?? "";
       if (p.quantity === null) {
-        (values[c] as string[])[i] = cell;
+        // a cell the writer neutralised against spreadsheet formulas reads back as written
+        (values[c] as string[])[i] = /^'[=+\-@\t\r]/.test(cell) ? cell.slice(1) : cell;
         continue;
       }
       const col = values[c] as Float64Array;
@@ -403,13 +405,18 @@ export function readTable(input: string | Uint8Array, options: ReadTableOptions 
         if (typeof read !== "number") {
           col[i] = NaN;
           issues.push({
-            kind: read.problem,
+            kind: "type",
             severity: "error",
             where: source,
             field: p.header,
             label: q.label,
             received: JSON.stringify(cell),
-            expected: `a number in ${p.sourceUnit}`,
+            range: q.valid,
+            expected: `as a number in ${
+              p.sourceUnit === q.unit
+                ? formatRange(q.valid, q.unit)
+                : `${formatUnit(p.sourceUnit)} (valid: ${formatRange(q.valid, q.unit)})`
+            }`,
             row: i,
             line: at,
           });

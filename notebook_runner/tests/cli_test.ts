@@ -3,8 +3,21 @@
  * and Ctrl-C (SIGINT) during a hanging cell, all on the real kernel.
  */
 import assert from "node:assert/strict";
+import { pathFromCaller } from "../cli.ts";
 import { processExists, processGroupAlive } from "../testing.ts";
 import { CAN_RUN_KERNEL, copyFixtures, FIXTURES, PACKAGE } from "./helpers.ts";
+
+Deno.test("pathFromCaller: relative to the caller, shown relative to the current folder", () => {
+  const here = Deno.cwd();
+  // node:path resolve/relative semantics (POSIX): "a/../b" normalises to "b"
+  assert.equal(pathFromCaller("x.ipynb", `${here}/notebooks`), "notebooks/x.ipynb");
+  assert.equal(pathFromCaller("../b/x.ipynb", `${here}/a`), "b/x.ipynb");
+  assert.equal(pathFromCaller("x.ipynb", here), "x.ipynb");
+  // outside the current folder, or the folder itself: absolute
+  assert.equal(pathFromCaller("/tmp/x.ipynb", here), "/tmp/x.ipynb");
+  assert.equal(pathFromCaller("..", here), here.replace(/\/[^/]+$/, "") || "/");
+  assert.equal(pathFromCaller(".", here), here);
+});
 
 const kernelTest = (name: string, fn: () => Promise<void>) =>
   Deno.test({ name, ignore: !CAN_RUN_KERNEL, fn });

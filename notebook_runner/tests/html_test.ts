@@ -1,10 +1,5 @@
 import assert from "node:assert/strict";
-import {
-  notebookTitle,
-  notebookToHtml,
-  renderMimeBundle,
-  stripAnsi,
-} from "../html.ts";
+import { notebookTitle, notebookToHtml, renderMimeBundle, stripAnsi } from "../html.ts";
 import type { Notebook } from "../nbformat.ts";
 
 Deno.test("stripAnsi removes SGR colours, OSC hyperlinks and cursor sequences", () => {

@@ -237,8 +237,12 @@ kernelTest(
   "bad input: missing, invalid JSON, non-Deno kernelspec; no kernel, no files",
   async () => {
     const dir = await copyFixtures("invalid_json.ipynb", "python_kernel.ipynb");
+    const escaped = dir.replace(/[.*+?^${}()|[\]\\]/g, "\\$&");
     const cases: [string, RegExp][] = [
-      [`${dir}/missing.ipynb`, /^Notebook not found: .*missing\.ipynb$/],
+      [
+        `${dir}/missing.ipynb`,
+        new RegExp(`^Notebook not found: missing\\.ipynb \\(looked in ${escaped}\\)$`),
+      ],
       [`${dir}/invalid_json.ipynb`, /^Notebook .*invalid_json\.ipynb: invalid JSON: .+/],
       [
         `${dir}/python_kernel.ipynb`,

@@ -1,7 +1,5 @@
 import assert from "node:assert/strict";
 import {
-  bodySizeIndexCalculation,
-  bodySizeInputs,
   BSA_METHODS,
   bsaBoyd,
   bsaCalculation,
@@ -9,12 +7,9 @@ import {
   bsaGehanGeorge,
   bsaHaycock,
   bsaMosteller,
-  bsaWithUncertainty,
   evaluate,
-  indexedWithUncertainty,
-  indexToBsa,
-  monteCarlo,
   normal,
+  propagate,
 } from "../../mod.ts";
 
 const close = (actual: number, expected: number, tol: number, what: string) =>
@@ -61,22 +56,24 @@ Deno.test("BSA accepts unit strings and rejects the wrong dimension", () => {
   );
   assert.throws(() => evaluate(bsaMosteller, { heightCm: "180 kg", weightKg: 80 }), {
     name: "TypeError",
-    message: /'heightCm'.*convertible to cm.*"180 kg"$/,
+    message:
+      `Body surface area (Mosteller): expected 'heightCm' (Height) in [15, 280] cm (a unit convertible to cm), got "180 kg"`,
   });
 });
 
 Deno.test("BSA rejects heights and weights outside the human range, naming field, range and value", () => {
   assert.throws(() => evaluate(bsaHaycock, { heightCm: 400, weightKg: 80 }), {
     name: "RangeError",
-    message: "Body surface area (Haycock): expected 'heightCm' in [15, 280] cm, got 400",
+    message: "Body surface area (Haycock): expected 'heightCm' (Height) in [15, 280] cm, got 400",
   });
   assert.throws(() => evaluate(bsaDuBois, { heightCm: 170, weightKg: -3 }), {
     name: "RangeError",
-    message: "Body surface area (DuBois & DuBois): expected 'weightKg' in [0.2, 650] kg, got -3",
+    message:
+      "Body surface area (DuBois & DuBois): expected 'weightKg' (Weight) in [0.2, 650] kg, got -3",
   });
   assert.throws(() => evaluate(bsaMosteller, { heightCm: NaN, weightKg: 70 }), {
     name: "RangeError",
-    message: /expected 'heightCm' in \[15, 280\] cm, got NaN$/,
+    message: /expected 'heightCm' \(Height\) in \[15, 280\] cm, got NaN$/,
   });
   assert.throws(() => bsaCalculation("metric" as never), {
     name: "TypeError",
@@ -88,7 +85,10 @@ Deno.test("BSA flags body sizes outside the typical range without failing", () =
   const r = evaluate(bsaMosteller, { heightCm: 230, weightKg: 80 });
   // typical range is a project choice (common practice, no source): 45–220 cm
   assert.equal(r.flags.length, 1);
-  assert.match(r.flags[0]!, /'heightCm' = 230 cm lies outside the validated range \[45, 220\] cm/);
+  assert.equal(
+    r.flags[0],
+    "Body surface area (Mosteller): 'heightCm' (Height) = 230 cm lies outside the typical range [45, 220] cm (the range the BSA formulas were fitted on, term newborn to very tall adult): interpret with care",
+  );
   assert.ok(r.cautions.some((c) => c.startsWith("Not a diagnosis")));
 });
 
@@ -99,59 +99,18 @@ Deno.test("every BSA method is one calculation object reused by name", () => {
   }
 });
 
-Deno.test("indexing divides by BSA with the unit", () => {
-  // Lang 2015 indexing: LV mass 190 g at BSA 1.9 m² = 100 g/m² (hand-checkable arithmetic)
-  assert.deepEqual(indexToBsa(190, 1.9, "g"), { value: 100, unit: "g/m^2", flags: [] });
-  // 0.12 L = 120 mL over 2 m² = 60 mL/m² (hand-checkable)
-  close(indexToBsa("0.12 L", 2, "mL").value, 60, 1e-12, "L to mL");
-  assert.throws(() => indexToBsa(120, 0, "mL"), {
-    name: "RangeError",
-    message: "Measurement indexed to BSA (mL/m²): expected 'bsaM2' in (0, 5] m², got 0",
-  });
-  assert.throws(() => indexToBsa(-1, 1.5, "mL"), {
-    name: "RangeError",
-    message: /expected 'measurement' in \[0, 1000000\] mL, got -1$/,
-  });
-});
-
-Deno.test("indexing from height and weight reuses the BSA formula", () => {
-  const calc = bodySizeIndexCalculation("mL", "haycock");
-  const r = evaluate(calc, { measurement: 120, heightCm: 180, weightKg: 80 });
-  // Haycock 2.00656 m² (hand computation, J Pediatr 1978) → 120 / 2.00656 = 59.8038 mL/m²
-  close(r.outputs.bsaM2, 2.00656, 1e-5, "bsa");
-  close(r.outputs.indexed, 59.8038, 1e-3, "indexed");
-  assert.equal(
-    bodySizeIndexCalculation("mL", "haycock"),
-    calc,
-    "cached: one definition per unit and method",
-  );
-});
-
 Deno.test("BSA uncertainty by GUM matches the power-law formula of JCGM 100 eq. (12)", () => {
   // DuBois BSA = c·W^0.425·H^0.725: (u/BSA)² = (0.425·0.5/80)² + (0.725·1/180)²
   // = (0.00265625)² + (0.00402778)² → u/BSA = 0.0048249 (hand computation, JCGM 100:2008 eq. (12))
-  const r = bsaWithUncertainty(180, 80, { heightCm: 1, weightKg: 0.5 }, { method: "duBois" });
-  const bsa = r.outputs.bsaM2;
+  const body = { heightCm: normal(180, 1), weightKg: normal(80, 0.5) };
+  const bsa = propagate(bsaDuBois, body).outputs.bsaM2;
   close(bsa.standardUncertainty / bsa.value, 0.0048249, 2e-6, "relative u DuBois");
   // Mosteller: u/BSA = ½·√((1/180)² + (0.5/80)²) = 0.0041818 (hand computation, eq. (12))
-  const m = bsaWithUncertainty(180, 80, { heightCm: 1, weightKg: 0.5 });
+  const m = propagate(bsaMosteller, body);
   close(m.outputs.bsaM2.standardUncertainty, 2 * 0.0041818, 2e-6, "Mosteller u");
-  assert.throws(() => bodySizeInputs(180, 80, { heightCm: -1, weightKg: 0.5 }), {
+  assert.throws(() => propagate(bsaMosteller, { heightCm: normal(180, -1), weightKg: 80 }), {
     name: "RangeError",
-    message: "Body size uncertainty: expected standard uncertainty 'heightCm' >= 0 cm, got -1",
+    message:
+      "Body surface area (Mosteller): expected the standard uncertainty of 'heightCm' (Height) >= 0, got -1",
   });
-});
-
-Deno.test("indexed value carries measurement and BSA uncertainty (GUM and Monte Carlo agree)", () => {
-  const inputs = {
-    measurement: normal(120, 6),
-    heightCm: normal(180, 1),
-    weightKg: normal(80, 0.5),
-  };
-  const g = indexedWithUncertainty(inputs, { unit: "mL" });
-  // (u/60)² = 0.05² + 0.0041818² → u = 3.01047 mL/m² (JCGM 100:2008 eq. (12), hand computation)
-  close(g.outputs.indexed.standardUncertainty, 3.01047, 1e-3, "GUM u indexed");
-  // JCGM 101:2008 §8: Monte Carlo validates the GUM result when the model is nearly linear
-  const mc = monteCarlo(bodySizeIndexCalculation("mL"), inputs, { trials: 200_000, seed: 7 });
-  close(mc.outputs.indexed.standardUncertainty, 3.01047, 0.03, "MC u indexed");
 });

@@ -1,5 +1,15 @@
 import assert from "node:assert/strict";
-import { CLINICAL_CAUTION, defineCalculation, evaluate, toCanonical } from "../../mod.ts";
+import {
+  CLINICAL_CAUTION,
+  defineCalculation,
+  defineQuantity,
+  evaluate,
+  InputRangeError,
+  LVOT_DIAMETER,
+  normal,
+  propagate,
+  toCanonical,
+} from "../../mod.ts";
 import { math } from "../../calc/core/units.ts";
 
 // A small calculation for exercising the machinery: continuity-equation valve area,
@@ -10,10 +20,9 @@ const area = defineCalculation({
   description: "continuity equation for the tests of the core",
   inputs: {
     lvotDiameterCm: {
-      unit: "cm",
-      description: "LVOT diameter",
-      range: { min: 0, max: 5, minExclusive: true },
+      quantity: LVOT_DIAMETER,
       typical: { min: 1.6, max: 3 },
+      reason: "the adult range of the test",
     },
     lvotVtiCm: {
       unit: "cm",
@@ -26,12 +35,21 @@ const area = defineCalculation({
       range: { min: 0, max: 300, minExclusive: true },
     },
   },
-  outputs: { areaCm2: { unit: "cm^2", description: "valve area" } },
+  outputs: {
+    areaCm2: defineQuantity({
+      id: "testValveArea",
+      label: "Valve area",
+      unit: "cm^2",
+      description: "valve area",
+      valid: { min: 0, max: 10, minExclusive: true },
+      resolution: 0.01,
+    }),
+  },
   formula: ({ lvotDiameterCm, lvotVtiCm, valveVtiCm }) => ({
     areaCm2: Math.PI * (lvotDiameterCm / 2) ** 2 * lvotVtiCm / valveVtiCm,
   }),
   formulaText: "AVA = π(D/2)²·VTI_LVOT/VTI_AV",
-  sources: [{
+  citations: [{
     authors: "Baumgartner H, et al.",
     year: 2009,
     title: "Echocardiographic assessment of valve stenosis",
@@ -55,7 +73,7 @@ Deno.test("evaluate carries the clinical caution and flags values outside the ty
   assert.ok(r.cautions.includes(CLINICAL_CAUTION));
   assert.match(
     r.flags[0]!,
-    /'lvotDiameterCm' = 3.5 cm lies outside the validated range \[1.6, 3\] cm/,
+    /^Test continuity area: 'lvotDiameterCm' \(LVOT diameter\) = 3\.5 cm lies outside the typical range \[1\.6, 3\] cm: interpret with care$/,
   );
 });
 
@@ -64,36 +82,54 @@ Deno.test("bad input: wrong unit, unknown and missing inputs, out of range, NaN,
   assert.throws(() => evaluate(area, { ...ok, lvotDiameterCm: "21 mmHg" }), {
     name: "TypeError",
     message:
-      "Test continuity area: 'lvotDiameterCm': expected a quantity convertible to cm, got \"21 mmHg\"",
+      "Test continuity area: expected 'lvotDiameterCm' (LVOT diameter) in (0, 5] cm (a unit convertible to cm), got \"21 mmHg\"",
   });
   assert.throws(() => evaluate(area, { ...ok, lvotDiameter: 2 } as never), {
     name: "TypeError",
-    message: /unknown input 'lvotDiameter'; expected one of lvotDiameterCm, lvotVtiCm, valveVtiCm/,
+    message:
+      "Test continuity area: unknown input 'lvotDiameter': expected one of lvotDiameterCm, lvotVtiCm, valveVtiCm, got 2",
   });
   assert.throws(() => evaluate(area, { lvotVtiCm: 20, valveVtiCm: 80 }), {
     name: "TypeError",
-    message: /missing input 'lvotDiameterCm' \(LVOT diameter, cm\)/,
+    message:
+      "Test continuity area: missing input 'lvotDiameterCm' (LVOT diameter): expected a value in (0, 5] cm, got nothing",
   });
   assert.throws(() => evaluate(area, { ...ok, lvotDiameterCm: 0 }), {
     name: "RangeError",
-    message: "Test continuity area: expected 'lvotDiameterCm' in (0, 5] cm, got 0",
+    message: "Test continuity area: expected 'lvotDiameterCm' (LVOT diameter) in (0, 5] cm, got 0",
   });
   assert.throws(() => evaluate(area, { ...ok, lvotDiameterCm: NaN }), {
     name: "RangeError",
-    message: "Test continuity area: expected 'lvotDiameterCm' in (0, 5] cm, got NaN",
+    message:
+      "Test continuity area: expected 'lvotDiameterCm' (LVOT diameter) in (0, 5] cm, got NaN",
   });
   assert.throws(() => evaluate(area, { ...ok, valveVtiCm: Infinity }), {
     name: "RangeError",
-    message: "Test continuity area: expected 'valveVtiCm' in (0, 300] cm, got Infinity",
+    message: "Test continuity area: expected 'valveVtiCm' (Valve VTI) in (0, 300] cm, got Infinity",
   });
   assert.throws(() => evaluate(area, { ...ok, lvotVtiCm: true } as never), {
     name: "TypeError",
-    message: /expected 'lvotVtiCm' as a number or a quantity string, got true/,
+    message:
+      "Test continuity area: expected 'lvotVtiCm' (LVOT VTI) as a number or a quantity in (0, 100] cm, got true",
   });
   assert.throws(() => evaluate(area, { ...ok, lvotVtiCm: "twenty cm" }), {
     name: "TypeError",
-    message: /lvotVtiCm/,
+    message:
+      "Test continuity area: expected 'lvotVtiCm' (LVOT VTI) in (0, 100] cm (a unit convertible to cm), got \"twenty cm\"",
   });
+  // every problem at once, as structured issues; the message renders the first
+  try {
+    evaluate(area, { lvotDiameterCm: 0, lvotVtiCm: "x", valveVtiCm: -1 });
+    assert.fail("expected an error");
+  } catch (e) {
+    assert.ok(e instanceof InputRangeError);
+    assert.deepEqual(e.issues.map((i) => [i.field, i.kind]), [
+      ["lvotDiameterCm", "range"],
+      ["lvotVtiCm", "unit"],
+      ["valveVtiCm", "range"],
+    ]);
+    assert.match(e.message, /\(and 2 more problems\)$/);
+  }
 });
 
 Deno.test("evaluate does not mutate its arguments", () => {
@@ -102,7 +138,7 @@ Deno.test("evaluate does not mutate its arguments", () => {
   assert.deepEqual(args, { lvotDiameterCm: "2 cm", lvotVtiCm: 20, valveVtiCm: 80 });
 });
 
-Deno.test("defineCalculation rejects a spec without sources or with an empty range", () => {
+Deno.test("defineCalculation rejects a spec without citations or with an empty range", () => {
   const base = {
     id: "x",
     title: "Broken",
@@ -113,7 +149,7 @@ Deno.test("defineCalculation rejects a spec without sources or with an empty ran
     formulaText: "b = a",
     cautions: [],
   };
-  assert.throws(() => defineCalculation({ ...base, sources: [] }), {
+  assert.throws(() => defineCalculation({ ...base, citations: [] }), {
     name: "TypeError",
     message: "Broken: expected at least one published source, got none",
   });
@@ -122,13 +158,13 @@ Deno.test("defineCalculation rejects a spec without sources or with an empty ran
       defineCalculation({
         ...base,
         inputs: { a: { unit: "1", description: "a", range: { min: 2, max: 1 } } },
-        sources: [{ authors: "a", year: 1, title: "t", publication: "p" }],
+        citations: [{ authors: "a", year: 1, title: "t", publication: "p" }],
       }),
     { name: "TypeError", message: /input 'a' has an empty range/ },
   );
 });
 
-Deno.test("a non-finite output is an error, never a silent NaN", () => {
+Deno.test("a non-finite or impossible output is an error naming the inputs, never a silent NaN", () => {
   const bad = defineCalculation({
     id: "bad",
     title: "Log ratio",
@@ -137,7 +173,7 @@ Deno.test("a non-finite output is an error, never a silent NaN", () => {
     outputs: { b: { unit: "1", description: "b" } },
     formula: ({ a }) => ({ b: Math.log(a) }),
     formulaText: "b = ln a",
-    sources: [{ authors: "a", year: 1, title: "t", publication: "p" }],
+    citations: [{ authors: "a", year: 1, title: "t", publication: "p" }],
     cautions: [],
   });
   assert.throws(() => evaluate(bad, { a: -0.5 }), {
@@ -152,23 +188,26 @@ Deno.test("display: an evaluation offers HTML and text/plain", () => {
     Symbol.for("Jupyter.display")
   ]!();
   assert.match(bundle["text/html"]!, /<table/);
-  assert.match(bundle["text/plain"]!, /areaCm2\s+0\.785398/);
+  // labels from the quantities with their units; the value to the quantity's resolution (0.01 cm²)
+  assert.match(bundle["text/plain"]!, /output\s+Valve area \(cm²\)\s+0\.79/);
+  assert.match(bundle["text/plain"]!, /input\s+LVOT diameter \(cm\)\s+2\.00/);
+  assert.doesNotMatch(bundle["text/plain"]!, /areaCm2|lvotDiameterCm/);
 });
 
 Deno.test("cross-input constraints are checked in evaluation and propagation", async () => {
-  const { ejectionFraction, gum, normal } = await import("../../mod.ts");
+  const { ejectionFraction } = await import("../../mod.ts");
   // EF = 100·(EDV − ESV)/EDV needs ESV ≤ EDV (Lang et al. 2015, LV systolic function; common practice)
   assert.throws(
     () => evaluate(ejectionFraction, { endDiastolicVolumeMl: 50, endSystolicVolumeMl: 60 }),
     {
       name: "RangeError",
       message:
-        "Ejection fraction: expected 'endSystolicVolumeMl' <= 'endDiastolicVolumeMl', got endSystolicVolumeMl = 60, endDiastolicVolumeMl = 50",
+        "Ejection fraction: expected 'endSystolicVolumeMl' <= 'endDiastolicVolumeMl', got endSystolicVolumeMl = 60 mL, endDiastolicVolumeMl = 50 mL",
     },
   );
   assert.throws(
     () =>
-      gum(ejectionFraction, {
+      propagate(ejectionFraction, {
         endDiastolicVolumeMl: normal(50, 3),
         endSystolicVolumeMl: normal(60, 3),
       }),

@@ -1,5 +1,5 @@
 import assert from "node:assert/strict";
-import { expressionModel, gum, monteCarlo, normal, sensitivityCurve } from "../../mod.ts";
+import { expressionModel, normal, propagate, sensitivityCurve } from "../../mod.ts";
 import { budgetChart, Chart, histogramChart, sensitivityChart } from "../../plot/mod.ts";
 
 const model = expressionModel({
@@ -10,8 +10,8 @@ const model = expressionModel({
 const inputs = { v: normal(4, 0.2) };
 
 Deno.test("histogram chart: density integrates to 1 and the GUM curve is N(y, u²)", async () => {
-  const mc = monteCarlo(model, inputs, { trials: 50_000, seed: 8 });
-  const g = gum(model, inputs);
+  const mc = propagate(model, inputs, { method: "monteCarlo", trials: 50_000, seed: 8 });
+  const g = propagate(model, inputs);
   const chart = histogramChart(mc, { gum: g, bins: 40 });
   const layers = chart.spec.layer as { data: { values: Record<string, number>[] } }[];
   const bars = layers[0]!.data.values;
@@ -28,15 +28,16 @@ Deno.test("histogram chart: density integrates to 1 and the GUM curve is N(y, u�
 });
 
 Deno.test("histogram chart is deterministic for a seed (snapshot of the spec)", () => {
-  const a = histogramChart(monteCarlo(model, inputs, { trials: 5_000, seed: 9 }));
-  const b = histogramChart(monteCarlo(model, inputs, { trials: 5_000, seed: 9 }));
+  const a = histogramChart(propagate(model, inputs, { method: "monteCarlo", trials: 5_000, seed: 9 }));
+  const b = histogramChart(propagate(model, inputs, { method: "monteCarlo", trials: 5_000, seed: 9 }));
   assert.deepEqual(a.spec, b.spec);
 });
 
 Deno.test("budget and sensitivity charts carry their data", async () => {
-  const budget = budgetChart(gum(model, inputs));
+  const budget = budgetChart(propagate(model, inputs));
+  // the budget's source is named by its label, with its unit
   assert.deepEqual((budget.spec.data as { values: unknown[] }).values, [{
-    input: "v",
+    source: "Peak velocity (m/s)",
     sharePercent: 100,
   }]);
   const curve = sensitivityCurve(model, { v: 4 }, { vary: "v", from: 3, to: 5, steps: 3 });
@@ -44,7 +45,11 @@ Deno.test("budget and sensitivity charts carry their data", async () => {
   const values = (chart.spec.data as { values: { x: number; y: number }[] }).values;
   // (3/4)² − 1 = −43.75 %, 0 %, (5/4)² − 1 = 56.25 % (hand-checkable from ΔP = 4v²)
   assert.deepEqual(values.map((v) => v.y), [-43.75, 0, 56.25]);
-  assert.match(await chart.toSVG(), /<svg/);
+  const svg = await chart.toSVG();
+  assert.match(svg, /<svg/);
+  // axis titles: labels with units, the relative change says what it is relative to
+  assert.match(svg, /Peak velocity \(m\/s\)/);
+  assert.match(svg, /Change of Peak gradient from its reference value \(%\)/);
 });
 
 Deno.test("chart errors: bad spec, unknown output, no samples", () => {
@@ -52,8 +57,11 @@ Deno.test("chart errors: bad spec, unknown output, no samples", () => {
     name: "TypeError",
     message: "Chart: expected a vega-lite spec object, got object",
   });
-  const mc = monteCarlo(model, inputs, { trials: 1000, seed: 1, keepSamples: false });
-  assert.throws(() => histogramChart(mc), { name: "TypeError", message: /holds no samples/ });
+  const mc = propagate(model, inputs, { method: "monteCarlo", trials: 1000, seed: 1, keepSamples: false });
+  assert.throws(() => histogramChart(mc), {
+    name: "TypeError",
+    message: /expected a Monte Carlo result with its samples, got a result without samples/,
+  });
   assert.throws(() => histogramChart(mc, { output: "nope" }), {
     name: "TypeError",
     message: /unknown output 'nope'/,
@@ -61,7 +69,7 @@ Deno.test("chart errors: bad spec, unknown output, no samples", () => {
 });
 
 Deno.test("chart display offers vega-lite and SVG MIME types", async () => {
-  const chart = budgetChart(gum(model, inputs));
+  const chart = budgetChart(propagate(model, inputs));
   const bundle = await (chart as unknown as Record<symbol, () => Promise<Record<string, unknown>>>)[
     Symbol.for("Jupyter.display")
   ]!();

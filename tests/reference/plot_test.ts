@@ -1,8 +1,28 @@
 import assert from "node:assert/strict";
-import { computeCohort, measurementAtZ, PHN_2017_MODELS, readCohortCsv } from "../../mod.ts";
-import { adultLimitChart, cohortZScoreChart, zScoreChart } from "../../plot/mod.ts";
+import {
+  bsaHaycock,
+  evaluateTable,
+  measurementAtZ,
+  PHN_2017_MODELS,
+  readTable,
+  zScoreBands,
+} from "../../mod.ts";
+import { adultLimitChart, tableZScoreChart, zScoreChart } from "../../plot/mod.ts";
 
 type Layer = { data?: { values: Record<string, number | string>[] }; layer?: Layer[] };
+
+Deno.test("Z-score bands are the model's measurements at Z = −3…3", () => {
+  const model = PHN_2017_MODELS.aorticRootSinus;
+  for (const row of zScoreBands(model, 0.2, 2.4, 5)) {
+    // Lopez 2017 form: at BSA b the Z = +2 measurement is (M + 2S)·b^α (hand-checkable)
+    assert.ok(Math.abs(row["z2"] - (2.06 + 0.36) * row.bsa ** 0.5) < 1e-12);
+    assert.equal(row["z-3"], measurementAtZ(model, -3, row.bsa));
+  }
+  assert.throws(() => zScoreBands(model, 2, 1), {
+    name: "RangeError",
+    message: "Z-score bands (phn2017.aorticRootSinus): expected a BSA range 0 < from < to, got [2, 1]",
+  });
+});
 
 Deno.test("pediatric chart bands are the model's measurements at Z = −3…3", async () => {
   const model = PHN_2017_MODELS.aorticRootSinus;
@@ -21,7 +41,9 @@ Deno.test("pediatric chart bands are the model's measurements at Z = −3…3", 
   assert.deepEqual([pts.valueLow, pts.valueHigh], [2.4 - 0.1, 2.4 + 0.1]);
   const svg = await chart.toSVG();
   assert.match(svg, /^<svg/);
-  assert.match(svg, /BSA \[m²\]/);
+  // axis titles are quantity labels with units
+  assert.match(svg, /Body surface area \(m²\)/);
+  assert.match(svg, /Aortic root at the sinuses \(cm\)/);
 });
 
 Deno.test("pediatric chart rejects bad points naming the field", () => {
@@ -50,13 +72,8 @@ Deno.test("cohort chart plots every row with a value; adult chart draws sex-spec
     new URL("../../examples/data/pediatric_clinic.csv", import.meta.url),
   );
   const model = PHN_2017_MODELS.lvMass;
-  const t = readCohortCsv(text, {
-    id: "patient",
-    height: "height",
-    weight: "weight",
-    measurements: [{ column: "lv mass", name: "lvMass", canonicalUnit: "g" }],
-  });
-  const chart = cohortZScoreChart(computeCohort(t, { zScores: { lvMass: model } }), "lvMass");
+  const t = evaluateTable(readTable(text, { population: "pediatric" }), bsaHaycock);
+  const chart = tableZScoreChart(t, model);
   // 20 invented rows, 2 with LV mass not measured → 18 points
   assert.equal((chart.spec.layer as Layer[])[2]!.data!.values.length, 18);
   assert.match(await chart.toSVG(), /^<svg/);

@@ -8,13 +8,15 @@ import {
   type LogPolynomialBsaModel,
   measurementAtZ,
   normal,
+  normalCdf,
   normalLimits,
   percentileFromZ,
   PHN_2017_MODELS,
+  tCdf,
+  typeA,
   zScore,
   zScoreCalculation,
   zScoreFormula,
-  zScoreWithUncertainty,
 } from "../../mod.ts";
 
 const close = (actual: number, expected: number, tol: number, what: string) =>
@@ -92,8 +94,8 @@ Deno.test("PHN: worked value at BSA 1.44 m² by hand", () => {
   // Φ(−1.501016) = 0.066676 → 6.668th percentile (standard normal table)
   close(r.percentile, 6.668, 0.005, "percentile");
   // Z = ±2 limits: (3.89 ∓ 0.66)·1.178320 = 3.80597 and 5.36135 cm (hand computation)
-  close(r.normalRange[0], 3.80597, 1e-5, "−2");
-  close(r.normalRange[1], 5.36135, 1e-5, "+2");
+  close(r.normalRange.lower, 3.80597, 1e-5, "−2");
+  close(r.normalRange.upper, 5.36135, 1e-5, "+2");
   close(r.expected, 4.58366, 1e-5, "mean");
 });
 
@@ -150,23 +152,25 @@ Deno.test("Z-score bad input: clear errors naming field, range and value", () =>
   assert.throws(() => zScore(model, { measurement: -1, bsaM2: 1 }), {
     name: "RangeError",
     message:
-      "Z-score: Aortic valve annulus (phn2017.aorticAnnulus): expected 'measurement' in (0, 15] cm, got -1",
+      "Z-score: Aortic valve annulus (phn2017.aorticAnnulus): expected 'aorticAnnulus' (Aortic valve annulus) in (0, 10] cm, got -1",
   });
   assert.throws(() => zScore(model, { measurement: 1.5, bsaM2: 0 }), {
     name: "RangeError",
-    message: /expected 'bsaM2' in \(0, 5\] m², got 0$/,
+    message: /expected 'bsaM2' \(Body surface area\) in \(0, 5\] m², got 0$/,
   });
   assert.throws(() => zScore(model, { measurement: "1.5 mL", bsaM2: 1 }), {
     name: "TypeError",
-    message: /'measurement'.*convertible to cm.*"1\.5 mL"$/,
+    message:
+      /expected 'aorticAnnulus' \(Aortic valve annulus\) in \(0, 10\] cm \(a unit convertible to cm\), got "1\.5 mL"$/,
   });
   assert.throws(() => zScore(model, { measurement: 1.5, heightCm: 500, weightKg: 20 }), {
     name: "RangeError",
-    message: /expected 'heightCm' in \[15, 280\] cm, got 500$/,
+    message: /expected 'heightCm' \(Height\) in \[15, 280\] cm, got 500$/,
   });
   assert.throws(() => measurementAtZ(model, 2, -1), {
     name: "RangeError",
-    message: "Measurement at Z (phn2017.aorticAnnulus): expected 'bsaM2' in (0, 5] m², got -1",
+    message:
+      "Measurement at Z (phn2017.aorticAnnulus): expected 'bsaM2' (Body surface area) in (0, 5] m², got -1",
   });
   assert.throws(() => measurementAtZ(model, -20, 1), {
     name: "RangeError",
@@ -191,13 +195,13 @@ const SYNTHETIC_LOG_MODEL: LogPolynomialBsaModel = defineZScoreModel({
   },
   provenance: "SYNTHETIC: invented for a unit test; not a published model",
   synthetic: true,
-  family: "logPolynomialBsa",
+  form: "logPolynomialBsa",
   meanCoefficients: [0.3, 0.6, -0.1],
   sdCoefficients: [0.08, 0.01],
 });
 
 Deno.test("extensible models: a synthetic log-polynomial model evaluates and compares side by side", () => {
-  // Hand computation of the family formula at BSA 1: mean ln X = 0.3 + 0.6 − 0.1 = 0.8,
+  // Hand computation of the form's formula at BSA 1: mean ln X = 0.3 + 0.6 − 0.1 = 0.8,
   // SD = 0.09; X = e^(0.8 + 0.09) = e^0.89 gives Z = 1
   close(zScoreFormula(SYNTHETIC_LOG_MODEL, Math.exp(0.89), 1), 1, 1e-12, "synthetic Z");
   close(
@@ -215,9 +219,9 @@ Deno.test("extensible models: a synthetic log-polynomial model evaluates and com
     "synthetic.aorticRootLog",
     "phn2017.lvMass",
   ]);
-  assert.ok(Number.isFinite(rows[0]!.zScore) && Number.isFinite(rows[1]!.zScore));
+  assert.ok(Number.isFinite(rows[0]!.zScore!) && Number.isFinite(rows[1]!.zScore!));
   // The LV mass model is in g: a length cannot be compared; the row says why instead of failing
-  assert.ok(Number.isNaN(rows[2]!.zScore));
+  assert.equal(rows[2]!.zScore, null);
   assert.equal(
     rows[2]!.error,
     "Z-score comparison: model 'phn2017.lvMass' measures in g, not comparable with cm of 'phn2017.aorticRootSinus', got g",
@@ -238,43 +242,67 @@ Deno.test("defineZScoreModel rejects malformed data naming the field", () => {
 
 Deno.test("Z with uncertainty: GUM by hand, Monte Carlo agrees, BSA uncertainty enters", () => {
   const model = PHN_2017_MODELS.aorticAnnulus;
+  const share = (r: ReturnType<typeof zScore>, source: string) =>
+    r.uncertainty!.budget.find((b) => b.source === source)!.share;
   // Measurement only: u(Z) = u(X)/(S·BSA^α) = 0.05/0.14 at BSA 1 (JCGM 100 eq. (10), by hand)
-  const g = zScoreWithUncertainty(model, { measurement: normal(1.76, 0.05), bsaM2: 1 });
-  close(g.standardUncertainty, 0.05 / 0.14, 1e-6, "u(Z) measurement");
-  close(g.probabilityAbovePlus2, 0.5, 1e-9, "P(Z>2) at Z=2");
+  const g = zScore(model, { measurement: normal(1.76, 0.05), bsaM2: 1 });
+  close(g.uncertainty!.standardUncertainty, 0.05 / 0.14, 1e-6, "u(Z) measurement");
+  close(g.probabilityAbovePlus2!, 0.5, 1e-9, "P(Z>2) at Z=2");
   // Measurement and BSA: ∂Z/∂BSA = −α·X·BSA^(−α−1)/S = −0.5·1.76/0.14 = −6.285714 at BSA 1;
   // u(BSA) = 0.03 → contribution 0.188571; u(Z) = √(0.357143² + 0.188571²) = 0.403871 (by hand)
-  const gb = zScoreWithUncertainty(model, {
-    measurement: normal(1.76, 0.05),
-    bsaM2: normal(1, 0.03),
-  });
-  close(gb.standardUncertainty, 0.403871, 1e-4, "u(Z) with BSA");
-  close(gb.shares.bsaM2!, 0.188571 ** 2 / 0.403871 ** 2, 1e-3, "BSA share");
+  const gb = zScore(model, { measurement: normal(1.76, 0.05), bsaM2: normal(1, 0.03) });
+  close(gb.uncertainty!.standardUncertainty, 0.403871, 1e-4, "u(Z) with BSA");
+  close(share(gb, "bsaM2"), 0.188571 ** 2 / 0.403871 ** 2, 1e-3, "BSA share");
   // JCGM 101 §8: Monte Carlo agrees with GUM for a nearly linear model
-  const mc = zScoreWithUncertainty(model, {
-    measurement: normal(1.76, 0.05),
-    bsaM2: normal(1, 0.03),
-  }, {
+  const mc = zScore(model, { measurement: normal(1.76, 0.05), bsaM2: normal(1, 0.03) }, {
     method: "monteCarlo",
     trials: 200_000,
     seed: 3,
   });
-  close(mc.standardUncertainty, 0.403871, 0.01, "MC u(Z)");
-  close(mc.probabilityAbovePlus2, 0.5, 0.02, "MC P(Z>2)");
+  close(mc.uncertainty!.standardUncertainty, 0.403871, 0.01, "MC u(Z)");
+  close(mc.probabilityAbovePlus2!, 0.5, 0.02, "MC P(Z>2)");
   // From height and weight with stadiometer and scale error
-  const hw = zScoreWithUncertainty(model, {
+  const hw = zScore(model, {
     measurement: normal(1.6, 0.05),
     heightCm: normal(120, 0.5),
     weightKg: normal(22, 0.2),
   });
-  assert.ok(hw.shares.heightCm! > 0 && hw.shares.weightKg! > 0);
-  const big = zScoreWithUncertainty(model, {
-    measurement: normal(2.6, 0.05),
-    bsaM2: normal(2.7, 0.03),
-  });
+  assert.ok(share(hw, "heightCm") > 0 && share(hw, "weightKg") > 0);
+  const big = zScore(model, { measurement: normal(2.6, 0.05), bsaM2: normal(2.7, 0.03) });
   assert.ok(
     big.flags.some((f) =>
       /outside the range the model 'phn2017\.aorticAnnulus' was built on/.test(f)
     ),
   );
+  // exact inputs: no uncertainty, no tail probabilities
+  const exact = zScore(model, { measurement: 1.76, bsaM2: 1 });
+  assert.equal(exact.uncertainty, null);
+  assert.equal(exact.probabilityAbovePlus2, null);
+});
+
+Deno.test("P(Z > 2) uses the distribution of the interval: scaled t with ν_eff for a Type A input", () => {
+  const model = PHN_2017_MODELS.aorticAnnulus;
+  // three readings → ν = 2; the 95 % interval uses k = t_0.975(2) = 4.303 (Student t table),
+  // so the tail probability comes from the same t: P(T₂ > (2 − Z)/u)
+  const r = zScore(model, { measurement: typeA([1.70, 1.80, 1.85]), bsaM2: 1 });
+  const u = r.uncertainty!;
+  assert.equal(u.effectiveDof, 2);
+  assert.equal(u.coverageFactor!.toFixed(3), "4.303");
+  const tail = 1 - tCdf((2 - u.value) / u.standardUncertainty, 2);
+  close(r.probabilityAbovePlus2!, tail, 1e-12, "t tail");
+  // with a normal tail instead it would differ
+  assert.ok(Math.abs(tail - (1 - normalCdf((2 - u.value) / u.standardUncertainty))) > 0.01);
+});
+
+Deno.test("a Z-score displays itself: labels, units, the caution, the coefficients' provenance", () => {
+  const r = zScore(PHN_2017_MODELS.lvMass, { measurement: normal(60, 3), bsaM2: 1 });
+  const bundle = (r as unknown as Record<symbol, () => Record<string, string>>)[
+    Symbol.for("Jupyter.display")
+  ]!();
+  const text = bundle["text/plain"]!;
+  assert.match(text, /Measurement\s+60 g/);
+  assert.match(text, /P\(true Z > \+2\)/);
+  assert.match(text, /Not a diagnosis/);
+  assert.match(text, /Coefficients not verified against the publication/);
+  assert.doesNotMatch(text, /\{|lvMass\b/);
 });
