@@ -18,6 +18,7 @@ export * from "./calc/body/mod.ts";
 export * from "./calc/reference/mod.ts";
 export * from "./calc/chamber/mod.ts";
 export * from "./calc/doppler/mod.ts";
+export * from "./calc/grading/mod.ts";
 export * from "./calc/agreement/mod.ts";
 export * from "./calc/quantities/mod.ts";
 export * from "./calc/table/mod.ts";

@@ -17,6 +17,7 @@ if (Deno.args.includes("--check")) {
   }
   console.log(`docs/calculations.md is current (${count} calculations)`);
 } else {
+  await Deno.mkdir(new URL("../docs/", import.meta.url), { recursive: true });
   await Deno.writeTextFile(target, text);
   console.log(`Wrote docs/calculations.md (${count} calculations)`);
 }

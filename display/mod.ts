@@ -36,6 +36,7 @@ export { displayEvaluation, type TableDisplay, tableDisplay } from "./results.ts
 export { columnHeader, displayTable, reportedCell } from "./table.ts";
 export { displayZScore } from "./reference.ts";
 export * from "./physics.ts";
-export * from "./doppler.ts";
+export * from "./grading.ts";
 export * from "./chamber.ts";
 export * from "./agreement.ts";
+export * from "./method_validation.ts";

@@ -5,7 +5,7 @@
  * @module
  */
 import type { MimeBundle } from "../calc/core/types.ts";
-import type { ZScoreResult } from "../calc/reference/zscore.ts";
+import type { ZScoreResult } from "../calc/reference/types.ts";
 import { withUnit } from "../calc/core/text.ts";
 import { tableBundle } from "./mime.ts";
 import { formatNumber, formatShare, roundLike } from "./format.ts";
@@ -49,7 +49,8 @@ export function displayZScore(r: ZScoreResult): MimeBundle {
       ["P(true Z < −2)", formatShare(r.probabilityBelowMinus2!)],
     );
   }
-  return tableBundle(`Z-score: ${r.model.measurement} (${r.model.id})`, ["", "Value"], rows, {
+  const cite = `${r.model.source.authors.split(/[ ,]/)[0]} ${r.model.source.year}`;
+  return tableBundle(`Z-score: ${r.quantity.label} (${cite})`, ["", "Value"], rows, {
     Flags: r.flags,
     Cautions: r.cautions,
   });

@@ -5,7 +5,7 @@
  * @module
  */
 import type { Evaluation, MimeBundle } from "../calc/core/types.ts";
-import { escapeHtml, htmlTable, JUPYTER_DISPLAY, tableBundle, textTable } from "./mime.ts";
+import { JUPYTER_DISPLAY, tableBundle } from "./mime.ts";
 import { formatNumber, formatResolution, NOT_MEASURED } from "./format.ts";
 import { labelWithUnit } from "./uncertainty.ts";
 
@@ -56,20 +56,25 @@ export interface TableDisplay {
  *
  * @param records The rows.
  * @param title Optional caption.
- * @returns The displayable table.
+ * @param cautions Cautions shown below the table (the clinical caution, where the numbers could
+ * reach a patient decision).
+ * @returns The table.
  *
  * @example
  * ```ts
- * import { tableDisplay } from "@sonorigor/sonorigor";
+ * import { CLINICAL_CAUTION, JUPYTER_DISPLAY, tableDisplay } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
- * const t = tableDisplay([{ patient: "A", area: 0.81234 }, { patient: "B", area: NaN }]);
+ * const t = tableDisplay([{ patient: "A", area: 0.81234 }, { patient: "B", area: NaN }], "Areas",
+ *   [CLINICAL_CAUTION]);
  * assert.deepEqual(t.columns, ["patient", "area"]);
- * assert.deepEqual(t.rows[1], ["B", "not measured"]);
+ * assert.deepEqual(t.rows, [["A", "0.8123"], ["B", "not measured"]]);
+ * assert.match(String(t[JUPYTER_DISPLAY]()["text/plain"]), /Caution: Not a diagnosis/);
  * ```
  */
 export function tableDisplay(
   records: readonly Record<string, unknown>[],
   title = "",
+  cautions: readonly string[] = [],
 ): TableDisplay {
   const columns: string[] = [];
   for (const r of records) {
@@ -85,9 +90,6 @@ export function tableDisplay(
   return {
     columns,
     rows,
-    [JUPYTER_DISPLAY]: () => ({
-      "text/plain": (title ? `${title}\n` : "") + textTable(columns, rows),
-      "text/html": (title ? `<p><b>${escapeHtml(title)}</b></p>` : "") + htmlTable(columns, rows),
-    }),
+    [JUPYTER_DISPLAY]: () => tableBundle(title, columns, rows, { Cautions: cautions }),
   };
 }

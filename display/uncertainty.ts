@@ -11,7 +11,19 @@ import { formatUnit } from "../calc/core/text.ts";
 import { escapeHtml, htmlNotes, htmlTable, textTable } from "./mime.ts";
 import { formatInterval, formatNumber, formatPlusMinus, formatShare, roundLike } from "./format.ts";
 
-export { JUPYTER_DISPLAY } from "./mime.ts";
+import { JUPYTER_DISPLAY } from "./mime.ts";
+
+export { JUPYTER_DISPLAY };
+
+/** Freezes an uncertain value with its notebook display attached (a getter-safe copy: lazy
+ * intervals of Monte Carlo values stay lazy). */
+export function withValueDisplay(value: UncertainValue): UncertainValue {
+  Object.defineProperty(value, JUPYTER_DISPLAY, {
+    value: () => displayValue(value),
+    enumerable: false,
+  });
+  return Object.freeze(value);
+}
 
 /**
  * A label with its unit for a table header or an axis: "LVOT diameter (cm)", "EF (%)", or the

@@ -1,62 +1,67 @@
 /**
  * Charts for method validation: the Bland–Altman plot, the method-comparison scatter and the
- * observer plot. Each takes results from the agreement statistics and returns a {@linkcode Chart}.
+ * observer plot, and the charts of a method-validation report. Each draws results of the
+ * agreement statistics as they are (bias, limits, intervals, fitted lines come from calc); the
+ * only arithmetic here is layout (the plotted extent, where a fitted line meets it). Axis titles
+ * and legends are labels with units.
  *
  * @module
  */
 import { Chart } from "./chart.ts";
-import type { BlandAltmanResult } from "../calc/agreement/bland_altman.ts";
+import type { Interval } from "../calc/agreement/checks.ts";
+import type { FigurePlan, MethodValidationReport } from "../calc/agreement/report_types.ts";
+import { labelWithUnit } from "../display/uncertainty.ts";
+import type { BlandAltmanResult, Measured } from "../calc/agreement/types.ts";
 
 /** Options of {@linkcode blandAltmanChart}. */
 export interface BlandAltmanChartOptions {
   /** Chart title. @default "Bland–Altman plot" */
   readonly title?: string;
-  /** Unit label of the measurement, e.g. "mL". @default "" */
-  readonly unit?: string;
-  /** Name of method A (minuend). @default "A" */
-  readonly methodA?: string;
-  /** Name of method B (subtrahend). @default "B" */
-  readonly methodB?: string;
   /** Which limit intervals to draw as bands: "exact" (Carkeet 2015) or "approximate".
    * @default "exact" */
   readonly bands?: "exact" | "approximate";
 }
 
-const withUnit = (label: string, unit: string) => (unit ? `${label} (${unit})` : label);
+/** An axis title: "<label>: <what>" with the unit, or the bare description when nothing was
+ * stated. */
+function axisTitle(q: Measured | null | undefined, what: string, fallback: string): string {
+  return q ? labelWithUnit(`${q.label}: ${what}`, q.unit) : fallback;
+}
 
 /**
  * Bland–Altman plot: differences against means, with the bias and the limits of agreement as
- * lines and their confidence intervals as shaded bands.
+ * lines and their confidence intervals as shaded bands. Labels come from the result (what was
+ * measured, its unit, the method names given to `blandAltman`).
  *
  * Source: Bland JM, Altman DG (1986) Lancet 327:307–310, Fig. 2 layout;
  * doi:10.1016/S0140-6736(86)90837-8.
  *
  * @param result A {@linkcode BlandAltmanResult} from `blandAltman`.
- * @param options Title, unit, method names, band kind.
+ * @param options Title, band kind.
  * @returns The chart.
  *
  * @example
  * ```ts
- * import { blandAltman } from "@sonorigor/sonorigor";
+ * import { blandAltman, EJECTION_FRACTION } from "@sonorigor/sonorigor";
  * import { blandAltmanChart } from "@sonorigor/sonorigor/plot";
  * import assert from "node:assert/strict";
  *
- * const chart = blandAltmanChart(blandAltman([10, 12, 14, 16, 18], [9, 12, 13, 17, 16]));
- * assert.match(await chart.toSVG(), /^<svg/);
+ * const r = blandAltman([60, 52, 41, 66, 58], [58, 52, 44, 63, 59], {
+ *   quantity: EJECTION_FRACTION, methodNames: ["auto", "manual"],
+ * });
+ * const chart = blandAltmanChart(r);
+ * assert.match(await chart.toSVG(), /LV ejection fraction: auto − manual \(%\)/);
  * ```
  */
 export function blandAltmanChart(
   result: BlandAltmanResult,
   options: BlandAltmanChartOptions = {},
 ): Chart {
-  const unit = options.unit ?? "";
-  const a = options.methodA ?? "A";
-  const b = options.methodB ?? "B";
+  const [a, b] = result.methodNames;
+  const q = result.quantity;
   const title = options.title ?? "Bland–Altman plot";
   const kind = options.bands ?? "exact";
-  const ci = (
-    l: BlandAltmanResult["lowerLimit"],
-  ) => (kind === "exact" ? l.exactCi : l.approximateCi);
+  const ci = (l: BlandAltmanResult["lowerLimit"]) => kind === "exact" ? l.exactCi : l.approximateCi;
   const points = result.means.map((m, i) => ({ mean: m, difference: result.differences[i]! }));
   const bands = [
     { what: "bias CI", lower: result.biasCi.lower, upper: result.biasCi.upper },
@@ -76,7 +81,6 @@ export function blandAltmanChart(
     { what: `bias − ${result.multiplier} SD`, y: result.lowerLimit.value },
     { what: `bias + ${result.multiplier} SD`, y: result.upperLimit.value },
   ];
-  const yTitle = withUnit(`Difference ${a} − ${b}`, unit);
   return new Chart({
     title,
     width: 520,
@@ -86,7 +90,11 @@ export function blandAltmanChart(
         data: { values: bands },
         mark: { type: "rect", opacity: 0.15, color: "#4c78a8" },
         encoding: {
-          y: { field: "lower", type: "quantitative", title: yTitle },
+          y: {
+            field: "lower",
+            type: "quantitative",
+            title: axisTitle(q, `${a} − ${b}`, `Difference ${a} − ${b}`),
+          },
           y2: { field: "upper" },
           tooltip: [{ field: "what" }, { field: "lower" }, { field: "upper" }],
         },
@@ -106,7 +114,7 @@ export function blandAltmanChart(
           x: {
             field: "mean",
             type: "quantitative",
-            title: withUnit(`Mean of ${a} and ${b}`, unit),
+            title: axisTitle(q, `mean of ${a} and ${b}`, `Mean of ${a} and ${b}`),
             scale: { zero: false },
           },
           y: { field: "difference", type: "quantitative" },
@@ -116,19 +124,43 @@ export function blandAltmanChart(
   }, { title });
 }
 
-/** A fitted line to draw on {@linkcode methodComparisonChart}. */
+/** A fitted line to draw on {@linkcode methodComparisonChart}: a regression result, or any
+ * named line. */
 export interface LineToDraw {
   /** Legend name, e.g. "Deming". */
   readonly name: string;
   /** Slope. */
   readonly slope: number;
-  /** Intercept. */
+  /** Intercept (unit of y). */
   readonly intercept: number;
+}
+
+/** Options of {@linkcode methodComparisonChart}. */
+export interface MethodComparisonChartOptions {
+  /** Chart title. @default "Method comparison" */
+  readonly title?: string;
+  /** What was measured (label and unit, e.g. a quantity). @default not stated */
+  readonly quantity?: Measured;
+  /** Names of method X and method Y. @default ["X", "Y"] */
+  readonly methodNames?: readonly [string, string];
+}
+
+/** Smallest and largest of two series, by a loop (no argument spread over the data). */
+function extent(x: readonly number[], y: readonly number[]): Interval {
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (const s of [x, y]) {
+    for (const v of s) {
+      if (v < lo) lo = v;
+      if (v > hi) hi = v;
+    }
+  }
+  return { lower: lo, upper: hi };
 }
 
 /**
  * Method-comparison scatter: method Y against method X with the line of identity and fitted
- * lines (e.g. Deming, Passing–Bablok).
+ * lines (e.g. Deming, Passing–Bablok), each drawn across the plotted extent.
  *
  * Source: layout as in Passing H, Bablok W (1983) J Clin Chem Clin Biochem 21:709–720,
  * doi:10.1515/cclm.1983.21.11.709.
@@ -136,39 +168,40 @@ export interface LineToDraw {
  * @param x Readings by method X.
  * @param y Readings by method Y (same subjects).
  * @param lines Fitted lines to draw.
- * @param options Title, unit and method names.
+ * @param options Title, what was measured, method names.
  * @returns The chart.
  * @throws {TypeError} When x and y differ in length.
  *
  * @example
  * ```ts
+ * import { demingRegression, EJECTION_FRACTION } from "@sonorigor/sonorigor";
  * import { methodComparisonChart } from "@sonorigor/sonorigor/plot";
  * import assert from "node:assert/strict";
  *
- * const chart = methodComparisonChart([1, 2, 3], [1.1, 2.2, 2.9], [{ name: "fit", slope: 1, intercept: 0 }]);
- * assert.match(await chart.toSVG(), /<svg/);
+ * const x = [40, 52, 61, 35, 58], y = [42, 51, 63, 36, 57];
+ * const { slope, intercept } = demingRegression(x, y);
+ * const chart = methodComparisonChart(x, y, [{ name: "Deming", slope, intercept }], {
+ *   quantity: EJECTION_FRACTION, methodNames: ["manual", "auto"],
+ * });
+ * assert.match(await chart.toSVG(), /LV ejection fraction: auto \(%\)/);
  * ```
  */
 export function methodComparisonChart(
   x: readonly number[],
   y: readonly number[],
   lines: readonly LineToDraw[],
-  options: {
-    readonly title?: string;
-    readonly unit?: string;
-    readonly methodX?: string;
-    readonly methodY?: string;
-  } = {},
+  options: MethodComparisonChartOptions = {},
 ): Chart {
   if (x.length !== y.length) {
     throw new TypeError(
       `Method-comparison chart: expected 'x' and 'y' of equal length, got ${x.length} and ${y.length}`,
     );
   }
-  const unit = options.unit ?? "";
   const title = options.title ?? "Method comparison";
-  const lo = Math.min(...x, ...y);
-  const hi = Math.max(...x, ...y);
+  const [nameX, nameY] = options.methodNames ?? ["X", "Y"];
+  const q = options.quantity;
+  const { lower: lo, upper: hi } = extent(x, y);
+  // where each line meets the plotted extent (layout)
   const segs = [
     { line: "identity (y = x)", x: lo, y: lo },
     { line: "identity (y = x)", x: hi, y: hi },
@@ -187,18 +220,8 @@ export function methodComparisonChart(
         data: { values: segs },
         mark: { type: "line", clip: true },
         encoding: {
-          x: {
-            field: "x",
-            type: "quantitative",
-            scale,
-            title: withUnit(options.methodX ?? "X", unit),
-          },
-          y: {
-            field: "y",
-            type: "quantitative",
-            scale,
-            title: withUnit(options.methodY ?? "Y", unit),
-          },
+          x: { field: "x", type: "quantitative", scale, title: axisTitle(q, nameX, nameX) },
+          y: { field: "y", type: "quantitative", scale, title: axisTitle(q, nameY, nameY) },
           color: { field: "line", type: "nominal", title: "Line" },
         },
       },
@@ -224,6 +247,14 @@ export interface ObserverReading {
   readonly value: number;
 }
 
+/** Options of {@linkcode observerChart}. */
+export interface ObserverChartOptions {
+  /** Chart title. @default "Readings by subject and observer" */
+  readonly title?: string;
+  /** What was measured (label and unit, e.g. a quantity). @default not stated */
+  readonly quantity?: Measured;
+}
+
 /**
  * Observer plot: every reading by subject, coloured by observer, so that systematic offsets
  * between observers and subjects with poor agreement stand out.
@@ -232,39 +263,109 @@ export interface ObserverReading {
  * Bull 86:420–428 (the data layout of Table 2), doi:10.1037/0033-2909.86.2.420.
  *
  * @param readings Readings in long format.
- * @param options Title and unit.
+ * @param options Title and what was measured.
  * @returns The chart.
  *
  * @example
  * ```ts
+ * import { EJECTION_FRACTION } from "@sonorigor/sonorigor";
  * import { observerChart } from "@sonorigor/sonorigor/plot";
  * import assert from "node:assert/strict";
  *
- * const chart = observerChart([{ subject: "p1", observer: "A", value: 3 }, { subject: "p1", observer: "B", value: 4 }]);
- * assert.match(await chart.toSVG(), /<svg/);
+ * const chart = observerChart([{ subject: "p1", observer: "A", value: 53 },
+ *   { subject: "p1", observer: "B", value: 55 }], { quantity: EJECTION_FRACTION });
+ * assert.match(await chart.toSVG(), /LV ejection fraction \(%\)/);
  * ```
  */
 export function observerChart(
   readings: readonly ObserverReading[],
-  options: { readonly title?: string; readonly unit?: string } = {},
+  options: ObserverChartOptions = {},
 ): Chart {
   const title = options.title ?? "Readings by subject and observer";
+  const q = options.quantity;
   return new Chart({
     title,
     width: 560,
     height: 300,
-    data: { values: readings.map((r) => ({ ...r })) },
+    data: {
+      values: readings.map((r) => ({ subject: r.subject, observer: r.observer, value: r.value })),
+    },
     mark: { type: "point", filled: true, size: 50, opacity: 0.8 },
     encoding: {
       x: { field: "subject", type: "nominal", title: "Subject", sort: null },
       y: {
         field: "value",
         type: "quantitative",
-        title: withUnit("Reading", options.unit ?? ""),
+        title: q ? labelWithUnit(q.label, q.unit) : "Reading",
         scale: { zero: false },
       },
       color: { field: "observer", type: "nominal", title: "Observer / method" },
       shape: { field: "observer", type: "nominal" },
     },
   }, { title });
+}
+
+/**
+ * The chart of one figure of a method-validation report (its Bland–Altman plot, method-comparison
+ * scatter or observer plot), drawn from the report's results.
+ *
+ * @param report A report of measurements from `methodValidation`.
+ * @param figure One of `report.figures`.
+ * @returns The chart.
+ * @throws {TypeError} For a figure whose statistic the report does not hold.
+ *
+ * @example
+ * ```ts
+ * import { methodValidation, readTable } from "@sonorigor/sonorigor";
+ * import { methodValidationChart } from "@sonorigor/sonorigor/plot";
+ * import assert from "node:assert/strict";
+ * const csv = "patient,observer,lvef percent\nP1,A,55\nP1,B,54\nP2,A,40\nP2,B,43\nP3,A,62\nP3,B,61\n";
+ * const report = methodValidation(readTable(csv));
+ * assert.deepEqual(report.figures.map((f) => f.file),
+ *   ["bland_altman_b_vs_a.svg", "method_comparison_b_vs_a.svg", "observers.svg"]);
+ * const svg = await methodValidationChart(report, report.figures[0]!).toSVG();
+ * assert.match(svg, /LV ejection fraction: B − A \(%\)/);
+ * ```
+ */
+export function methodValidationChart(report: MethodValidationReport, figure: FigurePlan): Chart {
+  const quantity = report.study.measured;
+  if (figure.kind === "observers") {
+    if (report.study.design !== "continuous") {
+      throw new TypeError(
+        "Method-validation chart: expected a report of measurements for the observer plot, got graded findings",
+      );
+    }
+    return observerChart(report.readings as readonly ObserverReading[], {
+      quantity,
+      title: "All readings by subject and observer/method",
+    });
+  }
+  const c = report.comparisons[figure.comparison ?? -1];
+  if (c === undefined) {
+    throw new TypeError(
+      `Method-validation chart: expected a figure of one of the ${report.comparisons.length} comparisons, got comparison ${figure.comparison}`,
+    );
+  }
+  if (figure.kind === "blandAltman") {
+    if (c.blandAltman.status !== "computed") {
+      throw new TypeError(
+        `Method-validation chart: expected a computed Bland–Altman analysis of ${c.test} − ${c.reference}, got none (${c.blandAltman.reason})`,
+      );
+    }
+    return blandAltmanChart(c.blandAltman.result, {
+      title: `Bland–Altman: ${c.test} − ${c.reference}`,
+    });
+  }
+  const lines: LineToDraw[] = [];
+  for (const fit of [c.deming, c.passingBablok]) {
+    if (fit.status === "computed") {
+      const { method, slope, intercept } = fit.result;
+      lines.push({ name: method, slope, intercept });
+    }
+  }
+  return methodComparisonChart(c.x, c.y, lines, {
+    quantity,
+    methodNames: [c.reference, c.test],
+    title: `${c.test} against ${c.reference}`,
+  });
 }

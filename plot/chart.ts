@@ -6,7 +6,7 @@
  */
 import * as vega from "vega";
 import * as vegaLite from "vega-lite";
-import { JUPYTER_DISPLAY, type MimeBundle } from "../calc/core/display.ts";
+import { JUPYTER_DISPLAY, type MimeBundle } from "../display/mime.ts";
 
 /** A vega-lite top-level specification as a plain object. */
 export type VegaLiteSpec = Record<string, unknown>;

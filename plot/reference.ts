@@ -7,11 +7,12 @@
  */
 import {
   ADULT_REFERENCE_LANG_2015,
+  adultLimitLines,
   type AdultReferenceRow,
   adultReferenceRow,
 } from "../calc/reference/adult.ts";
 import type { ZScoreModel } from "../calc/reference/zscore_models.ts";
-import { measuredQuantity, zScoreBands } from "../calc/reference/zscore.ts";
+import { measuredQuantity, modelCitation, zScoreBands } from "../calc/reference/zscore.ts";
 import type { Table } from "../calc/table/types.ts";
 import { BODY_SURFACE_AREA } from "../calc/quantities/body.ts";
 import { labelWithUnit } from "../display/uncertainty.ts";
@@ -198,7 +199,8 @@ export function zScoreChart(model: ZScoreModel, options: ZScoreChartOptions = {}
       ],
     });
   }
-  const title = options.title ?? `${model.measurement}: mean and ±1/±2/±3 SD (${model.id})`;
+  const title = options.title ??
+    `${measured.label}: mean and ±1/±2/±3 SD (${modelCitation(model)})`;
   return new Chart({
     title,
     width: options.width ?? 520,
@@ -341,24 +343,9 @@ export function adultLimitChart(parameter: string, options: AdultLimitChartOptio
       );
     }
   });
-  const limits: { sex: string; value: number; kind: string }[] = [];
-  const shared = rows[0]!.row === rows[1]!.row;
-  for (const { sex: rowSex, row } of shared ? rows.slice(0, 1) : rows) {
-    const sex = shared ? "both sexes" : rowSex;
-    if (row.normal.lower !== undefined) {
-      limits.push({ sex, value: row.normal.lower, kind: "normal limit" });
-    }
-    if (row.normal.upper !== undefined) {
-      limits.push({ sex, value: row.normal.upper, kind: "normal limit" });
-    }
-    const p = row.partitions;
-    if (p) {
-      const cuts = p.direction === "high" ? [p.mild[1], p.moderate[1]] : [p.mild[0], p.moderate[0]];
-      for (const c of cuts) limits.push({ sex, value: c, kind: "severity cut point" });
-    }
-  }
+  const limits = adultLimitLines(parameter, table);
   const r0 = rows[0]!.row;
-  const yTitle = `${r0.label}${r0.unit === "1" ? "" : ` [${r0.unit}]`}`;
+  const yTitle = labelWithUnit(r0.quantity.label, r0.quantity.unit);
   const color = {
     field: "sex",
     type: "nominal",
@@ -410,7 +397,9 @@ export function adultLimitChart(parameter: string, options: AdultLimitChartOptio
       ],
     });
   }
-  const title = `${r0.label}: ${r0.source.authors.split(",")[0]} ${r0.source.year} limits by sex`;
+  const title = `${r0.quantity.label}: ${
+    r0.source.authors.split(",")[0]
+  } ${r0.source.year} limits by sex`;
   return new Chart({
     title,
     width: options.width ?? 520,

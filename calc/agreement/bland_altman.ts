@@ -5,83 +5,52 @@
  *
  * @module
  */
-import { checkConfidence, checkPairs, type Interval, mean, shown, sumSquares } from "./checks.ts";
+import {
+  checkConfidence,
+  checkMultiplier,
+  checkPairs,
+  displayed,
+  type Interval,
+  type LabelOptions,
+  mean,
+  measuredOf,
+  namesOf,
+  shown,
+  sumSquares,
+} from "./checks.ts";
 import { tCdf, tQuantile } from "../stats/distributions.ts";
 import { nonCentralTQuantile } from "./noncentral_t.ts";
+import { LIMITS_OF_AGREEMENT_CAUTION, NO_INTERVALS_CAUTION } from "./cautions.ts";
+import {
+  displayBlandAltman,
+  displayBlandAltmanRatio,
+  displayBlandAltmanRepeated,
+} from "../../display/agreement.ts";
+import type {
+  BlandAltmanRatioResult,
+  BlandAltmanRepeatedResult,
+  BlandAltmanResult,
+  LimitOfAgreement,
+  ProportionalBias,
+} from "./types.ts";
+import type { Measured } from "./types.ts";
 
 export type { Interval } from "./checks.ts";
 
 /** Options of {@linkcode blandAltman}. */
-export interface BlandAltmanOptions {
+export interface BlandAltmanOptions extends LabelOptions {
   /** Multiplier of the SD of differences for the limits of agreement: 1.96 (95 % limits under
    * normality) or 2 (as in Bland & Altman 1986); any value in (0, 5] is accepted.
    * @default 1.96 */
   readonly multiplier?: number;
   /** Confidence level of the intervals. @default 0.95 */
   readonly confidence?: number;
-}
-
-/** Regression of the differences on the means (check for proportional bias). */
-export interface ProportionalBias {
-  /** Slope of difference on mean (0 when there is no proportional bias). */
-  readonly slope: number;
-  /** Intercept (units of the measurement). */
-  readonly intercept: number;
-  /** Standard error of the slope. */
-  readonly slopeStandardError: number;
-  /** Confidence interval of the slope, t with n − 2 degrees of freedom. */
-  readonly slopeCi: Interval;
-  /** Two-sided p-value of the t test of slope = 0. */
-  readonly pValue: number;
-}
-
-/** One limit of agreement with its confidence intervals. */
-export interface LimitOfAgreement {
-  /** The limit: bias ∓ multiplier · SD. */
-  readonly value: number;
-  /** Approximate interval: limit ± t · SE, SE² = s²(1/n + z²/(2(n − 1))) (Bland & Altman 1999). */
-  readonly approximateCi: Interval;
-  /** Exact interval from the non-central t distribution (Carkeet 2015). */
-  readonly exactCi: Interval;
-}
-
-/** Result of {@linkcode blandAltman}. */
-export interface BlandAltmanResult {
-  /** Number of pairs. */
-  readonly n: number;
-  /** Differences a − b, in input order. */
-  readonly differences: readonly number[];
-  /** Means (a + b)/2, in input order. */
-  readonly means: readonly number[];
-  /** Mean difference a − b. */
-  readonly bias: number;
-  /** Confidence interval of the bias: bias ± t_{n−1} · s/√n. */
-  readonly biasCi: Interval;
-  /** Standard deviation of the differences (n − 1 denominator). */
-  readonly sdDifferences: number;
-  /** Multiplier used for the limits. */
-  readonly multiplier: number;
-  /** Confidence level of the intervals. */
-  readonly confidence: number;
-  /** Lower limit of agreement, bias − multiplier · SD. */
-  readonly lowerLimit: LimitOfAgreement;
-  /** Upper limit of agreement, bias + multiplier · SD. */
-  readonly upperLimit: LimitOfAgreement;
-  /** Regression of differences on means; null when fewer than 3 pairs or constant means. */
-  readonly proportionalBias: ProportionalBias | null;
+  /** Names of method A (minuend) and method B (subtrahend), for the display.
+   * @default ["A", "B"] */
+  readonly methodNames?: readonly [string, string];
 }
 
 const WHERE = "Bland-Altman analysis";
-
-function checkMultiplier(where: string, multiplier: unknown): number {
-  if (typeof multiplier !== "number") {
-    throw new TypeError(`${where}: expected 'multiplier' as a number, got ${shown(multiplier)}`);
-  }
-  if (!(multiplier > 0 && multiplier <= 5)) {
-    throw new RangeError(`${where}: expected 'multiplier' in (0, 5], got ${multiplier}`);
-  }
-  return multiplier;
-}
 
 /** Ordinary least squares of y on x with slope inference; null when x is constant or n < 3. */
 function regressSlope(
@@ -186,9 +155,11 @@ export function blandAltman(
   const [a, b] = checkPairs(WHERE, ["methodA", "methodB"], methodA, methodB);
   const multiplier = checkMultiplier(WHERE, options.multiplier ?? 1.96);
   const confidence = checkConfidence(WHERE, options.confidence ?? 0.95);
+  const quantity = measuredOf(WHERE, options.quantity);
+  const methodNames = namesOf(WHERE, "methodNames", options.methodNames, ["A", "B"]);
   const differences = a.map((v, i) => v - b[i]!);
   const means = a.map((v, i) => (v + b[i]!) / 2);
-  return fromDifferences(differences, means, multiplier, confidence);
+  return fromDifferences(differences, means, multiplier, confidence, quantity, methodNames);
 }
 
 function fromDifferences(
@@ -196,6 +167,8 @@ function fromDifferences(
   means: readonly number[],
   multiplier: number,
   confidence: number,
+  quantity: Measured | null,
+  methodNames: readonly [string, string],
 ): BlandAltmanResult {
   const n = differences.length;
   const bias = mean(differences);
@@ -208,7 +181,7 @@ function fromDifferences(
   const tq = tQuantile(0.5 + confidence / 2, n - 1);
   const seBias = sd / Math.sqrt(n);
   const limits = limitsFromSummary(bias, sd, n, multiplier, confidence);
-  return {
+  return displayed({
     n,
     differences,
     means,
@@ -220,27 +193,10 @@ function fromDifferences(
     lowerLimit: limits.lower,
     upperLimit: limits.upper,
     proportionalBias: regressSlope(means, differences, confidence),
-  };
-}
-
-/** Result of {@linkcode blandAltmanRatio}. */
-export interface BlandAltmanRatioResult {
-  /** The analysis of ln(a) − ln(b) (bias and limits in natural-log units). */
-  readonly log: BlandAltmanResult;
-  /** Geometric mean ratio a/b = exp(bias), with its interval. */
-  readonly ratio: { readonly value: number; readonly ci: Interval };
-  /** Limits of agreement for the ratio a/b, exp of the log limits (with exact intervals). */
-  readonly lowerRatioLimit: {
-    readonly value: number;
-    readonly exactCi: Interval;
-    readonly approximateCi: Interval;
-  };
-  /** Upper ratio limit, as {@linkcode BlandAltmanRatioResult.lowerRatioLimit}. */
-  readonly upperRatioLimit: {
-    readonly value: number;
-    readonly exactCi: Interval;
-    readonly approximateCi: Interval;
-  };
+    quantity,
+    methodNames,
+    cautions: [LIMITS_OF_AGREEMENT_CAUTION],
+  }, displayBlandAltman);
 }
 
 /**
@@ -287,41 +243,25 @@ export function blandAltmanRatio(
       throw new RangeError(`${where}: expected 'methodB[${i}]' > 0 for logarithms, got ${v}`);
     }
   });
-  const log = blandAltman(a.map(Math.log), b.map(Math.log), options);
+  const quantity = measuredOf(where, options.quantity);
+  const { quantity: _stated, ...rest } = options;
+  const log = blandAltman(a.map(Math.log), b.map(Math.log), {
+    ...rest,
+    ...(quantity ? { quantity: { label: `ln ${quantity.label}`, unit: "1" } } : {}),
+  });
   const ex = (i: Interval): Interval => ({ lower: Math.exp(i.lower), upper: Math.exp(i.upper) });
   const limit = (l: LimitOfAgreement) => ({
     value: Math.exp(l.value),
     exactCi: ex(l.exactCi),
     approximateCi: ex(l.approximateCi),
   });
-  return {
+  return displayed({
+    quantity,
     log,
     ratio: { value: Math.exp(log.bias), ci: ex(log.biasCi) },
     lowerRatioLimit: limit(log.lowerLimit),
     upperRatioLimit: limit(log.upperLimit),
-  };
-}
-
-/** Result of {@linkcode blandAltmanRepeated}. */
-export interface BlandAltmanRepeatedResult {
-  /** Number of subjects. */
-  readonly subjects: number;
-  /** Number of pairs (all subjects). */
-  readonly pairs: number;
-  /** Mean of all differences a − b. */
-  readonly bias: number;
-  /** Between-subject variance component of the differences (truncated at 0). */
-  readonly betweenSubjectVariance: number;
-  /** Within-subject variance of the differences (one-way ANOVA residual mean square). */
-  readonly withinSubjectVariance: number;
-  /** SD of a single difference: √(between + within). */
-  readonly sdDifferences: number;
-  /** Multiplier used. */
-  readonly multiplier: number;
-  /** bias − multiplier · SD. */
-  readonly lowerLimit: number;
-  /** bias + multiplier · SD. */
-  readonly upperLimit: number;
+  }, displayBlandAltmanRatio);
 }
 
 /**
@@ -363,11 +303,13 @@ export function blandAltmanRepeated(
   subjectIds: readonly (string | number)[],
   methodA: readonly number[],
   methodB: readonly number[],
-  options: { readonly multiplier?: number } = {},
+  options: Pick<BlandAltmanOptions, "multiplier" | "methodNames" | "quantity"> = {},
 ): BlandAltmanRepeatedResult {
   const where = "Bland-Altman repeated-measures analysis";
   const [a, b] = checkPairs(where, ["methodA", "methodB"], methodA, methodB);
   const multiplier = checkMultiplier(where, options.multiplier ?? 1.96);
+  const quantity = measuredOf(where, options.quantity);
+  const methodNames = namesOf(where, "methodNames", options.methodNames, ["A", "B"]);
   if (!Array.isArray(subjectIds) || subjectIds.length !== a.length) {
     throw new TypeError(
       `${where}: expected 'subjectIds' with one entry per pair (${a.length}), got ${
@@ -414,7 +356,7 @@ export function blandAltmanRepeated(
   if (!(sd > 0)) {
     throw new RangeError(`${where}: expected differences that vary, got SD ${sd}`);
   }
-  return {
+  return displayed({
     subjects: n,
     pairs: N,
     bias: grand,
@@ -424,5 +366,8 @@ export function blandAltmanRepeated(
     multiplier,
     lowerLimit: grand - multiplier * sd,
     upperLimit: grand + multiplier * sd,
-  };
+    quantity,
+    methodNames,
+    cautions: [NO_INTERVALS_CAUTION, LIMITS_OF_AGREEMENT_CAUTION],
+  }, displayBlandAltmanRepeated);
 }

@@ -3,27 +3,27 @@
  *
  * @module
  */
-import { checkConfidence, checkPairs, type Interval, mean, sumSquares } from "./checks.ts";
+import {
+  checkConfidence,
+  checkPairs,
+  displayed,
+  type LabelOptions,
+  mean,
+  measuredOf,
+  namesOf,
+  sumSquares,
+} from "./checks.ts";
 import { normalQuantile } from "../stats/distributions.ts";
+import { SUBJECT_SPREAD_CAUTION } from "./cautions.ts";
+import { displayConcordance } from "../../display/agreement.ts";
+import type { ConcordanceResult } from "./types.ts";
 
-/** Result of {@linkcode concordanceCorrelation}. */
-export interface ConcordanceResult {
-  /** Number of pairs. */
-  readonly n: number;
-  /** Concordance correlation coefficient ρ_c. */
-  readonly value: number;
-  /** Interval from Fisher's z-transform of ρ_c. */
-  readonly ci: Interval;
-  /** Confidence level. */
-  readonly confidence: number;
-  /** Pearson correlation r (precision). */
-  readonly pearson: number;
-  /** Bias-correction factor C_b = ρ_c / r (accuracy). */
-  readonly biasCorrectionFactor: number;
-  /** Location shift u = (x̄ − ȳ)/√(s_x s_y). */
-  readonly locationShift: number;
-  /** Scale shift v = s_x/s_y. */
-  readonly scaleShift: number;
+/** Options of {@linkcode concordanceCorrelation}. */
+export interface ConcordanceOptions extends LabelOptions {
+  /** Confidence level of the interval. @default 0.95 */
+  readonly confidence?: number;
+  /** Names of methods X and Y, for the display. @default ["X", "Y"] */
+  readonly methodNames?: readonly [string, string];
 }
 
 /**
@@ -58,11 +58,13 @@ export interface ConcordanceResult {
 export function concordanceCorrelation(
   x: readonly number[],
   y: readonly number[],
-  options: { readonly confidence?: number } = {},
+  options: ConcordanceOptions = {},
 ): ConcordanceResult {
   const where = "Concordance correlation";
   const [a, b] = checkPairs(where, ["x", "y"], x, y, 3);
   const confidence = checkConfidence(where, options.confidence ?? 0.95);
+  const quantity = measuredOf(where, options.quantity);
+  const methodNames = namesOf(where, "methodNames", options.methodNames, ["X", "Y"]);
   const n = a.length;
   const mx = mean(a);
   const my = mean(b);
@@ -88,7 +90,7 @@ export function concordanceCorrelation(
     (rc ** 4 * u ** 4) / (2 * r * r * (1 - rc * rc) ** 2)) / (n - 2);
   const z = Math.atanh(rc);
   const half = normalQuantile(0.5 + confidence / 2) * Math.sqrt(varZ);
-  return {
+  return displayed({
     n,
     value: rc,
     ci: { lower: Math.tanh(z - half), upper: Math.tanh(z + half) },
@@ -97,5 +99,8 @@ export function concordanceCorrelation(
     biasCorrectionFactor: rc / r,
     locationShift: u,
     scaleShift: Math.sqrt(sxx / syy),
-  };
+    quantity,
+    methodNames,
+    cautions: [SUBJECT_SPREAD_CAUTION],
+  }, displayConcordance);
 }

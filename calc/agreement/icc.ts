@@ -4,52 +4,25 @@
  *
  * @module
  */
-import { checkConfidence, checkNumbers, type Interval, mean, shown } from "./checks.ts";
+import {
+  checkConfidence,
+  checkNumbers,
+  displayed,
+  type Interval,
+  type LabelOptions,
+  mean,
+  measuredOf,
+  shown,
+} from "./checks.ts";
 import { fCdf, fQuantile } from "../stats/distributions.ts";
+import { SUBJECT_SPREAD_CAUTION } from "./cautions.ts";
+import { displayIntraclassCorrelation } from "../../display/agreement.ts";
+import type { IntraclassCorrelation, IntraclassCorrelationResult } from "./types.ts";
 
-/** One intraclass correlation form. */
-export interface IntraclassCorrelation {
-  /** Shrout & Fleiss name, e.g. "ICC(2,1)". */
-  readonly form: "ICC(1,1)" | "ICC(2,1)" | "ICC(3,1)" | "ICC(1,k)" | "ICC(2,k)" | "ICC(3,k)";
-  /** McGraw & Wong name, e.g. "ICC(A,1)". */
-  readonly mcGrawWong: "ICC(1)" | "ICC(k)" | "ICC(A,1)" | "ICC(A,k)" | "ICC(C,1)" | "ICC(C,k)";
-  /** Model in words. */
-  readonly model: string;
-  /** "single" (one rater's reading) or "average" (mean of the k raters). */
-  readonly unit: "single" | "average";
-  /** "absolute agreement" or "consistency". */
-  readonly definition: "absolute agreement" | "consistency";
-  /** Point estimate. */
-  readonly value: number;
-  /** F-based confidence interval. */
-  readonly ci: Interval;
-  /** F statistic of the test ICC = 0. */
-  readonly f: number;
-  /** Numerator degrees of freedom of the F test. */
-  readonly df1: number;
-  /** Denominator degrees of freedom. */
-  readonly df2: number;
-  /** p-value of the F test (upper tail). */
-  readonly pValue: number;
-}
-
-/** Result of {@linkcode intraclassCorrelations}. */
-export interface IntraclassCorrelationResult {
-  /** Number of subjects (rows). */
-  readonly subjects: number;
-  /** Number of raters or methods (columns). */
-  readonly raters: number;
-  /** Mean squares: between subjects, between raters, residual, within subjects (one-way). */
-  readonly meanSquares: {
-    readonly subjects: number;
-    readonly raters: number;
-    readonly residual: number;
-    readonly within: number;
-  };
-  /** Confidence level. */
-  readonly confidence: number;
-  /** The six forms in the order ICC(1,1), ICC(2,1), ICC(3,1), ICC(1,k), ICC(2,k), ICC(3,k). */
-  readonly forms: readonly IntraclassCorrelation[];
+/** Options of {@linkcode intraclassCorrelations}. */
+export interface IntraclassCorrelationOptions extends LabelOptions {
+  /** Confidence level of the intervals. @default 0.95 */
+  readonly confidence?: number;
 }
 
 /**
@@ -92,7 +65,7 @@ export interface IntraclassCorrelationResult {
  */
 export function intraclassCorrelations(
   ratings: readonly (readonly number[])[],
-  options: { readonly confidence?: number } = {},
+  options: IntraclassCorrelationOptions = {},
 ): IntraclassCorrelationResult {
   const where = "Intraclass correlation";
   if (!Array.isArray(ratings)) {
@@ -113,6 +86,7 @@ export function intraclassCorrelations(
     }
   });
   const confidence = checkConfidence(where, options.confidence ?? 0.95);
+  const quantity = measuredOf(where, options.quantity);
   const grand = mean(rows.flat());
   const rowMeans = rows.map((r) => mean(r));
   const colMeans = Array.from({ length: k }, (_, j) => mean(rows.map((r) => r[j]!)));
@@ -188,7 +162,7 @@ export function intraclassCorrelations(
   const oneWay = "one-way random effects";
   const twoWayRandom = "two-way random effects (raters a random sample)";
   const twoWayMixed = "two-way mixed effects (these raters only)";
-  return {
+  return displayed({
     subjects: n,
     raters: k,
     meanSquares: { subjects: msr, raters: msc, residual: mse, within: msw },
@@ -285,5 +259,7 @@ export function intraclassCorrelations(
         d3b,
       ),
     ],
-  };
+    quantity,
+    cautions: [SUBJECT_SPREAD_CAUTION],
+  }, displayIntraclassCorrelation);
 }

@@ -4,49 +4,29 @@
  *
  * @module
  */
-import { checkConfidence, type Interval, shown } from "./checks.ts";
+import {
+  checkConfidence,
+  displayed,
+  type LabelOptions,
+  measuredOf,
+  namesOf,
+  shown,
+} from "./checks.ts";
 import { normalCdf, normalQuantile } from "../stats/distributions.ts";
-
-/** Agreement weights for ordered categories. */
-export type KappaWeights = "none" | "linear" | "quadratic";
+import { KAPPA_CAUTION } from "./cautions.ts";
+import { displayCohenKappa, displayFleissKappa } from "../../display/agreement.ts";
+import type { CohenKappaResult, FleissKappaResult, KappaWeights } from "./types.ts";
 
 /** Options of {@linkcode cohenKappa}. */
-export interface CohenKappaOptions {
+export interface CohenKappaOptions extends LabelOptions {
   /** "none" (Cohen 1960), "linear" (wᵢⱼ = 1 − |i − j|/(c − 1)) or "quadratic"
    * (wᵢⱼ = 1 − (i − j)²/(c − 1)²). @default "none" */
   readonly weights?: KappaWeights;
   /** Confidence level of the interval κ ± z·SE. @default 0.95 */
   readonly confidence?: number;
-}
-
-/** Result of {@linkcode cohenKappa} and {@linkcode cohenKappaFromTable}. */
-export interface CohenKappaResult {
-  /** Number of subjects rated by both raters. */
-  readonly n: number;
-  /** Weights used. */
-  readonly weights: KappaWeights;
-  /** Categories in table order (rows: rater A, columns: rater B). */
-  readonly categories: readonly string[];
-  /** The c × c table of counts. */
-  readonly table: readonly (readonly number[])[];
-  /** Observed (weighted) agreement p_o. */
-  readonly observedAgreement: number;
-  /** Agreement expected by chance p_e. */
-  readonly expectedAgreement: number;
-  /** κ = (p_o − p_e)/(1 − p_e). */
-  readonly kappa: number;
-  /** Large-sample standard error of κ (for the interval; Fleiss, Cohen & Everitt 1969). */
-  readonly standardError: number;
-  /** Standard error under κ = 0 (for the test). */
-  readonly standardErrorNull: number;
-  /** κ ± z·SE, clipped to [−1, 1]. */
-  readonly ci: Interval;
-  /** Confidence level. */
-  readonly confidence: number;
-  /** z = κ / SE₀. */
-  readonly z: number;
-  /** Two-sided p-value of κ = 0. */
-  readonly pValue: number;
+  /** Names of rater A (table rows) and rater B (columns), for the display.
+   * @default ["A", "B"] */
+  readonly raterNames?: readonly [string, string];
 }
 
 function weightMatrix(c: number, weights: KappaWeights): number[][] {
@@ -105,6 +85,8 @@ export function cohenKappaFromTable(
   const where = "Cohen kappa";
   const weights = checkWeights(where, options.weights ?? "none");
   const confidence = checkConfidence(where, options.confidence ?? 0.95);
+  const quantity = measuredOf(where, options.quantity);
+  const raterNames = namesOf(where, "raterNames", options.raterNames, ["A", "B"]);
   if (!Array.isArray(table) || table.length < 2) {
     throw new TypeError(
       `${where}: expected 'table' as a square array of at least 2 rows, got ${shown(table)}`,
@@ -173,7 +155,7 @@ export function cohenKappaFromTable(
   const se0 = Math.sqrt(Math.max(0, (a0 - pe * pe) / denom));
   const zq = normalQuantile(0.5 + confidence / 2);
   const z = se0 > 0 ? kappa / se0 : 0;
-  return {
+  return displayed({
     n,
     weights,
     categories: [...categories],
@@ -187,7 +169,10 @@ export function cohenKappaFromTable(
     confidence,
     z,
     pValue: 2 * (1 - normalCdf(Math.abs(z))),
-  };
+    quantity,
+    raterNames,
+    cautions: [KAPPA_CAUTION],
+  }, displayCohenKappa);
 }
 
 /**
@@ -276,24 +261,10 @@ export function cohenKappa(
   return cohenKappaFromTable(table, { ...rest, categories });
 }
 
-/** Result of {@linkcode fleissKappa}. */
-export interface FleissKappaResult {
-  /** Number of subjects. */
-  readonly subjects: number;
-  /** Ratings per subject (m). */
-  readonly ratersPerSubject: number;
-  /** Mean observed agreement P̄. */
-  readonly observedAgreement: number;
-  /** Chance agreement P̄_e = Σ p_j². */
-  readonly expectedAgreement: number;
-  /** κ = (P̄ − P̄_e)/(1 − P̄_e). */
-  readonly kappa: number;
-  /** Standard error under κ = 0 (Fleiss, Nee & Landis 1979). */
-  readonly standardErrorNull: number;
-  /** z = κ/SE₀. */
-  readonly z: number;
-  /** Two-sided p-value of κ = 0. */
-  readonly pValue: number;
+/** Options of {@linkcode fleissKappa}. */
+export interface FleissKappaOptions extends LabelOptions {
+  /** Category labels in column order, for the display. @default "1".."c" */
+  readonly categories?: readonly string[];
 }
 
 /**
@@ -310,6 +281,7 @@ export interface FleissKappaResult {
  * doi:10.1037/0033-2909.86.5.974.
  *
  * @param counts N rows (subjects) × c columns (categories): how many raters chose each category.
+ * @param options Category labels and what was rated, for the display.
  * @returns κ with its null standard error and test.
  * @throws {TypeError} When rows differ in length or hold non-numbers.
  * @throws {RangeError} For fewer than 2 subjects, negative or non-integer counts, rows with
@@ -325,8 +297,12 @@ export interface FleissKappaResult {
  * assert.ok(r.kappa > 0.4 && r.kappa < 0.7);
  * ```
  */
-export function fleissKappa(counts: readonly (readonly number[])[]): FleissKappaResult {
+export function fleissKappa(
+  counts: readonly (readonly number[])[],
+  options: FleissKappaOptions = {},
+): FleissKappaResult {
   const where = "Fleiss kappa";
+  const quantity = measuredOf(where, options.quantity);
   if (!Array.isArray(counts)) {
     throw new TypeError(
       `${where}: expected 'counts' as an array of rows (subjects), got ${shown(counts)}`,
@@ -364,6 +340,10 @@ export function fleissKappa(counts: readonly (readonly number[])[]): FleissKappa
     }
   });
   if (m < 2) throw new RangeError(`${where}: expected at least 2 ratings per subject, got ${m}`);
+  const categories = options.categories ?? Array.from({ length: c }, (_, i) => String(i + 1));
+  if (categories.length !== c) {
+    throw new TypeError(`${where}: expected ${c} category labels, got ${categories.length}`);
+  }
   const pj = Array.from({ length: c }, (_, j) => counts.reduce((s, r) => s + r[j]!, 0) / (N * m));
   const pBar = counts.reduce(
     (s, r) => s + (r.reduce((t: number, v: number) => t + v * v, 0) - m) / (m * (m - 1)),
@@ -380,7 +360,7 @@ export function fleissKappa(counts: readonly (readonly number[])[]): FleissKappa
   const pqqp = pj.reduce((s, p) => s + p * (1 - p) * (1 - 2 * p), 0);
   const se0 = (Math.sqrt(2 / (N * m * (m - 1))) * Math.sqrt(Math.max(0, pq * pq - pqqp))) / pq;
   const z = kappa / se0;
-  return {
+  return displayed({
     subjects: N,
     ratersPerSubject: m,
     observedAgreement: pBar,
@@ -389,5 +369,8 @@ export function fleissKappa(counts: readonly (readonly number[])[]): FleissKappa
     standardErrorNull: se0,
     z,
     pValue: 2 * (1 - normalCdf(Math.abs(z))),
-  };
+    quantity,
+    categories: [...categories],
+    cautions: [KAPPA_CAUTION],
+  }, displayFleissKappa);
 }

@@ -1,47 +1,95 @@
 /**
  * Method-validation statistics: agreement between methods (Bland–Altman, concordance, Deming and
  * Passing–Bablok regression), reproducibility (repeatability, intraclass correlation) and
- * agreement on graded findings (Cohen's and Fleiss' kappa), with the distributions they need.
+ * agreement on graded findings (Cohen's and Fleiss' kappa), with the distributions they need;
+ * and the method-validation analysis of a whole table, returning a report object.
  *
  * @module
  */
+export type { Interval, LabelOptions } from "./checks.ts";
+export type {
+  BlandAltmanRatioResult,
+  BlandAltmanRepeatedResult,
+  BlandAltmanResult,
+  CohenKappaResult,
+  ConcordanceResult,
+  DemingResult,
+  FittedLine,
+  FleissKappaResult,
+  IntraclassCorrelation,
+  IntraclassCorrelationResult,
+  KappaWeights,
+  LimitOfAgreement,
+  Measured,
+  MissingReading,
+  PassingBablokResult,
+  ProportionalBias,
+  RepeatabilityResult,
+} from "./types.ts";
 export { nonCentralTCdf, nonCentralTQuantile } from "./noncentral_t.ts";
 export {
   blandAltman,
   type BlandAltmanOptions,
   blandAltmanRatio,
-  type BlandAltmanRatioResult,
   blandAltmanRepeated,
-  type BlandAltmanRepeatedResult,
-  type BlandAltmanResult,
-  type LimitOfAgreement,
-  type ProportionalBias,
 } from "./bland_altman.ts";
-export {
-  repeatability,
-  type RepeatabilityOptions,
-  type RepeatabilityResult,
-} from "./repeatability.ts";
-export {
-  type IntraclassCorrelation,
-  type IntraclassCorrelationResult,
-  intraclassCorrelations,
-} from "./icc.ts";
-export { concordanceCorrelation, type ConcordanceResult } from "./concordance.ts";
+export { repeatability, type RepeatabilityOptions } from "./repeatability.ts";
+export { type IntraclassCorrelationOptions, intraclassCorrelations } from "./icc.ts";
+export { concordanceCorrelation, type ConcordanceOptions } from "./concordance.ts";
 export {
   type DemingOptions,
   demingRegression,
-  type DemingResult,
-  type FittedLine,
+  type PassingBablokOptions,
   passingBablokRegression,
-  type PassingBablokResult,
+  type RegressionOptions,
 } from "./regression.ts";
 export {
   cohenKappa,
   cohenKappaFromTable,
   type CohenKappaOptions,
-  type CohenKappaResult,
   fleissKappa,
-  type FleissKappaResult,
-  type KappaWeights,
+  type FleissKappaOptions,
 } from "./kappa.ts";
+export {
+  AGREEMENT_NOT_A_DIAGNOSIS,
+  ERROR_RATIO_CAUTION,
+  KAPPA_CAUTION,
+  LIMITS_OF_AGREEMENT_CAUTION,
+  NO_INTERVALS_CAUTION,
+  SAMPLE_CAUTION,
+  SUBJECT_SPREAD_CAUTION,
+} from "./cautions.ts";
+export {
+  statedQuantity,
+  type StatedQuantityOptions,
+  type ValidationColumns,
+  validationColumns,
+  type ValidationDesignOptions,
+  validationReadOptions,
+} from "./validation_columns.ts";
+export {
+  type GradedReadings,
+  type MeasuredReadings,
+  type PairedReadings,
+  pairedReadings,
+  type Reading,
+  type StudyReadings,
+  type ValidationReadings,
+  validationReadings,
+} from "./validation_table.ts";
+export { methodValidation, type MethodValidationOptions, NO_VERDICT } from "./method_validation.ts";
+export type {
+  DataSummary,
+  FigurePlan,
+  IccAnalysis,
+  KappaAnalysis,
+  KappaPair,
+  MethodComparison,
+  MethodValidationReport,
+  ObserverRepeatability,
+  ObserverSummary,
+  Outcome,
+  Provenance,
+  ProvenanceDetails,
+  StudyDescription,
+} from "./report_types.ts";

@@ -7,59 +7,81 @@
 import {
   checkConfidence,
   checkPairs,
-  type Interval,
+  displayed,
+  type LabelOptions,
   mean,
+  measuredOf,
   median,
+  namesOf,
   shown,
   sumSquares,
 } from "./checks.ts";
 import { normalQuantile, tQuantile } from "../stats/distributions.ts";
+import { ERROR_RATIO_CAUTION } from "./cautions.ts";
+import { displayRegression } from "../../display/agreement.ts";
+import type { DemingResult, PassingBablokResult } from "./types.ts";
+
+/** Options of both regressions. */
+export interface RegressionOptions extends LabelOptions {
+  /** Confidence level of the intervals. @default 0.95 */
+  readonly confidence?: number;
+  /** Names of method X (comparison) and method Y (test), for the display.
+   * @default ["X", "Y"] */
+  readonly methodNames?: readonly [string, string];
+}
 
 /** Options of {@linkcode demingRegression}. */
-export interface DemingOptions {
+export interface DemingOptions extends RegressionOptions {
   /** Ratio of the error variances, var(error of y) / var(error of x); 1 gives orthogonal
    * regression. Estimate it from replicate readings of each method. @default 1 */
   readonly errorVarianceRatio?: number;
-  /** Confidence level of the jackknife intervals. @default 0.95 */
-  readonly confidence?: number;
 }
 
-/** A fitted line y = intercept + slope · x with intervals. */
-export interface FittedLine {
-  /** Number of pairs. */
-  readonly n: number;
-  /** Slope. */
-  readonly slope: number;
-  /** Interval of the slope. */
-  readonly slopeCi: Interval;
-  /** Intercept (units of y). */
-  readonly intercept: number;
-  /** Interval of the intercept. */
-  readonly interceptCi: Interval;
-  /** Confidence level. */
-  readonly confidence: number;
+/** Options of {@linkcode passingBablokRegression}. */
+export interface PassingBablokOptions extends RegressionOptions {
+  /** Largest number of pairs accepted: the method sorts all n(n − 1)/2 pairwise slopes, whose
+   * memory grows with the square of n (10 000 pairs: 50 million slopes, 400 MB).
+   * @default 10000 */
+  readonly maxPairs?: number;
 }
 
-/** Result of {@linkcode demingRegression}. */
-export interface DemingResult extends FittedLine {
-  /** Error variance ratio used. */
-  readonly errorVarianceRatio: number;
-  /** Jackknife standard error of the slope. */
-  readonly slopeStandardError: number;
-  /** Jackknife standard error of the intercept. */
-  readonly interceptStandardError: number;
+/** Centred sums of a paired sample: means and S_xx, S_yy, S_xy. */
+interface Moments {
+  readonly mx: number;
+  readonly my: number;
+  readonly sxx: number;
+  readonly syy: number;
+  readonly sxy: number;
 }
 
-function demingFit(x: readonly number[], y: readonly number[], lambda: number): [number, number] {
+function moments(x: readonly number[], y: readonly number[]): Moments {
   const mx = mean(x);
   const my = mean(y);
-  const sxx = sumSquares(x, mx);
-  const syy = sumSquares(y, my);
   let sxy = 0;
   for (let i = 0; i < x.length; i++) sxy += (x[i]! - mx) * (y[i]! - my);
-  const d = syy - lambda * sxx;
-  const slope = (d + Math.sqrt(d * d + 4 * lambda * sxy * sxy)) / (2 * sxy);
-  return [slope, my - slope * mx];
+  return { mx, my, sxx: sumSquares(x, mx), syy: sumSquares(y, my), sxy };
+}
+
+/** The moments without pair i (n ≥ 3): the centred sums downdated by n/(n − 1)·dx·dy (the
+ * removal step of Welford's updating formulas), so the jackknife costs O(n), not O(n²). */
+function without(m: Moments, n: number, xi: number, yi: number): Moments {
+  const dx = xi - m.mx;
+  const dy = yi - m.my;
+  const w = n / (n - 1);
+  return {
+    mx: m.mx - dx / (n - 1),
+    my: m.my - dy / (n - 1),
+    sxx: m.sxx - w * dx * dx,
+    syy: m.syy - w * dy * dy,
+    sxy: m.sxy - w * dx * dy,
+  };
+}
+
+/** Deming slope and intercept of the moments. */
+function demingFit(m: Moments, lambda: number): [slope: number, intercept: number] {
+  const d = m.syy - lambda * m.sxx;
+  const slope = (d + Math.sqrt(d * d + 4 * lambda * m.sxy * m.sxy)) / (2 * m.sxy);
+  return [slope, m.my - slope * m.mx];
 }
 
 /**
@@ -69,7 +91,8 @@ function demingFit(x: readonly number[], y: readonly number[], lambda: number): 
  * Formulas: with S_xx, S_yy, S_xy the centred sums and λ = var(ε_y)/var(ε_x),
  * slope b = [S_yy − λS_xx + √((S_yy − λS_xx)² + 4λS_xy²)] / (2S_xy), intercept a = ȳ − b·x̄.
  * Jackknife: leave-one-out estimates b₍ᵢ₎; SE = √((n − 1)/n · Σ(b₍ᵢ₎ − b̄₍·₎)²); interval
- * b ± t_{n−2, 1−α/2}·SE (same for a).
+ * b ± t_{n−2, 1−α/2}·SE (same for a). Each leave-one-out fit downdates the centred sums,
+ * S′_xy = S_xy − n/(n − 1)·(xᵢ − x̄)(yᵢ − ȳ), so the whole jackknife costs O(n).
  *
  * Sources: Deming WE (1943) Statistical Adjustment of Data, Wiley; Linnet K (1990) Estimation of
  * the linear relationship between the measurements of two methods with proportional errors.
@@ -78,7 +101,7 @@ function demingFit(x: readonly number[], y: readonly number[], lambda: number): 
  *
  * @param x Readings by the comparison (reference) method.
  * @param y Readings by the test method, same subjects and order.
- * @param options Error variance ratio (default 1) and confidence level.
+ * @param options Error variance ratio (default 1), confidence level, labels for the display.
  * @returns Slope and intercept with jackknife intervals.
  * @throws {TypeError} When inputs are not arrays of numbers of equal length.
  * @throws {RangeError} For fewer than 3 pairs, non-finite readings, an error variance ratio
@@ -110,27 +133,26 @@ export function demingRegression(
     throw new RangeError(`${where}: expected 'errorVarianceRatio' in (0, ∞), got ${lambda}`);
   }
   const confidence = checkConfidence(where, options.confidence ?? 0.95);
-  const check = (xs: readonly number[], ys: readonly number[], what: string) => {
-    const mx = mean(xs);
-    const my = mean(ys);
-    let sxy = 0;
-    for (let i = 0; i < xs.length; i++) sxy += (xs[i]! - mx) * (ys[i]! - my);
-    if (!(Math.abs(sxy) > 0)) {
+  const quantity = measuredOf(where, options.quantity);
+  const methodNames = namesOf(where, "methodNames", options.methodNames, ["X", "Y"]);
+  const check = (m: Moments, what: string) => {
+    // a downdated covariance is exact only to rounding: below 1e-12 of √(S_xx S_yy) it is none
+    if (!(Math.abs(m.sxy) > 1e-12 * Math.sqrt(m.sxx * m.syy))) {
       throw new RangeError(
-        `${where}: expected a linear association between x and y${what}, got covariance ${sxy}`,
+        `${where}: expected a linear association between x and y${what}, got covariance ${m.sxy}`,
       );
     }
   };
-  check(a, b, "");
-  const [slope, intercept] = demingFit(a, b, lambda);
+  const all = moments(a, b);
+  check(all, "");
+  const [slope, intercept] = demingFit(all, lambda);
   const n = a.length;
   const slopes: number[] = [];
   const intercepts: number[] = [];
   for (let i = 0; i < n; i++) {
-    const xs = a.filter((_, j) => j !== i);
-    const ys = b.filter((_, j) => j !== i);
-    check(xs, ys, ` without pair ${i}`);
-    const [s, c] = demingFit(xs, ys, lambda);
+    const m = without(all, n, a[i]!, b[i]!);
+    check(m, ` without pair ${i}`);
+    const [s, c] = demingFit(m, lambda);
     slopes.push(s);
     intercepts.push(c);
   }
@@ -138,7 +160,8 @@ export function demingRegression(
   const seSlope = jackSe(slopes);
   const seIntercept = jackSe(intercepts);
   const tq = tQuantile(0.5 + confidence / 2, n - 2);
-  return {
+  return displayed({
+    method: "Deming",
     n,
     slope,
     slopeCi: { lower: slope - tq * seSlope, upper: slope + tq * seSlope },
@@ -148,22 +171,10 @@ export function demingRegression(
     errorVarianceRatio: lambda,
     slopeStandardError: seSlope,
     interceptStandardError: seIntercept,
-  };
-}
-
-/** Result of {@linkcode passingBablokRegression}. */
-export interface PassingBablokResult extends FittedLine {
-  /** Number of pairwise slopes used (pairs with equal x and y, or slope −1, are left out). */
-  readonly slopesUsed: number;
-  /** Cusum linearity check (Passing & Bablok 1983 §4). */
-  readonly linearity: {
-    /** max |cusum| / √(L + 1), L = number of points below the line. */
-    readonly statistic: number;
-    /** Critical value 1.36 (Kolmogorov–Smirnov, α = 0.05). */
-    readonly criticalValue: number;
-    /** True when the statistic exceeds the critical value (deviation from linearity). */
-    readonly nonLinear: boolean;
-  };
+    quantity,
+    methodNames,
+    cautions: [ERROR_RATIO_CAUTION],
+  }, displayRegression<DemingResult>);
 }
 
 /**
@@ -185,11 +196,14 @@ export interface PassingBablokResult extends FittedLine {
  *
  * @param x Readings by the comparison method.
  * @param y Readings by the test method, same subjects and order.
- * @param options Confidence level (default 0.95).
+ * Cost: O(n² log n) time and O(n²) memory (every pairwise slope is kept and sorted).
+ *
+ * @param options Confidence level (default 0.95), largest number of pairs, display labels.
  * @returns Slope and intercept with intervals, and the linearity check.
  * @throws {TypeError} When inputs are not arrays of numbers of equal length.
- * @throws {RangeError} For fewer than 3 pairs, non-finite readings, too few usable slopes for an
- * interval, or a slope ≤ 0 (the method assumes positively related methods).
+ * @throws {RangeError} For fewer than 3 pairs or more than `maxPairs`, non-finite readings, too
+ * few usable slopes for an interval, or a slope ≤ 0 (the method assumes positively related
+ * methods).
  *
  * @example
  * ```ts
@@ -203,13 +217,23 @@ export interface PassingBablokResult extends FittedLine {
 export function passingBablokRegression(
   x: readonly number[],
   y: readonly number[],
-  options: { readonly confidence?: number } = {},
+  options: PassingBablokOptions = {},
 ): PassingBablokResult {
   const where = "Passing-Bablok regression";
   const [a, b] = checkPairs(where, ["x", "y"], x, y, 3);
   const confidence = checkConfidence(where, options.confidence ?? 0.95);
+  const quantity = measuredOf(where, options.quantity);
+  const methodNames = namesOf(where, "methodNames", options.methodNames, ["X", "Y"]);
+  const maxPairs = options.maxPairs ?? 10000;
   const n = a.length;
-  const slopes: number[] = [];
+  if (!(n <= maxPairs)) {
+    throw new RangeError(
+      `${where}: expected at most ${maxPairs} pairs ('maxPairs'; the method sorts all n(n − 1)/2 pairwise slopes), got ${n}`,
+    );
+  }
+  const all = new Float64Array((n * (n - 1)) / 2);
+  let N = 0;
+  let K = 0;
   for (let i = 0; i < n; i++) {
     for (let j = i + 1; j < n; j++) {
       const dx = a[j]! - a[i]!;
@@ -217,12 +241,11 @@ export function passingBablokRegression(
       if (dx === 0 && dy === 0) continue;
       const s = dx === 0 ? (dy > 0 ? Infinity : -Infinity) : dy / dx;
       if (s === -1) continue;
-      slopes.push(s);
+      all[N++] = s;
+      if (s < -1) K++;
     }
   }
-  slopes.sort((p, q) => p - q);
-  const N = slopes.length;
-  const K = slopes.filter((s) => s < -1).length;
+  const slopes = all.subarray(0, N).sort();
   const at = (i: number) => {
     const v = slopes[i - 1];
     if (v === undefined) {
@@ -271,7 +294,8 @@ export function passingBablokRegression(
     maxAbs = Math.max(maxAbs, Math.abs(cusum));
   }
   const statistic = maxAbs / Math.sqrt(below + 1);
-  return {
+  return displayed({
+    method: "Passing–Bablok",
     n,
     slope,
     slopeCi: { lower: slopeLow, upper: slopeHigh },
@@ -280,5 +304,8 @@ export function passingBablokRegression(
     confidence,
     slopesUsed: N,
     linearity: { statistic, criticalValue: 1.36, nonLinear: statistic > 1.36 },
-  };
+    quantity,
+    methodNames,
+    cautions: [],
+  }, displayRegression<PassingBablokResult>);
 }

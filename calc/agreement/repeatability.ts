@@ -4,40 +4,28 @@
  *
  * @module
  */
-import { checkConfidence, checkNumbers, type Interval, mean, shown, sumSquares } from "./checks.ts";
+import {
+  checkConfidence,
+  checkMultiplier,
+  checkNumbers,
+  displayed,
+  type LabelOptions,
+  mean,
+  measuredOf,
+  shown,
+  sumSquares,
+} from "./checks.ts";
 import { chiSquareQuantile } from "../stats/distributions.ts";
+import { displayRepeatability } from "../../display/agreement.ts";
+import type { RepeatabilityResult } from "./types.ts";
 
 /** Options of {@linkcode repeatability}. */
-export interface RepeatabilityOptions {
+export interface RepeatabilityOptions extends LabelOptions {
   /** Multiplier z in the repeatability coefficient z·√2·s_w: 1.96 (coefficient 2.77·s_w) or 2
    * (the British Standards Institution coefficient used by Bland & Altman 1986). @default 1.96 */
   readonly multiplier?: number;
   /** Confidence level of the interval of s_w. @default 0.95 */
   readonly confidence?: number;
-}
-
-/** Result of {@linkcode repeatability}. */
-export interface RepeatabilityResult {
-  /** Number of subjects. */
-  readonly subjects: number;
-  /** Number of readings. */
-  readonly readings: number;
-  /** Degrees of freedom of s_w: Σ(mᵢ − 1). */
-  readonly degreesOfFreedom: number;
-  /** Within-subject SD s_w (units of the measurement). */
-  readonly withinSubjectSd: number;
-  /** χ² interval of s_w. */
-  readonly withinSubjectSdCi: Interval;
-  /** Multiplier used. */
-  readonly multiplier: number;
-  /** Repeatability coefficient z·√2·s_w: two readings on one subject differ by less than this
-   * for about 95 % of pairs (z = 1.96). */
-  readonly repeatabilityCoefficient: number;
-  /** Interval of the coefficient (the s_w interval scaled). */
-  readonly repeatabilityCoefficientCi: Interval;
-  /** Within-subject coefficient of variation by the root-mean-square method, as a fraction;
-   * null when a subject mean is ≤ 0 (the CV is then undefined). */
-  readonly withinSubjectCv: number | null;
 }
 
 /**
@@ -88,11 +76,9 @@ export function repeatability(
   if (readingsBySubject.length < 2) {
     throw new RangeError(`${where}: expected at least 2 subjects, got ${readingsBySubject.length}`);
   }
-  const multiplier = options.multiplier ?? 1.96;
-  if (!(multiplier > 0 && multiplier <= 5)) {
-    throw new RangeError(`${where}: expected 'multiplier' in (0, 5], got ${multiplier}`);
-  }
+  const multiplier = checkMultiplier(where, options.multiplier ?? 1.96);
   const confidence = checkConfidence(where, options.confidence ?? 0.95);
+  const quantity = measuredOf(where, options.quantity);
   let ss = 0;
   let df = 0;
   let readings = 0;
@@ -125,15 +111,17 @@ export function repeatability(
     upper: sw * Math.sqrt(df / chiSquareQuantile(alpha / 2, df)),
   };
   const k = multiplier * Math.SQRT2;
-  return {
+  return displayed({
     subjects: readingsBySubject.length,
     readings,
     degreesOfFreedom: df,
     withinSubjectSd: sw,
     withinSubjectSdCi: swCi,
     multiplier,
+    confidence,
     repeatabilityCoefficient: k * sw,
     repeatabilityCoefficientCi: { lower: k * swCi.lower, upper: k * swCi.upper },
     withinSubjectCv: cvDefined ? Math.sqrt(cvSum / readingsBySubject.length) : null,
-  };
+    quantity,
+  }, displayRepeatability);
 }

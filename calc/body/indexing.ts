@@ -25,7 +25,7 @@ import {
   STROKE_VOLUME,
   STROKE_VOLUME_INDEX,
 } from "../quantities/flow.ts";
-import { LANG_2015 } from "../references.ts";
+import { LANG_2015 } from "../citations.ts";
 
 /** Quantities whose indexed form the guidelines name and range (declared with them). */
 const NAMED_INDICES: ReadonlyMap<Quantity, Quantity> = new Map([

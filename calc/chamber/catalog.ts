@@ -1,6 +1,8 @@
 /**
- * The chamber quantification calculations this domain registers in the package's catalog. A calculation
- * of this domain is registered by adding it here.
+ * The chamber quantification calculations this domain registers in the package's catalog. A
+ * calculation of this domain is registered by adding it here; the chains (Teichholz EF, LV mass
+ * index, LV geometry measures) are registered with every step they are made of, so a worker can
+ * make them again from their recipe.
  *
  * @module
  */
@@ -21,6 +23,7 @@ import {
   relativeWallThickness,
   teichholzEjectionFraction,
   teichholzVolume,
+  teichholzVolumes,
 } from "./linear.ts";
 import { areaLengthVolume, biplaneAreaLengthVolume, discSummationVolume } from "./volumes.ts";
 
@@ -31,7 +34,7 @@ import { areaLengthVolume, biplaneAreaLengthVolume, discSummationVolume } from "
  * ```ts
  * import { CHAMBER_CALCULATIONS } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
- * assert.ok(CHAMBER_CALCULATIONS.length > 0);
+ * assert.ok(CHAMBER_CALCULATIONS.some((c) => c.id === "teichholzEjectionFraction"));
  * ```
  */
 export const CHAMBER_CALCULATIONS: readonly Calculation[] = [
@@ -51,4 +54,5 @@ export const CHAMBER_CALCULATIONS: readonly Calculation[] = [
   tapse,
   teichholzEjectionFraction,
   teichholzVolume,
+  teichholzVolumes,
 ] as readonly Calculation[];

@@ -1,16 +1,16 @@
 /**
- * Published sources shared by the chamber calculations.
+ * Publications cited by the chamber calculations, each declared once.
  *
  * @module
  */
-import type { Reference } from "../core/types.ts";
-import { LANG_2015, RUDSKI_2010 } from "../references.ts";
+import type { Citation } from "../core/types.ts";
+import { LANG_2015, RUDSKI_2010 } from "../citations.ts";
 
 /** Shared publications, re-exported under this module's names. */
 export { LANG_2015, RUDSKI_2010 };
 
 /** Teichholz LE et al. 1976: volume from one LV diameter. */
-export const TEICHHOLZ_1976: Reference = {
+export const TEICHHOLZ_1976: Citation = {
   authors: "Teichholz LE, Kreulen T, Herman MV, Gorlin R",
   year: 1976,
   title:
@@ -20,7 +20,7 @@ export const TEICHHOLZ_1976: Reference = {
 };
 
 /** Devereux RB et al. 1986: the cube-formula LV mass validated at necropsy. */
-export const DEVEREUX_1986: Reference = {
+export const DEVEREUX_1986: Citation = {
   authors: "Devereux RB, Alonso DR, Lutas EM, Gottlieb GJ, Campo E, Sachs I, Reichek N",
   year: 1986,
   title:
@@ -30,7 +30,7 @@ export const DEVEREUX_1986: Reference = {
 };
 
 /** Ganau A et al. 1992: the four patterns of LV geometry. */
-export const GANAU_1992: Reference = {
+export const GANAU_1992: Citation = {
   authors: "Ganau A, Devereux RB, Roman MJ, de Simone G, Pickering TG, Saba PS, et al.",
   year: 1992,
   title:
@@ -40,7 +40,7 @@ export const GANAU_1992: Reference = {
 };
 
 /** Schiller NB et al. 1989: the method of discs and the area–length method. */
-export const SCHILLER_1989: Reference = {
+export const SCHILLER_1989: Citation = {
   authors: "Schiller NB, Shah PM, Crawford M, DeMaria A, Devereux R, Feigenbaum H, et al.",
   year: 1989,
   title:
@@ -50,7 +50,7 @@ export const SCHILLER_1989: Reference = {
 };
 
 /** Tei C et al. 1995: the myocardial performance index. */
-export const TEI_1995: Reference = {
+export const TEI_1995: Citation = {
   authors: "Tei C, Ling LH, Hodge DO, Bailey KR, Oh JK, Rodeheffer RJ, Tajik AJ, Seward JB",
   year: 1995,
   title:
@@ -59,7 +59,7 @@ export const TEI_1995: Reference = {
 };
 
 /** Kaul S et al. 1984: tricuspid annular plane systolic excursion. */
-export const KAUL_1984: Reference = {
+export const KAUL_1984: Citation = {
   authors: "Kaul S, Tei C, Hopkins JM, Shah PM",
   year: 1984,
   title: "Assessment of right ventricular function using two-dimensional echocardiography",
@@ -68,7 +68,7 @@ export const KAUL_1984: Reference = {
 };
 
 /** Hu K et al. 2013: mitral annular plane systolic excursion. */
-export const HU_2013: Reference = {
+export const HU_2013: Citation = {
   authors: "Hu K, Liu D, Herrmann S, Niemann M, Gaudron PD, Voelker W, et al.",
   year: 2013,
   title:
@@ -77,7 +77,7 @@ export const HU_2013: Reference = {
 };
 
 /** Voigt JU et al. 2015: common standard for 2D speckle-tracking deformation imaging. */
-export const VOIGT_2015: Reference = {
+export const VOIGT_2015: Citation = {
   authors: "Voigt JU, Pedrizzetti G, Lysyansky P, Marwick TH, Houle H, Baumann R, et al.",
   year: 2015,
   title:

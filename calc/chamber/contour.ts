@@ -17,6 +17,8 @@
  *
  * @module
  */
+import { issueError } from "../core/issues.ts";
+import { describeValue } from "../core/text.ts";
 
 /** One traced point in cm: an `[x, y]` pair or an `{ x, y }` object. */
 export type ContourPoint = readonly [number, number] | { readonly x: number; readonly y: number };
@@ -53,6 +55,18 @@ function pointText(x: number, y: number): string {
   return `(${x}, ${y})`;
 }
 
+/** Throws the validator's error for one finding about a contour. */
+function reject(
+  kind: "type" | "range",
+  where: string,
+  field: string,
+  label: string,
+  expected: string,
+  received: string,
+): never {
+  throw issueError([{ kind, severity: "error", where, field, label, expected, received }]);
+}
+
 /**
  * Validates a traced contour and returns its coordinates.
  *
@@ -62,13 +76,15 @@ function pointText(x: number, y: number): string {
  * point back to the first), including touching and overlapping segments.
  *
  * @param contour The traced points in cm.
- * @param where Prefix for error messages, e.g. "Biplane method of discs".
+ * @param where Who checks, first in error messages, e.g. "Biplane method of discs".
  * @param view Name of the view for error messages, e.g. "apical four-chamber".
+ * @param field The argument the contour was given as, named in error messages (a point is
+ * `field[i]`). @default "contour"
  * @returns The coordinates as typed arrays.
  * @throws {TypeError} When the contour is not an array or a point is not a pair of numbers.
  * @throws {RangeError} For fewer than 3 points, a non-finite coordinate, a repeated point, equal
- * hinge points, or a self-intersecting outline; the message names the view and point index
- * (0-based).
+ * hinge points, or a self-intersecting outline; the message names the argument, the view and the
+ * point index (0-based).
  *
  * @example A triangle is the smallest valid contour
  * ```ts
@@ -76,32 +92,39 @@ function pointText(x: number, y: number): string {
  * import assert from "node:assert/strict";
  * const c = validateContour([[0, 0], [0.5, 3], [1, 0]], "Demo", "apical four-chamber");
  * assert.equal(c.x.length, 3);
- * assert.throws(() => validateContour([[0, 0], [1, 0]], "Demo", "apical four-chamber"), RangeError);
+ * assert.throws(() => validateContour([[0, 0], [1, 0]], "Demo", "apical four-chamber"), {
+ *   name: "RangeError",
+ *   message: "Demo: expected 'contour' (apical four-chamber contour) with 3 to 20000 points, got 2 points",
+ * });
  * ```
  */
-export function validateContour(contour: unknown, where: string, view: string): ContourCoordinates {
+export function validateContour(
+  contour: unknown,
+  where: string,
+  view: string,
+  field = "contour",
+): ContourCoordinates {
+  const label = `${view} contour`;
   if (!Array.isArray(contour)) {
-    throw new TypeError(
-      `${where}: expected the ${view} contour as an array of [x, y] points in cm, got ${
-        contour === null ? "null" : typeof contour
-      }`,
+    reject(
+      "type",
+      where,
+      field,
+      label,
+      "as an array of [x, y] points in cm",
+      describeValue(contour),
     );
   }
   const n = contour.length;
-  if (!(n >= 3)) {
-    throw new RangeError(
-      `${where}: expected at least 3 points in the ${view} contour, got ${n}`,
-    );
-  }
-  if (!(n <= MAX_POINTS)) {
-    throw new RangeError(
-      `${where}: expected at most ${MAX_POINTS} points in the ${view} contour, got ${n}`,
-    );
+  if (!(n >= 3 && n <= MAX_POINTS)) {
+    reject("range", where, field, label, `with 3 to ${MAX_POINTS} points`, `${n} points`);
   }
   const x = new Float64Array(n);
   const y = new Float64Array(n);
   for (let i = 0; i < n; i++) {
     const p: unknown = contour[i];
+    const at = `${field}[${i}]`;
+    const pointLabel = `point ${i} of the ${label}`;
     let px: unknown;
     let py: unknown;
     if (Array.isArray(p) && p.length === 2) {
@@ -111,51 +134,55 @@ export function validateContour(contour: unknown, where: string, view: string): 
       px = (p as { x: unknown }).x;
       py = (p as { y: unknown }).y;
     } else {
-      throw new TypeError(
-        `${where}: expected point ${i} of the ${view} contour as [x, y] or { x, y } in cm, got ${
-          JSON.stringify(p) ?? String(p)
-        }`,
+      reject(
+        "type",
+        where,
+        at,
+        pointLabel,
+        "as [x, y] or { x, y } in cm",
+        JSON.stringify(p) ?? String(p),
       );
     }
     if (typeof px !== "number" || typeof py !== "number") {
-      throw new TypeError(
-        `${where}: expected point ${i} of the ${view} contour to hold numbers in cm, got ${
-          JSON.stringify(p)
-        }`,
-      );
+      reject("type", where, at, pointLabel, "to hold numbers in cm", JSON.stringify(p));
     }
     if (!Number.isFinite(px) || !Number.isFinite(py)) {
-      throw new RangeError(
-        `${where}: expected finite coordinates at point ${i} of the ${view} contour, got ${
-          pointText(px, py)
-        }`,
-      );
+      reject("range", where, at, pointLabel, "with finite coordinates in cm", pointText(px, py));
     }
     x[i] = px;
     y[i] = py;
     if (i > 0 && px === x[i - 1] && py === y[i - 1]) {
-      throw new RangeError(
-        `${where}: expected point ${i} of the ${view} contour to differ from point ${
-          i - 1
-        }, got the repeated point ${pointText(px, py)}`,
+      reject(
+        "range",
+        where,
+        at,
+        pointLabel,
+        `to differ from point ${i - 1}`,
+        `the repeated point ${pointText(px, py)}`,
       );
     }
   }
   if (x[0] === x[n - 1] && y[0] === y[n - 1]) {
-    throw new RangeError(
-      `${where}: expected distinct annulus hinge points (first and last points) in the ${view} contour, got ${
-        pointText(x[0]!, y[0]!)
-      } twice`,
+    reject(
+      "range",
+      where,
+      field,
+      label,
+      "with distinct annulus hinge points (first and last points)",
+      `${pointText(x[0]!, y[0]!)} twice`,
     );
   }
   const crossing = firstSelfIntersection(x, y);
   if (crossing) {
     const [i, j] = crossing;
     const segment = (k: number): string => `${k}–${(k + 1) % n}`;
-    throw new RangeError(
-      `${where}: expected the ${view} contour not to cross itself (the outline is closed by the annulus segment ${
-        n - 1
-      }–0), got segment ${segment(i)} crossing segment ${segment(j)} near point ${i} at ${
+    reject(
+      "range",
+      where,
+      field,
+      label,
+      `not to cross itself (the outline is closed by the annulus segment ${n - 1}–0)`,
+      `segment ${segment(i)} crossing segment ${segment(j)} near point ${i} at ${
         pointText(x[i]!, y[i]!)
       }`,
     );

@@ -5,9 +5,30 @@
  *
  * @module
  */
-import { CLINICAL_CAUTION, defineCalculation, notAbove } from "../core/define.ts";
-import type { Calculation, Reference } from "../core/types.ts";
-import type { InlineInput } from "../core/calculation.ts";
+import { CLINICAL_CAUTION, defineCalculation, notAbove } from "../core/calculation.ts";
+import type { Calculation, Citation, InputConstraint, ValidationIssue } from "../core/types.ts";
+import { checkValue, quantityField } from "../core/validate.ts";
+import { renderIssue, throwIfErrors } from "../core/issues.ts";
+import { describeValue } from "../core/text.ts";
+import {
+  ANNULUS_DEPTH,
+  EJECTION_FRACTION,
+  EJECTION_TIME,
+  FRACTIONAL_AREA_CHANGE,
+  ISOVOLUMIC_CONTRACTION_TIME,
+  ISOVOLUMIC_RELAXATION_TIME,
+  LV_END_DIASTOLIC_VOLUME,
+  LV_END_SYSTOLIC_VOLUME,
+  MAPSE,
+  MITRAL_ANNULAR_EXCURSION,
+  MYOCARDIAL_PERFORMANCE_INDEX,
+  RV_END_DIASTOLIC_AREA,
+  RV_END_SYSTOLIC_AREA,
+  SEGMENT_LONGITUDINAL_STRAIN,
+  TAPSE,
+  VALVE_CLOSURE_TO_OPENING_TIME,
+} from "../quantities/structure.ts";
+import { STROKE_VOLUME } from "../quantities/flow.ts";
 import {
   HU_2013,
   KAUL_1984,
@@ -16,44 +37,29 @@ import {
   SCHILLER_1989,
   TEI_1995,
   VOIGT_2015,
-} from "./sources.ts";
+} from "./citations.ts";
+import type { ResultNotes } from "./types.ts";
 
 /**
- * Percentage reduction from a diastolic to a systolic value, 100·(D − S)/D. The one place this
- * arithmetic is written: fractional shortening, ejection fraction and fractional area change all
- * call it. Returns NaN when the systolic value exceeds the diastolic one (or either is NaN), which
- * `evaluate` reports as a RangeError naming both inputs.
+ * Percentage reduction from a diastolic to a systolic value, 100·(D − S)/D: the one place this
+ * arithmetic is written (fractional shortening, ejection fraction and fractional area change call
+ * it). Plain arithmetic: each calculation that calls it declares S ≤ D as a constraint, so a
+ * systolic value above the diastolic one is an error naming both inputs before the formula runs.
  *
  * @param diastolic End-diastolic value (> 0).
  * @param systolic End-systolic value, same unit.
- * @returns The reduction in percent, or NaN when systolic > diastolic.
+ * @returns The reduction in percent.
  *
  * @example
  * ```ts
- * import { percentReduction } from "@sonorigor/sonorigor";
+ * import { percentReduction } from "./function.ts";
  * import assert from "node:assert/strict";
- * assert.equal(percentReduction(120, 48), 60);
- * assert.ok(Number.isNaN(percentReduction(40, 50)));
+ * assert.equal(percentReduction(120, 48), 60); // 100·72/120, hand-checkable
  * ```
  */
 export function percentReduction(diastolic: number, systolic: number): number {
-  return systolic <= diastolic ? (100 * (diastolic - systolic)) / diastolic : NaN;
+  return (100 * (diastolic - systolic)) / diastolic;
 }
-
-// Typical ranges below are the adult span seen in practice (common practice, no source); they
-// only raise a flag. Valid ranges are physical limits.
-const endDiastolicVolume: InlineInput = {
-  unit: "mL",
-  description: "End-diastolic volume",
-  range: { min: 0, max: 2000, minExclusive: true },
-  typical: { min: 20, max: 500 },
-};
-const endSystolicVolume: InlineInput = {
-  unit: "mL",
-  description: "End-systolic volume",
-  range: { min: 0, max: 2000 },
-  typical: { min: 5, max: 400 },
-};
 
 /**
  * Ejection fraction and stroke volume from end-diastolic and end-systolic volumes.
@@ -68,8 +74,8 @@ const endSystolicVolume: InlineInput = {
  * = 100·ESV/EDV² > 0 and ∂EF/∂ESV = −100/EDV < 0, the covariance term of JCGM 100 eq. (13)
  * is negative and a positive correlation shrinks the EF uncertainty.
  *
- * @throws {RangeError} From `evaluate` when ESV exceeds EDV (the output is then not finite and
- * the message names both volumes), or a volume is outside its valid range.
+ * @throws {RangeError} From `evaluate` when ESV exceeds EDV (the message names both volumes), or
+ * a volume is outside its valid range.
  *
  * @example EDV 120 mL, ESV 48 mL → EF 60 %, SV 72 mL
  * ```ts
@@ -88,20 +94,20 @@ export const ejectionFraction: Calculation<
   title: "Ejection fraction",
   description: "Ejection fraction and stroke volume from end-diastolic and end-systolic volumes.",
   inputs: {
-    endDiastolicVolumeMl: endDiastolicVolume,
-    endSystolicVolumeMl: endSystolicVolume,
+    endDiastolicVolumeMl: LV_END_DIASTOLIC_VOLUME,
+    endSystolicVolumeMl: LV_END_SYSTOLIC_VOLUME,
   },
   outputs: {
-    ejectionFractionPercent: { unit: "%", description: "Ejection fraction" },
-    strokeVolumeMl: { unit: "mL", description: "Stroke volume (EDV − ESV)" },
+    ejectionFractionPercent: EJECTION_FRACTION,
+    strokeVolumeMl: { quantity: STROKE_VOLUME, description: "Stroke volume (EDV − ESV)" },
   },
-  formula: ({ endDiastolicVolumeMl: edv, endSystolicVolumeMl: esv }) => {
-    const ef = percentReduction(edv, esv);
-    return { ejectionFractionPercent: ef, strokeVolumeMl: Number.isNaN(ef) ? NaN : edv - esv };
-  },
+  formula: ({ endDiastolicVolumeMl: edv, endSystolicVolumeMl: esv }) => ({
+    ejectionFractionPercent: percentReduction(edv, esv),
+    strokeVolumeMl: edv - esv,
+  }),
   constraints: [notAbove("endSystolicVolumeMl", "endDiastolicVolumeMl")],
   formulaText: "EF = 100·(EDV − ESV)/EDV; SV = EDV − ESV",
-  sources: [LANG_2015, SCHILLER_1989],
+  citations: [LANG_2015, SCHILLER_1989],
   cautions: [
     "End-systolic volume above end-diastolic volume is rejected as a measurement or labelling error",
     "Errors of EDV and ESV traced on the same loop are positively correlated; ignoring that overstates the EF uncertainty",
@@ -118,7 +124,7 @@ export const ejectionFraction: Calculation<
  * Source: Rudski LG et al., J Am Soc Echocardiogr 2010;23:685–713; Lang RM et al. 2015 (RV
  * systolic function; FAC < 35 % abnormal).
  *
- * @throws {RangeError} From `evaluate` when ESA exceeds EDA.
+ * @throws {RangeError} From `evaluate` when ESA exceeds EDA (the message names both areas).
  *
  * @example EDA 24 cm², ESA 14 cm² → 41.67 %
  * ```ts
@@ -140,28 +146,16 @@ export const fractionalAreaChange: Calculation<
   description:
     "Percentage change of the RV cavity area from end-diastole to end-systole in the apical four-chamber view.",
   inputs: {
-    endDiastolicAreaCm2: {
-      unit: "cm^2",
-      description: "RV end-diastolic area",
-      range: { min: 0, max: 200, minExclusive: true },
-      typical: { min: 8, max: 45 },
-    },
-    endSystolicAreaCm2: {
-      unit: "cm^2",
-      description: "RV end-systolic area",
-      range: { min: 0, max: 200 },
-      typical: { min: 3, max: 35 },
-    },
+    endDiastolicAreaCm2: RV_END_DIASTOLIC_AREA,
+    endSystolicAreaCm2: RV_END_SYSTOLIC_AREA,
   },
-  outputs: {
-    fractionalAreaChangePercent: { unit: "%", description: "Fractional area change" },
-  },
+  outputs: { fractionalAreaChangePercent: FRACTIONAL_AREA_CHANGE },
   formula: ({ endDiastolicAreaCm2, endSystolicAreaCm2 }) => ({
     fractionalAreaChangePercent: percentReduction(endDiastolicAreaCm2, endSystolicAreaCm2),
   }),
   constraints: [notAbove("endSystolicAreaCm2", "endDiastolicAreaCm2")],
   formulaText: "FAC = 100·(EDA − ESA)/EDA",
-  sources: [RUDSKI_2010, LANG_2015],
+  citations: [RUDSKI_2010, LANG_2015],
   cautions: [
     "Trace the RV cavity including trabeculations and the moderator band",
     "End-systolic area above end-diastolic area is rejected as a measurement or labelling error",
@@ -170,16 +164,16 @@ export const fractionalAreaChange: Calculation<
 });
 
 /** Systolic excursion towards the apex from M-mode depths (apical window): the annulus is
- * deeper at end-diastole than at end-systole. NaN when it moved away from the apex. */
+ * deeper at end-diastole than at end-systole (each calculation declares that constraint). */
 function annularExcursionMm(depthEndDiastoleMm: number, depthEndSystoleMm: number): number {
-  return depthEndSystoleMm <= depthEndDiastoleMm ? depthEndDiastoleMm - depthEndSystoleMm : NaN;
+  return depthEndDiastoleMm - depthEndSystoleMm;
 }
 
-const annulusDepth = (site: string, phase: string): InlineInput => ({
-  unit: "mm",
-  description: `Depth of the ${site} annulus on the apical M-mode trace at ${phase}`,
-  range: { min: 0, max: 400 },
-  typical: { min: 40, max: 250 },
+/** The M-mode depth of an annulus at one phase, as an input role. */
+const annulusDepth = (site: string, phase: string) => ({
+  quantity: ANNULUS_DEPTH,
+  label: `${site} annulus depth at ${phase}`,
+  description: `Depth of the ${site.toLowerCase()} annulus on the apical M-mode trace at ${phase}`,
 });
 
 /**
@@ -193,7 +187,7 @@ const annulusDepth = (site: string, phase: string): InlineInput => ({
  * 2015 (TAPSE < 17 mm suggests RV systolic dysfunction).
  *
  * @throws {RangeError} From `evaluate` when the annulus is deeper at systole than at diastole
- * (wrong cursor, phase or labelling).
+ * (wrong cursor, phase or labelling; the message names both depths).
  *
  * @example Annulus at 128 mm in diastole and 106 mm in systole → 22 mm
  * ```ts
@@ -212,16 +206,16 @@ export const tapse: Calculation<
   description:
     "Longitudinal systolic excursion of the lateral tricuspid annulus towards the apex, from two M-mode depths.",
   inputs: {
-    annulusDepthEndDiastoleMm: annulusDepth("lateral tricuspid", "end-diastole"),
-    annulusDepthPeakSystoleMm: annulusDepth("lateral tricuspid", "peak systole"),
+    annulusDepthEndDiastoleMm: annulusDepth("Tricuspid", "end-diastole"),
+    annulusDepthPeakSystoleMm: annulusDepth("Tricuspid", "peak systole"),
   },
-  outputs: { tapseMm: { unit: "mm", description: "TAPSE" } },
+  outputs: { tapseMm: TAPSE },
   formula: ({ annulusDepthEndDiastoleMm, annulusDepthPeakSystoleMm }) => ({
     tapseMm: annularExcursionMm(annulusDepthEndDiastoleMm, annulusDepthPeakSystoleMm),
   }),
   constraints: [notAbove("annulusDepthPeakSystoleMm", "annulusDepthEndDiastoleMm")],
   formulaText: "TAPSE = depth(ED) − depth(peak systole)",
-  sources: [KAUL_1984, RUDSKI_2010, LANG_2015],
+  citations: [KAUL_1984, RUDSKI_2010, LANG_2015],
   cautions: [
     "Angle-dependent: align the M-mode cursor with the annular motion",
     "Reflects longitudinal function of the RV free wall only",
@@ -232,7 +226,8 @@ export const tapse: Calculation<
 /**
  * Mitral annular plane systolic excursion (MAPSE): the mean of the septal and lateral annular
  * excursions, each from its M-mode depths at end-diastole and peak systole (apical four-chamber
- * view).
+ * view). One calculation rather than a chain: the two site excursions are the same formula on
+ * two pairs of inputs, which a chain step cannot express without two copies of a step.
  *
  * Formula: e_site = depth(ED) − depth(peak systole); MAPSE [mm] = (e_septal + e_lateral) / 2
  *
@@ -265,15 +260,15 @@ export const mapse: Calculation<
   description:
     "Mean longitudinal systolic excursion of the septal and lateral mitral annulus towards the apex.",
   inputs: {
-    septalDepthEndDiastoleMm: annulusDepth("septal mitral", "end-diastole"),
-    septalDepthPeakSystoleMm: annulusDepth("septal mitral", "peak systole"),
-    lateralDepthEndDiastoleMm: annulusDepth("lateral mitral", "end-diastole"),
-    lateralDepthPeakSystoleMm: annulusDepth("lateral mitral", "peak systole"),
+    septalDepthEndDiastoleMm: annulusDepth("Septal mitral", "end-diastole"),
+    septalDepthPeakSystoleMm: annulusDepth("Septal mitral", "peak systole"),
+    lateralDepthEndDiastoleMm: annulusDepth("Lateral mitral", "end-diastole"),
+    lateralDepthPeakSystoleMm: annulusDepth("Lateral mitral", "peak systole"),
   },
   outputs: {
-    septalExcursionMm: { unit: "mm", description: "Septal annular excursion" },
-    lateralExcursionMm: { unit: "mm", description: "Lateral annular excursion" },
-    mapseMm: { unit: "mm", description: "MAPSE (mean of septal and lateral)" },
+    septalExcursionMm: { quantity: MITRAL_ANNULAR_EXCURSION, label: "Septal annular excursion" },
+    lateralExcursionMm: { quantity: MITRAL_ANNULAR_EXCURSION, label: "Lateral annular excursion" },
+    mapseMm: MAPSE,
   },
   formula: (x) => {
     const septal = annularExcursionMm(x.septalDepthEndDiastoleMm, x.septalDepthPeakSystoleMm);
@@ -289,16 +284,9 @@ export const mapse: Calculation<
     notAbove("lateralDepthPeakSystoleMm", "lateralDepthEndDiastoleMm"),
   ],
   formulaText: "MAPSE = ½·[(depth ED − depth PS)septal + (depth ED − depth PS)lateral]",
-  sources: [HU_2013],
+  citations: [HU_2013],
   cautions: ["Angle-dependent: align the M-mode cursor with the annular motion"],
   clinical: true,
-});
-
-const interval = (description: string, typical: { min: number; max: number }): InlineInput => ({
-  unit: "ms",
-  description,
-  range: { min: 0, max: 1000 },
-  typical,
 });
 
 /**
@@ -328,28 +316,17 @@ export const myocardialPerformanceIndex: Calculation<
   title: "Myocardial performance index (Tei)",
   description: "Isovolumic time over ejection time: a combined systolic and diastolic index.",
   inputs: {
-    isovolumicContractionTimeMs: interval("Isovolumic contraction time (IVCT)", {
-      min: 10,
-      max: 200,
-    }),
-    isovolumicRelaxationTimeMs: interval("Isovolumic relaxation time (IVRT)", {
-      min: 20,
-      max: 250,
-    }),
-    ejectionTimeMs: {
-      ...interval("Ejection time (ET)", { min: 150, max: 450 }),
-      range: { min: 0, max: 1000, minExclusive: true },
-    },
+    isovolumicContractionTimeMs: ISOVOLUMIC_CONTRACTION_TIME,
+    isovolumicRelaxationTimeMs: ISOVOLUMIC_RELAXATION_TIME,
+    ejectionTimeMs: EJECTION_TIME,
   },
-  outputs: {
-    myocardialPerformanceIndex: { unit: "1", description: "Myocardial performance index" },
-  },
+  outputs: { myocardialPerformanceIndex: MYOCARDIAL_PERFORMANCE_INDEX },
   formula: ({ isovolumicContractionTimeMs, isovolumicRelaxationTimeMs, ejectionTimeMs }) => ({
     myocardialPerformanceIndex: (isovolumicContractionTimeMs + isovolumicRelaxationTimeMs) /
       ejectionTimeMs,
   }),
   formulaText: "MPI = (IVCT + IVRT)/ET",
-  sources: [TEI_1995, RUDSKI_2010],
+  citations: [TEI_1995, RUDSKI_2010],
   cautions: [
     "Measure all intervals at similar heart rates; unreliable in irregular rhythm",
     "Unreliable when right atrial pressure is raised (the IVRT shortens)",
@@ -357,16 +334,22 @@ export const myocardialPerformanceIndex: Calculation<
   clinical: true,
 });
 
+/** The closure-to-opening time includes the ejection: a ≥ b. */
+const closureIncludesEjection: InputConstraint<"closureToOpeningTimeMs" | "ejectionTimeMs"> =
+  notAbove("ejectionTimeMs", "closureToOpeningTimeMs");
+
 /**
  * Myocardial performance index from the atrioventricular valve closure-to-opening time `a` and
- * the ejection time `b`; composes {@linkcode myocardialPerformanceIndex} since a − b = IVCT + IVRT.
+ * the ejection time `b`. It calls {@linkcode myocardialPerformanceIndex}'s formula with
+ * IVCT + IVRT = a − b rather than being a chain: the total isovolumic time a − b is not an input
+ * the index takes (it takes the two times apart), so there is no step output to wire.
  *
  * Formula: MPI = (a − b) / b
  *
  * Source: Tei C et al., J Cardiol 1995;26:357–366; Rudski LG et al. 2010 (RV index, pulsed
  * Doppler and tissue Doppler methods).
  *
- * @throws {RangeError} From `evaluate` when a is shorter than b.
+ * @throws {RangeError} From `evaluate` when a is shorter than b (the message names both times).
  *
  * @example a = 420 ms, b = 280 ms → 0.5
  * ```ts
@@ -388,23 +371,19 @@ export const myocardialPerformanceIndexFromClosureTime: Calculation<
   description:
     "Tei index from the interval between atrioventricular valve closure and opening (a) and the ejection time (b).",
   inputs: {
-    closureToOpeningTimeMs: interval(
-      "Atrioventricular valve closure-to-opening time (a), including ejection",
-      { min: 250, max: 700 },
-    ),
-    ejectionTimeMs: myocardialPerformanceIndex.inputs.ejectionTimeMs,
+    closureToOpeningTimeMs: VALVE_CLOSURE_TO_OPENING_TIME,
+    ejectionTimeMs: EJECTION_TIME,
   },
-  outputs: myocardialPerformanceIndex.outputs,
+  outputs: { myocardialPerformanceIndex: MYOCARDIAL_PERFORMANCE_INDEX },
   formula: ({ closureToOpeningTimeMs: a, ejectionTimeMs: b }) =>
-    a >= b
-      ? myocardialPerformanceIndex.formula({
-        isovolumicContractionTimeMs: a - b,
-        isovolumicRelaxationTimeMs: 0,
-        ejectionTimeMs: b,
-      })
-      : { myocardialPerformanceIndex: NaN },
+    myocardialPerformanceIndex.formula({
+      isovolumicContractionTimeMs: a - b,
+      isovolumicRelaxationTimeMs: 0,
+      ejectionTimeMs: b,
+    }),
+  constraints: [closureIncludesEjection],
   formulaText: "MPI = (a − b)/b",
-  sources: [TEI_1995, RUDSKI_2010],
+  citations: [TEI_1995, RUDSKI_2010],
   cautions: [
     ...myocardialPerformanceIndex.cautions,
     "a shorter than b is rejected as a measurement or labelling error",
@@ -413,13 +392,13 @@ export const myocardialPerformanceIndexFromClosureTime: Calculation<
 });
 
 /**
- * Segment models accepted by {@linkcode globalLongitudinalStrain}.
+ * Segment models accepted by {@linkcode globalLongitudinalStrain}, by segment count.
  *
  * @example
  * ```ts
- * import { STRAIN_SEGMENT_MODELS } from "@sonorigor/sonorigor";
+ * import { globalLongitudinalStrain, STRAIN_SEGMENT_MODELS } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
- * assert.ok(STRAIN_SEGMENT_MODELS !== undefined);
+ * assert.equal(globalLongitudinalStrain(Array(17).fill(-20)).model, STRAIN_SEGMENT_MODELS[17]);
  * ```
  */
 export const STRAIN_SEGMENT_MODELS: Readonly<Record<16 | 17 | 18, string>> = Object.freeze({
@@ -427,6 +406,21 @@ export const STRAIN_SEGMENT_MODELS: Readonly<Record<16 | 17 | 18, string>> = Obj
   17: "17 segments: 6 basal, 6 mid, 4 apical and the apical cap",
   18: "18 segments: 6 basal, 6 mid, 6 apical (three apical views × 6 segments)",
 });
+
+/** The result of {@linkcode globalLongitudinalStrain}. */
+export interface GlobalLongitudinalStrain extends ResultNotes {
+  /** GLS, in % (negative for shortening). */
+  readonly glsPercent: number;
+  /** Number of segments averaged. */
+  readonly segmentCount: 16 | 17 | 18;
+  /** The segment model. */
+  readonly model: string;
+  /** Published sources of the definition and the segment models. */
+  readonly citations: readonly Citation[];
+}
+
+const GLS_WHERE = "Global longitudinal strain";
+const SEGMENTS_FIELD = "segmentPeakStrainsPercent";
 
 /**
  * Global longitudinal strain as the mean of segmental peak systolic longitudinal strains.
@@ -443,56 +437,51 @@ export const STRAIN_SEGMENT_MODELS: Readonly<Record<16 | 17 | 18, string>> = Obj
  * Soc Echocardiogr 2015;28:1–39 (segment models, GLS).
  *
  * @param segmentPeakStrainsPercent Peak systolic longitudinal strain of each segment, in %.
- * @returns GLS in %, the segment count, the model description and the sources.
- * @throws {TypeError} When the input is not an array of 16, 17 or 18 numbers.
- * @throws {RangeError} For a segment value that is not finite or outside (−100, 100) %, naming
- * its index.
+ * @returns GLS in %, the segment count, the model description, citations, flags and cautions.
+ * @throws {TypeError} When the input is not an array of 16, 17 or 18 numbers, naming the segment.
+ * @throws {RangeError} For a segment value that is not finite or outside the valid range of a
+ * segment strain, naming its index.
  *
  * @example 18 segments
  * ```ts
  * import { globalLongitudinalStrain } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
  * const s = [...Array(6).fill(-17), ...Array(6).fill(-19), ...Array(6).fill(-24)];
- * assert.equal(globalLongitudinalStrain(s).glsPercent, -20);
+ * assert.equal(globalLongitudinalStrain(s).glsPercent, -20); // −360/18, hand-checkable
  * ```
  */
-export function globalLongitudinalStrain(segmentPeakStrainsPercent: readonly number[]): {
-  glsPercent: number;
-  segmentCount: 16 | 17 | 18;
-  model: string;
-  sources: readonly Reference[];
-  cautions: string[];
-} {
-  const where = "Global longitudinal strain";
-  if (!Array.isArray(segmentPeakStrainsPercent)) {
-    throw new TypeError(
-      `${where}: expected an array of 16, 17 or 18 segment strains in %, got ${typeof segmentPeakStrainsPercent}`,
-    );
-  }
-  const n = segmentPeakStrainsPercent.length;
+export function globalLongitudinalStrain(
+  segmentPeakStrainsPercent: readonly number[],
+): GlobalLongitudinalStrain {
+  const n = Array.isArray(segmentPeakStrainsPercent) ? segmentPeakStrainsPercent.length : -1;
   if (n !== 16 && n !== 17 && n !== 18) {
-    throw new TypeError(
-      `${where}: expected 16, 17 or 18 segment strains (one per segment of the model), got ${n}`,
-    );
+    throwIfErrors([{
+      kind: "type",
+      severity: "error",
+      where: GLS_WHERE,
+      field: SEGMENTS_FIELD,
+      label: `${SEGMENT_LONGITUDINAL_STRAIN.label}s`,
+      received: n < 0 ? describeValue(segmentPeakStrainsPercent) : `${n} values`,
+      expected: "as an array of 16, 17 or 18 values in % (one per segment of the model)",
+    }]);
   }
+  const field = quantityField(SEGMENT_LONGITUDINAL_STRAIN);
+  const issues: ValidationIssue[] = [];
   let sum = 0;
   for (let i = 0; i < n; i++) {
-    const v: unknown = segmentPeakStrainsPercent[i];
-    if (typeof v !== "number") {
-      throw new TypeError(
-        `${where}: expected segment ${i} as a number in %, got ${JSON.stringify(v)}`,
-      );
-    }
-    if (!(v > -100 && v < 100)) {
-      throw new RangeError(`${where}: expected segment ${i} in (-100, 100) %, got ${v}`);
-    }
-    sum += v;
+    const raw: unknown = segmentPeakStrainsPercent[i];
+    const checked = checkValue(`${SEGMENTS_FIELD}[${i}]`, field, raw, { where: GLS_WHERE });
+    issues.push(...checked.issues);
+    sum += checked.value ?? NaN;
   }
+  throwIfErrors(issues);
+  const segmentCount = n as 16 | 17 | 18;
   return {
     glsPercent: sum / n,
-    segmentCount: n,
-    model: STRAIN_SEGMENT_MODELS[n],
-    sources: [VOIGT_2015, LANG_2015],
+    segmentCount,
+    model: STRAIN_SEGMENT_MODELS[segmentCount],
+    citations: [VOIGT_2015, LANG_2015],
+    flags: issues.map(renderIssue),
     cautions: [
       "Mean of segment peaks approximates the global-trace definition; values differ between vendors and software versions",
       CLINICAL_CAUTION,

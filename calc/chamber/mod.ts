@@ -1,8 +1,9 @@
 /**
  * Chamber quantification: linear LV measurements (fractional shortening, Teichholz, LV mass,
- * relative wall thickness, geometry), 2D volumes from traced contours (method of discs,
- * area–length, ejection fraction, left-atrial volume) and ventricular function (TAPSE, MAPSE,
- * fractional area change, myocardial performance index, global longitudinal strain).
+ * relative wall thickness), LV geometry (classification and class probabilities), 2D volumes from
+ * traced contours (method of discs, area–length, ejection fraction, left-atrial volume) and
+ * ventricular function (TAPSE, MAPSE, fractional area change, myocardial performance index,
+ * global longitudinal strain).
  *
  * @module
  */
@@ -20,29 +21,43 @@ export {
   type LongAxis,
   validateContour,
 } from "./contour.ts";
+export { type DiscMethodData, discMethodData, type DiscMethodRow } from "./disc_drawing.ts";
 export {
-  classifyLvGeometry,
   fractionalShortening,
-  LV_GEOMETRY_LIMITS,
-  type LvGeometry,
   lvGeometryMeasures,
-  lvGeometryProbabilities,
-  type LvGeometryUncertainInputs,
   lvMassIndex,
   lvMassLinear,
   relativeWallThickness,
-  type Sex,
   teichholzEjectionFraction,
   teichholzVolume,
+  teichholzVolumes,
 } from "./linear.ts";
+export {
+  classifyLvGeometry,
+  LV_GEOMETRY_LIMITS,
+  lvGeometryProbabilities,
+  type LvGeometryProbabilityOptions,
+  type LvGeometryUncertainInputs,
+} from "./geometry.ts";
+export type {
+  LvGeometry,
+  LvGeometryClassification,
+  LvGeometryInput,
+  LvGeometryLimit,
+  LvGeometryLimits,
+  LvGeometryOutput,
+  LvGeometryProbabilities,
+  ResultNotes,
+  Sex,
+} from "./types.ts";
 export {
   ejectionFraction,
   fractionalAreaChange,
+  type GlobalLongitudinalStrain,
   globalLongitudinalStrain,
   mapse,
   myocardialPerformanceIndex,
   myocardialPerformanceIndexFromClosureTime,
-  percentReduction,
   STRAIN_SEGMENT_MODELS,
   tapse,
 } from "./function.ts";
@@ -52,11 +67,14 @@ export {
   biplaneAreaLengthVolume,
   type BiplaneContours,
   biplaneDiscVolume,
+  type BiplaneEjectionFraction,
   biplaneEjectionFraction,
+  type ContourAreaLengthVolume,
   type DiscOptions,
   discSummationVolume,
   type DiscVolume,
   GUIDELINE_DISC_COUNT,
+  type LeftAtrialVolume,
   leftAtrialVolume,
   singlePlaneDiscVolume,
   type TracedView,

@@ -7,10 +7,27 @@
  * hinge point around the cavity to the other; long axis from the annulus midpoint to the farthest
  * contour point; discs measured at mid-slab, perpendicular to each view's own long axis.
  *
+ * The contour functions are not chains: their inputs are point lists, not quantities. Each
+ * reduces its contours to scalar inputs (Σ aᵢ·bᵢ, areas, lengths) and evaluates the calculations
+ * defined here, so every formula is written once and every value is checked by the validator.
+ *
  * @module
  */
-import { defineCalculation, evaluate } from "../core/define.ts";
+import { defineCalculation } from "../core/calculation.ts";
+import { evaluate } from "../core/evaluate.ts";
 import type { Calculation } from "../core/types.ts";
+import { checkConstraints, checkValue, quantityField } from "../core/validate.ts";
+import { issueError, throwIfErrors } from "../core/issues.ts";
+import { describeValue } from "../core/text.ts";
+import {
+  CHAMBER_AREA,
+  CHAMBER_LENGTH,
+  CHAMBER_VOLUME,
+  DISC_COUNT,
+  DISC_DIAMETER_PRODUCT_SUM,
+  LA_VOLUME,
+} from "../quantities/structure.ts";
+import { BODY_SURFACE_AREA } from "../quantities/body.ts";
 import {
   type Contour,
   contourArea,
@@ -22,24 +39,26 @@ import {
   validateContour,
 } from "./contour.ts";
 import { ejectionFraction } from "./function.ts";
-import { LANG_2015, SCHILLER_1989 } from "./sources.ts";
+import type { ResultNotes } from "./types.ts";
+import { LANG_2015, SCHILLER_1989 } from "./citations.ts";
 import { indexedToBsa } from "../body/indexing.ts";
-import { LA_VOLUME } from "../quantities/structure.ts";
 
 /** Measurement / BSA for millilitres: the one indexing definition of the body-size module. */
 const indexLaVolume = indexedToBsa(LA_VOLUME);
 
 /**
- * The number of discs of the guideline method.
+ * The number of discs of the guideline method (Lang 2015): the typical value of the disc-count
+ * quantity, where it is declared once.
  *
  * @example
  * ```ts
- * import { GUIDELINE_DISC_COUNT } from "@sonorigor/sonorigor";
+ * import { biplaneDiscVolume, GUIDELINE_DISC_COUNT } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
- * assert.equal(GUIDELINE_DISC_COUNT, 20);
+ * const half = [[-2, 0], [0, 8], [2, 0]] as [number, number][];
+ * assert.equal(biplaneDiscVolume({ fourChamber: half, twoChamber: half }).discCount, GUIDELINE_DISC_COUNT);
  * ```
  */
-export const GUIDELINE_DISC_COUNT = 20;
+export const GUIDELINE_DISC_COUNT: number = DISC_COUNT.typical!.min;
 
 /**
  * Volume by summation of elliptical discs, from the summed products of the two orthogonal disc
@@ -67,31 +86,19 @@ export const discSummationVolume: Calculation<
   description:
     "Chamber volume as a stack of elliptical discs of equal height, from the sum of the products of orthogonal disc diameters.",
   inputs: {
-    diameterProductSumCm2: {
-      unit: "cm^2",
-      description: "Sum over discs of the product of the two orthogonal diameters (Σ aᵢ·bᵢ)",
-      range: { min: 0, max: 1e5 },
-    },
+    diameterProductSumCm2: DISC_DIAMETER_PRODUCT_SUM,
     longAxisCm: {
-      unit: "cm",
+      quantity: CHAMBER_LENGTH,
       description: "Long-axis length used for the disc height (L/N)",
-      range: { min: 0, max: 30, minExclusive: true },
-      typical: { min: 2, max: 15 },
     },
-    discCount: {
-      unit: "1",
-      description: "Number of discs (20 in the guideline method)",
-      range: { min: 1, max: 100000 },
-      typical: { min: GUIDELINE_DISC_COUNT, max: GUIDELINE_DISC_COUNT },
-      default: GUIDELINE_DISC_COUNT,
-    },
+    discCount: { quantity: DISC_COUNT, default: GUIDELINE_DISC_COUNT },
   },
-  outputs: { volumeMl: { unit: "mL", description: "Chamber volume" } },
+  outputs: { volumeMl: CHAMBER_VOLUME },
   formula: ({ diameterProductSumCm2, longAxisCm, discCount }) => ({
     volumeMl: (Math.PI / 4) * diameterProductSumCm2 * (longAxisCm / discCount),
   }),
   formulaText: "V = (π/4)·Σ aᵢ·bᵢ·L/N",
-  sources: [LANG_2015, SCHILLER_1989],
+  citations: [LANG_2015, SCHILLER_1989],
   cautions: [
     "Foreshortened apical views underestimate the long axis and the volume",
     "Trace the compacted myocardium boundary; trabeculae and papillary muscles belong to the cavity",
@@ -129,36 +136,34 @@ export const biplaneAreaLengthVolume: Calculation<
     "Chamber volume from the traced areas of two orthogonal apical views and a long-axis length, assuming an ellipsoid.",
   inputs: {
     fourChamberAreaCm2: {
-      unit: "cm^2",
+      quantity: CHAMBER_AREA,
+      label: "Apical four-chamber area",
       description: "Traced area in the apical four-chamber view",
-      range: { min: 0, max: 400, minExclusive: true },
-      typical: { min: 5, max: 80 },
     },
     twoChamberAreaCm2: {
-      unit: "cm^2",
+      quantity: CHAMBER_AREA,
+      label: "Apical two-chamber area",
       description: "Traced area in the apical two-chamber view",
-      range: { min: 0, max: 400, minExclusive: true },
-      typical: { min: 5, max: 80 },
     },
     lengthCm: {
-      unit: "cm",
+      quantity: CHAMBER_LENGTH,
       description: "Long-axis length (for the left atrium the shorter of the two views)",
-      range: { min: 0, max: 30, minExclusive: true },
-      typical: { min: 2, max: 15 },
     },
   },
-  outputs: { volumeMl: { unit: "mL", description: "Chamber volume" } },
+  outputs: { volumeMl: CHAMBER_VOLUME },
   formula: ({ fourChamberAreaCm2, twoChamberAreaCm2, lengthCm }) => ({
     volumeMl: (0.85 * fourChamberAreaCm2 * twoChamberAreaCm2) / lengthCm,
   }),
   formulaText: "V = 0.85·A₁·A₂/L",
-  sources: [LANG_2015, SCHILLER_1989],
+  citations: [LANG_2015, SCHILLER_1989],
   cautions: ["Assumes an ellipsoidal chamber; distorted chambers are better measured by discs"],
   clinical: true,
 });
 
 /**
- * Single-plane area–length volume; composes {@linkcode biplaneAreaLengthVolume} with A₁ = A₂ = A.
+ * Single-plane area–length volume: {@linkcode biplaneAreaLengthVolume}'s formula with
+ * A₁ = A₂ = A. Not a chain: it is one step whose two area inputs take the same value, which a
+ * chain (at least two steps) does not express.
  *
  * Formula: V [mL] = 0.85 · A² / L
  *
@@ -180,15 +185,10 @@ export const areaLengthVolume: Calculation<"areaCm2" | "lengthCm", "volumeMl"> =
     description:
       "Chamber volume from one traced area and its long axis, assuming an ellipsoid of revolution.",
     inputs: {
-      areaCm2: {
-        unit: "cm^2",
-        description: "Traced cavity area in one apical view",
-        range: { min: 0, max: 400, minExclusive: true },
-        typical: { min: 5, max: 80 },
-      },
-      lengthCm: biplaneAreaLengthVolume.inputs.lengthCm,
+      areaCm2: { quantity: CHAMBER_AREA, description: "Traced cavity area in one apical view" },
+      lengthCm: CHAMBER_LENGTH,
     },
-    outputs: biplaneAreaLengthVolume.outputs,
+    outputs: { volumeMl: CHAMBER_VOLUME },
     formula: ({ areaCm2, lengthCm }) =>
       biplaneAreaLengthVolume.formula({
         fourChamberAreaCm2: areaCm2,
@@ -196,7 +196,7 @@ export const areaLengthVolume: Calculation<"areaCm2" | "lengthCm", "volumeMl"> =
         lengthCm,
       }),
     formulaText: "V = 0.85·A²/L",
-    sources: [LANG_2015, SCHILLER_1989],
+    citations: [LANG_2015, SCHILLER_1989],
     cautions: biplaneAreaLengthVolume.cautions,
     clinical: true,
   },
@@ -219,7 +219,7 @@ export interface TracedView {
 }
 
 /** Result of a method-of-discs volume. */
-export interface DiscVolume {
+export interface DiscVolume extends ResultNotes {
   /** Volume in mL. */
   readonly volumeMl: number;
   /** Long axis used for the disc height, cm. */
@@ -230,10 +230,6 @@ export interface DiscVolume {
   readonly diameterProductSumCm2: number;
   /** The views used. */
   readonly views: readonly TracedView[];
-  /** Warnings: inputs outside validated ranges, long-axis mismatch. */
-  readonly flags: readonly string[];
-  /** Cautions, with the clinical caution. */
-  readonly cautions: readonly string[];
 }
 
 /** Options of the method of discs. */
@@ -246,28 +242,41 @@ export interface DiscOptions {
 /** Foreshortening check between two views (common practice, no source). */
 const LONG_AXIS_MISMATCH = 0.1;
 
-function discCountOf(options: DiscOptions | undefined, where: string): number {
-  const n = options?.discCount ?? GUIDELINE_DISC_COUNT;
-  if (typeof n !== "number") {
-    throw new TypeError(`${where}: expected 'discCount' as an integer, got ${JSON.stringify(n)}`);
-  }
-  if (!(Number.isInteger(n) && n >= 1 && n <= 100000)) {
-    throw new RangeError(`${where}: expected 'discCount' as an integer in [1, 100000], got ${n}`);
-  }
-  return n;
+/** One contour to trace: the argument it came as and the name of its view. */
+interface ViewToTrace {
+  readonly contour: unknown;
+  readonly field: string;
+  readonly view: string;
 }
 
-function traceView(contour: unknown, view: string, where: string, discCount: number): TracedView {
-  const c: ContourCoordinates = validateContour(contour, where, view);
-  const longAxis = contourLongAxis(c);
-  if (!(longAxis.lengthCm > 0)) {
-    throw new RangeError(
-      `${where}: expected a ${view} long axis longer than 0 cm, got ${longAxis.lengthCm}`,
-    );
+/** The disc count asked for, checked as a count (whole number in its valid range). */
+function discCountOf(options: DiscOptions | undefined, where: string): number {
+  const raw = options?.discCount ?? GUIDELINE_DISC_COUNT;
+  const checked = checkValue("discCount", quantityField(DISC_COUNT), raw, { where });
+  throwIfErrors(checked.issues); // the typical-range flag comes with the volume's evaluation
+  return checked.value!;
+}
+
+/** Throws the validator's error when `value` is not an object (the contours argument). */
+function checkObject(value: unknown, where: string, field: string, expected: string): void {
+  if (typeof value !== "object" || value === null || Array.isArray(value)) {
+    throw issueError([{
+      kind: "type",
+      severity: "error",
+      where,
+      field,
+      received: describeValue(value),
+      expected,
+    }]);
   }
+}
+
+function traceView(v: ViewToTrace, where: string, discCount: number): TracedView {
+  const c: ContourCoordinates = validateContour(v.contour, where, v.view, v.field);
+  const longAxis = contourLongAxis(c);
   const chords = contourDiscChords(c, longAxis, discCount);
   return {
-    view,
+    view: v.view,
     longAxis,
     areaCm2: contourArea(c),
     diameters: Float64Array.from(chords, (d) => d.diameterCm),
@@ -289,6 +298,66 @@ function mismatchFlag(a: TracedView, b: TracedView): string[] {
 }
 
 /**
+ * The method of discs on one or two traced views: disc i of one view is paired with disc i of the
+ * other (single plane: with itself), the disc height uses the longer long axis, and the sum feeds
+ * {@linkcode discSummationVolume}.
+ */
+function discVolume(
+  views: readonly ViewToTrace[],
+  where: string,
+  options: DiscOptions | undefined,
+): DiscVolume {
+  const n = discCountOf(options, where);
+  const traced = views.map((v) => traceView(v, where, n));
+  const a = traced[0]!, b = traced[1] ?? a;
+  let sum = 0;
+  for (let i = 0; i < n; i++) sum += a.diameters[i]! * b.diameters[i]!;
+  const longAxisCm = Math.max(a.longAxis.lengthCm, b.longAxis.lengthCm);
+  const r = evaluate(discSummationVolume, {
+    diameterProductSumCm2: sum,
+    longAxisCm,
+    discCount: n,
+  });
+  return {
+    volumeMl: r.outputs.volumeMl,
+    longAxisCm,
+    discCount: n,
+    diameterProductSumCm2: sum,
+    views: traced,
+    flags: [...r.flags, ...(b === a ? [] : mismatchFlag(a, b))],
+    cautions: b === a
+      ? [...r.cautions, "Single-plane discs assume circular cross-sections"]
+      : r.cautions,
+  };
+}
+
+/** A pair of orthogonal apical contours at one phase of the cycle. */
+export interface BiplaneContours {
+  /** Apical four-chamber contour, points in cm. */
+  readonly fourChamber: Contour;
+  /** Apical two-chamber contour, points in cm. */
+  readonly twoChamber: Contour;
+}
+
+const BIPLANE_EXPECTED = "as an object with 'fourChamber' and 'twoChamber' contours";
+
+/** The two views of a biplane pair, named by their argument path and phase. */
+function biplaneViews(contours: BiplaneContours, path = "", phase = ""): ViewToTrace[] {
+  return [
+    {
+      contour: contours.fourChamber,
+      field: `${path}fourChamber`,
+      view: `${phase}apical four-chamber`,
+    },
+    {
+      contour: contours.twoChamber,
+      field: `${path}twoChamber`,
+      view: `${phase}apical two-chamber`,
+    },
+  ];
+}
+
+/**
  * Chamber volume by the biplane method of discs from traced contours in two orthogonal apical
  * views (four-chamber and two-chamber).
  *
@@ -307,9 +376,10 @@ function mismatchFlag(a: TracedView, b: TracedView): string[] {
  * @param contours `fourChamber` and `twoChamber` contours, points in cm.
  * @param options `discCount` (default 20; other values for verification only, and flagged).
  * @returns Volume, the long axis used, the per-view geometry, flags and cautions.
- * @throws {TypeError} For a contour that is not an array of points.
+ * @throws {TypeError} For contours that are not an object of point arrays.
  * @throws {RangeError} For a contour with fewer than 3 points, non-finite coordinates, repeated
- * points or a self-intersection (the message names the view and point index), or a bad disc count.
+ * points or a self-intersection (the message names the contour and point index), or a disc count
+ * that is not a whole number in its valid range.
  *
  * @example Half-ellipse contours (L = 8 cm, D = 4 cm): volume close to π/6·L·D² = 67.02 mL
  * ```ts
@@ -323,36 +393,10 @@ function mismatchFlag(a: TracedView, b: TracedView): string[] {
  * assert.ok(Math.abs(v / ((Math.PI / 6) * 8 * 16) - 1) < 1e-3);
  * ```
  */
-export function biplaneDiscVolume(
-  contours: { readonly fourChamber: Contour; readonly twoChamber: Contour },
-  options?: DiscOptions,
-): DiscVolume {
+export function biplaneDiscVolume(contours: BiplaneContours, options?: DiscOptions): DiscVolume {
   const where = "Biplane method of discs";
-  if (typeof contours !== "object" || contours === null) {
-    throw new TypeError(
-      `${where}: expected an object with 'fourChamber' and 'twoChamber' contours, got ${contours}`,
-    );
-  }
-  const n = discCountOf(options, where);
-  const a = traceView(contours.fourChamber, "apical four-chamber", where, n);
-  const b = traceView(contours.twoChamber, "apical two-chamber", where, n);
-  let sum = 0;
-  for (let i = 0; i < n; i++) sum += a.diameters[i]! * b.diameters[i]!;
-  const longAxisCm = Math.max(a.longAxis.lengthCm, b.longAxis.lengthCm);
-  const r = evaluate(discSummationVolume, {
-    diameterProductSumCm2: sum,
-    longAxisCm,
-    discCount: n,
-  });
-  return {
-    volumeMl: r.outputs.volumeMl,
-    longAxisCm,
-    discCount: n,
-    diameterProductSumCm2: sum,
-    views: [a, b],
-    flags: [...r.flags, ...mismatchFlag(a, b)],
-    cautions: r.cautions,
-  };
+  checkObject(contours, where, "contours", BIPLANE_EXPECTED);
+  return discVolume(biplaneViews(contours), where, options);
 }
 
 /**
@@ -386,25 +430,18 @@ export function singlePlaneDiscVolume(
   contour: Contour,
   options?: DiscOptions & { readonly view?: string },
 ): DiscVolume {
-  const where = "Single-plane method of discs";
-  const n = discCountOf(options, where);
-  const a = traceView(contour, options?.view ?? "apical four-chamber", where, n);
-  let sum = 0;
-  for (let i = 0; i < n; i++) sum += a.diameters[i]! ** 2;
-  const r = evaluate(discSummationVolume, {
-    diameterProductSumCm2: sum,
-    longAxisCm: a.longAxis.lengthCm,
-    discCount: n,
-  });
-  return {
-    volumeMl: r.outputs.volumeMl,
-    longAxisCm: a.longAxis.lengthCm,
-    discCount: n,
-    diameterProductSumCm2: sum,
-    views: [a],
-    flags: r.flags,
-    cautions: [...r.cautions, "Single-plane discs assume circular cross-sections"],
-  };
+  const view = options?.view ?? "apical four-chamber";
+  return discVolume([{ contour, field: "contour", view }], "Single-plane method of discs", options);
+}
+
+/** Result of {@linkcode areaLengthVolumeFromContour}. */
+export interface ContourAreaLengthVolume extends ResultNotes {
+  /** Volume, mL. */
+  readonly volumeMl: number;
+  /** Area enclosed by the contour and the annulus segment, cm². */
+  readonly areaCm2: number;
+  /** Long axis, cm. */
+  readonly longAxisCm: number;
 }
 
 /**
@@ -426,20 +463,14 @@ export function singlePlaneDiscVolume(
  * import { areaLengthVolumeFromContour } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
  * const r = areaLengthVolumeFromContour([[-2, 0], [0, 8], [2, 0]]);
- * assert.equal(r.areaCm2, 16);
+ * assert.equal(r.areaCm2, 16); // ½·4·8, hand-checkable
  * assert.ok(Math.abs(r.volumeMl - 0.85 * 256 / 8) < 1e-9);
  * ```
  */
 export function areaLengthVolumeFromContour(
   contour: Contour,
   options?: { readonly view?: string },
-): {
-  volumeMl: number;
-  areaCm2: number;
-  longAxisCm: number;
-  flags: readonly string[];
-  cautions: readonly string[];
-} {
+): ContourAreaLengthVolume {
   const where = "Area–length volume";
   const c = validateContour(contour, where, options?.view ?? "apical four-chamber");
   const axis = contourLongAxis(c);
@@ -454,18 +485,22 @@ export function areaLengthVolumeFromContour(
   };
 }
 
-/** A pair of orthogonal apical contours at one phase of the cycle. */
-export interface BiplaneContours {
-  /** Apical four-chamber contour, points in cm. */
-  readonly fourChamber: Contour;
-  /** Apical two-chamber contour, points in cm. */
-  readonly twoChamber: Contour;
+/** Result of {@linkcode biplaneEjectionFraction}. */
+export interface BiplaneEjectionFraction extends ResultNotes {
+  /** The end-diastolic volume by discs. */
+  readonly endDiastole: DiscVolume;
+  /** The end-systolic volume by discs. */
+  readonly endSystole: DiscVolume;
+  /** Ejection fraction, %. */
+  readonly ejectionFractionPercent: number;
+  /** Stroke volume, mL. */
+  readonly strokeVolumeMl: number;
 }
 
 /**
  * Biplane (method of discs) end-diastolic and end-systolic volumes, ejection fraction and stroke
- * volume from four traced contours; composes {@linkcode biplaneDiscVolume} and
- * {@linkcode ejectionFraction}.
+ * volume from four traced contours: the two disc volumes feed {@linkcode ejectionFraction}, whose
+ * constraint (ESV ≤ EDV) is checked with this function's name.
  *
  * Formula: EDV, ESV by V = (π/4)·Σ aᵢ·bᵢ·L/20; EF = 100·(EDV − ESV)/EDV; SV = EDV − ESV
  *
@@ -475,8 +510,9 @@ export interface BiplaneContours {
  * @param contours End-diastolic and end-systolic contour pairs.
  * @param options `discCount` (default 20).
  * @returns The two volume results, EF (%), SV (mL), flags and cautions.
- * @throws {RangeError} For invalid contours, or when the end-systolic volume exceeds the
- * end-diastolic volume.
+ * @throws {TypeError} For contours that are not objects of point arrays.
+ * @throws {RangeError} For invalid contours (the message names the phase and view), or when the
+ * end-systolic volume exceeds the end-diastolic volume.
  *
  * @example
  * ```ts
@@ -491,39 +527,31 @@ export interface BiplaneContours {
  *   endDiastole: { fourChamber: halfEllipse(8, 5), twoChamber: halfEllipse(8, 5) },
  *   endSystole: { fourChamber: halfEllipse(7, 3.5), twoChamber: halfEllipse(7, 3.5) },
  * });
+ * // half-ellipsoids: EF = 1 − (7·3.5²)/(8·5²) = 57.1 % (solid geometry)
  * assert.ok(r.ejectionFractionPercent > 55 && r.ejectionFractionPercent < 60);
  * ```
  */
 export function biplaneEjectionFraction(
   contours: { readonly endDiastole: BiplaneContours; readonly endSystole: BiplaneContours },
   options?: DiscOptions,
-): {
-  endDiastole: DiscVolume;
-  endSystole: DiscVolume;
-  ejectionFractionPercent: number;
-  strokeVolumeMl: number;
-  flags: readonly string[];
-  cautions: readonly string[];
-} {
+): BiplaneEjectionFraction {
   const where = "Biplane ejection fraction";
-  if (typeof contours !== "object" || contours === null) {
-    throw new TypeError(
-      `${where}: expected an object with 'endDiastole' and 'endSystole' contour pairs, got ${contours}`,
-    );
-  }
-  const ed = withPhase(() => biplaneDiscVolume(contours.endDiastole, options), "end-diastolic");
-  const es = withPhase(() => biplaneDiscVolume(contours.endSystole, options), "end-systolic");
-  if (!(es.volumeMl <= ed.volumeMl)) {
-    throw new RangeError(
-      `${where}: expected the end-systolic volume not to exceed the end-diastolic volume (${
-        ed.volumeMl.toFixed(2)
-      } mL), got ${es.volumeMl.toFixed(2)} mL`,
-    );
-  }
-  const r = evaluate(ejectionFraction, {
-    endDiastolicVolumeMl: ed.volumeMl,
-    endSystolicVolumeMl: es.volumeMl,
-  });
+  checkObject(contours, where, "contours", "as an object with 'endDiastole' and 'endSystole'");
+  checkObject(contours.endDiastole, where, "endDiastole", BIPLANE_EXPECTED);
+  checkObject(contours.endSystole, where, "endSystole", BIPLANE_EXPECTED);
+  const ed = discVolume(
+    biplaneViews(contours.endDiastole, "endDiastole.", "end-diastolic "),
+    where,
+    options,
+  );
+  const es = discVolume(
+    biplaneViews(contours.endSystole, "endSystole.", "end-systolic "),
+    where,
+    options,
+  );
+  const volumes = { endDiastolicVolumeMl: ed.volumeMl, endSystolicVolumeMl: es.volumeMl };
+  throwIfErrors(checkConstraints({ ...ejectionFraction, title: where }, volumes));
+  const r = evaluate(ejectionFraction, volumes);
   return {
     endDiastole: ed,
     endSystole: es,
@@ -538,17 +566,24 @@ export function biplaneEjectionFraction(
   };
 }
 
-/** Runs `fn`, prefixing the phase to the view name in any contour error. */
-function withPhase<T>(fn: () => T, phase: string): T {
-  try {
-    return fn();
-  } catch (e) {
-    if (e instanceof RangeError || e instanceof TypeError) {
-      const message = e.message.replace(/apical (four|two)-chamber/, `${phase} apical $1-chamber`);
-      throw e instanceof RangeError ? new RangeError(message) : new TypeError(message);
-    }
-    throw e;
-  }
+/** Result of {@linkcode leftAtrialVolume}. */
+export interface LeftAtrialVolume extends ResultNotes {
+  /** Biplane area–length volume, mL. */
+  readonly areaLengthMl: number;
+  /** Biplane method-of-discs volume, mL. */
+  readonly discsMl: number;
+  /** Area–length volume / BSA, mL/m² (when BSA is given). */
+  readonly areaLengthIndexMlPerM2?: number;
+  /** Discs volume / BSA, mL/m² (when BSA is given). */
+  readonly discsIndexMlPerM2?: number;
+  /** Area of the four-chamber contour, cm². */
+  readonly fourChamberAreaCm2: number;
+  /** Area of the two-chamber contour, cm². */
+  readonly twoChamberAreaCm2: number;
+  /** Length used by the area–length method (the shorter long axis), cm. */
+  readonly areaLengthLengthCm: number;
+  /** The method-of-discs result. */
+  readonly discs: DiscVolume;
 }
 
 /**
@@ -567,8 +602,8 @@ function withPhase<T>(fn: () => T, phase: string): T {
  * @param contours `fourChamber` and `twoChamber` LA contours in cm, hinge to hinge.
  * @param options `bodySurfaceAreaM2` (m², for the indexed volumes), `discCount` (default 20).
  * @returns Both volumes, the indexed volumes when BSA is given, areas, lengths, flags, cautions.
- * @throws {TypeError} For a contour that is not an array of points.
- * @throws {RangeError} For an invalid contour or a BSA outside (0, 5] m².
+ * @throws {TypeError} For contours that are not an object of point arrays.
+ * @throws {RangeError} For an invalid contour or a BSA outside its valid range.
  *
  * @example
  * ```ts
@@ -579,36 +614,22 @@ function withPhase<T>(fn: () => T, phase: string): T {
  *   return [2 * Math.cos(t), 5 * Math.sin(t)] as [number, number];
  * });
  * const r = leftAtrialVolume({ fourChamber: half, twoChamber: half }, { bodySurfaceAreaM2: 2 });
- * assert.ok(Math.abs(r.discsMl - (Math.PI / 6) * 5 * 16) < 0.2);
- * assert.ok(r.discsIndexMlPerM2 !== undefined && r.discsIndexMlPerM2 > 20);
+ * assert.ok(Math.abs(r.discsMl - (Math.PI / 6) * 5 * 16) < 0.2); // half-ellipsoid, solid geometry
+ * assert.ok(r.discsIndexMlPerM2 !== undefined && Math.abs(r.discsIndexMlPerM2 - r.discsMl / 2) < 1e-12);
  * ```
  */
 export function leftAtrialVolume(
-  contours: { readonly fourChamber: Contour; readonly twoChamber: Contour },
+  contours: BiplaneContours,
   options?: DiscOptions & { readonly bodySurfaceAreaM2?: number },
-): {
-  areaLengthMl: number;
-  discsMl: number;
-  areaLengthIndexMlPerM2?: number;
-  discsIndexMlPerM2?: number;
-  fourChamberAreaCm2: number;
-  twoChamberAreaCm2: number;
-  areaLengthLengthCm: number;
-  discs: DiscVolume;
-  flags: readonly string[];
-  cautions: readonly string[];
-} {
+): LeftAtrialVolume {
   const where = "Left atrial volume";
-  if (typeof contours !== "object" || contours === null) {
-    throw new TypeError(
-      `${where}: expected an object with 'fourChamber' and 'twoChamber' contours, got ${contours}`,
-    );
-  }
+  checkObject(contours, where, "contours", BIPLANE_EXPECTED);
   const bsa = options?.bodySurfaceAreaM2;
-  if (bsa !== undefined && !(typeof bsa === "number" && bsa > 0 && bsa <= 5)) {
-    throw new RangeError(`${where}: expected 'bodySurfaceAreaM2' in (0, 5] m², got ${bsa}`);
+  if (bsa !== undefined) {
+    const field = quantityField(BODY_SURFACE_AREA);
+    throwIfErrors(checkValue("bodySurfaceAreaM2", field, bsa, { where }).issues);
   }
-  const discs = withName(() => biplaneDiscVolume(contours, options), where);
+  const discs = discVolume(biplaneViews(contours), where, options);
   const [a, b] = discs.views as [TracedView, TracedView];
   const lengthCm = Math.min(a.longAxis.lengthCm, b.longAxis.lengthCm);
   const al = evaluate(biplaneAreaLengthVolume, {
@@ -639,17 +660,4 @@ export function leftAtrialVolume(
     flags: [...out.flags, ...discsIndex.flags],
     cautions: [...out.cautions, ...indexLaVolume.cautions],
   };
-}
-
-/** Runs `fn`, replacing the method prefix of any error message with `name`. */
-function withName<T>(fn: () => T, name: string): T {
-  try {
-    return fn();
-  } catch (e) {
-    if (e instanceof RangeError || e instanceof TypeError) {
-      const message = e.message.replace(/^Biplane method of discs/, name);
-      throw e instanceof RangeError ? new RangeError(message) : new TypeError(message);
-    }
-    throw e;
-  }
 }

@@ -115,8 +115,6 @@ export interface CalculationSpec<I extends string, O extends string> {
   readonly formulaText: string;
   /** Published sources for the formula and its constants. */
   readonly citations?: readonly Citation[];
-  /** @deprecated the old name of `citations` */
-  readonly sources?: readonly Citation[];
   /** Cautions specific to this calculation. */
   readonly cautions: readonly string[];
   /** Relations between inputs that must hold; a violation is a RangeError naming the inputs. */
@@ -291,7 +289,7 @@ export function defineCalculation<I extends string, O extends string>(
   if (outputNames.length === 0) {
     throw new TypeError(`${spec.title}: expected at least one output, got none`);
   }
-  const citations = spec.citations ?? spec.sources ?? [];
+  const citations = spec.citations ?? [];
   if (citations.length === 0) {
     throw new TypeError(`${spec.title}: expected at least one published source, got none`);
   }

@@ -160,6 +160,11 @@ export function rebuild(catalog: Catalog, recipe: Recipe): Calculation {
       return f.fromData(recipe.parameter);
     }
     case "chain": {
+      // a chain the catalog registers comes back as that same object
+      const text = JSON.stringify(recipe);
+      for (const c of catalog.calculations.values()) {
+        if (c.recipe.kind === "chain" && JSON.stringify(c.recipe) === text) return c;
+      }
       const { renames, ...options } = recipe.options as ChainOptions & {
         renames: { inputs: Record<string, string>; outputs: Record<string, string> }[];
       };

@@ -108,13 +108,33 @@ export type Chained<A extends Calculation, B extends Calculation> = Calculation<
  * // Mosteller: √(180·80/3600) = 2 m² (hand-checkable); 190 g / 2 m² = 95 g/m²
  * const r = evaluate(lvMassIndex, { heightCm: 180, weightKg: 80, lvMass: 190 });
  * assert.equal(r.outputs.bsaM2, 2);
- * assert.equal(r.outputs.indexed, 95);
+ * assert.equal(r.outputs.lvMassIndex, 95);
  * ```
  */
 export function chain<A extends Calculation, B extends Calculation>(
   steps: readonly [A, B],
   options?: ChainOptions,
 ): Chained<A, B>;
+/**
+ * A chain of any number of steps, or of steps with renamed inputs or outputs (typed as a plain
+ * calculation); see the two-step form above for the rules.
+ *
+ * @param steps The calculations in order, each optionally with renames.
+ * @param options Id, title, outputs to keep.
+ * @returns The chain, itself a calculation.
+ *
+ * @example Three steps: PISA flow, then EROA, then regurgitant volume
+ * ```ts
+ * import { chain, effectiveRegurgitantOrificeArea, evaluate, pisaFlowRate, regurgitantVolume } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const pisa = chain([pisaFlowRate, effectiveRegurgitantOrificeArea, regurgitantVolume]);
+ * const r = evaluate(pisa, {
+ *   radiusCm: 1, aliasingVelocityCmPerS: 40, regurgitantPeakVelocity: 5, regurgitantVtiCm: 150,
+ * });
+ * // 2π·1²·40 = 251.3 mL/s; / 500 cm/s = 0.503 cm²; × 150 cm = 75.4 mL (hand-checkable)
+ * assert.ok(Math.abs(r.outputs.regurgitantVolumeMl! - 75.4) < 0.1);
+ * ```
+ */
 export function chain(steps: readonly ChainStep[], options?: ChainOptions): Calculation;
 export function chain(steps: readonly ChainStep[], options: ChainOptions = {}): Calculation {
   if (!Array.isArray(steps) || steps.length < 2) {

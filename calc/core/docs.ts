@@ -7,29 +7,9 @@
  */
 import { cautionsOf } from "./calculation.ts";
 import { formatRange } from "./range.ts";
-import { formatUnit } from "./text.ts";
+import { formatCitation, formatUnit } from "./text.ts";
 import { type Catalog, catalogCalculations } from "./catalog.ts";
-import type { Calculation, Citation } from "./types.ts";
-
-/**
- * Formats a citation as "Authors (year). Title. Publication, locator. doi:…".
- *
- * @example
- * ```ts
- * import { formatCitation } from "@sonorigor/sonorigor";
- * import assert from "node:assert/strict";
- * assert.equal(
- *   formatCitation({ authors: "Hatle L, Angelsen B", year: 1985, title: "Doppler Ultrasound in Cardiology", publication: "Lea & Febiger" }),
- *   "Hatle L, Angelsen B (1985). Doppler Ultrasound in Cardiology. Lea & Febiger.",
- * );
- * ```
- */
-export function formatCitation(c: Citation): string {
-  const locator = c.locator ? `, ${c.locator}` : "";
-  const doi = c.doi ? ` doi:${c.doi}` : "";
-  const year = c.year > 0 ? String(c.year) : "n.d.";
-  return `${c.authors} (${year}). ${c.title}. ${c.publication}${locator}.${doi}`;
-}
+import type { Calculation } from "./types.ts";
 
 const cell = (s: string) => s.replace(/\|/g, "\\|").replace(/\n/g, " ");
 

@@ -6,6 +6,7 @@
  * @module
  */
 import type { ValidationIssue } from "./types.ts";
+import { describeValue } from "./text.ts";
 
 /**
  * The message of an issue: who checked, where in the file, the field with its label, what was
@@ -48,7 +49,9 @@ export function renderIssue(issue: ValidationIssue): string {
         issue.note ? ` (${issue.note})` : ""
       }: interpret with care`;
     case "notMeasured":
-      return `${lead}${at}${field} not measured (empty cell)`;
+      return `${lead}${at}${field} not measured (empty cell)${issue.note ? `: ${issue.note}` : ""}`;
+    case "output":
+      return `${lead}${at}output ${field} expected ${issue.expected}, got ${issue.received}`;
     case "constraint":
       return `${lead}${at}expected ${issue.expected}, got ${issue.received}`;
     case "format":
@@ -65,6 +68,8 @@ export class InputTypeError extends TypeError {
   /** Every issue found, errors first; the message renders the first error. */
   readonly issues: readonly ValidationIssue[];
   /**
+   * Makes the error; prefer {@linkcode issueError}, which renders the message from the issues.
+   *
    * @param message The rendered message.
    * @param issues The issues.
    */
@@ -81,6 +86,8 @@ export class InputRangeError extends RangeError {
   /** Every issue found, errors first; the message renders the first error. */
   readonly issues: readonly ValidationIssue[];
   /**
+   * Makes the error; prefer {@linkcode issueError}, which renders the message from the issues.
+   *
    * @param message The rendered message.
    * @param issues The issues.
    */
@@ -119,7 +126,11 @@ export function issueError(
   if (first === undefined) {
     throw new TypeError("issueError: expected at least one error among the issues, got none");
   }
-  const more = errors.length > 1 ? ` (and ${errors.length - 1} more problems)` : "";
+  const more = errors.length === 2
+    ? " (and 1 more problem)"
+    : errors.length > 2
+    ? ` (and ${errors.length - 1} more problems)`
+    : "";
   const message = renderIssue(first) + more;
   const ordered = [...errors, ...issues.filter((i) => i.severity !== "error")];
   return TYPE_KINDS.has(first.kind)
@@ -143,4 +154,38 @@ export function issueError(
  */
 export function throwIfErrors(issues: readonly ValidationIssue[]): void {
   if (issues.some((i) => i.severity === "error")) throw issueError(issues);
+}
+
+/**
+ * The error for a setting that must be one of a list of choices (a guideline scheme, a sex, a
+ * parameter): a RangeError naming the field, the choices and the value received.
+ *
+ * @param where Who checks, e.g. "Mitral stenosis grading".
+ * @param field The setting's name.
+ * @param choices The valid choices.
+ * @param got The value received.
+ * @returns The error to throw.
+ *
+ * @example
+ * ```ts
+ * import { choiceError } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(choiceError("Demo", "sex", ["male", "female"], "x").message,
+ *   `Demo: expected 'sex' one of "male", "female", got "x"`);
+ * ```
+ */
+export function choiceError(
+  where: string,
+  field: string,
+  choices: readonly string[],
+  got: unknown,
+): InputRangeError {
+  return issueError([{
+    kind: "range",
+    severity: "error",
+    where,
+    field,
+    expected: `one of ${choices.map((c) => JSON.stringify(c)).join(", ")}`,
+    received: describeValue(got),
+  }]) as InputRangeError;
 }

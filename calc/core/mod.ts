@@ -21,7 +21,6 @@ export type {
   Population,
   Quantity,
   Recipe,
-  Reference,
   ValidationIssue,
   ValueRange,
 } from "./types.ts";
@@ -34,7 +33,7 @@ export {
   typicalRange,
 } from "./quantity.ts";
 export { formatRange, inRange, rangeWithin } from "./range.ts";
-export { describeValue, formatUnit, withUnit } from "./text.ts";
+export { describeValue, formatCitation, formatUnit, withUnit } from "./text.ts";
 export {
   type CalculationSpec,
   cautionsOf,
@@ -51,6 +50,7 @@ export {
   type OutputSpec,
 } from "./calculation.ts";
 export {
+  choiceError,
   InputRangeError,
   InputTypeError,
   issueError,
@@ -93,5 +93,5 @@ export {
   type SensitivityOptions,
   type SensitivityPoint,
 } from "./sensitivity.ts";
-export { calculationMarkdown, catalogMarkdown, formatCitation } from "./docs.ts";
+export { calculationMarkdown, catalogMarkdown } from "./docs.ts";
 export { evaluateColumns } from "./columns.ts";

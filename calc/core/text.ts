@@ -1,9 +1,10 @@
 /**
- * Text of units and values in messages: the one place that writes "cm²" for "cm^2" and shows an
- * unexpected value in an error.
+ * Text of units, values and citations: the one place that writes "cm²" for "cm^2", shows an
+ * unexpected value in an error and formats a citation.
  *
  * @module
  */
+import type { Citation } from "./types.ts";
 
 const SUPERSCRIPTS: Record<string, string> = {
   "2": "²",
@@ -85,4 +86,24 @@ export function describeValue(value: unknown): string {
   if (ArrayBuffer.isView(value)) return "a typed array";
   if (typeof value === "function") return "a function";
   return `a value of type ${typeof value}`;
+}
+
+/**
+ * Formats a citation as "Authors (year). Title. Publication, locator. doi:…".
+ *
+ * @example
+ * ```ts
+ * import { formatCitation } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(
+ *   formatCitation({ authors: "Hatle L, Angelsen B", year: 1985, title: "Doppler Ultrasound in Cardiology", publication: "Lea & Febiger" }),
+ *   "Hatle L, Angelsen B (1985). Doppler Ultrasound in Cardiology. Lea & Febiger.",
+ * );
+ * ```
+ */
+export function formatCitation(c: Citation): string {
+  const locator = c.locator ? `, ${c.locator}` : "";
+  const doi = c.doi ? ` doi:${c.doi}` : "";
+  const year = c.year > 0 ? String(c.year) : "n.d.";
+  return `${c.authors} (${year}). ${c.title}. ${c.publication}${locator}.${doi}`;
 }

@@ -34,9 +34,6 @@ export interface Citation {
   readonly doi?: string;
 }
 
-/** @deprecated the old name of {@linkcode Citation} */
-export type Reference = Citation;
-
 /**
  * A measured or derived quantity, declared once: everything that shows, reads or checks a value
  * of it (calculation inputs and outputs, table columns, chart axes, error messages) takes its

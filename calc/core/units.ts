@@ -98,6 +98,9 @@ export function readAmount(value: unknown, unit: string): number | AmountProblem
   if (typeof value === "string") {
     const text = value.trim();
     if (DECIMAL.test(text)) return Number(text);
+    // text that does not start with a number ("abc", "n/a") is not an amount at all, and a
+    // dimensionless field takes a plain number only
+    if (!/^[+-]?(\d|\.\d)/.test(text) || unit === "1") return { problem: "type" };
     const target = mathUnitOf(unit);
     if (target === null) {
       // a label mathjs does not know ("%", "bpm", "dB"): accept "63 %" or "63%"

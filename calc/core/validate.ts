@@ -48,7 +48,11 @@ export type CheckedField =
     InputDefinition,
     "label" | "unit" | "range" | "typical" | "typicalPediatric" | "default" | "narrowedBecause"
   >
-  & { readonly integer?: boolean };
+  & {
+    readonly integer?: boolean;
+    /** An input definition's quantity: its `integer` flag applies when `integer` is not set. */
+    readonly quantity?: { readonly integer: boolean };
+  };
 
 /**
  * The checked field of a quantity used directly (a table column, a command-line option).
@@ -171,7 +175,7 @@ export function checkValue(
       }],
     };
   }
-  if (def.integer && !Number.isInteger(read)) {
+  if ((def.integer ?? def.quantity?.integer) && !Number.isInteger(read)) {
     return {
       value: undefined,
       issues: [{
@@ -193,7 +197,8 @@ export function checkValue(
         ...base,
         kind: "typical",
         severity: "warning",
-        received: withUnit(String(read), def.unit),
+        // a note, not an error: six significant digits read better than a computed 2.5495403941762333
+        received: withUnit(String(Number(read.toPrecision(6))), def.unit),
         value: read,
         range: typical,
         expected: formatRange(typical, def.unit),
@@ -227,7 +232,7 @@ export interface ValidateOptions {
  * ```ts
  * import { checkInputs, continuityValveArea } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
- * const r = checkInputs(continuityValveArea, { lvotDiameterCm: "abc", lvotVtiCm: -1 });
+ * const r = checkInputs(continuityValveArea, { lvotDiameterCm: "21 mmHg", lvotVtiCm: -1 });
  * assert.deepEqual(r.issues.map((i) => i.kind), ["unit", "range", "missing"]);
  * ```
  */

@@ -9,27 +9,40 @@
  *
  * @module
  */
-import { defineCalculation } from "../core/define.ts";
+import { defineCalculation, type InputRole } from "../core/calculation.ts";
 import type { Calculation } from "../core/types.ts";
-import type { InlineInput } from "../core/calculation.ts";
+import {
+  AORTIC_VALVE_AREA,
+  DOPPLER_UNDERESTIMATION,
+  PEAK_GRADIENT,
+  PEAK_VELOCITY,
+  VALVE_AREA_ERROR,
+} from "../quantities/flow.ts";
+import { SIGNED_INSONATION_ANGLE } from "../quantities/ultrasound.ts";
 import { angleCorrectedVelocity } from "../physics/doppler.ts";
 import { simplifiedBernoulli } from "./bernoulli.ts";
 import { continuityValveAreaPeakVelocity } from "./valve_area.ts";
-import { BAUMGARTNER_2009, HATLE_ANGELSEN_1985 } from "./sources.ts";
+import { BAUMGARTNER_2009, HATLE_ANGELSEN_1985 } from "./citations.ts";
+
+// Why these two are compositions, not chains (`chain`):
+// - both need the angle signed, with a default of 0°, so that an angle uncertain around 0°
+//   propagates without impossible draws; the physics angle correction takes an unsigned angle, and
+//   a chain takes each input's range from the step that reads it;
+// - both report shortfalls that compare two results of one step (displayed against true gradient,
+//   aligned against corrected area), which a chain could only give through one-off calculations;
+// - in the continuity area, the displayed LVOT and jet velocities feed both the aligned area (as the
+//   LVOT and aortic-jet velocity quantities, distinct so that one table can hold both) and the angle
+//   correction (one generic velocity): a chain names each input once, with one quantity, and
+//   refuses that.
+// The compositions call each step's own formula, so nothing is written twice.
 
 /** The cos θ correction, computed by the physics module's single definition. */
 function trueVelocityAt(measuredVelocity: number, angleDeg: number): number {
   return angleCorrectedVelocity.formula({ measuredVelocity, angleDeg }).trueVelocity;
 }
 
-function signedAngle(description: string): InlineInput {
-  return {
-    unit: "deg",
-    description,
-    range: { min: -90, max: 90, minExclusive: true, maxExclusive: true },
-    typical: { min: -20, max: 20 },
-    default: 0,
-  };
+function signedAngle(label: string, description: string): InputRole {
+  return { quantity: SIGNED_INSONATION_ANGLE, label, description, default: 0 };
 }
 
 /**
@@ -43,8 +56,8 @@ function signedAngle(description: string): InlineInput {
  * Source: Hatle L, Angelsen B. Doppler Ultrasound in Cardiology, 1985, ch. 2 (angle dependence);
  * Baumgartner H, et al. J Am Soc Echocardiogr 2009;22:1-23 (alignment of the CW beam).
  *
- * Throws (through `evaluate`) a RangeError for a velocity outside (0, 10] m/s or an angle outside
- * (−90, 90) degrees.
+ * @throws {RangeError} (through `evaluate`) for a velocity or angle outside its valid range, or an
+ * angle so steep that the true velocity exceeds any blood velocity.
  *
  * @example
  * ```ts
@@ -71,23 +84,42 @@ export const insonationAngleEffect: Calculation<
     "True velocity and gradient behind a Doppler reading taken at an angle to the flow, and how much the reading underestimates each.",
   inputs: {
     measuredVelocity: {
-      unit: "m/s",
+      quantity: PEAK_VELOCITY,
+      label: "Displayed velocity",
       description: "Velocity displayed assuming the beam is parallel to the flow",
-      range: { min: 0, max: 10, minExclusive: true },
+      valid: { min: 0, max: 10, minExclusive: true },
       typical: { min: 0.2, max: 7 },
+      reason:
+        "the shortfalls are relative to the true velocity, which a zero reading leaves undefined",
     },
-    angleDeg: signedAngle("Angle between the beam and the flow (signed; 0 = parallel)"),
+    angleDeg: signedAngle(
+      SIGNED_INSONATION_ANGLE.label,
+      "Angle between the beam and the flow (signed; 0 = parallel)",
+    ),
   },
   outputs: {
-    trueVelocity: { unit: "m/s", description: "Velocity along the flow" },
+    trueVelocity: {
+      quantity: PEAK_VELOCITY,
+      label: "True velocity",
+      description: "Velocity along the flow",
+    },
     velocityUnderestimationPercent: {
-      unit: "%",
+      quantity: DOPPLER_UNDERESTIMATION,
+      label: "Velocity underestimation",
       description: "Shortfall of the displayed velocity relative to the true velocity",
     },
-    measuredGradient: { unit: "mmHg", description: "Gradient from the displayed velocity" },
-    trueGradient: { unit: "mmHg", description: "Gradient from the true velocity" },
+    measuredGradient: {
+      quantity: PEAK_GRADIENT,
+      label: "Gradient from the displayed velocity",
+    },
+    trueGradient: {
+      quantity: PEAK_GRADIENT,
+      label: "True gradient",
+      description: "Gradient from the true velocity",
+    },
     gradientUnderestimationPercent: {
-      unit: "%",
+      quantity: DOPPLER_UNDERESTIMATION,
+      label: "Gradient underestimation",
       description: "Shortfall of the displayed gradient relative to the true gradient",
     },
   },
@@ -106,7 +138,7 @@ export const insonationAngleEffect: Calculation<
   },
   formulaText:
     "v_true = v/cos θ; ΔP = 4·v²; shortfalls 100·(1 − v/v_true) % and 100·(1 − ΔP/ΔP_true) %",
-  sources: [HATLE_ANGELSEN_1985, BAUMGARTNER_2009],
+  citations: [HATLE_ANGELSEN_1985, BAUMGARTNER_2009],
   cautions: [...angleCorrectedVelocity.cautions],
   clinical: true,
 });
@@ -123,8 +155,8 @@ export const insonationAngleEffect: Calculation<
  * Source: Baumgartner H, et al. J Am Soc Echocardiogr 2009;22:1-23 (continuity equation; a
  * misaligned jet underestimates velocity and overestimates the area).
  *
- * Throws (through `evaluate`) a RangeError for a diameter outside (0, 5] cm, a velocity outside
- * (0, 10] m/s or an angle outside (−90, 90) degrees.
+ * @throws {RangeError} (through `evaluate`) for a diameter, velocity or angle outside its valid
+ * range.
  *
  * @example
  * ```ts
@@ -149,18 +181,29 @@ export const continuityValveAreaWithAngles: Calculation<
   inputs: {
     lvotDiameterCm: continuityValveAreaPeakVelocity.inputs.lvotDiameterCm,
     lvotPeakVelocity: continuityValveAreaPeakVelocity.inputs.lvotPeakVelocity,
-    lvotAngleDeg: signedAngle("Angle between the pulsed-wave beam and LVOT flow (signed)"),
+    lvotAngleDeg: signedAngle(
+      "LVOT beam angle",
+      "Angle between the pulsed-wave beam and LVOT flow (signed)",
+    ),
     avPeakVelocity: continuityValveAreaPeakVelocity.inputs.avPeakVelocity,
-    avAngleDeg: signedAngle("Angle between the continuous-wave beam and the aortic jet (signed)"),
+    avAngleDeg: signedAngle(
+      "Aortic jet beam angle",
+      "Angle between the continuous-wave beam and the aortic jet (signed)",
+    ),
   },
   outputs: {
-    avaCm2: { unit: "cm^2", description: "Aortic valve area from angle-corrected velocities" },
+    avaCm2: {
+      quantity: AORTIC_VALVE_AREA,
+      description: "Aortic valve area from angle-corrected velocities",
+    },
     avaAssumingAlignmentCm2: {
-      unit: "cm^2",
+      quantity: AORTIC_VALVE_AREA,
+      label: "Aortic valve area assuming alignment",
       description: "Aortic valve area assuming both beams are parallel to flow",
     },
     areaOverestimationPercent: {
-      unit: "%",
+      quantity: VALVE_AREA_ERROR,
+      label: "Valve-area overestimation",
       description: "Excess of the aligned-assumption area over the angle-corrected area",
     },
   },
@@ -182,7 +225,7 @@ export const continuityValveAreaWithAngles: Calculation<
     };
   },
   formulaText: "AVA = π·d²/4 · (V_LVOT/cos θ_LVOT)/(V_AV/cos θ_AV)",
-  sources: [BAUMGARTNER_2009],
+  citations: [BAUMGARTNER_2009],
   cautions: [...continuityValveAreaPeakVelocity.cautions, ...angleCorrectedVelocity.cautions],
   clinical: true,
 });

@@ -3,9 +3,10 @@
  *
  * @module
  */
-import { defineCalculation } from "../core/define.ts";
+import { defineCalculation, notAbove } from "../core/calculation.ts";
 import type { Calculation } from "../core/types.ts";
-import { BAUMGARTNER_2009, HATLE_ANGELSEN_1985 } from "./sources.ts";
+import { PEAK_GRADIENT, PEAK_VELOCITY } from "../quantities/flow.ts";
+import { BAUMGARTNER_2009, HATLE_ANGELSEN_1985 } from "./citations.ts";
 
 /**
  * Simplified Bernoulli equation: peak instantaneous pressure gradient from a peak velocity.
@@ -13,13 +14,10 @@ import { BAUMGARTNER_2009, HATLE_ANGELSEN_1985 } from "./sources.ts";
  * Formula: ΔP [mmHg] = 4 · v² [m/s]. The factor 4 is ½ρ for blood (ρ ≈ 1060 kg/m³) converted to
  * mmHg, with viscous and flow-acceleration terms neglected.
  *
- * Inputs: `peakVelocity` in m/s (a magnitude, [0, 10]; validated range [0, 7]).
- * Output: `gradient` in mmHg.
- *
  * Source: Hatle L, Angelsen B. Doppler Ultrasound in Cardiology, 2nd ed., 1985, ch. 2;
  * Baumgartner H, et al. J Am Soc Echocardiogr 2009;22:1-23 (EAE/ASE valve stenosis).
  *
- * Throws (through `evaluate`) a RangeError for a negative or non-finite velocity.
+ * @throws {RangeError} (through `evaluate`) for a negative or non-finite velocity.
  *
  * @example
  * ```ts
@@ -32,18 +30,11 @@ export const simplifiedBernoulli: Calculation<"peakVelocity", "gradient"> = defi
   id: "simplifiedBernoulli",
   title: "Simplified Bernoulli gradient",
   description: "Peak instantaneous pressure gradient across a restriction from the peak velocity.",
-  inputs: {
-    peakVelocity: {
-      unit: "m/s",
-      description: "Peak Doppler velocity through the restriction (magnitude)",
-      range: { min: 0, max: 10 },
-      typical: { min: 0, max: 7 },
-    },
-  },
-  outputs: { gradient: { unit: "mmHg", description: "Peak instantaneous pressure gradient" } },
+  inputs: { peakVelocity: PEAK_VELOCITY },
+  outputs: { gradient: PEAK_GRADIENT },
   formula: ({ peakVelocity }) => ({ gradient: 4 * peakVelocity * peakVelocity }),
   formulaText: "ΔP = 4·v²",
-  sources: [HATLE_ANGELSEN_1985, BAUMGARTNER_2009],
+  citations: [HATLE_ANGELSEN_1985, BAUMGARTNER_2009],
   cautions: [
     "Neglects the proximal velocity; use the modified form when it exceeds about 1.5 m/s",
     "Velocity underestimated by a non-parallel beam is squared into the gradient",
@@ -56,15 +47,13 @@ export const simplifiedBernoulli: Calculation<"peakVelocity", "gradient"> = defi
  *
  * Formula: ΔP [mmHg] = 4 · (v₂² − v₁²), with v₂ the jet (distal) velocity and v₁ the proximal
  * (e.g. LVOT) velocity, both in m/s. Computed as the difference of two simplified-Bernoulli terms.
- *
- * Inputs: `jetVelocity` (v₂) and `proximalVelocity` (v₁), magnitudes in m/s.
- * Output: `gradient` in mmHg. A negative result means the proximal velocity exceeds the jet
- * velocity: check that the inputs are not swapped.
+ * The proximal velocity must not exceed the jet velocity (swapped inputs are refused).
  *
  * Source: Baumgartner H, et al. J Am Soc Echocardiogr 2009;22:1-23, section on pressure gradients
  * (from memory); Hatle L, Angelsen B, 1985.
  *
- * Throws (through `evaluate`) a RangeError for a negative or non-finite velocity.
+ * @throws {RangeError} (through `evaluate`) for a negative or non-finite velocity, or a proximal
+ * velocity above the jet velocity.
  *
  * @example
  * ```ts
@@ -83,27 +72,33 @@ export const modifiedBernoulli: Calculation<"jetVelocity" | "proximalVelocity", 
       "Peak pressure gradient across a restriction corrected for the velocity proximal to it.",
     inputs: {
       jetVelocity: {
-        unit: "m/s",
+        quantity: PEAK_VELOCITY,
+        label: "Jet velocity",
         description: "Peak jet velocity through the restriction, v₂ (magnitude)",
-        range: { min: 0, max: 10 },
-        typical: { min: 0, max: 7 },
       },
       proximalVelocity: {
-        unit: "m/s",
+        quantity: PEAK_VELOCITY,
+        label: "Proximal velocity",
         description: "Peak velocity proximal to the restriction, v₁ (magnitude)",
-        range: { min: 0, max: 10 },
         typical: { min: 0, max: 3 },
+        reason: "flow proximal to a restriction (LVOT, RVOT) rarely exceeds 3 m/s",
       },
     },
-    outputs: { gradient: { unit: "mmHg", description: "Peak pressure gradient" } },
+    outputs: {
+      gradient: {
+        quantity: PEAK_GRADIENT,
+        description: "Peak pressure gradient corrected for the proximal velocity",
+      },
+    },
     formula: ({ jetVelocity, proximalVelocity }) => ({
       gradient: simplifiedBernoulli.formula({ peakVelocity: jetVelocity }).gradient -
         simplifiedBernoulli.formula({ peakVelocity: proximalVelocity }).gradient,
     }),
     formulaText: "ΔP = 4·(v₂² − v₁²)",
-    sources: [BAUMGARTNER_2009, HATLE_ANGELSEN_1985],
+    citations: [BAUMGARTNER_2009, HATLE_ANGELSEN_1985],
     cautions: [
-      "A negative gradient means the proximal velocity exceeds the jet velocity: check the inputs",
+      "The proximal velocity must be sampled just below the restriction, on the same beat",
     ],
+    constraints: [notAbove("proximalVelocity", "jetVelocity")],
     clinical: true,
   });

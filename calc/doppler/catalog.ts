@@ -1,6 +1,7 @@
 /**
  * The Doppler hemodynamics calculations this domain registers in the package's catalog. A calculation
- * of this domain is registered by adding it here.
+ * of this domain is registered by adding it here. The cardiac index and the indexed valve area are
+ * members of the indexing family (`indexedToBsa`), registered with the family.
  *
  * @module
  */
@@ -8,7 +9,6 @@ import type { Calculation } from "../core/types.ts";
 import { continuityValveAreaWithAngles, insonationAngleEffect } from "./angle.ts";
 import { modifiedBernoulli, simplifiedBernoulli } from "./bernoulli.ts";
 import {
-  cardiacIndex,
   cardiacOutput,
   crossSectionalArea,
   pulmonarySystemicFlowRatio,
@@ -32,7 +32,6 @@ import {
   continuityValveArea,
   continuityValveAreaPeakVelocity,
   dimensionlessIndex,
-  indexedValveArea,
   mitralValveAreaPressureHalfTime,
   pressureHalfTimeFromDecelerationTime,
   pressureHalfTimeFromSlope,
@@ -43,13 +42,14 @@ import {
  *
  * @example
  * ```ts
- * import { DOPPLER_CALCULATIONS } from "@sonorigor/sonorigor";
+ * import { DOPPLER_CALCULATIONS, pisaRegurgitation } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
- * assert.ok(DOPPLER_CALCULATIONS.length > 0);
+ * // the PISA chain is registered under its own id, and rebuilt in a worker from its steps
+ * assert.ok(DOPPLER_CALCULATIONS.includes(pisaRegurgitation));
+ * assert.equal(pisaRegurgitation.recipe.kind, "chain");
  * ```
  */
 export const DOPPLER_CALCULATIONS: readonly Calculation[] = [
-  cardiacIndex,
   cardiacOutput,
   continuityValveArea,
   continuityValveAreaPeakVelocity,
@@ -57,7 +57,6 @@ export const DOPPLER_CALCULATIONS: readonly Calculation[] = [
   crossSectionalArea,
   dimensionlessIndex,
   effectiveRegurgitantOrificeArea,
-  indexedValveArea,
   insonationAngleEffect,
   mitralValveAreaPressureHalfTime,
   modifiedBernoulli,

@@ -8,6 +8,12 @@
  *
  * @module
  */
+import { defineArguments } from "../core/calculation.ts";
+import { issueError, throwIfErrors } from "../core/issues.ts";
+import { describeValue } from "../core/text.ts";
+import type { ValidationIssue } from "../core/types.ts";
+import { checkValue } from "../core/validate.ts";
+import { BLOOD_VELOCITY } from "../quantities/flow.ts";
 import { simplifiedBernoulli } from "./bernoulli.ts";
 
 /** A traced spectral Doppler envelope. */
@@ -31,26 +37,48 @@ export interface EnvelopeGradients {
 }
 
 const WHERE = "Velocity envelope";
-const MAX_VELOCITY = 10;
+
+/** One sample of the traced velocity, checked by the one validator. */
+const ENVELOPE_VELOCITY = defineArguments(WHERE, {
+  velocity: {
+    quantity: BLOOD_VELOCITY,
+    label: "Envelope velocity",
+    description: "Velocity magnitude of the traced envelope at one sample time",
+    valid: { min: 0, max: 10 },
+    typical: { min: 0, max: 7 },
+    reason:
+      "an envelope is traced as a magnitude (below the baseline as positive values), and no blood velocity reaches 10 m/s",
+  },
+}).inputs.velocity;
 
 function isArrayLike(value: unknown): value is ArrayLike<unknown> {
   return Array.isArray(value) || ArrayBuffer.isView(value) && !(value instanceof DataView);
+}
+
+/** An error issue of the envelope, rendered by the one message format. */
+function problem(
+  kind: ValidationIssue["kind"],
+  field: string,
+  expected: string,
+  received: string,
+): ValidationIssue {
+  return { kind, severity: "error", where: WHERE, field, expected, received };
 }
 
 /**
  * Validates a velocity envelope and returns it as two plain arrays.
  *
  * Checks: both fields are arrays (or typed arrays) of equal length with at least 2 samples; every
- * time is finite and strictly greater than the previous one; every velocity is finite and in
- * [0, 10] m/s.
+ * time is a finite number strictly greater than the previous one; every velocity is a number in
+ * the valid range of an envelope velocity, [0, 10] m/s (by the one validator).
  *
  * @param envelope The envelope `{ timesMs, velocitiesMPerS }`.
  * @returns Copies of the times (ms) and velocities (m/s).
- * @throws {TypeError} When the envelope is not an object, a field is not an array, or the
- * lengths differ.
+ * @throws {TypeError} When the envelope is not an object, a field is not an array, a sample is not
+ * a number, or the lengths differ.
  * @throws {RangeError} For fewer than 2 samples, a non-finite or non-increasing time, or a
- * negative, non-finite or implausibly high velocity; the message names the field, the index, the
- * valid range and the value.
+ * negative, non-finite or implausibly high velocity; the message names the field, the index, what
+ * was expected and the value.
  *
  * @example
  * ```ts
@@ -58,7 +86,7 @@ function isArrayLike(value: unknown): value is ArrayLike<unknown> {
  * import assert from "node:assert/strict";
  * assert.throws(() => validateEnvelope({ timesMs: [0, 10, 10], velocitiesMPerS: [1, 2, 1] }), {
  *   name: "RangeError",
- *   message: /'timesMs\[2\]'.*got 10$/,
+ *   message: "Velocity envelope: expected 'timesMs[2]' strictly greater than timesMs[1] = 10 ms, got 10",
  * });
  * ```
  */
@@ -66,59 +94,58 @@ export function validateEnvelope(
   envelope: VelocityEnvelope,
 ): { timesMs: number[]; velocitiesMPerS: number[] } {
   if (typeof envelope !== "object" || envelope === null) {
-    throw new TypeError(
-      `${WHERE}: expected an object { timesMs, velocitiesMPerS }, got ${String(envelope)}`,
-    );
+    throw issueError([
+      problem(
+        "type",
+        "envelope",
+        "as an object { timesMs, velocitiesMPerS }",
+        describeValue(envelope),
+      ),
+    ]);
   }
   const { timesMs, velocitiesMPerS } = envelope;
   for (
     const [name, field] of [["timesMs", timesMs], ["velocitiesMPerS", velocitiesMPerS]] as const
   ) {
     if (!isArrayLike(field)) {
-      throw new TypeError(
-        `${WHERE}: expected '${name}' as an array of numbers, got ${
-          field === null ? "null" : typeof field
-        }`,
-      );
+      throw issueError([problem("type", name, "as an array of numbers", describeValue(field))]);
     }
   }
   const n = timesMs.length;
   if (velocitiesMPerS.length !== n) {
-    throw new TypeError(
-      `${WHERE}: expected 'velocitiesMPerS' with the same length as 'timesMs' (${n}), got ${velocitiesMPerS.length}`,
-    );
+    throw issueError([
+      problem(
+        "type",
+        "velocitiesMPerS",
+        `with the same length as 'timesMs' (${n})`,
+        String(velocitiesMPerS.length),
+      ),
+    ]);
   }
   if (!(n >= 2)) {
-    throw new RangeError(`${WHERE}: expected at least 2 samples in 'timesMs', got ${n}`);
+    throw issueError([problem("range", "timesMs", "with at least 2 samples", String(n))]);
   }
   const times: number[] = new Array(n);
   const velocities: number[] = new Array(n);
   for (let i = 0; i < n; i++) {
     const t = timesMs[i];
+    const field = `timesMs[${i}]`;
     if (typeof t !== "number") {
-      throw new TypeError(`${WHERE}: expected 'timesMs[${i}]' as a number, got ${typeof t}`);
+      throw issueError([problem("type", field, "as a number", describeValue(t))]);
     }
-    if (!Number.isFinite(t)) {
-      throw new RangeError(`${WHERE}: expected 'timesMs[${i}]' finite, got ${t}`);
-    }
+    if (!Number.isFinite(t)) throw issueError([problem("range", field, "finite", String(t))]);
     if (i > 0 && !(t > times[i - 1]!)) {
-      throw new RangeError(
-        `${WHERE}: expected 'timesMs[${i}]' strictly greater than timesMs[${i - 1}] = ${
-          times[i - 1]
-        } ms, got ${t}`,
-      );
+      const previous = `timesMs[${i - 1}] = ${times[i - 1]} ms`;
+      throw issueError([problem("range", field, `strictly greater than ${previous}`, String(t))]);
     }
     const v = velocitiesMPerS[i];
     if (typeof v !== "number") {
-      throw new TypeError(
-        `${WHERE}: expected 'velocitiesMPerS[${i}]' as a number, got ${typeof v}`,
-      );
+      throw issueError([
+        problem("type", `velocitiesMPerS[${i}]`, "as a number", describeValue(v)),
+      ]);
     }
-    if (!(v >= 0 && v <= MAX_VELOCITY)) {
-      throw new RangeError(
-        `${WHERE}: expected 'velocitiesMPerS[${i}]' in [0, ${MAX_VELOCITY}] m/s (a magnitude), got ${v}`,
-      );
-    }
+    const checked = checkValue(`velocitiesMPerS[${i}]`, ENVELOPE_VELOCITY, v, { where: WHERE });
+    throwIfErrors(checked.issues);
     times[i] = t;
     velocities[i] = v;
   }

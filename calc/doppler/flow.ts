@@ -3,12 +3,32 @@
  *
  * @module
  */
-import { defineCalculation } from "../core/define.ts";
+import { defineCalculation, type InputRole } from "../core/calculation.ts";
 import type { Calculation } from "../core/types.ts";
-import { QUINONES_2002 } from "./sources.ts";
+import {
+  CARDIAC_OUTPUT,
+  CROSS_SECTIONAL_AREA,
+  FLOW_REGION_DIAMETER,
+  HEART_RATE,
+  LVOT_VTI,
+  PULMONARY_SYSTEMIC_FLOW_RATIO,
+  RVOT_VTI,
+  STROKE_VOLUME,
+  VELOCITY_TIME_INTEGRAL,
+} from "../quantities/flow.ts";
+import { LVOT_DIAMETER, RVOT_DIAMETER } from "../quantities/structure.ts";
+import { indexedToBsa } from "../body/indexing.ts";
+import { QUINONES_2002 } from "./citations.ts";
 
-const DIAMETER_RANGE = { min: 0, max: 5, minExclusive: true } as const;
-const VTI_RANGE = { min: 0, max: 200, minExclusive: true } as const;
+/** The VTI at a flow region: pulsed-wave, so bounded well below a jet's. */
+const FLOW_REGION_VTI: InputRole = {
+  quantity: VELOCITY_TIME_INTEGRAL,
+  description: "Pulsed-wave velocity-time integral at the flow region",
+  valid: { min: 0, max: 200, minExclusive: true },
+  typical: { min: 5, max: 50 },
+  reason:
+    "pulsed-wave flow at an outflow tract or annulus stays below about 3 m/s for under 0.5 s: 200 cm is out of reach",
+};
 
 /**
  * Cross-sectional area of a circular flow region (LVOT, RVOT, annulus) from its diameter.
@@ -18,7 +38,7 @@ const VTI_RANGE = { min: 0, max: 200, minExclusive: true } as const;
  *
  * Source: Quiñones MA, et al. J Am Soc Echocardiogr 2002;15:167-184 (Doppler volumetric flow).
  *
- * Throws (through `evaluate`) a RangeError for a diameter outside (0, 5] cm.
+ * @throws {RangeError} (through `evaluate`) for a diameter outside its valid range.
  *
  * @example
  * ```ts
@@ -32,18 +52,11 @@ export const crossSectionalArea: Calculation<"diameterCm", "areaCm2"> = defineCa
   id: "crossSectionalArea",
   title: "Cross-sectional area from diameter",
   description: "Area of a circular flow region (LVOT, RVOT, valve annulus) from its diameter.",
-  inputs: {
-    diameterCm: {
-      unit: "cm",
-      description: "Diameter of the flow region",
-      range: DIAMETER_RANGE,
-      typical: { min: 1.4, max: 3.5 },
-    },
-  },
-  outputs: { areaCm2: { unit: "cm^2", description: "Cross-sectional area" } },
+  inputs: { diameterCm: FLOW_REGION_DIAMETER },
+  outputs: { areaCm2: CROSS_SECTIONAL_AREA },
   formula: ({ diameterCm }) => ({ areaCm2: Math.PI * diameterCm * diameterCm / 4 }),
   formulaText: "CSA = π·d²/4",
-  sources: [QUINONES_2002],
+  citations: [QUINONES_2002],
   cautions: [
     "Assumes a circular cross-section; the LVOT is often elliptical and its area underestimated",
     "The diameter is squared: a 1 mm error in a 2 cm diameter is about a 10 % area error",
@@ -58,8 +71,7 @@ export const crossSectionalArea: Calculation<"diameterCm", "areaCm2"> = defineCa
  *
  * Source: Quiñones MA, et al. J Am Soc Echocardiogr 2002;15:167-184.
  *
- * Throws (through `evaluate`) a RangeError for a diameter outside (0, 5] cm or a VTI outside
- * (0, 200] cm.
+ * @throws {RangeError} (through `evaluate`) for a diameter or VTI outside its valid range.
  *
  * @example
  * ```ts
@@ -75,26 +87,13 @@ export const strokeVolume: Calculation<"diameterCm" | "vtiCm", "strokeVolumeMl">
     id: "strokeVolume",
     title: "Doppler stroke volume",
     description: "Volume ejected per beat through a circular region from its diameter and VTI.",
-    inputs: {
-      diameterCm: {
-        unit: "cm",
-        description: "Diameter of the flow region where the VTI was sampled",
-        range: DIAMETER_RANGE,
-        typical: { min: 1.4, max: 3.5 },
-      },
-      vtiCm: {
-        unit: "cm",
-        description: "Pulsed-wave velocity-time integral at that region",
-        range: VTI_RANGE,
-        typical: { min: 5, max: 50 },
-      },
-    },
-    outputs: { strokeVolumeMl: { unit: "mL", description: "Stroke volume" } },
+    inputs: { diameterCm: FLOW_REGION_DIAMETER, vtiCm: FLOW_REGION_VTI },
+    outputs: { strokeVolumeMl: STROKE_VOLUME },
     formula: ({ diameterCm, vtiCm }) => ({
       strokeVolumeMl: crossSectionalArea.formula({ diameterCm }).areaCm2 * vtiCm,
     }),
     formulaText: "SV = π·d²/4 · VTI",
-    sources: [QUINONES_2002],
+    citations: [QUINONES_2002],
     cautions: ["Diameter and VTI must be measured at the same level"],
     clinical: true,
   });
@@ -106,8 +105,8 @@ export const strokeVolume: Calculation<"diameterCm" | "vtiCm", "strokeVolumeMl">
  *
  * Source: Quiñones MA, et al. J Am Soc Echocardiogr 2002;15:167-184.
  *
- * Throws (through `evaluate`) a RangeError for a stroke volume outside (0, 500] mL or a heart rate
- * outside (0, 300] bpm.
+ * @throws {RangeError} (through `evaluate`) for a stroke volume or heart rate outside its valid
+ * range, or a zero output.
  *
  * @example
  * ```ts
@@ -125,74 +124,41 @@ export const cardiacOutput: Calculation<
   id: "cardiacOutput",
   title: "Cardiac output",
   description: "Volume pumped per minute from the stroke volume and heart rate.",
-  inputs: {
-    strokeVolumeMl: {
-      unit: "mL",
-      description: "Stroke volume",
-      range: { min: 0, max: 500, minExclusive: true },
-      typical: { min: 20, max: 150 },
-    },
-    heartRateBpm: {
-      unit: "bpm",
-      description: "Heart rate in beats per minute",
-      range: { min: 0, max: 300, minExclusive: true },
-      typical: { min: 40, max: 150 },
-    },
-  },
-  outputs: { cardiacOutputLPerMin: { unit: "L/min", description: "Cardiac output" } },
+  inputs: { strokeVolumeMl: STROKE_VOLUME, heartRateBpm: HEART_RATE },
+  outputs: { cardiacOutputLPerMin: CARDIAC_OUTPUT },
   formula: ({ strokeVolumeMl, heartRateBpm }) => ({
     cardiacOutputLPerMin: strokeVolumeMl * heartRateBpm / 1000,
   }),
   formulaText: "CO = SV·HR/1000",
-  sources: [QUINONES_2002],
+  citations: [QUINONES_2002],
   cautions: ["In irregular rhythms average stroke volume and rate over several beats"],
   clinical: true,
 });
 
 /**
- * Cardiac index: cardiac output per body surface area.
+ * Cardiac index: cardiac output per body surface area. This is the member of the indexing family
+ * for cardiac output (`indexedToBsa(CARDIAC_OUTPUT)`), so the division is written once for every
+ * indexed quantity; its inputs are `cardiacOutput` (L/min) and `bsaM2`, its output `cardiacIndex`.
  *
  * Formula: CI [L/min/m²] = CO [L/min] / BSA [m²].
  *
- * Source: Quiñones MA, et al. J Am Soc Echocardiogr 2002;15:167-184 (indexing to BSA).
+ * Source: Quiñones MA, et al. J Am Soc Echocardiogr 2002;15:167-184 (indexing to BSA); Lang RM,
+ * et al. J Am Soc Echocardiogr 2015;28:1-39 (indexing to BSA).
  *
- * Throws (through `evaluate`) a RangeError for a cardiac output outside (0, 40] L/min or a BSA
- * outside (0, 4] m².
+ * @throws {RangeError} (through `evaluate`) for a cardiac output or BSA outside its valid range.
  *
  * @example
  * ```ts
  * import { cardiacIndex, evaluate } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
  * // 5 L/min over 2 m² = 2.5 L/min/m²
- * assert.equal(evaluate(cardiacIndex, { cardiacOutputLPerMin: 5, bsaM2: 2 }).outputs.cardiacIndex, 2.5);
+ * assert.equal(evaluate(cardiacIndex, { cardiacOutput: 5, bsaM2: 2 }).outputs.cardiacIndex, 2.5);
  * ```
  */
-export const cardiacIndex: Calculation<"cardiacOutputLPerMin" | "bsaM2", "cardiacIndex"> =
-  defineCalculation({
-    id: "cardiacIndex",
-    title: "Cardiac index",
-    description: "Cardiac output divided by body surface area.",
-    inputs: {
-      cardiacOutputLPerMin: {
-        unit: "L/min",
-        description: "Cardiac output",
-        range: { min: 0, max: 40, minExclusive: true },
-        typical: { min: 1, max: 15 },
-      },
-      bsaM2: {
-        unit: "m^2",
-        description: "Body surface area",
-        range: { min: 0, max: 4, minExclusive: true },
-        typical: { min: 1.2, max: 2.6 },
-      },
-    },
-    outputs: { cardiacIndex: { unit: "L/min/m^2", description: "Cardiac index" } },
-    formula: ({ cardiacOutputLPerMin, bsaM2 }) => ({ cardiacIndex: cardiacOutputLPerMin / bsaM2 }),
-    formulaText: "CI = CO/BSA",
-    sources: [QUINONES_2002],
-    cautions: ["Indexing assumes output scales with BSA; it over-corrects in obesity"],
-    clinical: true,
-  });
+export const cardiacIndex = indexedToBsa(CARDIAC_OUTPUT) as Calculation<
+  "cardiacOutput" | "bsaM2",
+  "cardiacIndex"
+>;
 
 /**
  * Pulmonary-to-systemic flow ratio (Qp/Qs) from RVOT and LVOT stroke volumes.
@@ -202,8 +168,7 @@ export const cardiacIndex: Calculation<"cardiacOutputLPerMin" | "bsaM2", "cardia
  *
  * Source: Quiñones MA, et al. J Am Soc Echocardiogr 2002;15:167-184 (shunt quantification).
  *
- * Throws (through `evaluate`) a RangeError for a diameter outside (0, 5] cm or a VTI outside
- * (0, 200] cm.
+ * @throws {RangeError} (through `evaluate`) for a diameter or VTI outside its valid range.
  *
  * @example
  * ```ts
@@ -224,35 +189,23 @@ export const pulmonarySystemicFlowRatio: Calculation<
   title: "Pulmonary-to-systemic flow ratio (Qp/Qs)",
   description: "Shunt ratio from the RVOT and LVOT Doppler stroke volumes.",
   inputs: {
-    rvotDiameterCm: {
-      unit: "cm",
-      description: "RVOT diameter at the pulsed-wave sample",
-      range: DIAMETER_RANGE,
-      typical: { min: 1.5, max: 3.5 },
-    },
-    rvotVtiCm: {
-      unit: "cm",
-      description: "RVOT pulsed-wave VTI",
-      range: VTI_RANGE,
-      typical: { min: 8, max: 50 },
-    },
-    lvotDiameterCm: {
-      unit: "cm",
-      description: "LVOT diameter at the pulsed-wave sample",
-      range: DIAMETER_RANGE,
-      typical: { min: 1.4, max: 3.0 },
-    },
-    lvotVtiCm: {
-      unit: "cm",
-      description: "LVOT pulsed-wave VTI",
-      range: VTI_RANGE,
-      typical: { min: 8, max: 40 },
-    },
+    rvotDiameterCm: RVOT_DIAMETER,
+    rvotVtiCm: RVOT_VTI,
+    lvotDiameterCm: LVOT_DIAMETER,
+    lvotVtiCm: LVOT_VTI,
   },
   outputs: {
-    qpQs: { unit: "1", description: "Pulmonary-to-systemic flow ratio" },
-    pulmonaryStrokeVolumeMl: { unit: "mL", description: "RVOT stroke volume (Qp per beat)" },
-    systemicStrokeVolumeMl: { unit: "mL", description: "LVOT stroke volume (Qs per beat)" },
+    qpQs: PULMONARY_SYSTEMIC_FLOW_RATIO,
+    pulmonaryStrokeVolumeMl: {
+      quantity: STROKE_VOLUME,
+      label: "Pulmonary stroke volume",
+      description: "RVOT stroke volume (Qp per beat)",
+    },
+    systemicStrokeVolumeMl: {
+      quantity: STROKE_VOLUME,
+      label: "Systemic stroke volume",
+      description: "LVOT stroke volume (Qs per beat)",
+    },
   },
   formula: ({ rvotDiameterCm, rvotVtiCm, lvotDiameterCm, lvotVtiCm }) => {
     const qp =
@@ -262,7 +215,7 @@ export const pulmonarySystemicFlowRatio: Calculation<
     return { qpQs: qp / qs, pulmonaryStrokeVolumeMl: qp, systemicStrokeVolumeMl: qs };
   },
   formulaText: "Qp/Qs = (π·d_RVOT²/4·VTI_RVOT) / (π·d_LVOT²/4·VTI_LVOT)",
-  sources: [QUINONES_2002],
+  citations: [QUINONES_2002],
   cautions: [
     "Both diameters are squared: diameter errors dominate the ratio",
     "Not valid with significant regurgitation of the pulmonary or aortic valve",

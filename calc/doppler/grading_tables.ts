@@ -11,8 +11,24 @@
  *
  * @module
  */
-import type { Reference } from "../core/types.ts";
-import { defineSeverityTable, type SeverityBand, type SeverityTable } from "./grading.ts";
+import type { Citation, Quantity } from "../core/types.ts";
+import {
+  AORTIC_MEAN_GRADIENT,
+  AORTIC_PEAK_VELOCITY,
+  AORTIC_VALVE_AREA,
+  AORTIC_VALVE_AREA_INDEX,
+  DIMENSIONLESS_INDEX,
+  EFFECTIVE_REGURGITANT_ORIFICE_AREA,
+  MITRAL_MEAN_GRADIENT,
+  MITRAL_VALVE_AREA,
+  REGURGITANT_FRACTION,
+  REGURGITANT_VOLUME,
+  TR_PEAK_VELOCITY,
+} from "../quantities/flow.ts";
+import { choiceError, issueError } from "../core/issues.ts";
+import { describeValue } from "../core/text.ts";
+import { defineSeverityTable } from "../grading/grade.ts";
+import type { SeverityBand, SeverityTable } from "../grading/types.ts";
 import {
   BAUMGARTNER_2009,
   BAUMGARTNER_2017,
@@ -20,13 +36,14 @@ import {
   HUMBERT_2022,
   NISHIMURA_2014,
   ZOGHBI_2017,
-} from "./sources.ts";
+} from "./citations.ts";
 
-function at(ref: Reference, locator: string): Reference {
-  return { ...ref, locator };
+/** The error for a name that is not one of the choices (a RangeError by the one message format). */
+function at(citation: Citation, locator: string): Citation {
+  return { ...citation, locator };
 }
 
-/** A band from printed text; `lower`/`upper` null means unbounded. */
+/** A band from printed text, recalled from memory; `lower`/`upper` null means unbounded. */
 function band(
   grade: string,
   printed: string,
@@ -34,9 +51,20 @@ function band(
   lowerInclusive: boolean,
   upper: number | null,
   upperInclusive: boolean,
-  source: Reference,
+  citation: Citation,
 ): SeverityBand {
-  return { grade, printed, lower, lowerInclusive, upper, upperInclusive, source, fromMemory: true };
+  return {
+    grade,
+    printed,
+    range: {
+      min: lower ?? -Infinity,
+      max: upper ?? Infinity,
+      ...(lowerInclusive && lower !== null ? {} : { minExclusive: true }),
+      ...(upperInclusive && upper !== null ? {} : { maxExclusive: true }),
+    },
+    citation,
+    fromMemory: true,
+  };
 }
 
 // ---------------------------------------------------------------- aortic stenosis
@@ -44,7 +72,7 @@ function band(
 const AS_2009 = at(BAUMGARTNER_2009, "Table 4, classification of AS severity (from memory)");
 const AS_2017 = at(BAUMGARTNER_2017, "Table 3, classification of AS severity (from memory)");
 
-function asValveAreaTables(src: Reference, year: number): {
+function asValveAreaTables(src: Citation, year: number): {
   valveArea: SeverityTable;
   indexedValveArea: SeverityTable;
   velocityRatio: SeverityTable;
@@ -53,8 +81,7 @@ function asValveAreaTables(src: Reference, year: number): {
     valveArea: defineSeverityTable({
       id: `aorticStenosisValveArea${year}`,
       title: `Aortic stenosis by valve area (${year})`,
-      quantity: "Aortic valve area",
-      unit: "cm^2",
+      quantity: AORTIC_VALVE_AREA,
       bands: [
         band("severe", "< 1.0", 0, false, 1.0, false, src),
         band("moderate", "1.0–1.5", 1.0, true, 1.5, true, src),
@@ -65,8 +92,7 @@ function asValveAreaTables(src: Reference, year: number): {
     indexedValveArea: defineSeverityTable({
       id: `aorticStenosisIndexedValveArea${year}`,
       title: `Aortic stenosis by indexed valve area (${year})`,
-      quantity: "Indexed aortic valve area",
-      unit: "cm^2/m^2",
+      quantity: AORTIC_VALVE_AREA_INDEX,
       bands: [
         band("severe", "< 0.6", 0, false, 0.6, false, src),
         band("moderate", "0.60–0.85", 0.6, true, 0.85, true, src),
@@ -77,8 +103,7 @@ function asValveAreaTables(src: Reference, year: number): {
     velocityRatio: defineSeverityTable({
       id: `aorticStenosisVelocityRatio${year}`,
       title: `Aortic stenosis by velocity ratio / dimensionless index (${year})`,
-      quantity: "Dimensionless index",
-      unit: "1",
+      quantity: DIMENSIONLESS_INDEX,
       bands: [
         band("severe", "< 0.25", 0, false, 0.25, false, src),
         band("moderate", "0.25–0.50", 0.25, true, 0.5, true, src),
@@ -121,8 +146,7 @@ export const AORTIC_STENOSIS_2009: AorticStenosisTables = Object.freeze({
   peakVelocity: defineSeverityTable({
     id: "aorticStenosisPeakVelocity2009",
     title: "Aortic stenosis by peak velocity (2009)",
-    quantity: "Peak aortic jet velocity",
-    unit: "m/s",
+    quantity: AORTIC_PEAK_VELOCITY,
     bands: [
       band("aortic sclerosis", "≤ 2.5", 0, true, 2.5, true, AS_2009),
       band("mild", "2.6–2.9", 2.5, false, 3.0, false, AS_2009),
@@ -134,8 +158,7 @@ export const AORTIC_STENOSIS_2009: AorticStenosisTables = Object.freeze({
   meanGradient: defineSeverityTable({
     id: "aorticStenosisMeanGradient2009",
     title: "Aortic stenosis by mean gradient (2009)",
-    quantity: "Mean transaortic gradient",
-    unit: "mmHg",
+    quantity: AORTIC_MEAN_GRADIENT,
     bands: [
       band("mild", "< 20", 0, true, 20, false, AS_2009),
       band("moderate", "20–40", 20, true, 40, true, AS_2009),
@@ -164,8 +187,7 @@ export const AORTIC_STENOSIS_2017: AorticStenosisTables = Object.freeze({
   peakVelocity: defineSeverityTable({
     id: "aorticStenosisPeakVelocity2017",
     title: "Aortic stenosis by peak velocity (2017)",
-    quantity: "Peak aortic jet velocity",
-    unit: "m/s",
+    quantity: AORTIC_PEAK_VELOCITY,
     bands: [
       band("aortic sclerosis", "≤ 2.5", 0, true, 2.5, true, AS_2017),
       band("mild", "2.6–2.9", 2.5, false, 3.0, false, AS_2017),
@@ -177,8 +199,7 @@ export const AORTIC_STENOSIS_2017: AorticStenosisTables = Object.freeze({
   meanGradient: defineSeverityTable({
     id: "aorticStenosisMeanGradient2017",
     title: "Aortic stenosis by mean gradient (2017)",
-    quantity: "Mean transaortic gradient",
-    unit: "mmHg",
+    quantity: AORTIC_MEAN_GRADIENT,
     bands: [
       band("mild", "< 20", 0, true, 20, false, AS_2017),
       band("moderate", "20–39", 20, true, 40, false, AS_2017),
@@ -207,8 +228,7 @@ const MS_2009 = at(BAUMGARTNER_2009, "Table 8, classification of MS severity (fr
 export const MITRAL_STENOSIS_AREA_2009: SeverityTable = defineSeverityTable({
   id: "mitralStenosisArea2009",
   title: "Mitral stenosis by valve area (EAE/ASE 2009)",
-  quantity: "Mitral valve area",
-  unit: "cm^2",
+  quantity: MITRAL_VALVE_AREA,
   bands: [
     band("severe", "< 1.0", 0, false, 1.0, false, MS_2009),
     band("moderate", "1.0–1.5", 1.0, true, 1.5, true, MS_2009),
@@ -231,8 +251,7 @@ export const MITRAL_STENOSIS_AREA_2009: SeverityTable = defineSeverityTable({
 export const MITRAL_STENOSIS_MEAN_GRADIENT_2009: SeverityTable = defineSeverityTable({
   id: "mitralStenosisMeanGradient2009",
   title: "Mitral stenosis by mean gradient (EAE/ASE 2009)",
-  quantity: "Mean transmitral gradient",
-  unit: "mmHg",
+  quantity: MITRAL_MEAN_GRADIENT,
   bands: [
     band("mild", "< 5", 0, true, 5, false, MS_2009),
     band("moderate", "5–10", 5, true, 10, true, MS_2009),
@@ -258,8 +277,7 @@ const MS_2014 = at(NISHIMURA_2014, "table of stages of mitral stenosis (from mem
 export const MITRAL_STENOSIS_STAGES_2014: SeverityTable = defineSeverityTable({
   id: "mitralStenosisStages2014",
   title: "Mitral stenosis stages by valve area (AHA/ACC 2014)",
-  quantity: "Mitral valve area",
-  unit: "cm^2",
+  quantity: MITRAL_VALVE_AREA,
   bands: [
     band("very severe (stage C/D)", "≤ 1.0", 0, false, 1.0, true, MS_2014),
     band("severe (stage C/D)", "≤ 1.5", 1.0, false, 1.5, true, MS_2014),
@@ -293,11 +311,7 @@ export type MitralStenosisScheme = "EAE/ASE 2009" | "AHA/ACC 2014";
 export function mitralStenosisAreaTable(scheme: MitralStenosisScheme): SeverityTable {
   if (scheme === "EAE/ASE 2009") return MITRAL_STENOSIS_AREA_2009;
   if (scheme === "AHA/ACC 2014") return MITRAL_STENOSIS_STAGES_2014;
-  throw new RangeError(
-    `Mitral stenosis grading: expected 'scheme' "EAE/ASE 2009" or "AHA/ACC 2014", got ${
-      JSON.stringify(scheme)
-    }`,
-  );
+  throw choiceError("Mitral stenosis grading", "scheme", ["EAE/ASE 2009", "AHA/ACC 2014"], scheme);
 }
 
 // ---------------------------------------------------------------- regurgitation
@@ -312,11 +326,10 @@ const REGURG_GRADES = [
 function fourClassTable(
   id: string,
   title: string,
-  quantity: string,
-  unit: string,
+  quantity: Quantity,
   cuts: readonly [number, number, number],
   printed: readonly [string, string, string, string],
-  src: Reference,
+  src: Citation,
   notes: readonly string[],
 ): SeverityTable {
   const [a, b, c] = cuts;
@@ -324,7 +337,6 @@ function fourClassTable(
     id,
     title,
     quantity,
-    unit,
     bands: [
       band(REGURG_GRADES[0], printed[0], 0, true, a, false, src),
       band(REGURG_GRADES[1], printed[1], a, true, b, false, src),
@@ -366,8 +378,7 @@ export const MITRAL_REGURGITATION_2017: RegurgitationTables = Object.freeze({
   eroa: fourClassTable(
     "mitralRegurgitationEroa2017",
     "Mitral regurgitation by EROA (ASE 2017)",
-    "Effective regurgitant orifice area",
-    "cm^2",
+    EFFECTIVE_REGURGITANT_ORIFICE_AREA,
     [0.2, 0.3, 0.4],
     ["< 0.20", "0.20–0.29", "0.30–0.39", "≥ 0.40"],
     MR_2017,
@@ -376,8 +387,7 @@ export const MITRAL_REGURGITATION_2017: RegurgitationTables = Object.freeze({
   regurgitantVolume: fourClassTable(
     "mitralRegurgitationVolume2017",
     "Mitral regurgitation by regurgitant volume (ASE 2017)",
-    "Regurgitant volume",
-    "mL",
+    REGURGITANT_VOLUME,
     [30, 45, 60],
     RVOL_PRINTED,
     MR_2017,
@@ -386,8 +396,7 @@ export const MITRAL_REGURGITATION_2017: RegurgitationTables = Object.freeze({
   regurgitantFraction: fourClassTable(
     "mitralRegurgitationFraction2017",
     "Mitral regurgitation by regurgitant fraction (ASE 2017)",
-    "Regurgitant fraction",
-    "%",
+    REGURGITANT_FRACTION,
     [30, 40, 50],
     RF_PRINTED,
     MR_2017,
@@ -411,8 +420,7 @@ export const AORTIC_REGURGITATION_2017: RegurgitationTables = Object.freeze({
   eroa: fourClassTable(
     "aorticRegurgitationEroa2017",
     "Aortic regurgitation by EROA (ASE 2017)",
-    "Effective regurgitant orifice area",
-    "cm^2",
+    EFFECTIVE_REGURGITANT_ORIFICE_AREA,
     [0.1, 0.2, 0.3],
     ["< 0.10", "0.10–0.19", "0.20–0.29", "≥ 0.30"],
     AR_2017,
@@ -421,8 +429,7 @@ export const AORTIC_REGURGITATION_2017: RegurgitationTables = Object.freeze({
   regurgitantVolume: fourClassTable(
     "aorticRegurgitationVolume2017",
     "Aortic regurgitation by regurgitant volume (ASE 2017)",
-    "Regurgitant volume",
-    "mL",
+    REGURGITANT_VOLUME,
     [30, 45, 60],
     RVOL_PRINTED,
     AR_2017,
@@ -431,8 +438,7 @@ export const AORTIC_REGURGITATION_2017: RegurgitationTables = Object.freeze({
   regurgitantFraction: fourClassTable(
     "aorticRegurgitationFraction2017",
     "Aortic regurgitation by regurgitant fraction (ASE 2017)",
-    "Regurgitant fraction",
-    "%",
+    REGURGITANT_FRACTION,
     [30, 40, 50],
     RF_PRINTED,
     AR_2017,
@@ -445,15 +451,14 @@ export const AORTIC_REGURGITATION_2017: RegurgitationTables = Object.freeze({
 function phTable(
   id: string,
   title: string,
-  src: Reference,
+  src: Citation,
   grades: readonly [string, string, string],
   notes: readonly string[],
 ): SeverityTable {
   return defineSeverityTable({
     id,
     title,
-    quantity: "Peak tricuspid regurgitant velocity",
-    unit: "m/s",
+    quantity: TR_PEAK_VELOCITY,
     bands: [
       band(grades[0], "≤ 2.8 (or not measurable)", 0, true, 2.8, true, src),
       band(grades[1], "2.9–3.4", 2.8, false, 3.4, true, src),
@@ -554,10 +559,16 @@ export function pulmonaryHypertensionTable(
   guideline: "ESC/ERS 2015" | "ESC/ERS 2022",
   otherEchoSigns: boolean,
 ): SeverityTable {
+  const where = "Pulmonary hypertension probability";
   if (typeof otherEchoSigns !== "boolean") {
-    throw new TypeError(
-      `Pulmonary hypertension probability: expected 'otherEchoSigns' as true or false, got ${typeof otherEchoSigns}`,
-    );
+    throw issueError([{
+      kind: "type",
+      severity: "error",
+      where,
+      field: "otherEchoSigns",
+      expected: "as true or false",
+      received: describeValue(otherEchoSigns),
+    }]);
   }
   const tables = guideline === "ESC/ERS 2015"
     ? PULMONARY_HYPERTENSION_2015
@@ -565,11 +576,7 @@ export function pulmonaryHypertensionTable(
     ? PULMONARY_HYPERTENSION_2022
     : null;
   if (tables === null) {
-    throw new RangeError(
-      `Pulmonary hypertension probability: expected 'guideline' "ESC/ERS 2015" or "ESC/ERS 2022", got ${
-        JSON.stringify(guideline)
-      }`,
-    );
+    throw choiceError(where, "guideline", ["ESC/ERS 2015", "ESC/ERS 2022"], guideline);
   }
   return otherEchoSigns ? tables.withOtherSigns : tables.withoutOtherSigns;
 }

@@ -1,7 +1,8 @@
 /**
  * Doppler hemodynamics: Bernoulli gradients, envelopes and VTI, volumetric flow, continuity and
  * pressure-half-time valve areas, PISA and volumetric regurgitation, right-heart pressures, the
- * effect of the insonation angle, and guideline severity grading (values or Monte Carlo samples).
+ * effect of the insonation angle with the data of its sensitivity curves, and guideline severity
+ * grading (a value, Monte Carlo samples, or the normal distribution of a GUM result).
  *
  * @module
  */
@@ -45,14 +46,13 @@ export {
 } from "./right_heart.ts";
 export { continuityValveAreaWithAngles, insonationAngleEffect } from "./angle.ts";
 export {
-  type ClassProbability,
-  defineSeverityTable,
-  gradeSeverity,
-  type SeverityBand,
-  type SeverityDistribution,
-  type SeverityGrade,
-  type SeverityTable,
-} from "./grading.ts";
+  angleUnderestimationData,
+  type AngleUnderestimationOptions,
+  type AngleUnderestimationPoint,
+  valveAreaDiameterErrorData,
+  type ValveAreaDiameterErrorOptions,
+  type ValveAreaErrorPoint,
+} from "./measurement_error.ts";
 export {
   AORTIC_REGURGITATION_2017,
   AORTIC_STENOSIS_2009,

@@ -4,9 +4,43 @@
  *
  * @module
  */
-import { defineCalculation } from "../core/define.ts";
+import { defineCalculation, type InputRole, notAbove } from "../core/calculation.ts";
+import { chain } from "../core/chain.ts";
 import type { Calculation } from "../core/types.ts";
-import { PU_1995, ZOGHBI_2017 } from "./sources.ts";
+import {
+  ALIASING_VELOCITY,
+  EFFECTIVE_REGURGITANT_ORIFICE_AREA,
+  PISA_RADIUS,
+  PISA_WALL_ANGLE,
+  REGURGITANT_FLOW_RATE,
+  REGURGITANT_FRACTION,
+  REGURGITANT_PEAK_VELOCITY,
+  REGURGITANT_VOLUME,
+  REGURGITANT_VTI,
+  STROKE_VOLUME,
+} from "../quantities/flow.ts";
+import { PU_1995, ZOGHBI_2017 } from "./citations.ts";
+
+/** The stroke volume a fraction divides by: zero flow has no fraction. */
+function strokeVolumeDividedBy(label: string, description: string): InputRole {
+  return {
+    quantity: STROKE_VOLUME,
+    label,
+    description,
+    valid: { min: 0, max: 1000, minExclusive: true },
+    reason: "the regurgitant fraction divides by it",
+  };
+}
+
+const TOTAL_STROKE_VOLUME = strokeVolumeDividedBy(
+  "Total stroke volume",
+  "Stroke volume through the regurgitant valve (forward + regurgitant)",
+);
+
+const FORWARD_STROKE_VOLUME = strokeVolumeDividedBy(
+  "Forward stroke volume",
+  "Forward stroke volume through a competent valve (e.g. LVOT Doppler)",
+);
 
 /**
  * Instantaneous regurgitant flow rate by the proximal isovelocity surface area (PISA).
@@ -18,8 +52,8 @@ import { PU_1995, ZOGHBI_2017 } from "./sources.ts";
  * Source: Zoghbi WA, et al. J Am Soc Echocardiogr 2017;30:303-371 (PISA method); Pu M, et al.
  * Circulation 1995;92:2169-2177 (α/180 correction, from memory).
  *
- * Throws (through `evaluate`) a RangeError for a radius outside (0, 3] cm, an aliasing velocity
- * outside (0, 200] cm/s or an angle outside (0, 360] degrees.
+ * @throws {RangeError} (through `evaluate`) for a radius, aliasing velocity or wall angle outside
+ * its valid range.
  *
  * @example
  * ```ts
@@ -39,33 +73,17 @@ export const pisaFlowRate: Calculation<
   description:
     "Peak regurgitant flow rate from the radius of the hemispheric isovelocity shell at the aliasing velocity.",
   inputs: {
-    radiusCm: {
-      unit: "cm",
-      description: "PISA radius from the orifice to the first aliasing boundary",
-      range: { min: 0, max: 3, minExclusive: true },
-      typical: { min: 0.2, max: 1.5 },
-    },
-    aliasingVelocityCmPerS: {
-      unit: "cm/s",
-      description: "Aliasing (Nyquist) velocity of the colour map, toward the orifice",
-      range: { min: 0, max: 200, minExclusive: true },
-      typical: { min: 20, max: 60 },
-    },
-    wallAngleDeg: {
-      unit: "deg",
-      description: "Angle subtended by the wall around the orifice (180 for a flat wall)",
-      range: { min: 0, max: 360, minExclusive: true },
-      typical: { min: 90, max: 240 },
-      default: 180,
-    },
+    radiusCm: PISA_RADIUS,
+    aliasingVelocityCmPerS: ALIASING_VELOCITY,
+    wallAngleDeg: { quantity: PISA_WALL_ANGLE, default: 180 },
   },
-  outputs: { flowRateMlPerS: { unit: "mL/s", description: "Regurgitant flow rate" } },
+  outputs: { flowRateMlPerS: REGURGITANT_FLOW_RATE },
   formula: ({ radiusCm, aliasingVelocityCmPerS, wallAngleDeg }) => ({
     flowRateMlPerS: 2 * Math.PI * radiusCm * radiusCm * aliasingVelocityCmPerS * wallAngleDeg /
       180,
   }),
   formulaText: "Q = 2π·r²·Va·α/180",
-  sources: [ZOGHBI_2017, PU_1995],
+  citations: [ZOGHBI_2017, PU_1995],
   cautions: [
     "The radius is squared: a 1 mm error in a 1 cm radius is about a 20 % flow error",
     "Assumes a hemispheric shell; eccentric or elongated orifices break the assumption",
@@ -80,8 +98,7 @@ export const pisaFlowRate: Calculation<
  *
  * Source: Zoghbi WA, et al. J Am Soc Echocardiogr 2017;30:303-371 (PISA method).
  *
- * Throws (through `evaluate`) a RangeError for a flow rate outside (0, 5000] mL/s or a velocity
- * outside (0, 10] m/s.
+ * @throws {RangeError} (through `evaluate`) for a flow rate or velocity outside its valid range.
  *
  * @example
  * ```ts
@@ -102,25 +119,19 @@ export const effectiveRegurgitantOrificeArea: Calculation<
   title: "Effective regurgitant orifice area",
   description: "Regurgitant orifice area from the peak flow rate and the peak jet velocity.",
   inputs: {
-    flowRateMlPerS: {
-      unit: "mL/s",
-      description: "Peak regurgitant flow rate (from PISA)",
-      range: { min: 0, max: 5000, minExclusive: true },
-      typical: { min: 10, max: 1000 },
-    },
+    flowRateMlPerS: REGURGITANT_FLOW_RATE,
     regurgitantPeakVelocity: {
-      unit: "m/s",
-      description: "Peak continuous-wave velocity of the regurgitant jet",
-      range: { min: 0, max: 10, minExclusive: true },
-      typical: { min: 2, max: 7 },
+      quantity: REGURGITANT_PEAK_VELOCITY,
+      valid: { min: 0, max: 10, minExclusive: true },
+      reason: "the orifice area divides by the jet velocity",
     },
   },
-  outputs: { eroaCm2: { unit: "cm^2", description: "Effective regurgitant orifice area" } },
+  outputs: { eroaCm2: EFFECTIVE_REGURGITANT_ORIFICE_AREA },
   formula: ({ flowRateMlPerS, regurgitantPeakVelocity }) => ({
     eroaCm2: flowRateMlPerS / (100 * regurgitantPeakVelocity),
   }),
   formulaText: "EROA = Q / Vmax",
-  sources: [ZOGHBI_2017],
+  citations: [ZOGHBI_2017],
   cautions: ["Peak flow and peak velocity should be simultaneous (both in early-to-mid systole)"],
   clinical: true,
 });
@@ -132,8 +143,7 @@ export const effectiveRegurgitantOrificeArea: Calculation<
  *
  * Source: Zoghbi WA, et al. J Am Soc Echocardiogr 2017;30:303-371 (PISA method).
  *
- * Throws (through `evaluate`) a RangeError for an area outside (0, 5] cm² or a VTI outside
- * (0, 500] cm.
+ * @throws {RangeError} (through `evaluate`) for an area or VTI outside its valid range.
  *
  * @example
  * ```ts
@@ -151,24 +161,11 @@ export const regurgitantVolume: Calculation<
   id: "regurgitantVolume",
   title: "Regurgitant volume (PISA)",
   description: "Regurgitant volume per beat from the orifice area and the jet VTI.",
-  inputs: {
-    eroaCm2: {
-      unit: "cm^2",
-      description: "Effective regurgitant orifice area",
-      range: { min: 0, max: 5, minExclusive: true },
-      typical: { min: 0.02, max: 1.5 },
-    },
-    regurgitantVtiCm: {
-      unit: "cm",
-      description: "Continuous-wave VTI of the regurgitant jet",
-      range: { min: 0, max: 500, minExclusive: true },
-      typical: { min: 50, max: 300 },
-    },
-  },
-  outputs: { regurgitantVolumeMl: { unit: "mL", description: "Regurgitant volume per beat" } },
+  inputs: { eroaCm2: EFFECTIVE_REGURGITANT_ORIFICE_AREA, regurgitantVtiCm: REGURGITANT_VTI },
+  outputs: { regurgitantVolumeMl: REGURGITANT_VOLUME },
   formula: ({ eroaCm2, regurgitantVtiCm }) => ({ regurgitantVolumeMl: eroaCm2 * regurgitantVtiCm }),
   formulaText: "RVol = EROA·VTI",
-  sources: [ZOGHBI_2017],
+  citations: [ZOGHBI_2017],
   cautions: ["Assumes the orifice area is constant through the cycle"],
   clinical: true,
 });
@@ -181,7 +178,8 @@ export const regurgitantVolume: Calculation<
  *
  * Source: Zoghbi WA, et al. J Am Soc Echocardiogr 2017;30:303-371.
  *
- * Throws (through `evaluate`) a RangeError for volumes outside (0, 1000] mL.
+ * @throws {RangeError} (through `evaluate`) for a volume outside its valid range, or a
+ * regurgitant volume larger than the total stroke volume.
  *
  * @example
  * ```ts
@@ -198,27 +196,15 @@ export const regurgitantFraction: Calculation<
   id: "regurgitantFraction",
   title: "Regurgitant fraction",
   description: "Fraction of the stroke volume through the regurgitant valve that flows back.",
-  inputs: {
-    regurgitantVolumeMl: {
-      unit: "mL",
-      description: "Regurgitant volume per beat",
-      range: { min: 0, max: 1000 },
-      typical: { min: 0, max: 200 },
-    },
-    totalStrokeVolumeMl: {
-      unit: "mL",
-      description: "Total stroke volume through the regurgitant valve (forward + regurgitant)",
-      range: { min: 0, max: 1000, minExclusive: true },
-      typical: { min: 30, max: 300 },
-    },
-  },
-  outputs: { regurgitantFractionPercent: { unit: "%", description: "Regurgitant fraction" } },
+  inputs: { regurgitantVolumeMl: REGURGITANT_VOLUME, totalStrokeVolumeMl: TOTAL_STROKE_VOLUME },
+  outputs: { regurgitantFractionPercent: REGURGITANT_FRACTION },
   formula: ({ regurgitantVolumeMl, totalStrokeVolumeMl }) => ({
     regurgitantFractionPercent: 100 * regurgitantVolumeMl / totalStrokeVolumeMl,
   }),
   formulaText: "RF = RVol/SV_total",
-  sources: [ZOGHBI_2017],
-  cautions: ["A fraction above 100 % means the volumes are inconsistent"],
+  citations: [ZOGHBI_2017],
+  cautions: ["The two volumes come from different methods: check that they are consistent"],
+  constraints: [notAbove("regurgitantVolumeMl", "totalStrokeVolumeMl")],
   clinical: true,
 });
 
@@ -230,7 +216,7 @@ export const regurgitantFraction: Calculation<
  *
  * Source: Zoghbi WA, et al. J Am Soc Echocardiogr 2017;30:303-371 (from memory).
  *
- * Throws (through `evaluate`) a RangeError for volumes outside their ranges.
+ * @throws {RangeError} (through `evaluate`) for a volume outside its valid range.
  *
  * @example
  * ```ts
@@ -250,26 +236,19 @@ export const regurgitantFractionPisa: Calculation<
   description: "Regurgitant fraction from a PISA regurgitant volume and the forward stroke volume.",
   inputs: {
     regurgitantVolumeMl: {
-      unit: "mL",
+      quantity: REGURGITANT_VOLUME,
       description: "Regurgitant volume per beat by PISA",
-      range: { min: 0, max: 1000 },
-      typical: { min: 0, max: 200 },
     },
-    forwardStrokeVolumeMl: {
-      unit: "mL",
-      description: "Forward stroke volume through a competent valve (e.g. LVOT Doppler)",
-      range: { min: 0, max: 1000, minExclusive: true },
-      typical: { min: 20, max: 150 },
-    },
+    forwardStrokeVolumeMl: FORWARD_STROKE_VOLUME,
   },
-  outputs: { regurgitantFractionPercent: { unit: "%", description: "Regurgitant fraction" } },
+  outputs: { regurgitantFractionPercent: REGURGITANT_FRACTION },
   formula: ({ regurgitantVolumeMl, forwardStrokeVolumeMl }) =>
     regurgitantFraction.formula({
       regurgitantVolumeMl,
       totalStrokeVolumeMl: regurgitantVolumeMl + forwardStrokeVolumeMl,
     }),
   formulaText: "RF = RVol / (RVol + SV_forward)",
-  sources: [ZOGHBI_2017],
+  citations: [ZOGHBI_2017],
   cautions: ["Combines two independent methods: their errors add"],
   clinical: true,
 });
@@ -283,8 +262,9 @@ export const regurgitantFractionPisa: Calculation<
  *
  * Source: Zoghbi WA, et al. J Am Soc Echocardiogr 2017;30:303-371 (quantitative Doppler method).
  *
- * Throws (through `evaluate`) a RangeError for volumes outside (0, 1000] mL. A negative
- * regurgitant volume (competent-valve SV larger) is returned as is: it signals measurement error.
+ * @throws {RangeError} (through `evaluate`) for a volume outside its valid range, or a
+ * competent-valve stroke volume larger than the regurgitant-valve one (a negative regurgitant
+ * volume signals a measurement error; it is refused rather than returned).
  *
  * @example
  * ```ts
@@ -305,22 +285,12 @@ export const volumetricRegurgitation: Calculation<
   description:
     "Regurgitation from the difference of Doppler stroke volumes at the regurgitant and a competent valve.",
   inputs: {
-    totalStrokeVolumeMl: {
-      unit: "mL",
-      description: "Stroke volume through the regurgitant valve",
-      range: { min: 0, max: 1000, minExclusive: true },
-      typical: { min: 30, max: 300 },
-    },
-    forwardStrokeVolumeMl: {
-      unit: "mL",
-      description: "Stroke volume through a competent valve",
-      range: { min: 0, max: 1000, minExclusive: true },
-      typical: { min: 20, max: 150 },
-    },
+    totalStrokeVolumeMl: TOTAL_STROKE_VOLUME,
+    forwardStrokeVolumeMl: FORWARD_STROKE_VOLUME,
   },
   outputs: {
-    regurgitantVolumeMl: { unit: "mL", description: "Regurgitant volume per beat" },
-    regurgitantFractionPercent: { unit: "%", description: "Regurgitant fraction" },
+    regurgitantVolumeMl: REGURGITANT_VOLUME,
+    regurgitantFractionPercent: REGURGITANT_FRACTION,
   },
   formula: ({ totalStrokeVolumeMl, forwardStrokeVolumeMl }) => {
     const regurgitantVolumeMl = totalStrokeVolumeMl - forwardStrokeVolumeMl;
@@ -330,76 +300,55 @@ export const volumetricRegurgitation: Calculation<
     };
   },
   formulaText: "RVol = SV_total − SV_forward; RF = RVol/SV_total",
-  sources: [ZOGHBI_2017],
-  cautions: [
-    "Small differences of two large volumes: the uncertainty of the result is large",
-    "A negative regurgitant volume signals measurement error",
-  ],
+  citations: [ZOGHBI_2017],
+  cautions: ["Small differences of two large volumes: the uncertainty of the result is large"],
+  constraints: [notAbove("forwardStrokeVolumeMl", "totalStrokeVolumeMl")],
   clinical: true,
 });
 
 /**
- * The whole PISA chain in one calculation, for propagating measurement uncertainty from the
- * radius, aliasing velocity, wall angle, jet velocity and VTI into EROA and regurgitant volume.
+ * The whole PISA method as one chain, for propagating measurement uncertainty from the radius,
+ * aliasing velocity, wall angle, jet velocity and VTI into the flow rate, EROA and regurgitant
+ * volume (the radius, squared in the first step, is one source for all three outputs).
  *
  * Formula: Q = 2π·r²·Va·α/180 ({@linkcode pisaFlowRate}); EROA = Q/Vmax
- * ({@linkcode effectiveRegurgitantOrificeArea}); RVol = EROA·VTI ({@linkcode regurgitantVolume}).
+ * ({@linkcode effectiveRegurgitantOrificeArea}); RVol = EROA·VTI ({@linkcode regurgitantVolume}),
+ * chained with `chain` so that each step's formula is its own.
  *
  * Source: Zoghbi WA, et al. J Am Soc Echocardiogr 2017;30:303-371.
  *
- * Throws (through `evaluate`) a RangeError for any input outside its range.
+ * @throws {RangeError} (through `evaluate`) for any input outside its valid range, or a flow rate,
+ * orifice area or volume outside its quantity's valid range.
  *
  * @example
  * ```ts
- * import { evaluate, pisaRegurgitation } from "@sonorigor/sonorigor";
+ * import { evaluate, normal, pisaRegurgitation, propagate } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
- * const r = evaluate(pisaRegurgitation, {
+ * const inputs = {
  *   radiusCm: 1, aliasingVelocityCmPerS: 40, regurgitantPeakVelocity: 5, regurgitantVtiCm: 150,
- * });
+ * };
+ * const r = evaluate(pisaRegurgitation, inputs);
+ * // 2π·1²·40 = 251.3 mL/s; / 500 cm/s = 0.503 cm²; × 150 cm = 75.4 mL (hand-checkable)
  * assert.ok(Math.abs(r.outputs.eroaCm2 - 0.503) < 1e-3);
  * assert.ok(Math.abs(r.outputs.regurgitantVolumeMl - 75.4) < 0.1);
+ * // r = 1.0 ± 0.05 cm (5 %) alone: u_r(RVol) = 2 · 5 % = 10 % (JCGM 100 §5.1.6)
+ * const g = propagate(pisaRegurgitation, { ...inputs, radiusCm: normal(1, 0.05) });
+ * const rvol = g.outputs.regurgitantVolumeMl;
+ * assert.ok(Math.abs(rvol.standardUncertainty / rvol.value - 0.1) < 1e-6);
  * ```
  */
-export const pisaRegurgitation: Calculation<
+export const pisaRegurgitation = chain(
+  [pisaFlowRate, effectiveRegurgitantOrificeArea, regurgitantVolume],
+  {
+    id: "pisaRegurgitation",
+    title: "PISA regurgitation (flow, EROA, volume)",
+    description: "Regurgitant flow rate, orifice area and volume from PISA measurements.",
+  },
+) as Calculation<
   | "radiusCm"
   | "aliasingVelocityCmPerS"
   | "wallAngleDeg"
   | "regurgitantPeakVelocity"
   | "regurgitantVtiCm",
   "flowRateMlPerS" | "eroaCm2" | "regurgitantVolumeMl"
-> = defineCalculation({
-  id: "pisaRegurgitation",
-  title: "PISA regurgitation (flow, EROA, volume)",
-  description: "Regurgitant flow rate, orifice area and volume from PISA measurements.",
-  inputs: {
-    radiusCm: pisaFlowRate.inputs.radiusCm,
-    aliasingVelocityCmPerS: pisaFlowRate.inputs.aliasingVelocityCmPerS,
-    wallAngleDeg: pisaFlowRate.inputs.wallAngleDeg,
-    regurgitantPeakVelocity: effectiveRegurgitantOrificeArea.inputs.regurgitantPeakVelocity,
-    regurgitantVtiCm: regurgitantVolume.inputs.regurgitantVtiCm,
-  },
-  outputs: {
-    flowRateMlPerS: pisaFlowRate.outputs.flowRateMlPerS,
-    eroaCm2: effectiveRegurgitantOrificeArea.outputs.eroaCm2,
-    regurgitantVolumeMl: regurgitantVolume.outputs.regurgitantVolumeMl,
-  },
-  formula: (
-    { radiusCm, aliasingVelocityCmPerS, wallAngleDeg, regurgitantPeakVelocity, regurgitantVtiCm },
-  ) => {
-    const { flowRateMlPerS } = pisaFlowRate.formula({
-      radiusCm,
-      aliasingVelocityCmPerS,
-      wallAngleDeg,
-    });
-    const { eroaCm2 } = effectiveRegurgitantOrificeArea.formula({
-      flowRateMlPerS,
-      regurgitantPeakVelocity,
-    });
-    const { regurgitantVolumeMl } = regurgitantVolume.formula({ eroaCm2, regurgitantVtiCm });
-    return { flowRateMlPerS, eroaCm2, regurgitantVolumeMl };
-  },
-  formulaText: "Q = 2π·r²·Va·α/180; EROA = Q/Vmax; RVol = EROA·VTI",
-  sources: [ZOGHBI_2017, PU_1995],
-  cautions: [...pisaFlowRate.cautions, ...effectiveRegurgitantOrificeArea.cautions],
-  clinical: true,
-});
+>;

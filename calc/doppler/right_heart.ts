@@ -4,10 +4,18 @@
  *
  * @module
  */
-import { defineCalculation } from "../core/define.ts";
+import { defineCalculation } from "../core/calculation.ts";
+import { chain } from "../core/chain.ts";
 import type { Calculation } from "../core/types.ts";
+import {
+  IVC_COLLAPSE,
+  IVC_DIAMETER,
+  RIGHT_ATRIAL_PRESSURE,
+  RV_SYSTOLIC_PRESSURE,
+  TR_PEAK_VELOCITY,
+} from "../quantities/flow.ts";
 import { simplifiedBernoulli } from "./bernoulli.ts";
-import { RUDSKI_2010 } from "./sources.ts";
+import { RUDSKI_2010 } from "./citations.ts";
 
 /**
  * Right-atrial pressure estimated from IVC diameter and its collapse with a sniff.
@@ -18,8 +26,7 @@ import { RUDSKI_2010 } from "./sources.ts";
  *
  * Source: Rudski LG, et al. J Am Soc Echocardiogr 2010;23:685-713, estimation of RA pressure.
  *
- * Throws (through `evaluate`) a RangeError for a diameter outside (0, 5] cm or a collapse outside
- * [0, 100] %.
+ * @throws {RangeError} (through `evaluate`) for a diameter or collapse outside its valid range.
  *
  * @example
  * ```ts
@@ -36,20 +43,10 @@ export const rightAtrialPressureFromIvc: Calculation<
   id: "rightAtrialPressureFromIvc",
   title: "Right-atrial pressure from the IVC",
   description: "Estimated right-atrial pressure from IVC diameter and sniff collapse.",
-  inputs: {
-    ivcDiameterCm: {
-      unit: "cm",
-      description: "Inferior vena cava diameter near the right atrium, at end-expiration",
-      range: { min: 0, max: 5, minExclusive: true },
-      typical: { min: 0.5, max: 3.5 },
-    },
-    ivcCollapsePercent: {
-      unit: "%",
-      description: "Collapse of the IVC diameter with a sniff",
-      range: { min: 0, max: 100 },
-    },
+  inputs: { ivcDiameterCm: IVC_DIAMETER, ivcCollapsePercent: IVC_COLLAPSE },
+  outputs: {
+    rapMmHg: { quantity: RIGHT_ATRIAL_PRESSURE, description: "Estimated right-atrial pressure" },
   },
-  outputs: { rapMmHg: { unit: "mmHg", description: "Estimated right-atrial pressure" } },
   formula: ({ ivcDiameterCm, ivcCollapsePercent }) => ({
     rapMmHg: ivcDiameterCm <= 2.1 && ivcCollapsePercent > 50
       ? 3
@@ -58,7 +55,7 @@ export const rightAtrialPressureFromIvc: Calculation<
       : 8,
   }),
   formulaText: "RAP = 3 (IVC ≤ 2.1 cm, collapse > 50 %); 15 (> 2.1 cm, < 50 %); else 8 mmHg",
-  sources: [RUDSKI_2010],
+  citations: [RUDSKI_2010],
   cautions: [
     "A categorical estimate: the true pressure spans about ±2.5 to ±5 mmHg around each value",
     "Not valid in ventilated patients; young athletes may have a dilated IVC with normal pressure",
@@ -76,8 +73,7 @@ export const rightAtrialPressureFromIvc: Calculation<
  *
  * Source: Rudski LG, et al. J Am Soc Echocardiogr 2010;23:685-713 (RVSP from TR velocity).
  *
- * Throws (through `evaluate`) a RangeError for a velocity outside [0, 7] m/s or a pressure outside
- * [0, 40] mmHg.
+ * @throws {RangeError} (through `evaluate`) for a velocity or pressure outside its valid range.
  *
  * @example
  * ```ts
@@ -93,26 +89,13 @@ export const rvSystolicPressure: Calculation<"trVelocity" | "rapMmHg", "rvspMmHg
     title: "RV systolic pressure",
     description:
       "Right-ventricular systolic pressure from the tricuspid regurgitant jet and right-atrial pressure.",
-    inputs: {
-      trVelocity: {
-        unit: "m/s",
-        description: "Peak tricuspid regurgitant velocity (magnitude)",
-        range: { min: 0, max: 7 },
-        typical: { min: 1.5, max: 5.5 },
-      },
-      rapMmHg: {
-        unit: "mmHg",
-        description: "Right-atrial pressure",
-        range: { min: 0, max: 40 },
-        typical: { min: 0, max: 20 },
-      },
-    },
-    outputs: { rvspMmHg: { unit: "mmHg", description: "RV systolic pressure" } },
+    inputs: { trVelocity: TR_PEAK_VELOCITY, rapMmHg: RIGHT_ATRIAL_PRESSURE },
+    outputs: { rvspMmHg: RV_SYSTOLIC_PRESSURE },
     formula: ({ trVelocity, rapMmHg }) => ({
       rvspMmHg: simplifiedBernoulli.formula({ peakVelocity: trVelocity }).gradient + rapMmHg,
     }),
     formulaText: "RVSP = 4·v_TR² + RAP",
-    sources: [RUDSKI_2010],
+    citations: [RUDSKI_2010],
     cautions: [
       "Severe free tricuspid regurgitation makes the Bernoulli gradient underestimate the pressure",
       "Equals pulmonary artery systolic pressure only without pulmonary stenosis or RVOT obstruction",
@@ -121,15 +104,16 @@ export const rvSystolicPressure: Calculation<"trVelocity" | "rapMmHg", "rvspMmHg
   });
 
 /**
- * RV systolic pressure with the right-atrial pressure estimated from the IVC, in one calculation
- * (so that uncertainty in the IVC measurements propagates through the categorical rule).
+ * RV systolic pressure with the right-atrial pressure estimated from the IVC, as one chain (so
+ * that uncertainty in the IVC measurements propagates through the categorical rule: Monte Carlo
+ * sees the jump between 3, 8 and 15 mmHg, the GUM law sees a zero slope and says so).
  *
- * Formula: RVSP = 4·v_TR² + RAP(IVC, collapse), composing {@linkcode rvSystolicPressure} and
- * {@linkcode rightAtrialPressureFromIvc}.
+ * Formula: RAP = rule(IVC diameter, collapse) ({@linkcode rightAtrialPressureFromIvc}), then
+ * RVSP = 4·v_TR² + RAP ({@linkcode rvSystolicPressure}), chained with `chain`.
  *
  * Source: Rudski LG, et al. J Am Soc Echocardiogr 2010;23:685-713.
  *
- * Throws (through `evaluate`) a RangeError for any input outside its range.
+ * @throws {RangeError} (through `evaluate`) for any input outside its valid range.
  *
  * @example
  * ```ts
@@ -146,25 +130,9 @@ export const rvSystolicPressure: Calculation<"trVelocity" | "rapMmHg", "rvspMmHg
 export const rvSystolicPressureFromIvc: Calculation<
   "trVelocity" | "ivcDiameterCm" | "ivcCollapsePercent",
   "rvspMmHg" | "rapMmHg"
-> = defineCalculation({
+> = chain([rightAtrialPressureFromIvc, rvSystolicPressure], {
   id: "rvSystolicPressureFromIvc",
   title: "RV systolic pressure (RA pressure from the IVC)",
   description: "RV systolic pressure from the TR velocity with RA pressure estimated from the IVC.",
-  inputs: {
-    trVelocity: rvSystolicPressure.inputs.trVelocity,
-    ivcDiameterCm: rightAtrialPressureFromIvc.inputs.ivcDiameterCm,
-    ivcCollapsePercent: rightAtrialPressureFromIvc.inputs.ivcCollapsePercent,
-  },
-  outputs: {
-    rvspMmHg: rvSystolicPressure.outputs.rvspMmHg,
-    rapMmHg: rightAtrialPressureFromIvc.outputs.rapMmHg,
-  },
-  formula: ({ trVelocity, ivcDiameterCm, ivcCollapsePercent }) => {
-    const { rapMmHg } = rightAtrialPressureFromIvc.formula({ ivcDiameterCm, ivcCollapsePercent });
-    return { ...rvSystolicPressure.formula({ trVelocity, rapMmHg }), rapMmHg };
-  },
-  formulaText: "RVSP = 4·v_TR² + RAP(IVC diameter, collapse)",
-  sources: [RUDSKI_2010],
-  cautions: [...rvSystolicPressure.cautions, ...rightAtrialPressureFromIvc.cautions],
-  clinical: true,
+  outputs: ["rvspMmHg", "rapMmHg"],
 });

@@ -4,17 +4,25 @@
  *
  * @module
  */
-import { defineCalculation } from "../core/define.ts";
+import { defineCalculation } from "../core/calculation.ts";
 import type { Calculation } from "../core/types.ts";
+import {
+  AORTIC_PEAK_VELOCITY,
+  AORTIC_VALVE_AREA,
+  AORTIC_VTI,
+  DECELERATION_SLOPE,
+  DECELERATION_TIME,
+  DIMENSIONLESS_INDEX,
+  LVOT_PEAK_VELOCITY,
+  LVOT_VTI,
+  MITRAL_E_VELOCITY,
+  MITRAL_VALVE_AREA,
+  PRESSURE_HALF_TIME,
+} from "../quantities/flow.ts";
+import { LVOT_DIAMETER } from "../quantities/structure.ts";
+import { indexedToBsa } from "../body/indexing.ts";
 import { crossSectionalArea, strokeVolume } from "./flow.ts";
-import { BAUMGARTNER_2009, BAUMGARTNER_2017, HATLE_1979 } from "./sources.ts";
-
-const LVOT_DIAMETER = {
-  unit: "cm",
-  description: "LVOT diameter, measured at the level of the pulsed-wave sample",
-  range: { min: 0, max: 5, minExclusive: true },
-  typical: { min: 1.4, max: 3.0 },
-} as const;
+import { BAUMGARTNER_2009, BAUMGARTNER_2017, HATLE_1979 } from "./citations.ts";
 
 const CONTINUITY_CAUTIONS = [
   "LVOT diameter is squared: a 1 mm error in a 2 cm LVOT changes the area by about 10 %",
@@ -30,8 +38,7 @@ const CONTINUITY_CAUTIONS = [
  * Source: Baumgartner H, et al. J Am Soc Echocardiogr 2009;22:1-23, continuity equation
  * (recommended method); Baumgartner H, et al. 2017 focused update.
  *
- * Throws (through `evaluate`) a RangeError for an LVOT diameter outside (0, 5] cm or a VTI outside
- * (0, 300] cm.
+ * @throws {RangeError} (through `evaluate`) for a diameter or VTI outside its valid range.
  *
  * @example
  * ```ts
@@ -49,28 +56,14 @@ export const continuityValveArea: Calculation<
   id: "continuityValveArea",
   title: "Continuity valve area (VTI)",
   description: "Aortic valve effective orifice area from the continuity equation with VTIs.",
-  inputs: {
-    lvotDiameterCm: LVOT_DIAMETER,
-    lvotVtiCm: {
-      unit: "cm",
-      description: "LVOT pulsed-wave VTI",
-      range: { min: 0, max: 300, minExclusive: true },
-      typical: { min: 8, max: 40 },
-    },
-    avVtiCm: {
-      unit: "cm",
-      description: "Aortic jet continuous-wave VTI",
-      range: { min: 0, max: 300, minExclusive: true },
-      typical: { min: 15, max: 200 },
-    },
-  },
-  outputs: { avaCm2: { unit: "cm^2", description: "Aortic valve area" } },
+  inputs: { lvotDiameterCm: LVOT_DIAMETER, lvotVtiCm: LVOT_VTI, avVtiCm: AORTIC_VTI },
+  outputs: { avaCm2: AORTIC_VALVE_AREA },
   formula: ({ lvotDiameterCm, lvotVtiCm, avVtiCm }) => ({
     avaCm2: strokeVolume.formula({ diameterCm: lvotDiameterCm, vtiCm: lvotVtiCm }).strokeVolumeMl /
       avVtiCm,
   }),
   formulaText: "AVA = π·d_LVOT²/4 · VTI_LVOT / VTI_AV",
-  sources: [BAUMGARTNER_2009, BAUMGARTNER_2017],
+  citations: [BAUMGARTNER_2009, BAUMGARTNER_2017],
   cautions: [...CONTINUITY_CAUTIONS],
   clinical: true,
 });
@@ -84,8 +77,8 @@ export const continuityValveArea: Calculation<
  * Source: Baumgartner H, et al. J Am Soc Echocardiogr 2009;22:1-23 (simplified continuity
  * equation with peak velocities, from memory).
  *
- * Throws (through `evaluate`) a RangeError for an LVOT diameter outside (0, 5] cm or a velocity
- * outside (0, 10] m/s.
+ * @throws {RangeError} (through `evaluate`) for a diameter or velocity outside its valid range,
+ * or a zero jet velocity.
  *
  * @example
  * ```ts
@@ -107,26 +100,20 @@ export const continuityValveAreaPeakVelocity: Calculation<
   description: "Aortic valve area from the continuity equation with peak velocities.",
   inputs: {
     lvotDiameterCm: LVOT_DIAMETER,
-    lvotPeakVelocity: {
-      unit: "m/s",
-      description: "LVOT pulsed-wave peak velocity",
-      range: { min: 0, max: 10, minExclusive: true },
-      typical: { min: 0.5, max: 2 },
-    },
+    lvotPeakVelocity: LVOT_PEAK_VELOCITY,
     avPeakVelocity: {
-      unit: "m/s",
-      description: "Aortic jet continuous-wave peak velocity",
-      range: { min: 0, max: 10, minExclusive: true },
-      typical: { min: 1, max: 7 },
+      quantity: AORTIC_PEAK_VELOCITY,
+      valid: { min: 0, max: 10, minExclusive: true },
+      reason: "the area divides by the jet velocity",
     },
   },
-  outputs: { avaCm2: { unit: "cm^2", description: "Aortic valve area" } },
+  outputs: { avaCm2: AORTIC_VALVE_AREA },
   formula: ({ lvotDiameterCm, lvotPeakVelocity, avPeakVelocity }) => ({
     avaCm2: crossSectionalArea.formula({ diameterCm: lvotDiameterCm }).areaCm2 *
       lvotPeakVelocity / avPeakVelocity,
   }),
   formulaText: "AVA = π·d_LVOT²/4 · V_LVOT / V_AV",
-  sources: [BAUMGARTNER_2009],
+  citations: [BAUMGARTNER_2009],
   cautions: [
     ...CONTINUITY_CAUTIONS,
     "Less accurate than the VTI form when the ejection profiles differ in shape",
@@ -135,48 +122,30 @@ export const continuityValveAreaPeakVelocity: Calculation<
 });
 
 /**
- * Aortic valve area indexed to body surface area.
+ * Aortic valve area indexed to body surface area. This is the member of the indexing family for
+ * the aortic valve area (`indexedToBsa(AORTIC_VALVE_AREA)`), so the division is written once for
+ * every indexed quantity; its inputs are `aorticValveArea` (cm²) and `bsaM2`, its output
+ * `aorticValveAreaIndex`.
  *
  * Formula: AVAi [cm²/m²] = AVA [cm²] / BSA [m²].
  *
- * Source: Baumgartner H, et al. 2017 focused update, table of AS severity (indexed AVA).
+ * Source: Baumgartner H, et al. 2017 focused update, table of AS severity (indexed AVA); Lang RM,
+ * et al. J Am Soc Echocardiogr 2015;28:1-39 (indexing to BSA).
  *
- * Throws (through `evaluate`) a RangeError for an area outside (0, 10] cm² or a BSA outside
- * (0, 4] m².
+ * @throws {RangeError} (through `evaluate`) for an area or BSA outside its valid range.
  *
  * @example
  * ```ts
  * import { evaluate, indexedValveArea } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
- * assert.equal(evaluate(indexedValveArea, { avaCm2: 1.2, bsaM2: 2 }).outputs.avaIndexCm2PerM2, 0.6);
+ * const r = evaluate(indexedValveArea, { aorticValveArea: 1.2, bsaM2: 2 });
+ * assert.equal(r.outputs.aorticValveAreaIndex, 0.6);
  * ```
  */
-export const indexedValveArea: Calculation<"avaCm2" | "bsaM2", "avaIndexCm2PerM2"> =
-  defineCalculation({
-    id: "indexedValveArea",
-    title: "Indexed aortic valve area",
-    description: "Aortic valve area divided by body surface area.",
-    inputs: {
-      avaCm2: {
-        unit: "cm^2",
-        description: "Aortic valve area",
-        range: { min: 0, max: 10, minExclusive: true },
-        typical: { min: 0.3, max: 5 },
-      },
-      bsaM2: {
-        unit: "m^2",
-        description: "Body surface area",
-        range: { min: 0, max: 4, minExclusive: true },
-        typical: { min: 1.2, max: 2.6 },
-      },
-    },
-    outputs: { avaIndexCm2PerM2: { unit: "cm^2/m^2", description: "Indexed aortic valve area" } },
-    formula: ({ avaCm2, bsaM2 }) => ({ avaIndexCm2PerM2: avaCm2 / bsaM2 }),
-    formulaText: "AVAi = AVA/BSA",
-    sources: [BAUMGARTNER_2017],
-    cautions: ["Indexing over-corrects in obesity"],
-    clinical: true,
-  });
+export const indexedValveArea = indexedToBsa(AORTIC_VALVE_AREA) as Calculation<
+  "aorticValveArea" | "bsaM2",
+  "aorticValveAreaIndex"
+>;
 
 /**
  * Dimensionless index (velocity ratio) of the aortic valve: LVOT over aortic jet.
@@ -186,7 +155,8 @@ export const indexedValveArea: Calculation<"avaCm2" | "bsaM2", "avaIndexCm2PerM2
  *
  * Source: Baumgartner H, et al. J Am Soc Echocardiogr 2009;22:1-23 (velocity ratio); 2017 update.
  *
- * Throws (through `evaluate`) a RangeError for a VTI outside (0, 300] cm.
+ * @throws {RangeError} (through `evaluate`) for a VTI outside its valid range, or a ratio above
+ * 1.5 (flow does not slow down through a stenosis: such a ratio is a measurement error).
  *
  * @example
  * ```ts
@@ -199,24 +169,11 @@ export const dimensionlessIndex: Calculation<"lvotVtiCm" | "avVtiCm", "dvi"> = d
   id: "dimensionlessIndex",
   title: "Dimensionless index (velocity ratio)",
   description: "Ratio of LVOT to aortic jet VTI, independent of the LVOT diameter.",
-  inputs: {
-    lvotVtiCm: {
-      unit: "cm",
-      description: "LVOT pulsed-wave VTI (or peak velocity in the same unit as the jet)",
-      range: { min: 0, max: 300, minExclusive: true },
-      typical: { min: 8, max: 40 },
-    },
-    avVtiCm: {
-      unit: "cm",
-      description: "Aortic jet continuous-wave VTI (or peak velocity)",
-      range: { min: 0, max: 300, minExclusive: true },
-      typical: { min: 15, max: 200 },
-    },
-  },
-  outputs: { dvi: { unit: "1", description: "Dimensionless index" } },
+  inputs: { lvotVtiCm: LVOT_VTI, avVtiCm: AORTIC_VTI },
+  outputs: { dvi: DIMENSIONLESS_INDEX },
   formula: ({ lvotVtiCm, avVtiCm }) => ({ dvi: lvotVtiCm / avVtiCm }),
   formulaText: "DVI = VTI_LVOT / VTI_AV",
-  sources: [BAUMGARTNER_2009, BAUMGARTNER_2017],
+  citations: [BAUMGARTNER_2009, BAUMGARTNER_2017],
   cautions: ["Depends on LVOT size: a large LVOT lowers the ratio for the same valve area"],
   clinical: true,
 });
@@ -229,7 +186,8 @@ export const dimensionlessIndex: Calculation<"lvotVtiCm" | "avVtiCm", "dvi"> = d
  * Source: Hatle L, Angelsen B, Tromsdal A. Circulation 1979;60:1096-1104; Baumgartner H, et al.
  * J Am Soc Echocardiogr 2009;22:1-23 (mitral stenosis, pressure half-time).
  *
- * Throws (through `evaluate`) a RangeError for a PHT outside (0, 1000] ms.
+ * @throws {RangeError} (through `evaluate`) for a PHT outside its valid range, or one so short
+ * that the area exceeds any valve's.
  *
  * @example
  * ```ts
@@ -244,16 +202,15 @@ export const mitralValveAreaPressureHalfTime: Calculation<"phtMs", "mvaCm2"> = d
   description: "Mitral stenosis orifice area from the transmitral pressure half-time.",
   inputs: {
     phtMs: {
-      unit: "ms",
-      description: "Pressure half-time of the transmitral E-wave",
-      range: { min: 0, max: 1000, minExclusive: true },
+      quantity: PRESSURE_HALF_TIME,
       typical: { min: 60, max: 500 },
+      reason: "the empirical constant 220 was fitted on stenotic valves, whose PHT lies here",
     },
   },
-  outputs: { mvaCm2: { unit: "cm^2", description: "Mitral valve area" } },
+  outputs: { mvaCm2: MITRAL_VALVE_AREA },
   formula: ({ phtMs }) => ({ mvaCm2: 220 / phtMs }),
   formulaText: "MVA = 220/PHT",
-  sources: [HATLE_1979, BAUMGARTNER_2009],
+  citations: [HATLE_1979, BAUMGARTNER_2009],
   cautions: [
     "Unreliable immediately after balloon valvotomy, with significant aortic regurgitation and with abnormal left-ventricular compliance",
     "Not validated in normal valves: short PHT gives meaningless large areas",
@@ -269,7 +226,7 @@ export const mitralValveAreaPressureHalfTime: Calculation<"phtMs", "mvaCm2"> = d
  * Source: Baumgartner H, et al. J Am Soc Echocardiogr 2009;22:1-23, mitral stenosis section
  * (from memory).
  *
- * Throws (through `evaluate`) a RangeError for a deceleration time outside (0, 3000] ms.
+ * @throws {RangeError} (through `evaluate`) for a deceleration time outside its valid range.
  *
  * @example
  * ```ts
@@ -286,18 +243,11 @@ export const pressureHalfTimeFromDecelerationTime: Calculation<"decelerationTime
     title: "Pressure half-time from deceleration time",
     description:
       "Pressure half-time of the mitral E wave from the time its velocity takes to reach zero.",
-    inputs: {
-      decelerationTimeMs: {
-        unit: "ms",
-        description: "E-wave deceleration time (peak to zero-velocity intercept of the slope)",
-        range: { min: 0, max: 3000, minExclusive: true },
-        typical: { min: 150, max: 1700 },
-      },
-    },
-    outputs: { phtMs: { unit: "ms", description: "Pressure half-time" } },
+    inputs: { decelerationTimeMs: DECELERATION_TIME },
+    outputs: { phtMs: PRESSURE_HALF_TIME },
     formula: ({ decelerationTimeMs }) => ({ phtMs: 0.29 * decelerationTimeMs }),
     formulaText: "PHT = 0.29·DT",
-    sources: [BAUMGARTNER_2009],
+    citations: [BAUMGARTNER_2009],
     cautions: ["With a bimodal (non-linear) deceleration use the mid-diastolic slope"],
     clinical: true,
   });
@@ -312,8 +262,8 @@ export const pressureHalfTimeFromDecelerationTime: Calculation<"decelerationTime
  * Source: Hatle L, Angelsen B, Tromsdal A. Circulation 1979;60:1096-1104 (definition of the
  * pressure half-time); hand-checkable arithmetic.
  *
- * Throws (through `evaluate`) a RangeError for a velocity outside (0, 5] m/s or a slope outside
- * (0, 100] m/s².
+ * @throws {RangeError} (through `evaluate`) for a velocity or slope outside its valid range, or
+ * a zero velocity.
  *
  * @example
  * ```ts
@@ -334,24 +284,17 @@ export const pressureHalfTimeFromSlope: Calculation<
     "Time for the transmitral velocity to fall from its peak to peak/√2 along a linear slope.",
   inputs: {
     peakVelocity: {
-      unit: "m/s",
+      quantity: MITRAL_E_VELOCITY,
       description: "Peak E-wave velocity where the deceleration starts",
-      range: { min: 0, max: 5, minExclusive: true },
-      typical: { min: 0.8, max: 3.5 },
     },
-    decelerationSlope: {
-      unit: "m/s^2",
-      description: "Magnitude of the E-wave deceleration slope",
-      range: { min: 0, max: 100, minExclusive: true },
-      typical: { min: 0.5, max: 20 },
-    },
+    decelerationSlope: DECELERATION_SLOPE,
   },
-  outputs: { phtMs: { unit: "ms", description: "Pressure half-time" } },
+  outputs: { phtMs: PRESSURE_HALF_TIME },
   formula: ({ peakVelocity, decelerationSlope }) => ({
     phtMs: 1000 * peakVelocity * (1 - Math.SQRT1_2) / decelerationSlope,
   }),
   formulaText: "PHT = v₀·(1 − 1/√2)/s",
-  sources: [HATLE_1979],
+  citations: [HATLE_1979],
   cautions: ["Assumes a linear deceleration from the peak"],
   clinical: true,
 });

@@ -7,56 +7,58 @@
  *
  * @module
  */
-import { defineCalculation } from "../core/define.ts";
-import {
-  escapeHtml,
-  formatNumber,
-  htmlNotes,
-  htmlTable,
-  JUPYTER_DISPLAY,
-  type MimeBundle,
-  textTable,
-} from "../core/display.ts";
-import type { Calculation } from "../core/types.ts";
+import { defineArguments } from "../core/calculation.ts";
+import { chain } from "../core/chain.ts";
+import type { Calculation, InputConstraint, InputSchema } from "../core/types.ts";
+import { BLOOD_VELOCITY } from "../quantities/flow.ts";
+import { PULSE_REPETITION_FREQUENCY, TRANSMIT_FREQUENCY } from "../quantities/ultrasound.ts";
+import { displayAliasingCheck, JUPYTER_DISPLAY } from "../../display/physics.ts";
 import { dopplerShiftFromVelocity, nyquistVelocity } from "./doppler.ts";
 import {
-  angleInput,
-  depthInput,
-  HATLE_ANGELSEN,
-  KREMKAU,
-  prfInput,
-  soundSpeedInput,
-  transmitFrequencyInput,
+  ALIGNED_ANGLE_INPUT,
+  bloodSpeedInput,
+  SAMPLE_DEPTH_INPUT,
+  SOUND_SPEED_INPUT,
   validateArguments,
 } from "./shared.ts";
 import { maximumPrfForDepth, unambiguousDepthForPrf } from "./timing.ts";
+import type {
+  AliasingArgument,
+  AliasingCheck,
+  AliasingOption,
+  AliasingSetting,
+  CheckedArguments,
+} from "./types.ts";
 
 /**
- * Lowest transmit frequency of usual adult cardiac probes, MHz (common practice, no source).
+ * Lowest transmit frequency of usual adult cardiac probes, MHz (common practice, no source):
+ * below it the aliasing check does not count a lower transmit frequency as a remedy.
  *
- * @example
+ * @example A 5 m/s jet at 14 cm would need a frequency below it
  * ```ts
- * import { LOWEST_CARDIAC_TRANSMIT_FREQUENCY_MHZ } from "@sonorigor/sonorigor";
+ * import { aliasingCheck, LOWEST_CARDIAC_TRANSMIT_FREQUENCY_MHZ } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
- * assert.ok(LOWEST_CARDIAC_TRANSMIT_FREQUENCY_MHZ > 0);
+ * const r = aliasingCheck({ velocity: 5, prfHz: 5500, transmitFrequencyMHz: 2.5, sampleDepthCm: 14 });
+ * const lower = r.options.find((o) => o.remedy === "lowerTransmitFrequency")!;
+ * assert.ok(lower.setting!.value < LOWEST_CARDIAC_TRANSMIT_FREQUENCY_MHZ);
+ * assert.equal(lower.resolves, false);
  * ```
  */
 export const LOWEST_CARDIAC_TRANSMIT_FREQUENCY_MHZ = 1;
 
 /**
  * The highest Nyquist velocity pulsed Doppler can reach at a sample depth: the Nyquist limit at
- * the highest PRF that depth allows.
+ * the highest PRF that depth allows. A chain of {@linkcode maximumPrfForDepth} (the sample depth
+ * as its depth) and {@linkcode nyquistVelocity} (its PRF limit as the PRF).
  *
- * Formula: PRF_max = c / (2·d) ({@linkcode maximumPrfForDepth}); v_N = (PRF_max / 2) · c /
- * (2·f0·cos θ) ({@linkcode nyquistVelocity}) = c² / (8·d·f0·cos θ).
+ * Formula: PRF_max = c / (2·d); v_N = (PRF_max / 2) · c / (2·f0·cos θ) = c² / (8·d·f0·cos θ).
  *
  * Source: Hatle L, Angelsen B. Doppler Ultrasound in Cardiology, 2nd ed. 1985, ch. 2 (maximal
  * velocity as a function of depth and frequency); Kremkau FW. Sonography Principles and
  * Instruments, 9th ed. 2015, ch. 5.
  *
- * Inputs: `sampleDepthCm` (cm, (0, 50]), `transmitFrequencyMHz` (MHz), `angleDeg` (deg, [0, 90),
- * default 0), `soundSpeedMps` (m/s, default 1540). Outputs: `maxPrfHz` (Hz), `nyquistVelocity`
- * (m/s).
+ * Inputs: `sampleDepthCm`, `soundSpeedMps` (default 1540 m/s), `transmitFrequencyMHz`,
+ * `angleDeg` (default 0°). Outputs: `maxPrfHz`, `nyquistVelocity`.
  *
  * @throws {RangeError} (through `evaluate`) for a depth or frequency ≤ 0 or an angle ≥ 90°.
  *
@@ -70,101 +72,68 @@ export const LOWEST_CARDIAC_TRANSMIT_FREQUENCY_MHZ = 1;
  * ```
  */
 export const nyquistVelocityAtDepth: Calculation<
-  "sampleDepthCm" | "transmitFrequencyMHz" | "angleDeg" | "soundSpeedMps",
+  "sampleDepthCm" | "soundSpeedMps" | "transmitFrequencyMHz" | "angleDeg",
   "maxPrfHz" | "nyquistVelocity"
-> = defineCalculation({
+> = chain([
+  { calculation: maximumPrfForDepth, inputs: { depthCm: "sampleDepthCm" } },
+  { calculation: nyquistVelocity, inputs: { prfHz: "maxPrfHz" } },
+], {
   id: "nyquistVelocityAtDepth",
   title: "Nyquist limit at a sample depth",
   description:
     "Highest velocity pulsed Doppler can display without aliasing at a sample depth, using the highest PRF that depth allows.",
-  inputs: {
-    sampleDepthCm: depthInput("Depth of the sample volume"),
-    transmitFrequencyMHz: transmitFrequencyInput,
-    angleDeg: { ...angleInput, default: 0 },
-    soundSpeedMps: soundSpeedInput,
-  },
-  outputs: {
-    maxPrfHz: { unit: "Hz", description: "Highest PRF for the depth" },
-    nyquistVelocity: { unit: "m/s", description: "Nyquist velocity at that PRF" },
-  },
-  formula: ({ sampleDepthCm, transmitFrequencyMHz, angleDeg, soundSpeedMps }) => {
-    const { maxPrfHz } = maximumPrfForDepth.formula({ depthCm: sampleDepthCm, soundSpeedMps });
-    const limit = nyquistVelocity.formula({
-      prfHz: maxPrfHz,
-      transmitFrequencyMHz,
-      angleDeg,
-      soundSpeedMps,
-    });
-    return { maxPrfHz, nyquistVelocity: limit.nyquistVelocity };
-  },
-  formulaText: "v_N,max = c² / (8·d·f0·cos θ)",
-  sources: [HATLE_ANGELSEN, KREMKAU],
-  cautions: [
-    "Real systems reserve part of the pulse interval, so the usable PRF is slightly lower",
-  ],
-});
-
-/** A change of settings that could stop a velocity aliasing. */
-export type AliasingRemedy =
-  | "maximumPrf"
-  | "baselineShift"
-  | "shallowerSampleVolume"
-  | "lowerTransmitFrequency"
-  | "continuousWave";
-
-/** One change of settings and the Nyquist limit it would give. */
-export interface AliasingOption {
-  /** Which change. */
-  readonly remedy: AliasingRemedy;
-  /** What to do, in words. */
-  readonly description: string;
-  /** The setting to use (null when the change has no single number). */
-  readonly setting: { readonly name: string; readonly value: number; readonly unit: string } | null;
-  /** Nyquist velocity after the change, m/s, in the direction of the flow (Infinity: no limit). */
-  readonly nyquistVelocity: number;
-  /** True when the velocity would no longer alias (and the setting is practical). */
-  readonly resolves: boolean;
-  /** What the change costs. */
-  readonly tradeOff: string;
-}
-
-/** Result of {@linkcode aliasingCheck}. */
-export interface AliasingCheck {
-  /** Velocity magnitude checked, m/s. */
-  readonly velocity: number;
-  /** Nyquist velocity at the current settings, m/s. */
-  readonly nyquistVelocity: number;
-  /** Highest PRF the current sample depth allows, Hz. */
-  readonly maxPrfHz: number;
-  /** True when the velocity exceeds the current Nyquist limit. */
-  readonly aliases: boolean;
-  /** Changes of settings, each with the Nyquist limit it would give. */
-  readonly options: readonly AliasingOption[];
-  /** Inputs outside their typical range. */
-  readonly flags: readonly string[];
-  /** Notebook display: a table of the options. */
-  [JUPYTER_DISPLAY](): MimeBundle;
-}
+  outputs: ["maxPrfHz", "nyquistVelocity"],
+}) as Calculation<
+  "sampleDepthCm" | "soundSpeedMps" | "transmitFrequencyMHz" | "angleDeg",
+  "maxPrfHz" | "nyquistVelocity"
+>;
 
 const TITLE = "Aliasing check";
 
-const ALIASING_INPUTS = {
-  velocity: {
-    unit: "m/s",
-    description: "Velocity magnitude to display",
-    range: { min: 0, max: 20 },
-    typical: { min: 0, max: 7 },
-  },
-  prfHz: prfInput,
-  transmitFrequencyMHz: transmitFrequencyInput,
-  sampleDepthCm: depthInput("Depth of the sample volume"),
-  angleDeg: { ...angleInput, default: 0 },
-  soundSpeedMps: soundSpeedInput,
-} as const;
+/** Relative tolerance of the comparisons with a limit (a velocity at the limit does not alias). */
+const RELATIVE_TOLERANCE = 1e-9;
 
-/** Arguments of {@linkcode aliasingCheck}: numbers in the stated units or quantity strings. */
+const PRF_WITHIN_DEPTH: InputConstraint<AliasingArgument> = {
+  inputs: ["prfHz", "sampleDepthCm", "soundSpeedMps"],
+  description:
+    "'prfHz' <= 'soundSpeedMps' / (2·'sampleDepthCm'), the highest PRF the sample depth allows (beyond it pulsed Doppler is high-PRF and range-ambiguous: see rangeAmbiguity)",
+  holds: ({ prfHz, sampleDepthCm, soundSpeedMps }) =>
+    prfHz <=
+      maximumPrfForDepth.formula({ depthCm: sampleDepthCm, soundSpeedMps }).maxPrfHz *
+        (1 + RELATIVE_TOLERANCE),
+};
+
+const LOWER_IS_LOWER: InputConstraint<AliasingArgument> = {
+  inputs: ["lowerTransmitFrequencyMHz", "transmitFrequencyMHz"],
+  description: "'lowerTransmitFrequencyMHz' < 'transmitFrequencyMHz'",
+  holds: (x) => x.lowerTransmitFrequencyMHz < x.transmitFrequencyMHz,
+};
+
+const ALIASING: InputSchema<AliasingArgument> = {
+  ...defineArguments(TITLE, {
+    velocity: bloodSpeedInput(
+      "Velocity to display",
+      "Speed (magnitude) of the flow to display",
+      { min: 0, max: BLOOD_VELOCITY.valid.max },
+      "a speed: whether it aliases does not depend on the direction of the flow",
+    ),
+    prfHz: PULSE_REPETITION_FREQUENCY,
+    transmitFrequencyMHz: TRANSMIT_FREQUENCY,
+    sampleDepthCm: SAMPLE_DEPTH_INPUT,
+    angleDeg: ALIGNED_ANGLE_INPUT,
+    soundSpeedMps: SOUND_SPEED_INPUT,
+    lowerTransmitFrequencyMHz: {
+      quantity: TRANSMIT_FREQUENCY,
+      label: "Lower transmit frequency",
+      description: "A lower transmit frequency available on the probe (optional)",
+    },
+  }),
+  constraints: [PRF_WITHIN_DEPTH, LOWER_IS_LOWER],
+};
+
+/** Arguments of {@linkcode aliasingCheck}: numbers in canonical units or quantity strings. */
 export interface AliasingCheckArguments {
-  /** Velocity magnitude, m/s, [0, 20]. */
+  /** Velocity magnitude, m/s. */
   readonly velocity: number | string;
   /** Current pulse repetition frequency, Hz, at most c/(2·sample depth). */
   readonly prfHz: number | string;
@@ -172,16 +141,23 @@ export interface AliasingCheckArguments {
   readonly transmitFrequencyMHz: number | string;
   /** Sample-volume depth, cm. */
   readonly sampleDepthCm: number | string;
-  /** Insonation angle, degrees, [0, 90), default 0. */
+  /** Insonation angle, degrees. @default 0 */
   readonly angleDeg?: number | string;
-  /** Speed of sound, m/s, default 1540. */
+  /** Speed of sound, m/s. @default 1540 */
   readonly soundSpeedMps?: number | string;
   /** A lower transmit frequency available on the probe, MHz; when omitted, the check reports the
-   * highest frequency that would avoid aliasing. */
-  readonly lowerTransmitFrequencyMHz?: number | string;
+   * highest frequency that would avoid aliasing (undefined: not given). */
+  readonly lowerTransmitFrequencyMHz?: number | string | undefined;
 }
 
-const RELATIVE_TOLERANCE = 1e-9;
+function settingOf(
+  checked: CheckedArguments<AliasingArgument>,
+  name: AliasingArgument,
+  value: number,
+): AliasingSetting {
+  const d = checked.definitions[name];
+  return { name, label: d.label, value, unit: d.unit, quantity: d.quantity };
+}
 
 /**
  * Checks whether a velocity aliases under pulsed-Doppler settings and lists which changes would
@@ -190,7 +166,7 @@ const RELATIVE_TOLERANCE = 1e-9;
  * - `baselineShift`: shift the baseline fully, up to about 2 × the Nyquist limit in one direction;
  * - `shallowerSampleVolume`: the deepest sample depth whose highest PRF displays the velocity;
  * - `lowerTransmitFrequency`: the given lower frequency, or the highest frequency that would
- *   avoid aliasing (not practical below about 1 MHz);
+ *   avoid aliasing (not practical below {@linkcode LOWEST_CARDIAC_TRANSMIT_FREQUENCY_MHZ});
  * - `continuousWave`: no Nyquist limit (nyquistVelocity = Infinity), at the cost of depth
  *   resolution.
  *
@@ -203,7 +179,8 @@ const RELATIVE_TOLERANCE = 1e-9;
  *
  * @param args Velocity, current PRF, transmit frequency, sample depth, optional angle, speed of
  * sound and an available lower transmit frequency.
- * @returns Whether the velocity aliases and the options with their Nyquist limits.
+ * @returns Whether the velocity aliases and the options with their Nyquist limits; it displays
+ * itself in a notebook.
  * @throws {TypeError} For an unknown, missing or mistyped argument.
  * @throws {RangeError} For a value outside its range, a PRF above what the sample depth allows
  * (c/2d; high-PRF is range-ambiguous, see `rangeAmbiguity`), or a "lower" transmit frequency that
@@ -222,38 +199,21 @@ const RELATIVE_TOLERANCE = 1e-9;
  * ```
  */
 export function aliasingCheck(args: AliasingCheckArguments): AliasingCheck {
-  if (typeof args !== "object" || args === null) {
-    throw new TypeError(
-      `${TITLE}: expected an object of inputs, got ${args === null ? "null" : typeof args}`,
-    );
-  }
-  const { lowerTransmitFrequencyMHz: lowerRaw, ...rest } = args;
-  const { values, flags } = validateArguments(TITLE, ALIASING_INPUTS, rest);
-  const { velocity, prfHz, transmitFrequencyMHz, sampleDepthCm, angleDeg, soundSpeedMps } = values;
+  const lowerGiven = typeof args === "object" && args !== null &&
+    args.lowerTransmitFrequencyMHz !== undefined;
+  const checked = validateArguments(
+    ALIASING,
+    args,
+    lowerGiven ? {} : { skip: ["lowerTransmitFrequencyMHz"] },
+  );
+  const { velocity, prfHz, transmitFrequencyMHz, sampleDepthCm, angleDeg, soundSpeedMps } =
+    checked.values;
   const atDepth = nyquistVelocityAtDepth.formula({
     sampleDepthCm,
     transmitFrequencyMHz,
     angleDeg,
     soundSpeedMps,
   });
-  if (!(prfHz <= atDepth.maxPrfHz * (1 + RELATIVE_TOLERANCE))) {
-    throw new RangeError(
-      `${TITLE}: expected 'prfHz' in (0, ${
-        formatNumber(atDepth.maxPrfHz, 6)
-      }] Hz, the limit c/(2·d) for 'sampleDepthCm' = ${sampleDepthCm} cm (beyond it the mode is high-PRF and range-ambiguous), got ${prfHz}`,
-    );
-  }
-  let lowerTransmitFrequencyMHz: number | undefined;
-  if (lowerRaw !== undefined) {
-    lowerTransmitFrequencyMHz = validateArguments(TITLE, {
-      lowerTransmitFrequencyMHz: transmitFrequencyInput,
-    }, { lowerTransmitFrequencyMHz: lowerRaw }).values.lowerTransmitFrequencyMHz;
-    if (!(lowerTransmitFrequencyMHz < transmitFrequencyMHz)) {
-      throw new RangeError(
-        `${TITLE}: expected 'lowerTransmitFrequencyMHz' in (0, ${transmitFrequencyMHz}) MHz (below the current transmit frequency), got ${lowerTransmitFrequencyMHz}`,
-      );
-    }
-  }
   const displays = (limit: number): boolean => velocity <= limit * (1 + RELATIVE_TOLERANCE);
   const current = nyquistVelocity.formula({ prfHz, transmitFrequencyMHz, angleDeg, soundSpeedMps })
     .nyquistVelocity;
@@ -261,10 +221,9 @@ export function aliasingCheck(args: AliasingCheckArguments): AliasingCheck {
 
   options.push({
     remedy: "maximumPrf",
-    description: `Raise the PRF (velocity scale) to ${
-      formatNumber(atDepth.maxPrfHz, 4)
-    } Hz, the most a ${sampleDepthCm} cm sample depth allows`,
-    setting: { name: "prfHz", value: atDepth.maxPrfHz, unit: "Hz" },
+    label: "Raise the PRF to its depth limit",
+    description: "Raise the PRF (velocity scale) to the most the sample depth allows",
+    setting: settingOf(checked, "prfHz", atDepth.maxPrfHz),
     nyquistVelocity: atDepth.nyquistVelocity,
     resolves: displays(atDepth.nyquistVelocity),
     tradeOff: "None in range; the scale cannot go higher at this depth",
@@ -272,6 +231,7 @@ export function aliasingCheck(args: AliasingCheckArguments): AliasingCheck {
 
   options.push({
     remedy: "baselineShift",
+    label: "Shift the baseline",
     description: "Shift the zero baseline fully away from the flow direction (current PRF)",
     setting: null,
     nyquistVelocity: 2 * current,
@@ -295,17 +255,18 @@ export function aliasingCheck(args: AliasingCheckArguments): AliasingCheck {
   });
   options.push({
     remedy: "shallowerSampleVolume",
-    description: `Sample at ${
-      formatNumber(targetDepth, 3)
-    } cm or shallower (another window) with the PRF at ${formatNumber(atTarget.maxPrfHz, 4)} Hz`,
-    setting: { name: "sampleDepthCm", value: targetDepth, unit: "cm" },
+    label: "Sample shallower",
+    description:
+      "Sample at this depth or shallower (from another window) with the PRF at its limit for that depth",
+    setting: settingOf(checked, "sampleDepthCm", targetDepth),
     nyquistVelocity: atTarget.nyquistVelocity,
     resolves: displays(atTarget.nyquistVelocity),
     tradeOff: "Only if the flow can be reached at that depth from another window",
   });
 
+  const given = lowerGiven ? checked.values.lowerTransmitFrequencyMHz : undefined;
   const frequencyNeeded = velocity > 0 ? transmitFrequencyMHz * (current / velocity) : Infinity;
-  const lower = lowerTransmitFrequencyMHz ?? Math.min(frequencyNeeded, transmitFrequencyMHz);
+  const lower = given ?? Math.min(frequencyNeeded, transmitFrequencyMHz);
   const atLower = nyquistVelocity.formula({
     prfHz,
     transmitFrequencyMHz: lower,
@@ -315,12 +276,17 @@ export function aliasingCheck(args: AliasingCheckArguments): AliasingCheck {
   const practical = lower >= LOWEST_CARDIAC_TRANSMIT_FREQUENCY_MHZ;
   options.push({
     remedy: "lowerTransmitFrequency",
-    description: `Transmit at ${formatNumber(lower, 3)} MHz${
-      lowerTransmitFrequencyMHz === undefined ? " or lower" : ""
+    label: "Lower the transmit frequency",
+    description: `${
+      given === undefined
+        ? "Transmit at this frequency or lower"
+        : "Transmit at the lower frequency given"
     } (current PRF)${
-      practical ? "" : ", below the usual lowest cardiac probe frequency of about 1 MHz"
+      practical
+        ? ""
+        : `, below the usual lowest cardiac probe frequency of about ${LOWEST_CARDIAC_TRANSMIT_FREQUENCY_MHZ} MHz`
     }`,
-    setting: { name: "transmitFrequencyMHz", value: lower, unit: "MHz" },
+    setting: settingOf(checked, "transmitFrequencyMHz", lower),
     nyquistVelocity: atLower,
     resolves: practical && displays(atLower),
     tradeOff:
@@ -329,6 +295,7 @@ export function aliasingCheck(args: AliasingCheckArguments): AliasingCheck {
 
   options.push({
     remedy: "continuousWave",
+    label: "Continuous-wave Doppler",
     description: "Use continuous-wave Doppler",
     setting: null,
     nyquistVelocity: Infinity,
@@ -342,28 +309,13 @@ export function aliasingCheck(args: AliasingCheckArguments): AliasingCheck {
     maxPrfHz: atDepth.maxPrfHz,
     aliases: !displays(current),
     options,
-    flags,
+    flags: checked.flags,
+    arguments: checked,
+    outputDefinitions: {
+      nyquistVelocity: nyquistVelocity.outputs.nyquistVelocity,
+      maxPrfHz: maximumPrfForDepth.outputs.maxPrfHz,
+    },
     [JUPYTER_DISPLAY]: () => displayAliasingCheck(result),
   };
   return result;
-}
-
-function displayAliasingCheck(r: AliasingCheck): MimeBundle {
-  const head = `${TITLE}: ${formatNumber(r.velocity)} m/s ${
-    r.aliases ? "aliases" : "does not alias"
-  } (Nyquist limit ${formatNumber(r.nyquistVelocity)} m/s)`;
-  const header = ["change", "Nyquist limit (m/s)", "resolves", "what to do", "trade-off"];
-  const rows = r.options.map((o) => [
-    o.remedy,
-    Number.isFinite(o.nyquistVelocity) ? formatNumber(o.nyquistVelocity) : "no limit",
-    o.resolves ? "yes" : "no",
-    o.description,
-    o.tradeOff,
-  ]);
-  return {
-    "text/plain": [head, textTable(header, rows), ...r.flags.map((f) => `Flag: ${f}`)].join("\n"),
-    "text/html": `<div><b>${escapeHtml(head)}</b>${htmlTable(header, rows)}${
-      htmlNotes("Flags", r.flags)
-    }</div>`,
-  };
 }

@@ -3,18 +3,38 @@
  *
  * @module
  */
-import { defineCalculation } from "../core/define.ts";
+import { defineCalculation, type InputRole } from "../core/calculation.ts";
 import type { Calculation } from "../core/types.ts";
-import type { InlineInput } from "../core/calculation.ts";
-import { BUSHBERG, depthInput, HOSKINS, KREMKAU, transmitFrequencyInput } from "./shared.ts";
+import {
+  ATTENUATION_COEFFICIENT,
+  ATTENUATION_LOSS,
+  DYNAMIC_RANGE,
+  PENETRATION_DEPTH,
+  TRANSMIT_FREQUENCY,
+} from "../quantities/ultrasound.ts";
+import { BUSHBERG, HOSKINS, KREMKAU } from "./citations.ts";
+import { depthInput } from "./shared.ts";
 
-const attenuationInput: InlineInput = {
-  unit: "dB/cm/MHz",
+/**
+ * Attenuation coefficient of average soft tissue, the textbook rule of thumb, dB/cm/MHz (Kremkau
+ * 2015 ch. 2; common practice). The default of every attenuation input.
+ *
+ * @example Penetration at 3 MHz with the default coefficient
+ * ```ts
+ * import { evaluate, penetrationDepth, SOFT_TISSUE_ATTENUATION_DB_PER_CM_MHZ } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const r = evaluate(penetrationDepth, { dynamicRangeDb: 60, transmitFrequencyMHz: 3 });
+ * assert.equal(r.inputs.attenuationDbPerCmMHz, SOFT_TISSUE_ATTENUATION_DB_PER_CM_MHZ);
+ * assert.ok(Math.abs(r.outputs.maxDepthCm - 20) < 1e-12); // 60 / (2 · 0.5 · 3)
+ * ```
+ */
+export const SOFT_TISSUE_ATTENUATION_DB_PER_CM_MHZ = 0.5;
+
+const ATTENUATION_INPUT: InputRole = {
+  quantity: ATTENUATION_COEFFICIENT,
   description:
     "Attenuation coefficient per cm and per MHz (soft-tissue rule of thumb 0.5; see the tissue table)",
-  range: { min: 0, max: 50, minExclusive: true },
-  typical: { min: 0.1, max: 1.5 },
-  default: 0.5,
+  default: SOFT_TISSUE_ATTENUATION_DB_PER_CM_MHZ,
 };
 
 /**
@@ -28,8 +48,8 @@ const attenuationInput: InlineInput = {
  * coefficient ≈ 0.5 dB/cm per MHz in soft tissue); Bushberg JT et al. The Essential Physics of
  * Medical Imaging, 3rd ed. 2012, ch. 14.
  *
- * Inputs: `attenuationDbPerCmMHz` (dB/cm/MHz, (0, 50], default 0.5), `transmitFrequencyMHz` (MHz),
- * `depthCm` (cm, (0, 50]). Outputs: `oneWayLossDb` (dB), `roundTripLossDb` (dB).
+ * Inputs: `attenuationDbPerCmMHz` (default 0.5 dB/cm/MHz), `transmitFrequencyMHz`, `depthCm`.
+ * Outputs: `oneWayLossDb`, `roundTripLossDb`.
  *
  * @throws {RangeError} (through `evaluate`) for a coefficient, frequency or depth ≤ 0.
  *
@@ -51,20 +71,28 @@ export const attenuationLoss: Calculation<
   description:
     "Loss of pulse amplitude with depth, one way and for the round trip to a reflector and back.",
   inputs: {
-    attenuationDbPerCmMHz: attenuationInput,
-    transmitFrequencyMHz: transmitFrequencyInput,
-    depthCm: depthInput("Depth of the reflector"),
+    attenuationDbPerCmMHz: ATTENUATION_INPUT,
+    transmitFrequencyMHz: TRANSMIT_FREQUENCY,
+    depthCm: depthInput("Reflector depth", "Depth of the reflector"),
   },
   outputs: {
-    oneWayLossDb: { unit: "dB", description: "Attenuation from the probe to the depth" },
-    roundTripLossDb: { unit: "dB", description: "Attenuation to the depth and back" },
+    oneWayLossDb: {
+      quantity: ATTENUATION_LOSS,
+      label: "One-way attenuation",
+      description: "Attenuation from the probe to the depth",
+    },
+    roundTripLossDb: {
+      quantity: ATTENUATION_LOSS,
+      label: "Round-trip attenuation",
+      description: "Attenuation to the depth and back",
+    },
   },
   formula: ({ attenuationDbPerCmMHz, transmitFrequencyMHz, depthCm }) => {
     const oneWayLossDb = attenuationDbPerCmMHz * transmitFrequencyMHz * depthCm;
     return { oneWayLossDb, roundTripLossDb: 2 * oneWayLossDb };
   },
   formulaText: "L₁ = α·f·d; L₂ = 2·α·f·d",
-  sources: [KREMKAU, BUSHBERG],
+  citations: [KREMKAU, BUSHBERG],
   cautions: [
     "Assumes attenuation proportional to frequency; in water and blood it rises faster (about as f² in water)",
   ],
@@ -80,8 +108,8 @@ export const attenuationLoss: Calculation<
  * Source: Kremkau FW. Sonography Principles and Instruments, 9th ed. 2015, ch. 2 (attenuation,
  * imaging depth); Hoskins PR, Martin K, Thrush A. Diagnostic Ultrasound, 3rd ed. 2019, ch. 2.
  *
- * Inputs: `dynamicRangeDb` (dB, (0, 200], typical [40, 120]), `attenuationDbPerCmMHz`
- * (dB/cm/MHz, default 0.5), `transmitFrequencyMHz` (MHz). Output: `maxDepthCm` (cm).
+ * Inputs: `dynamicRangeDb`, `attenuationDbPerCmMHz` (default 0.5 dB/cm/MHz),
+ * `transmitFrequencyMHz`. Output: `maxDepthCm`.
  *
  * @throws {RangeError} (through `evaluate`) for a dynamic range, coefficient or frequency ≤ 0.
  *
@@ -102,23 +130,18 @@ export const penetrationDepth: Calculation<
   description:
     "Deepest depth from which echoes still return within the system's dynamic range, given the tissue attenuation and transmit frequency.",
   inputs: {
-    dynamicRangeDb: {
-      unit: "dB",
-      description: "Dynamic range available for attenuation (transmit level to noise floor)",
-      range: { min: 0, max: 200, minExclusive: true },
-      typical: { min: 40, max: 120 },
-    },
-    attenuationDbPerCmMHz: attenuationInput,
-    transmitFrequencyMHz: transmitFrequencyInput,
+    dynamicRangeDb: DYNAMIC_RANGE,
+    attenuationDbPerCmMHz: ATTENUATION_INPUT,
+    transmitFrequencyMHz: TRANSMIT_FREQUENCY,
   },
-  outputs: { maxDepthCm: { unit: "cm", description: "Deepest usable depth" } },
+  outputs: { maxDepthCm: PENETRATION_DEPTH },
   formula: ({ dynamicRangeDb, attenuationDbPerCmMHz, transmitFrequencyMHz }) => ({
     maxDepthCm: dynamicRangeDb /
       attenuationLoss.formula({ attenuationDbPerCmMHz, transmitFrequencyMHz, depthCm: 1 })
         .roundTripLossDb,
   }),
   formulaText: "d_max = DR / (2·α·f)",
-  sources: [KREMKAU, HOSKINS],
+  citations: [KREMKAU, HOSKINS],
   cautions: [
     "Ignores reflector strength, focusing gain and time-gain compensation limits; a first-order estimate",
   ],

@@ -4,22 +4,23 @@
  *
  * @module
  */
-import { defineCalculation } from "../core/define.ts";
+import { defineCalculation } from "../core/calculation.ts";
 import type { Calculation } from "../core/types.ts";
-import type { InlineInput } from "../core/calculation.ts";
-import { depthInput, HOSKINS, soundSpeedInput, SZABO, transmitFrequencyInput } from "./shared.ts";
+import {
+  APERTURE,
+  BEAM_WIDTH,
+  DIVERGENCE_ANGLE,
+  F_NUMBER,
+  NEAR_FIELD_LENGTH,
+  TRANSMIT_FREQUENCY,
+} from "../quantities/ultrasound.ts";
+import { HOSKINS, KREMKAU, SZABO } from "./citations.ts";
+import { depthInput, SOUND_SPEED_INPUT } from "./shared.ts";
 import { wavelengthAndPeriod } from "./wave.ts";
 
 /** Pulse-echo −6 dB width factor of a uniformly weighted line (one-dimensional) aperture: the
  * root of sinc²(u) = 1/2 is u = 0.4429, so the full width is 0.8859·λ·F/D. */
 const LINE_APERTURE_WIDTH_FACTOR = 0.8859;
-
-const apertureInput: InlineInput = {
-  unit: "mm",
-  description: "Active aperture width of the probe in the scan plane",
-  range: { min: 0, max: 200, minExclusive: true },
-  typical: { min: 5, max: 40 },
-};
 
 /**
  * Lateral resolution: the pulse-echo −6 dB beam width at the focus of a focused aperture.
@@ -33,9 +34,8 @@ const apertureInput: InlineInput = {
  * ch. 6 (focusing, pulse-echo beam width); Hoskins PR, Martin K, Thrush A. Diagnostic Ultrasound:
  * Physics and Equipment, 3rd ed. 2019, ch. 3.
  *
- * Inputs: `transmitFrequencyMHz` (MHz), `apertureMm` (mm, (0, 200], typical [5, 40]),
- * `focalDepthCm` (cm, (0, 50]), `soundSpeedMps` (m/s, default 1540). Outputs: `beamWidthMm` (mm),
- * `fNumber`.
+ * Inputs: `transmitFrequencyMHz`, `apertureMm` (width in the scan plane), `focalDepthCm`,
+ * `soundSpeedMps` (default 1540 m/s). Outputs: `beamWidthMm`, `fNumber`.
  *
  * @throws {RangeError} (through `evaluate`) for a frequency, aperture or depth ≤ 0.
  *
@@ -58,14 +58,22 @@ export const lateralResolution: Calculation<
   description:
     "Pulse-echo −6 dB beam width at the focus, the lateral resolution of the image there, from aperture, focal depth and wavelength.",
   inputs: {
-    transmitFrequencyMHz: transmitFrequencyInput,
-    apertureMm: apertureInput,
-    focalDepthCm: depthInput("Focal depth"),
-    soundSpeedMps: soundSpeedInput,
+    transmitFrequencyMHz: TRANSMIT_FREQUENCY,
+    apertureMm: {
+      quantity: APERTURE,
+      label: "Aperture width",
+      description: "Active aperture width of the probe in the scan plane",
+    },
+    focalDepthCm: depthInput("Focal depth", "Depth of the transmit and receive focus"),
+    soundSpeedMps: SOUND_SPEED_INPUT,
   },
   outputs: {
-    beamWidthMm: { unit: "mm", description: "Pulse-echo −6 dB beam width at the focus" },
-    fNumber: { unit: "1", description: "F-number: focal depth over aperture" },
+    beamWidthMm: {
+      quantity: BEAM_WIDTH,
+      label: "Lateral resolution at the focus",
+      description: "Pulse-echo −6 dB beam width at the focus",
+    },
+    fNumber: F_NUMBER,
   },
   formula: ({ transmitFrequencyMHz, apertureMm, focalDepthCm, soundSpeedMps }) => {
     const { wavelengthMm } = wavelengthAndPeriod.formula({ transmitFrequencyMHz, soundSpeedMps });
@@ -73,7 +81,7 @@ export const lateralResolution: Calculation<
     return { beamWidthMm: LINE_APERTURE_WIDTH_FACTOR * wavelengthMm * fNumber, fNumber };
   },
   formulaText: "F# = z_f / D; w = 0.886·λ·F#",
-  sources: [SZABO, HOSKINS],
+  citations: [SZABO, HOSKINS],
   cautions: [
     "Beyond the focus and in the elevation direction the beam is wider; apodisation widens the main lobe further",
   ],
@@ -88,8 +96,8 @@ export const lateralResolution: Calculation<
  * Source: Kremkau FW. Sonography Principles and Instruments, 9th ed. 2015, ch. 3 (near-zone
  * length, divergence); Szabo TL. Diagnostic Ultrasound Imaging: Inside Out, 2nd ed. 2014, ch. 6.
  *
- * Inputs: `transmitFrequencyMHz` (MHz), `apertureMm` (mm, disc diameter), `soundSpeedMps` (m/s,
- * default 1540). Outputs: `nearFieldLengthCm` (cm), `divergenceHalfAngleDeg` (deg).
+ * Inputs: `transmitFrequencyMHz`, `apertureMm` (disc diameter), `soundSpeedMps` (default
+ * 1540 m/s). Outputs: `nearFieldLengthCm`, `divergenceHalfAngleDeg`.
  *
  * @throws {RangeError} (through `evaluate`) for a frequency or aperture ≤ 0, or when the aperture
  * is smaller than 1.22 wavelengths (no far-field main lobe: the divergence is not finite).
@@ -112,17 +120,15 @@ export const nearFieldLength: Calculation<
   description:
     "Length of the near field (Fresnel zone) of an unfocused circular aperture, and the half-angle at which the beam spreads beyond it.",
   inputs: {
-    transmitFrequencyMHz: transmitFrequencyInput,
-    apertureMm: { ...apertureInput, description: "Diameter of the (unfocused, circular) aperture" },
-    soundSpeedMps: soundSpeedInput,
-  },
-  outputs: {
-    nearFieldLengthCm: { unit: "cm", description: "Near-field (Fresnel zone) length" },
-    divergenceHalfAngleDeg: {
-      unit: "deg",
-      description: "Far-field divergence half-angle (to the first zero)",
+    transmitFrequencyMHz: TRANSMIT_FREQUENCY,
+    apertureMm: {
+      quantity: APERTURE,
+      label: "Aperture diameter",
+      description: "Diameter of the (unfocused, circular) aperture",
     },
+    soundSpeedMps: SOUND_SPEED_INPUT,
   },
+  outputs: { nearFieldLengthCm: NEAR_FIELD_LENGTH, divergenceHalfAngleDeg: DIVERGENCE_ANGLE },
   formula: ({ transmitFrequencyMHz, apertureMm, soundSpeedMps }) => {
     const { wavelengthMm } = wavelengthAndPeriod.formula({ transmitFrequencyMHz, soundSpeedMps });
     return {
@@ -131,16 +137,7 @@ export const nearFieldLength: Calculation<
     };
   },
   formulaText: "N = D² / (4λ); sin θ = 1.22·λ / D",
-  sources: [
-    {
-      authors: "Kremkau FW",
-      year: 2015,
-      title: "Sonography Principles and Instruments",
-      publication: "9th ed. Elsevier, St Louis",
-      locator: "ch. 3 (near-zone length and far-zone divergence)",
-    },
-    SZABO,
-  ],
+  citations: [{ ...KREMKAU, locator: "ch. 3 (near-zone length and far-zone divergence)" }, SZABO],
   cautions: [
     "Applies to an unfocused disc with D much larger than λ; focused and array probes have their own beam shapes",
   ],

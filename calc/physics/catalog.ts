@@ -24,9 +24,11 @@ import { axialResolution, wavelengthAndPeriod } from "./wave.ts";
  *
  * @example
  * ```ts
- * import { PHYSICS_CALCULATIONS } from "@sonorigor/sonorigor";
+ * import { CATALOG, nyquistVelocityAtDepth, PHYSICS_CALCULATIONS } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
- * assert.ok(PHYSICS_CALCULATIONS.length > 0);
+ * // the Nyquist limit at a depth is a chain, registered under its own id like the others
+ * assert.ok(PHYSICS_CALCULATIONS.includes(nyquistVelocityAtDepth));
+ * assert.equal(CATALOG.calculations.get("nyquistVelocityAtDepth"), nyquistVelocityAtDepth);
  * ```
  */
 export const PHYSICS_CALCULATIONS: readonly Calculation[] = [

@@ -6,18 +6,23 @@
  *
  * @module
  */
-import { defineCalculation } from "../core/define.ts";
+import { defineCalculation } from "../core/calculation.ts";
 import type { Calculation } from "../core/types.ts";
+import { BLOOD_VELOCITY, DOPPLER_UNDERESTIMATION } from "../quantities/flow.ts";
 import {
-  angleInput,
+  DOPPLER_SHIFT,
+  INSONATION_ANGLE,
+  NYQUIST_VELOCITY,
+  PULSE_REPETITION_FREQUENCY,
+  TRANSMIT_FREQUENCY,
+} from "../quantities/ultrasound.ts";
+import { HATLE_ANGELSEN, KREMKAU, QUINONES_2002 } from "./citations.ts";
+import {
+  ALIGNED_ANGLE_INPUT,
+  bloodSpeedInput,
   cosDeg,
   dopplerShiftPerVelocity,
-  HATLE_ANGELSEN,
-  KREMKAU,
-  prfInput,
-  QUINONES_2002,
-  soundSpeedInput,
-  transmitFrequencyInput,
+  SOUND_SPEED_INPUT,
 } from "./shared.ts";
 
 const ANGLE_CAUTION =
@@ -32,9 +37,8 @@ const ANGLE_CAUTION =
  * Source: Hatle L, Angelsen B. Doppler Ultrasound in Cardiology, 2nd ed. 1985, ch. 2; Kremkau FW.
  * Sonography Principles and Instruments, 9th ed. 2015, ch. 5.
  *
- * Inputs: `dopplerShiftHz` (Hz, [-1e6, 1e6]), `transmitFrequencyMHz` (MHz, (0, 100], typical
- * [1, 15]), `angleDeg` (deg, [0, 90), typical [0, 20]), `soundSpeedMps` (m/s, default 1540).
- * Output: `velocity` (m/s).
+ * Inputs: `dopplerShiftHz`, `transmitFrequencyMHz`, `angleDeg`, `soundSpeedMps` (default
+ * 1540 m/s). Output: `velocity`.
  *
  * @throws {RangeError} (through `evaluate`) for an angle ≥ 90°, a frequency ≤ 0 or another value
  * outside its valid range, naming the field and the range.
@@ -61,22 +65,18 @@ export const velocityFromDopplerShift: Calculation<
   description:
     "Velocity of the reflectors (blood) from the measured Doppler frequency shift, transmit frequency and insonation angle.",
   inputs: {
-    dopplerShiftHz: {
-      unit: "Hz",
-      description: "Measured Doppler frequency shift (negative: flow away from the probe)",
-      range: { min: -1e6, max: 1e6 },
-    },
-    transmitFrequencyMHz: transmitFrequencyInput,
-    angleDeg: angleInput,
-    soundSpeedMps: soundSpeedInput,
+    dopplerShiftHz: DOPPLER_SHIFT,
+    transmitFrequencyMHz: TRANSMIT_FREQUENCY,
+    angleDeg: INSONATION_ANGLE,
+    soundSpeedMps: SOUND_SPEED_INPUT,
   },
-  outputs: { velocity: { unit: "m/s", description: "Velocity along the flow direction" } },
+  outputs: { velocity: BLOOD_VELOCITY },
   formula: ({ dopplerShiftHz, transmitFrequencyMHz, angleDeg, soundSpeedMps }) => ({
     velocity: dopplerShiftHz /
       dopplerShiftPerVelocity(transmitFrequencyMHz, angleDeg, soundSpeedMps),
   }),
   formulaText: "v = c·Δf / (2·f0·cos θ)",
-  sources: [HATLE_ANGELSEN, KREMKAU],
+  citations: [HATLE_ANGELSEN, KREMKAU],
   cautions: [
     "Velocity falls as cos θ when the beam is not aligned with the flow: about 6 % low at 20°, 13 % at 30°",
     ANGLE_CAUTION,
@@ -93,8 +93,8 @@ export const velocityFromDopplerShift: Calculation<
  * Source: Hatle L, Angelsen B. Doppler Ultrasound in Cardiology, 2nd ed. 1985, ch. 2; Kremkau FW.
  * Sonography Principles and Instruments, 9th ed. 2015, ch. 5.
  *
- * Inputs: `velocity` (m/s, [-20, 20], typical [-7, 7]), `transmitFrequencyMHz` (MHz),
- * `angleDeg` (deg, [0, 90)), `soundSpeedMps` (m/s, default 1540). Output: `dopplerShiftHz` (Hz).
+ * Inputs: `velocity`, `transmitFrequencyMHz`, `angleDeg`, `soundSpeedMps` (default 1540 m/s).
+ * Output: `dopplerShiftHz`.
  *
  * @throws {RangeError} (through `evaluate`) for an angle ≥ 90°, a frequency ≤ 0 or another value
  * outside its valid range.
@@ -117,23 +117,18 @@ export const dopplerShiftFromVelocity: Calculation<
   description:
     "Doppler frequency shift that a given blood velocity produces at a transmit frequency and insonation angle.",
   inputs: {
-    velocity: {
-      unit: "m/s",
-      description: "Velocity of the reflectors along the flow (negative: away from the probe)",
-      range: { min: -20, max: 20 },
-      typical: { min: -7, max: 7 },
-    },
-    transmitFrequencyMHz: transmitFrequencyInput,
-    angleDeg: angleInput,
-    soundSpeedMps: soundSpeedInput,
+    velocity: BLOOD_VELOCITY,
+    transmitFrequencyMHz: TRANSMIT_FREQUENCY,
+    angleDeg: INSONATION_ANGLE,
+    soundSpeedMps: SOUND_SPEED_INPUT,
   },
-  outputs: { dopplerShiftHz: { unit: "Hz", description: "Doppler frequency shift" } },
+  outputs: { dopplerShiftHz: DOPPLER_SHIFT },
   formula: ({ velocity, transmitFrequencyMHz, angleDeg, soundSpeedMps }) => ({
     dopplerShiftHz: velocity *
       dopplerShiftPerVelocity(transmitFrequencyMHz, angleDeg, soundSpeedMps),
   }),
   formulaText: "Δf = 2·f0·v·cos θ / c",
-  sources: [HATLE_ANGELSEN, KREMKAU],
+  citations: [HATLE_ANGELSEN, KREMKAU],
   cautions: [],
 });
 
@@ -147,8 +142,8 @@ export const dopplerShiftFromVelocity: Calculation<
  * echocardiography. J Am Soc Echocardiogr 2002;15:167-184 (angle and its error); Hatle L,
  * Angelsen B. Doppler Ultrasound in Cardiology, 2nd ed. 1985, ch. 2.
  *
- * Inputs: `measuredVelocity` (m/s, [0, 10], typical [0, 7]), `angleDeg` (deg, [0, 90), typical
- * [0, 20]). Outputs: `trueVelocity` (m/s), `underestimationPercent` (%).
+ * Inputs: `measuredVelocity` (a speed, 0 to 10 m/s), `angleDeg`. Outputs: `trueVelocity`,
+ * `underestimationPercent`.
  *
  * @throws {RangeError} (through `evaluate`) for an angle ≥ 90° or a negative velocity.
  *
@@ -171,18 +166,23 @@ export const angleCorrectedVelocity: Calculation<
   description:
     "True flow velocity from the velocity displayed under the assumption of parallel alignment (θ = 0), and the percentage by which the display underestimates it.",
   inputs: {
-    measuredVelocity: {
-      unit: "m/s",
-      description: "Velocity displayed by the scanner assuming the beam is parallel to the flow",
-      range: { min: 0, max: 10 },
-      typical: { min: 0, max: 7 },
-    },
-    angleDeg: angleInput,
+    measuredVelocity: bloodSpeedInput(
+      "Displayed velocity",
+      "Velocity displayed by the scanner assuming the beam is parallel to the flow",
+      { min: 0, max: 10 },
+      "a displayed speed (magnitude), up to 10 m/s so that the corrected velocity stays possible at moderate angles",
+    ),
+    angleDeg: INSONATION_ANGLE,
   },
   outputs: {
-    trueVelocity: { unit: "m/s", description: "Velocity along the flow direction" },
+    trueVelocity: {
+      quantity: BLOOD_VELOCITY,
+      label: "Angle-corrected velocity",
+      description: "Velocity along the flow direction",
+    },
     underestimationPercent: {
-      unit: "%",
+      quantity: DOPPLER_UNDERESTIMATION,
+      label: "Velocity underestimation",
       description: "How much the displayed velocity underestimates the true velocity",
     },
   },
@@ -191,7 +191,7 @@ export const angleCorrectedVelocity: Calculation<
     return { trueVelocity: measuredVelocity / c, underestimationPercent: 100 * (1 - c) };
   },
   formulaText: "v_true = v / cos θ; underestimation = 100·(1 − cos θ) %",
-  sources: [QUINONES_2002, HATLE_ANGELSEN],
+  citations: [QUINONES_2002, HATLE_ANGELSEN],
   cautions: [
     ANGLE_CAUTION,
     "The gradient from the Bernoulli equation scales with v², so its underestimation is about twice the velocity's at small angles",
@@ -210,9 +210,8 @@ export const angleCorrectedVelocity: Calculation<
  * Source: Hatle L, Angelsen B. Doppler Ultrasound in Cardiology, 2nd ed. 1985, ch. 2 (Nyquist
  * limit); Kremkau FW. Sonography Principles and Instruments, 9th ed. 2015, ch. 5 (aliasing).
  *
- * Inputs: `prfHz` (Hz, (0, 1e6]), `transmitFrequencyMHz` (MHz), `angleDeg` (deg, [0, 90), default
- * 0), `soundSpeedMps` (m/s, default 1540). Outputs: `nyquistVelocity` (m/s), `nyquistShiftHz`
- * (Hz).
+ * Inputs: `prfHz`, `transmitFrequencyMHz`, `angleDeg` (default 0°), `soundSpeedMps` (default
+ * 1540 m/s). Outputs: `nyquistVelocity`, `nyquistShiftHz`.
  *
  * @throws {RangeError} (through `evaluate`) for a PRF or frequency ≤ 0 or an angle ≥ 90°.
  *
@@ -234,14 +233,18 @@ export const nyquistVelocity: Calculation<
   description:
     "Highest velocity pulsed Doppler displays without aliasing, from the pulse repetition frequency, transmit frequency and angle.",
   inputs: {
-    prfHz: prfInput,
-    transmitFrequencyMHz: transmitFrequencyInput,
-    angleDeg: { ...angleInput, default: 0 },
-    soundSpeedMps: soundSpeedInput,
+    prfHz: PULSE_REPETITION_FREQUENCY,
+    transmitFrequencyMHz: TRANSMIT_FREQUENCY,
+    angleDeg: ALIGNED_ANGLE_INPUT,
+    soundSpeedMps: SOUND_SPEED_INPUT,
   },
   outputs: {
-    nyquistVelocity: { unit: "m/s", description: "Nyquist velocity limit" },
-    nyquistShiftHz: { unit: "Hz", description: "Nyquist frequency (half the PRF)" },
+    nyquistVelocity: NYQUIST_VELOCITY,
+    nyquistShiftHz: {
+      quantity: DOPPLER_SHIFT,
+      label: "Nyquist frequency",
+      description: "Highest Doppler shift sampled without aliasing: half the PRF",
+    },
   },
   formula: ({ prfHz, transmitFrequencyMHz, angleDeg, soundSpeedMps }) => {
     const nyquistShiftHz = prfHz / 2;
@@ -256,7 +259,7 @@ export const nyquistVelocity: Calculation<
     };
   },
   formulaText: "v_N = (PRF/2)·c / (2·f0·cos θ)",
-  sources: [HATLE_ANGELSEN, KREMKAU],
+  citations: [HATLE_ANGELSEN, KREMKAU],
   cautions: [
     "Continuous-wave Doppler has no Nyquist limit; this applies to pulsed and colour Doppler",
   ],

@@ -3,10 +3,17 @@
  *
  * @module
  */
-import { defineCalculation } from "../core/define.ts";
+import { defineCalculation } from "../core/calculation.ts";
 import type { Calculation } from "../core/types.ts";
-import type { InlineInput } from "../core/calculation.ts";
-import { BUSHBERG, KREMKAU, soundSpeedInput } from "./shared.ts";
+import {
+  ACOUSTIC_IMPEDANCE,
+  INTENSITY_REFLECTED,
+  INTENSITY_TRANSMITTED,
+  MEDIUM_DENSITY,
+  PRESSURE_REFLECTION_COEFFICIENT,
+} from "../quantities/ultrasound.ts";
+import { BUSHBERG, KREMKAU } from "./citations.ts";
+import { SOUND_SPEED_INPUT } from "./shared.ts";
 
 /**
  * Characteristic acoustic impedance of a medium.
@@ -16,8 +23,7 @@ import { BUSHBERG, KREMKAU, soundSpeedInput } from "./shared.ts";
  * Source: Kremkau FW. Sonography Principles and Instruments, 9th ed. 2015, ch. 2; Bushberg JT et
  * al. The Essential Physics of Medical Imaging, 3rd ed. 2012, ch. 14.
  *
- * Inputs: `densityKgPerM3` (kg/m³, (0, 25000]), `soundSpeedMps` (m/s, default 1540). Output:
- * `impedanceMRayl` (MRayl).
+ * Inputs: `densityKgPerM3`, `soundSpeedMps` (default 1540 m/s). Output: `impedanceMRayl`.
  *
  * @throws {RangeError} (through `evaluate`) for a density or speed ≤ 0.
  *
@@ -37,26 +43,16 @@ export const acousticImpedance: Calculation<
   title: "Acoustic impedance",
   description: "Characteristic acoustic impedance of a medium from its density and speed of sound.",
   inputs: {
-    densityKgPerM3: {
-      unit: "kg/m^3",
-      description: "Density of the medium",
-      range: { min: 0, max: 25000, minExclusive: true },
-    },
-    soundSpeedMps: soundSpeedInput,
+    densityKgPerM3: MEDIUM_DENSITY,
+    soundSpeedMps: SOUND_SPEED_INPUT,
   },
-  outputs: { impedanceMRayl: { unit: "MRayl", description: "Acoustic impedance" } },
+  outputs: { impedanceMRayl: ACOUSTIC_IMPEDANCE },
   formula: ({ densityKgPerM3, soundSpeedMps }) => ({
     impedanceMRayl: (densityKgPerM3 * soundSpeedMps) / 1e6,
   }),
   formulaText: "Z = ρ·c",
-  sources: [KREMKAU, BUSHBERG],
+  citations: [KREMKAU, BUSHBERG],
   cautions: [],
-});
-
-const impedanceInput = (which: string): InlineInput => ({
-  unit: "MRayl",
-  description: `Acoustic impedance of the ${which} medium`,
-  range: { min: 0, max: 100, minExclusive: true },
 });
 
 /**
@@ -69,9 +65,9 @@ const impedanceInput = (which: string): InlineInput => ({
  * reflection coefficient at normal incidence); Bushberg JT et al. The Essential Physics of Medical
  * Imaging, 3rd ed. 2012, ch. 14.
  *
- * Inputs: `impedance1MRayl` (MRayl, medium the wave comes from), `impedance2MRayl` (MRayl, medium
- * beyond the interface), both in (0, 100]. Outputs: `pressureReflectionCoefficient`,
- * `intensityReflectionPercent` (%), `intensityTransmissionPercent` (%).
+ * Inputs: `impedance1MRayl` (the medium the wave comes from), `impedance2MRayl` (the medium
+ * beyond the interface). Outputs: `pressureReflectionCoefficient`, `intensityReflectionPercent`,
+ * `intensityTransmissionPercent`.
  *
  * @throws {RangeError} (through `evaluate`) for an impedance ≤ 0.
  *
@@ -92,16 +88,21 @@ export const interfaceReflection: Calculation<
   description:
     "Fraction of the intensity reflected and transmitted at a flat interface between two media at normal incidence.",
   inputs: {
-    impedance1MRayl: impedanceInput("first (incident)"),
-    impedance2MRayl: impedanceInput("second"),
+    impedance1MRayl: {
+      quantity: ACOUSTIC_IMPEDANCE,
+      label: "First medium impedance",
+      description: "Acoustic impedance of the medium the wave comes from",
+    },
+    impedance2MRayl: {
+      quantity: ACOUSTIC_IMPEDANCE,
+      label: "Second medium impedance",
+      description: "Acoustic impedance of the medium beyond the interface",
+    },
   },
   outputs: {
-    pressureReflectionCoefficient: {
-      unit: "1",
-      description: "Pressure amplitude reflection coefficient (negative: phase inversion)",
-    },
-    intensityReflectionPercent: { unit: "%", description: "Share of the intensity reflected" },
-    intensityTransmissionPercent: { unit: "%", description: "Share of the intensity transmitted" },
+    pressureReflectionCoefficient: PRESSURE_REFLECTION_COEFFICIENT,
+    intensityReflectionPercent: INTENSITY_REFLECTED,
+    intensityTransmissionPercent: INTENSITY_TRANSMITTED,
   },
   formula: ({ impedance1MRayl, impedance2MRayl }) => {
     const r = (impedance2MRayl - impedance1MRayl) / (impedance2MRayl + impedance1MRayl);
@@ -113,7 +114,7 @@ export const interfaceReflection: Calculation<
     };
   },
   formulaText: "r = (Z₂ − Z₁)/(Z₂ + Z₁); R = r²; T = 1 − R",
-  sources: [KREMKAU, BUSHBERG],
+  citations: [KREMKAU, BUSHBERG],
   cautions: [
     "Normal incidence on a flat, smooth interface larger than the beam; oblique and rough interfaces differ",
   ],

@@ -1,8 +1,8 @@
 /**
  * Ultrasound physics: the Doppler equation and angle correction, wavelength and resolution, beam
  * geometry, attenuation and penetration, impedance and reflection, pulse timing and frame rate,
- * Nyquist limit and aliasing advice, range ambiguity, mechanical index, and a table of tissue
- * acoustic properties.
+ * Nyquist limit and aliasing advice, range ambiguity, mechanical index, a table of tissue
+ * acoustic properties, and the data of the physics trade-off charts.
  *
  * @module
  */
@@ -15,24 +15,40 @@ export {
 } from "./doppler.ts";
 export { axialResolution, wavelengthAndPeriod } from "./wave.ts";
 export { lateralResolution, nearFieldLength } from "./beam.ts";
-export { attenuationLoss, penetrationDepth } from "./attenuation.ts";
+export {
+  attenuationLoss,
+  penetrationDepth,
+  SOFT_TISSUE_ATTENUATION_DB_PER_CM_MHZ,
+} from "./attenuation.ts";
 export { acousticImpedance, interfaceReflection } from "./impedance.ts";
+export { frameRate, maximumPrfForDepth, unambiguousDepthForPrf } from "./timing.ts";
+export { rangeAmbiguity } from "./range_ambiguity.ts";
 export {
-  frameRate,
-  maximumPrfForDepth,
-  type RangeAmbiguity,
-  rangeAmbiguity,
-  unambiguousDepthForPrf,
-} from "./timing.ts";
-export {
-  type AliasingCheck,
   aliasingCheck,
   type AliasingCheckArguments,
-  type AliasingOption,
-  type AliasingRemedy,
   LOWEST_CARDIAC_TRANSMIT_FREQUENCY_MHZ,
   nyquistVelocityAtDepth,
 } from "./aliasing.ts";
+export type {
+  AliasingArgument,
+  AliasingCheck,
+  AliasingOption,
+  AliasingRemedy,
+  AliasingSetting,
+  CheckedArguments,
+  CheckedResult,
+  RangeAmbiguity,
+  RangeAmbiguityArgument,
+} from "./types.ts";
+export {
+  type NyquistDepthOptions,
+  type NyquistDepthRow,
+  nyquistDepthRows,
+  readVelocityOfInterest,
+  type ResolutionPenetrationOptions,
+  type ResolutionPenetrationRow,
+  resolutionPenetrationRows,
+} from "./curves.ts";
 export {
   deratedPressure,
   DERATING_DB_PER_CM_MHZ,

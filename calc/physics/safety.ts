@@ -3,21 +3,32 @@
  *
  * @module
  */
-import { defineCalculation } from "../core/define.ts";
-import type { Calculation, Reference } from "../core/types.ts";
+import { defineCalculation } from "../core/calculation.ts";
+import type { Calculation, Citation } from "../core/types.ts";
+import {
+  MECHANICAL_INDEX,
+  MECHANICAL_INDEX_OF_LIMIT,
+  PEAK_RAREFACTIONAL_PRESSURE,
+  TRANSMIT_FREQUENCY,
+} from "../quantities/ultrasound.ts";
 import { attenuationLoss } from "./attenuation.ts";
-import { depthInput, transmitFrequencyInput } from "./shared.ts";
+import { depthInput } from "./shared.ts";
 
-/** Upper limit of the mechanical index in the FDA Track 3 output-display scheme (all uses except
- * ophthalmic), the usual regulatory ceiling for cardiac imaging (common practice, from memory). *
- * @example
+/**
+ * Upper limit of the mechanical index in the FDA Track 3 output-display scheme (all uses except
+ * ophthalmic), the usual regulatory ceiling for cardiac imaging (common practice, from memory):
+ * the upper end of {@linkcode MECHANICAL_INDEX}'s typical range, where the number is written once.
+ *
+ * @example An MI at the limit is 100 % of it
  * ```ts
- * import { MECHANICAL_INDEX_LIMIT } from "@sonorigor/sonorigor";
+ * import { evaluate, MECHANICAL_INDEX_LIMIT, mechanicalIndex } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
- * assert.equal(MECHANICAL_INDEX_LIMIT, 1.9);
+ * const r = evaluate(mechanicalIndex, {
+ *   peakRarefactionalPressureMPa: MECHANICAL_INDEX_LIMIT * 2, transmitFrequencyMHz: 4 });
+ * assert.ok(Math.abs(r.outputs.percentOfRegulatoryLimit - 100) < 1e-12);
  * ```
  */
-export const MECHANICAL_INDEX_LIMIT = 1.9;
+export const MECHANICAL_INDEX_LIMIT: number = MECHANICAL_INDEX.typical!.max;
 
 /**
  * Derating attenuation coefficient of the output-display standards, dB/cm/MHz.
@@ -31,7 +42,11 @@ export const MECHANICAL_INDEX_LIMIT = 1.9;
  */
 export const DERATING_DB_PER_CM_MHZ = 0.3;
 
-const IEC_62359: Reference = {
+/** The caution every mechanical-index result carries: the ceiling, and that it was recalled. */
+const MECHANICAL_INDEX_CEILING =
+  `Regulatory ceiling MI ${MECHANICAL_INDEX_LIMIT} (FDA Track 3, from memory); keep exposure as low as reasonably achievable (ALARA)`;
+
+const IEC_62359: Citation = {
   authors: "International Electrotechnical Commission",
   year: 2017,
   title:
@@ -40,7 +55,7 @@ const IEC_62359: Reference = {
   locator: "definitions of the mechanical index and of derating (0.3 dB/cm/MHz)",
 };
 
-const AIUM_NEMA_ODS: Reference = {
+const AIUM_NEMA_ODS: Citation = {
   authors:
     "American Institute of Ultrasound in Medicine, National Electrical Manufacturers Association",
   year: 2004,
@@ -49,7 +64,7 @@ const AIUM_NEMA_ODS: Reference = {
   publication: "AIUM/NEMA, Laurel MD and Rosslyn VA",
 };
 
-const APFEL_HOLLAND: Reference = {
+const APFEL_HOLLAND: Citation = {
   authors: "Apfel RE, Holland CK",
   year: 1991,
   title:
@@ -58,13 +73,13 @@ const APFEL_HOLLAND: Reference = {
   doi: "10.1016/0301-5629(91)90125-G",
 };
 
-const FDA_2019: Reference = {
+const FDA_2019: Citation = {
   authors: "US Food and Drug Administration",
   year: 2019,
   title:
     "Marketing Clearance of Diagnostic Ultrasound Systems and Transducers: Guidance for Industry",
   publication: "FDA, Silver Spring MD",
-  locator: "Track 3 acoustic output limits (MI 1.9)",
+  locator: "Track 3 acoustic output limits (mechanical index), from memory",
 };
 
 /**
@@ -76,8 +91,7 @@ const FDA_2019: Reference = {
  *
  * Source: IEC 62359:2017 (derating); AIUM/NEMA UD 3-2004 output display standard.
  *
- * Inputs: `waterPressureMPa` (MPa, (0, 20]), `transmitFrequencyMHz` (MHz), `depthCm` (cm).
- * Output: `deratedPressureMPa` (MPa).
+ * Inputs: `waterPressureMPa`, `transmitFrequencyMHz`, `depthCm`. Output: `deratedPressureMPa`.
  *
  * @throws {RangeError} (through `evaluate`) for a pressure, frequency or depth ≤ 0.
  *
@@ -99,15 +113,19 @@ export const deratedPressure: Calculation<
     "Peak rarefactional pressure measured in water, derated by 0.3 dB/cm/MHz to estimate it in tissue at a depth.",
   inputs: {
     waterPressureMPa: {
-      unit: "MPa",
+      quantity: PEAK_RAREFACTIONAL_PRESSURE,
+      label: "Peak rarefactional pressure in water",
       description: "Peak rarefactional pressure measured in water",
-      range: { min: 0, max: 20, minExclusive: true },
     },
-    transmitFrequencyMHz: transmitFrequencyInput,
-    depthCm: depthInput("Depth along the beam"),
+    transmitFrequencyMHz: TRANSMIT_FREQUENCY,
+    depthCm: depthInput("Depth", "Depth along the beam of the point of interest"),
   },
   outputs: {
-    deratedPressureMPa: { unit: "MPa", description: "Derated peak rarefactional pressure" },
+    deratedPressureMPa: {
+      quantity: PEAK_RAREFACTIONAL_PRESSURE,
+      label: "Derated peak rarefactional pressure",
+      description: "Peak rarefactional pressure in tissue estimated by derating",
+    },
   },
   formula: ({ waterPressureMPa, transmitFrequencyMHz, depthCm }) => {
     const { oneWayLossDb } = attenuationLoss.formula({
@@ -118,7 +136,7 @@ export const deratedPressure: Calculation<
     return { deratedPressureMPa: waterPressureMPa * 10 ** (-oneWayLossDb / 20) };
   },
   formulaText: "p_derated = p_water · 10^(−0.3·f·z / 20)",
-  sources: [IEC_62359, AIUM_NEMA_ODS],
+  citations: [IEC_62359, AIUM_NEMA_ODS],
   cautions: ["Derating is a convention; real tissue paths may attenuate less (e.g. through fluid)"],
 });
 
@@ -126,14 +144,13 @@ export const deratedPressure: Calculation<
  * Mechanical index: the output-display index for the likelihood of inertial cavitation.
  *
  * Formula: MI = p_r,derated [MPa] / √(f [MHz]) (with the normalising constant 1 MPa·MHz^−1/2);
- * percent of the regulatory limit = 100 · MI / 1.9.
+ * percent of the regulatory limit = 100 · MI / {@linkcode MECHANICAL_INDEX_LIMIT}.
  *
  * Source: Apfel RE, Holland CK. Ultrasound Med Biol 1991;17:179-185; AIUM/NEMA UD 3-2004; IEC
- * 62359:2017; FDA 2019 guidance (Track 3 limit MI 1.9).
+ * 62359:2017; FDA 2019 guidance (Track 3 limit, from memory).
  *
- * Inputs: `peakRarefactionalPressureMPa` (derated, MPa, (0, 20], typical (0, 4]),
- * `transmitFrequencyMHz` (acoustic working frequency, MHz). Outputs: `mechanicalIndex`,
- * `percentOfRegulatoryLimit` (%).
+ * Inputs: `peakRarefactionalPressureMPa` (derated), `transmitFrequencyMHz` (acoustic working
+ * frequency). Outputs: `mechanicalIndex`, `percentOfRegulatoryLimit`.
  *
  * @throws {RangeError} (through `evaluate`) for a pressure or frequency ≤ 0.
  *
@@ -155,25 +172,28 @@ export const mechanicalIndex: Calculation<
     "Index of the likelihood of inertial cavitation from the derated peak rarefactional pressure and the frequency.",
   inputs: {
     peakRarefactionalPressureMPa: {
-      unit: "MPa",
+      quantity: PEAK_RAREFACTIONAL_PRESSURE,
+      label: "Derated peak rarefactional pressure",
       description: "Derated peak rarefactional pressure at the point of maximum MI",
-      range: { min: 0, max: 20, minExclusive: true },
-      typical: { min: 0, max: 4, minExclusive: true },
     },
-    transmitFrequencyMHz: { ...transmitFrequencyInput, description: "Acoustic working frequency" },
+    transmitFrequencyMHz: {
+      quantity: TRANSMIT_FREQUENCY,
+      label: "Acoustic working frequency",
+      description: "Acoustic working frequency of the pulse",
+    },
   },
   outputs: {
-    mechanicalIndex: { unit: "1", description: "Mechanical index" },
-    percentOfRegulatoryLimit: { unit: "%", description: "Mechanical index as a share of 1.9" },
+    mechanicalIndex: MECHANICAL_INDEX,
+    percentOfRegulatoryLimit: MECHANICAL_INDEX_OF_LIMIT,
   },
   formula: ({ peakRarefactionalPressureMPa, transmitFrequencyMHz }) => {
     const mi = peakRarefactionalPressureMPa / Math.sqrt(transmitFrequencyMHz);
     return { mechanicalIndex: mi, percentOfRegulatoryLimit: (100 * mi) / MECHANICAL_INDEX_LIMIT };
   },
-  formulaText: "MI = p_r,derated / √f",
-  sources: [APFEL_HOLLAND, AIUM_NEMA_ODS, IEC_62359, FDA_2019],
+  formulaText: `MI = p_r,derated / √f; share of the limit = 100·MI / ${MECHANICAL_INDEX_LIMIT} %`,
+  citations: [APFEL_HOLLAND, AIUM_NEMA_ODS, IEC_62359, FDA_2019],
   cautions: [
-    "Regulatory ceiling MI 1.9 (FDA Track 3); keep exposure as low as reasonably achievable (ALARA)",
+    MECHANICAL_INDEX_CEILING,
     "The MI estimates the likelihood of inertial cavitation, not a threshold of harm; with contrast agents or gas bodies (lung, bowel) effects occur at lower values",
   ],
   clinical: true,

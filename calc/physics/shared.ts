@@ -1,39 +1,93 @@
 /**
  * Private building blocks shared by the ultrasound-physics calculations: the default speed of
- * sound, the common input definitions, the published sources, and the few one-line relations
- * (cos θ, the Doppler shift per unit velocity, the round-trip time) that several formulas reuse,
- * so that each relation is written exactly once.
+ * sound, the inputs several calculations take (roles of the shared quantities), the few one-line
+ * relations (cos θ, the Doppler shift per unit velocity, the round-trip time) that several
+ * formulas reuse, so that each relation is written exactly once, and the validation of the plain
+ * functions' arguments through the one validator.
  *
  * Not re-exported from the package except {@linkcode DEFAULT_SOUND_SPEED_MPS}.
  *
  * @module
  */
-import type { InputValues, Reference } from "../core/types.ts";
-import { defineArguments, type InlineInput } from "../core/calculation.ts";
-import { validateInputs } from "../core/validate.ts";
-import { HATLE_ANGELSEN_1985 as HATLE_ANGELSEN, QUINONES_2002 } from "../references.ts";
+import type { InputSchema, InputValues, ValueRange } from "../core/types.ts";
+import type { InputRole } from "../core/calculation.ts";
+import { validateInputs, type ValidateOptions } from "../core/validate.ts";
+import { BLOOD_VELOCITY } from "../quantities/flow.ts";
+import { DEPTH, INSONATION_ANGLE, SOUND_SPEED } from "../quantities/ultrasound.ts";
+import type { CheckedArguments } from "./types.ts";
 import cosine from "@stdlib/math-base-special-cos";
-
-/** Shared publications, re-exported under this module's names. */
-export { HATLE_ANGELSEN, QUINONES_2002 };
 
 /**
  * Speed of sound assumed by scanners for soft tissue, in m/s (common practice).
  *
- * @example
+ * @example The default of every speed-of-sound input
  * ```ts
- * import { DEFAULT_SOUND_SPEED_MPS } from "@sonorigor/sonorigor";
+ * import { DEFAULT_SOUND_SPEED_MPS, evaluate, wavelengthAndPeriod } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
- * assert.equal(DEFAULT_SOUND_SPEED_MPS, 1540);
+ * const r = evaluate(wavelengthAndPeriod, { transmitFrequencyMHz: 1 });
+ * assert.equal(r.inputs.soundSpeedMps, DEFAULT_SOUND_SPEED_MPS);
+ * assert.equal(r.outputs.wavelengthMm, 1.54); // 1540 m/s / 1 MHz
  * ```
  */
 export const DEFAULT_SOUND_SPEED_MPS = 1540;
 
-/** cos θ for an angle in degrees. The one place the insonation-angle cosine is written.
+/** Speed of sound as an input: the scanner's soft-tissue assumption unless given. */
+export const SOUND_SPEED_INPUT: InputRole = {
+  quantity: SOUND_SPEED,
+  default: DEFAULT_SOUND_SPEED_MPS,
+};
+
+/** Insonation angle as an input that defaults to a beam aligned with the flow. */
+export const ALIGNED_ANGLE_INPUT: InputRole = { quantity: INSONATION_ANGLE, default: 0 };
+
+/**
+ * A depth in the role it plays in a calculation ("Sample-volume depth", "Focal depth").
+ *
+ * @param label The role's label.
+ * @param description What the depth is here.
+ * @returns The input role.
+ */
+export function depthInput(label: string, description: string): InputRole {
+  return { quantity: DEPTH, label, description };
+}
+
+/**
+ * A blood velocity taken as a speed (a magnitude, never negative): valid from 0 to `max` m/s, and
+ * typical up to the blood velocity's own typical maximum.
+ *
+ * @param label The role's label.
+ * @param description What the speed is here.
+ * @param valid The speeds the formula accepts, from 0.
+ * @param reason Why the blood velocity's range is narrowed here.
+ * @returns The input role.
+ */
+export function bloodSpeedInput(
+  label: string,
+  description: string,
+  valid: ValueRange,
+  reason: string,
+): InputRole {
+  const typical: ValueRange = {
+    min: 0,
+    max: BLOOD_VELOCITY.typical!.max,
+    ...(valid.minExclusive ? { minExclusive: true } : {}),
+  };
+  return { quantity: BLOOD_VELOCITY, label, description, valid, typical, reason };
+}
+
+/** The depth of the pulsed-Doppler sample volume. */
+export const SAMPLE_DEPTH_INPUT: InputRole = depthInput(
+  "Sample-volume depth",
+  "Depth of the pulsed-Doppler sample volume",
+);
+
+/**
+ * cos θ for an angle in degrees. The one place the insonation-angle cosine is written.
  *
  * The cosine is @stdlib's JavaScript port of the FreeBSD/fdlibm routine (faithfully rounded, like
  * `Math.cos`, from which it differs by at most 1 ulp): the engine can inline it in Monte Carlo
- * and cohort loops, where it runs about 2.5 times faster than `Math.cos` (bench/analysis.md). */
+ * and cohort loops, where it runs about 2.5 times faster than `Math.cos` (bench/analysis.md).
+ */
 export function cosDeg(angleDeg: number): number {
   return cosine((angleDeg * Math.PI) / 180);
 }
@@ -57,101 +111,23 @@ export function roundTripTimeS(depthCm: number, soundSpeedMps: number): number {
   return (2 * depthCm * 1e-2) / soundSpeedMps;
 }
 
-/** Depth in cm reached by a round trip lasting `timeS` seconds: c·t / 2 (inverse of
- * {@linkcode roundTripTimeS}). */
-export function depthForRoundTripCm(timeS: number, soundSpeedMps: number): number {
-  return ((soundSpeedMps * timeS) / 2) * 1e2;
-}
-
-/** Speed-of-sound input, default 1540 m/s. */
-export const soundSpeedInput: InlineInput = {
-  unit: "m/s",
-  description: "Speed of sound in the medium (scanner assumption for soft tissue: 1540 m/s)",
-  range: { min: 0, max: 10000, minExclusive: true },
-  typical: { min: 1400, max: 1650 },
-  default: DEFAULT_SOUND_SPEED_MPS,
-};
-
-/** Transmit (carrier) frequency input in MHz. */
-export const transmitFrequencyInput: InlineInput = {
-  unit: "MHz",
-  description: "Transmit (carrier) frequency of the probe",
-  range: { min: 0, max: 100, minExclusive: true },
-  typical: { min: 1, max: 15 },
-};
-
-/** Insonation angle input: between the beam and the flow direction. */
-export const angleInput: InlineInput = {
-  unit: "deg",
-  description: "Insonation angle between the ultrasound beam and the flow direction",
-  range: { min: 0, max: 90, maxExclusive: true },
-  typical: { min: 0, max: 20 },
-};
-
-/** Imaging or sample depth in cm. */
-export function depthInput(description: string): InlineInput {
-  return {
-    unit: "cm",
-    description,
-    range: { min: 0, max: 50, minExclusive: true },
-    typical: { min: 0.5, max: 30 },
-  };
-}
-
-/** Textbook of diagnostic ultrasound physics (wavelength, pulse, beam, timing, attenuation). */
-export const KREMKAU: Reference = {
-  authors: "Kremkau FW",
-  year: 2015,
-  title: "Sonography Principles and Instruments",
-  publication: "9th ed. Elsevier, St Louis",
-  locator: "ch. 2 (ultrasound), ch. 3 (transducers), ch. 5 (Doppler)",
-};
-
-/** Textbook of ultrasound physics and equipment (UK). */
-export const HOSKINS: Reference = {
-  authors: "Hoskins PR, Martin K, Thrush A",
-  year: 2019,
-  title: "Diagnostic Ultrasound: Physics and Equipment",
-  publication: "3rd ed. CRC Press, Boca Raton",
-  locator: "ch. 2 (physics), ch. 3 (transducers and beam forming), ch. 8 (Doppler)",
-};
-
-/** Standard physics text: beam and pulse formulas. */
-export const SZABO: Reference = {
-  authors: "Szabo TL",
-  year: 2014,
-  title: "Diagnostic Ultrasound Imaging: Inside Out",
-  publication: "2nd ed. Academic Press, Oxford",
-  locator: "ch. 6 (beams), ch. 11 (Doppler)",
-};
-
-/** Bushberg: physics tables (speed of sound, impedance, attenuation). */
-export const BUSHBERG: Reference = {
-  authors: "Bushberg JT, Seibert JA, Leidholdt EM Jr, Boone JM",
-  year: 2012,
-  title: "The Essential Physics of Medical Imaging",
-  publication: "3rd ed. Lippincott Williams & Wilkins, Philadelphia",
-  locator: "ch. 14 (ultrasound), tables of acoustic properties and of attenuation coefficients",
-};
-
 /**
- * Validates the arguments of a plain (multi-answer) function with the same rules and messages as
- * a defined calculation's inputs: unknown or missing keys and wrong types are TypeErrors, values
- * outside the valid range RangeErrors naming the field, the range and the value; values outside
- * the typical range become flags. Reuses `validateInputs` so the convention lives in one place.
+ * Validates the arguments of a plain function with the one validator (the same rules and
+ * messages as a calculation's inputs: unknown, missing or mistyped arguments are TypeErrors,
+ * values outside the valid range or broken relations RangeErrors; values outside the typical
+ * range become flags).
+ *
+ * @param schema The arguments' schema (`defineArguments`, with constraints where they apply).
+ * @param args The arguments as given.
+ * @param options Arguments to skip (optional ones not given).
+ * @returns The checked arguments, their values typed as all present.
+ * @throws {TypeError | RangeError} From the validator.
  */
 export function validateArguments<I extends string>(
-  title: string,
-  inputs: { readonly [K in I]: InlineInput },
+  schema: InputSchema<I>,
   args: unknown,
-): { values: InputValues<I>; flags: string[] } {
-  return validateInputs(defineArguments(title, inputs), args);
+  options: ValidateOptions = {},
+): CheckedArguments<I> & { readonly values: InputValues<I> } {
+  const { values, flags } = validateInputs(schema, args, options);
+  return { title: schema.title, values, definitions: schema.inputs, flags };
 }
-
-/** Pulse repetition frequency input in Hz. */
-export const prfInput: InlineInput = {
-  unit: "Hz",
-  description: "Pulse repetition frequency",
-  range: { min: 0, max: 1e6, minExclusive: true },
-  typical: { min: 100, max: 50000 },
-};

@@ -5,8 +5,12 @@
  *
  * @module
  */
-import type { Reference } from "../core/types.ts";
-import { BUSHBERG, KREMKAU } from "./shared.ts";
+import type { Citation } from "../core/types.ts";
+import { describeValue } from "../core/text.ts";
+import { issueError } from "../core/issues.ts";
+import { SOFT_TISSUE_ATTENUATION_DB_PER_CM_MHZ } from "./attenuation.ts";
+import { BUSHBERG, KREMKAU } from "./citations.ts";
+import { DEFAULT_SOUND_SPEED_MPS } from "./shared.ts";
 
 /** Names of the tissues in {@linkcode TISSUE_ACOUSTIC_PROPERTIES}. */
 export type TissueName = "softTissue" | "blood" | "myocardium" | "fat" | "bone" | "water" | "air";
@@ -31,10 +35,10 @@ export interface TissueAcousticProperties {
   /** Caveats for this row. */
   readonly note: string;
   /** Where the numbers come from. */
-  readonly sources: readonly Reference[];
+  readonly citations: readonly Citation[];
 }
 
-const DUCK: Reference = {
+const DUCK: Citation = {
   authors: "Duck FA",
   year: 1990,
   title: "Physical Properties of Tissue: A Comprehensive Reference Book",
@@ -42,7 +46,7 @@ const DUCK: Reference = {
   locator: "ch. 4 (acoustic properties)",
 };
 
-const CULJAT: Reference = {
+const CULJAT: Citation = {
   authors: "Culjat MO, Goldenberg D, Tewari P, Singh RS",
   year: 2010,
   title: "A review of tissue substitutes for ultrasound imaging",
@@ -59,12 +63,14 @@ const CULJAT: Reference = {
  * Sonography Principles and Instruments, 9th ed. 2015, ch. 2 (0.5 dB/cm/MHz soft-tissue rule);
  * Culjat MO et al. Ultrasound Med Biol 2010;36:861-873, Table 1 and Duck FA 1990 (myocardium).
  *
- * @example The soft-tissue row matches the 1540 m/s scanner assumption
+ * @example Z = ρ·c of the soft-tissue row agrees with its published impedance
  * ```ts
- * import { TISSUE_ACOUSTIC_PROPERTIES } from "@sonorigor/sonorigor";
+ * import { acousticImpedance, evaluate, TISSUE_ACOUSTIC_PROPERTIES } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
- * assert.equal(TISSUE_ACOUSTIC_PROPERTIES.softTissue.soundSpeedMps, 1540);
- * assert.equal(TISSUE_ACOUSTIC_PROPERTIES.softTissue.attenuationDbPerCmMHz, 0.5);
+ * const t = TISSUE_ACOUSTIC_PROPERTIES.softTissue;
+ * const z = evaluate(acousticImpedance, {
+ *   densityKgPerM3: t.densityKgPerM3, soundSpeedMps: t.soundSpeedMps }).outputs.impedanceMRayl;
+ * assert.ok(Math.abs(z - t.impedanceMRayl) < 0.01); // 1050 · 1540 / 10⁶ = 1.617 MRayl
  * ```
  */
 export const TISSUE_ACOUSTIC_PROPERTIES: Readonly<Record<TissueName, TissueAcousticProperties>> =
@@ -72,14 +78,14 @@ export const TISSUE_ACOUSTIC_PROPERTIES: Readonly<Record<TissueName, TissueAcous
     softTissue: {
       name: "softTissue",
       label: "Soft tissue (average)",
-      soundSpeedMps: 1540,
+      soundSpeedMps: DEFAULT_SOUND_SPEED_MPS,
       densityKgPerM3: 1050,
       impedanceMRayl: 1.62,
-      attenuationDbPerCmMHz: 0.5,
+      attenuationDbPerCmMHz: SOFT_TISSUE_ATTENUATION_DB_PER_CM_MHZ,
       attenuationRangeDbPerCmMHz: [0.3, 0.8],
       note:
         "Speed, density, impedance and attenuation range from Bushberg (from memory); 0.5 dB/cm/MHz is the textbook rule of thumb (Kremkau)",
-      sources: [BUSHBERG, KREMKAU],
+      citations: [BUSHBERG, KREMKAU],
     },
     blood: {
       name: "blood",
@@ -89,7 +95,7 @@ export const TISSUE_ACOUSTIC_PROPERTIES: Readonly<Record<TissueName, TissueAcous
       impedanceMRayl: 1.65,
       attenuationDbPerCmMHz: 0.18,
       note: "Bushberg (from memory); attenuation rises faster than in proportion to frequency",
-      sources: [BUSHBERG],
+      citations: [BUSHBERG],
     },
     myocardium: {
       name: "myocardium",
@@ -100,7 +106,7 @@ export const TISSUE_ACOUSTIC_PROPERTIES: Readonly<Record<TissueName, TissueAcous
       attenuationDbPerCmMHz: 0.52,
       note:
         "Culjat et al. Table 1 after Duck (from memory); attenuation varies with fibre direction and contraction",
-      sources: [CULJAT, DUCK],
+      citations: [CULJAT, DUCK],
     },
     fat: {
       name: "fat",
@@ -112,7 +118,7 @@ export const TISSUE_ACOUSTIC_PROPERTIES: Readonly<Record<TissueName, TissueAcous
       attenuationRangeDbPerCmMHz: [0.5, 1.8],
       note:
         "Bushberg (from memory); the representative attenuation 0.6 dB/cm/MHz is Kremkau's table value (from memory)",
-      sources: [BUSHBERG, KREMKAU],
+      citations: [BUSHBERG, KREMKAU],
     },
     bone: {
       name: "bone",
@@ -124,7 +130,7 @@ export const TISSUE_ACOUSTIC_PROPERTIES: Readonly<Record<TissueName, TissueAcous
       attenuationRangeDbPerCmMHz: [13, 26],
       note:
         "Bushberg skull-bone row (from memory); cortical bone speeds of 3200-4100 m/s are published",
-      sources: [BUSHBERG],
+      citations: [BUSHBERG],
     },
     water: {
       name: "water",
@@ -135,7 +141,7 @@ export const TISSUE_ACOUSTIC_PROPERTIES: Readonly<Record<TissueName, TissueAcous
       attenuationDbPerCmMHz: 0.0022,
       note:
         "Bushberg (from memory); the attenuation is the value at 1 MHz and grows as f² in water, not in proportion to f",
-      sources: [BUSHBERG, KREMKAU],
+      citations: [BUSHBERG, KREMKAU],
     },
     air: {
       name: "air",
@@ -146,7 +152,7 @@ export const TISSUE_ACOUSTIC_PROPERTIES: Readonly<Record<TissueName, TissueAcous
       attenuationDbPerCmMHz: null,
       note:
         "Bushberg (from memory); attenuation not tabulated: a tissue/air interface reflects about 99.9 % of the intensity",
-      sources: [BUSHBERG],
+      citations: [BUSHBERG],
     },
   });
 
@@ -162,17 +168,21 @@ export const TISSUE_ACOUSTIC_PROPERTIES: Readonly<Record<TissueName, TissueAcous
  * import { tissueProperties } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
  * assert.equal(tissueProperties("bone").soundSpeedMps, 4080);
+ * assert.throws(() => tissueProperties("liver"), TypeError);
  * ```
  */
 export function tissueProperties(name: string): TissueAcousticProperties {
   if (typeof name === "string" && Object.hasOwn(TISSUE_ACOUSTIC_PROPERTIES, name)) {
     return TISSUE_ACOUSTIC_PROPERTIES[name as TissueName];
   }
-  throw new TypeError(
-    `Tissue properties: expected 'name' to be one of ${
-      Object.keys(TISSUE_ACOUSTIC_PROPERTIES).join(", ")
-    }, got ${typeof name === "string" ? `"${name}"` : String(name)}`,
-  );
+  throw issueError([{
+    kind: "type",
+    severity: "error",
+    where: "Tissue properties",
+    field: "name",
+    received: describeValue(name),
+    expected: `to be one of ${Object.keys(TISSUE_ACOUSTIC_PROPERTIES).join(", ")}`,
+  }]);
 }
 
 for (const row of Object.values(TISSUE_ACOUSTIC_PROPERTIES)) Object.freeze(row);

@@ -3,9 +3,19 @@
  *
  * @module
  */
-import { defineCalculation } from "../core/define.ts";
+import { defineCalculation } from "../core/calculation.ts";
 import type { Calculation } from "../core/types.ts";
-import { HOSKINS, KREMKAU, soundSpeedInput, transmitFrequencyInput } from "./shared.ts";
+import {
+  AXIAL_RESOLUTION,
+  CYCLES_PER_PULSE,
+  PULSE_DURATION,
+  SPATIAL_PULSE_LENGTH,
+  TRANSMIT_FREQUENCY,
+  WAVE_PERIOD,
+  WAVELENGTH,
+} from "../quantities/ultrasound.ts";
+import { HOSKINS, KREMKAU } from "./citations.ts";
+import { SOUND_SPEED_INPUT } from "./shared.ts";
 
 /**
  * Wavelength and period of the transmitted wave from its frequency.
@@ -16,8 +26,8 @@ import { HOSKINS, KREMKAU, soundSpeedInput, transmitFrequencyInput } from "./sha
  * Source: Kremkau FW. Sonography Principles and Instruments, 9th ed. Elsevier 2015, ch. 2;
  * Hoskins PR, Martin K, Thrush A. Diagnostic Ultrasound: Physics and Equipment, 3rd ed. 2019, ch. 2.
  *
- * Inputs: `transmitFrequencyMHz` (MHz, (0, 100], typical [1, 15]), `soundSpeedMps` (m/s,
- * default 1540). Outputs: `wavelengthMm` (mm), `periodUs` (µs).
+ * Inputs: `transmitFrequencyMHz`, `soundSpeedMps` (default 1540 m/s). Outputs: `wavelengthMm`,
+ * `periodUs`.
  *
  * @throws {RangeError} (through `evaluate`) for a frequency ≤ 0 or a speed of sound ≤ 0.
  *
@@ -38,17 +48,14 @@ export const wavelengthAndPeriod: Calculation<
   title: "Wavelength and period",
   description:
     "Wavelength in the medium and period of the transmitted wave. Structures closer together than about one wavelength are not resolved.",
-  inputs: { transmitFrequencyMHz: transmitFrequencyInput, soundSpeedMps: soundSpeedInput },
-  outputs: {
-    wavelengthMm: { unit: "mm", description: "Wavelength in the medium" },
-    periodUs: { unit: "us", description: "Period of one cycle" },
-  },
+  inputs: { transmitFrequencyMHz: TRANSMIT_FREQUENCY, soundSpeedMps: SOUND_SPEED_INPUT },
+  outputs: { wavelengthMm: WAVELENGTH, periodUs: WAVE_PERIOD },
   formula: ({ transmitFrequencyMHz, soundSpeedMps }) => ({
     wavelengthMm: soundSpeedMps / (transmitFrequencyMHz * 1000),
     periodUs: 1 / transmitFrequencyMHz,
   }),
   formulaText: "λ = c / f; T = 1 / f",
-  sources: [KREMKAU, HOSKINS],
+  citations: [KREMKAU, HOSKINS],
   cautions: [],
 });
 
@@ -61,9 +68,9 @@ export const wavelengthAndPeriod: Calculation<
  * Source: Kremkau FW. Sonography Principles and Instruments, 9th ed. Elsevier 2015, ch. 2 and 3
  * (axial resolution equals half the spatial pulse length).
  *
- * Inputs: `transmitFrequencyMHz` (MHz), `cyclesPerPulse` ([0.5, 100], typical [1, 4] for
- * imaging; pulsed Doppler uses longer pulses), `soundSpeedMps` (m/s, default 1540). Outputs:
- * `spatialPulseLengthMm` (mm), `axialResolutionMm` (mm), `pulseDurationUs` (µs).
+ * Inputs: `transmitFrequencyMHz`, `cyclesPerPulse` (typical 1 to 4 for imaging; pulsed Doppler
+ * uses longer pulses and is flagged), `soundSpeedMps` (default 1540 m/s). Outputs:
+ * `spatialPulseLengthMm`, `axialResolutionMm`, `pulseDurationUs`.
  *
  * @throws {RangeError} (through `evaluate`) for a frequency ≤ 0 or cycles outside the range.
  *
@@ -85,19 +92,18 @@ export const axialResolution: Calculation<
   description:
     "Spatial pulse length and the axial (range) resolution it allows: two reflectors along the beam are separated when they are more than half a pulse length apart.",
   inputs: {
-    transmitFrequencyMHz: transmitFrequencyInput,
+    transmitFrequencyMHz: TRANSMIT_FREQUENCY,
     cyclesPerPulse: {
-      unit: "1",
-      description: "Number of cycles in the transmitted pulse",
-      range: { min: 0.5, max: 100 },
+      quantity: CYCLES_PER_PULSE,
       typical: { min: 1, max: 4 },
+      reason: "imaging pulses are 1 to 4 cycles long; a longer (Doppler) pulse is flagged",
     },
-    soundSpeedMps: soundSpeedInput,
+    soundSpeedMps: SOUND_SPEED_INPUT,
   },
   outputs: {
-    spatialPulseLengthMm: { unit: "mm", description: "Spatial pulse length" },
-    axialResolutionMm: { unit: "mm", description: "Axial resolution (half the pulse length)" },
-    pulseDurationUs: { unit: "us", description: "Pulse duration" },
+    spatialPulseLengthMm: SPATIAL_PULSE_LENGTH,
+    axialResolutionMm: AXIAL_RESOLUTION,
+    pulseDurationUs: PULSE_DURATION,
   },
   formula: ({ transmitFrequencyMHz, cyclesPerPulse, soundSpeedMps }) => {
     const { wavelengthMm, periodUs } = wavelengthAndPeriod.formula({
@@ -112,7 +118,7 @@ export const axialResolution: Calculation<
     };
   },
   formulaText: "SPL = n·λ; axial resolution = SPL / 2; pulse duration = n·T",
-  sources: [KREMKAU],
+  citations: [KREMKAU],
   cautions: [
     "The effective pulse length depends on the probe bandwidth and the receive filter; the number of cycles is an idealisation",
   ],

@@ -1,33 +1,41 @@
 /**
  * Adult reference limits from the 2015 ASE/EACVI chamber-quantification recommendations
- * (Lang RM et al., J Am Soc Echocardiogr 2015;28:1–39), as data: each row with its table, and a
- * classification into normal / mildly / moderately / severely abnormal where the guideline gives
- * partitions.
+ * (Lang RM et al., J Am Soc Echocardiogr 2015;28:1–39), as data: each row with its quantity, its
+ * table and its limits as printed; and, built from a row, a severity table (normal / mildly /
+ * moderately / severely abnormal where the guideline gives partitions) that the one grading
+ * function reads, for a value, a GUM result or Monte Carlo samples.
  *
  * All numbers here were entered from memory of the guideline tables and cross-read against
- * secondary summaries of them; each row says so in `fromMemory`. Verify against the guideline
- * before clinical use.
+ * secondary summaries of them; each row says so in `fromMemory`, and every grade made from them
+ * carries the mark. Verify against the guideline before clinical use.
  *
  * @module
  */
-import type { Reference } from "../core/types.ts";
-import { LANG_2015 } from "../references.ts";
+import type { Citation, Quantity, ValueRange } from "../core/types.ts";
+import { type QuantityInput, readAmount } from "../core/units.ts";
+import { choiceError } from "../core/issues.ts";
+import { LANG_2015 } from "../citations.ts";
+import {
+  EJECTION_FRACTION,
+  LA_VOLUME_INDEX,
+  LV_END_DIASTOLIC_DIAMETER,
+  LV_END_DIASTOLIC_VOLUME,
+  LV_END_SYSTOLIC_DIAMETER,
+  LV_END_SYSTOLIC_VOLUME,
+  LV_MASS_INDEX,
+  RELATIVE_WALL_THICKNESS,
+  RV_BASAL_DIAMETER,
+  TAPSE,
+} from "../quantities/structure.ts";
+import { indexedQuantity } from "../body/indexing.ts";
+import { defineSeverityTable, gradeSeverity } from "../grading/grade.ts";
+import type { SeverityBand, SeverityGrade, SeverityTable } from "../grading/types.ts";
 
 /** Shared publications, re-exported under this module's names. */
 export { LANG_2015 };
 
 /** Sex a reference row applies to ("any" when the guideline gives one range for both). */
 export type ReferenceSex = "male" | "female" | "any";
-
-/** Severity class of a value against a reference row. */
-export type SeverityClass =
-  | "normal"
-  | "mildly abnormal"
-  | "moderately abnormal"
-  | "severely abnormal"
-  | "abnormal"
-  | "below normal range"
-  | "above normal range";
 
 /** The guideline's partition cut points for values beyond one side of the normal range. */
 export interface SeverityPartitions {
@@ -43,12 +51,13 @@ export interface SeverityPartitions {
 
 /** One row of the adult reference table. */
 export interface AdultReferenceRow {
-  /** Parameter key, e.g. "lvEjectionFraction". */
+  /** Parameter key, e.g. "lvEjectionFraction" (one quantity may have rows by several methods:
+   * "lvMassIndexLinear", "lvMassIndex2d"). */
   readonly parameter: string;
-  /** Human label. */
-  readonly label: string;
-  /** Unit (mathjs unit string or "%" / "1"). */
-  readonly unit: string;
+  /** The quantity the row limits (its label, unit and valid range). */
+  readonly quantity: Quantity;
+  /** The unit the table prints its numbers in (the limits below are in it). */
+  readonly printedUnit: string;
   /** Sex the row applies to. */
   readonly sex: ReferenceSex;
   /** Method (e.g. "2D biplane", "linear", "M-mode"). */
@@ -64,7 +73,7 @@ export interface AdultReferenceRow {
   /** The guideline table the row comes from. */
   readonly table: string;
   /** The source. */
-  readonly source: Reference;
+  readonly source: Citation;
   /** True: entered from memory of the table, not copied from it here. */
   readonly fromMemory: boolean;
   /** Notes (e.g. how printed integer bands are turned into cut points). */
@@ -91,8 +100,8 @@ export const ADULT_REFERENCE_LANG_2015: readonly AdultReferenceRow[] = Object.fr
   // Table 1: 2D LV size and function by sex, mean ± SD and 2-SD range
   row({
     parameter: "lvInternalDiameterDiastole",
-    label: "LV internal diameter, end-diastole",
-    unit: "mm",
+    quantity: LV_END_DIASTOLIC_DIAMETER,
+    printedUnit: "mm",
     sex: "male",
     method: "2D linear",
     mean: 50.2,
@@ -102,8 +111,8 @@ export const ADULT_REFERENCE_LANG_2015: readonly AdultReferenceRow[] = Object.fr
   }),
   row({
     parameter: "lvInternalDiameterDiastole",
-    label: "LV internal diameter, end-diastole",
-    unit: "mm",
+    quantity: LV_END_DIASTOLIC_DIAMETER,
+    printedUnit: "mm",
     sex: "female",
     method: "2D linear",
     mean: 45.0,
@@ -113,8 +122,8 @@ export const ADULT_REFERENCE_LANG_2015: readonly AdultReferenceRow[] = Object.fr
   }),
   row({
     parameter: "lvInternalDiameterSystole",
-    label: "LV internal diameter, end-systole",
-    unit: "mm",
+    quantity: LV_END_SYSTOLIC_DIAMETER,
+    printedUnit: "mm",
     sex: "male",
     method: "2D linear",
     mean: 32.4,
@@ -124,8 +133,8 @@ export const ADULT_REFERENCE_LANG_2015: readonly AdultReferenceRow[] = Object.fr
   }),
   row({
     parameter: "lvInternalDiameterSystole",
-    label: "LV internal diameter, end-systole",
-    unit: "mm",
+    quantity: LV_END_SYSTOLIC_DIAMETER,
+    printedUnit: "mm",
     sex: "female",
     method: "2D linear",
     mean: 28.2,
@@ -135,8 +144,8 @@ export const ADULT_REFERENCE_LANG_2015: readonly AdultReferenceRow[] = Object.fr
   }),
   row({
     parameter: "lvEndDiastolicVolumeIndex",
-    label: "LV end-diastolic volume / BSA",
-    unit: "mL/m^2",
+    quantity: indexedQuantity(LV_END_DIASTOLIC_VOLUME),
+    printedUnit: "mL/m^2",
     sex: "male",
     method: "2D biplane discs",
     mean: 54,
@@ -146,8 +155,8 @@ export const ADULT_REFERENCE_LANG_2015: readonly AdultReferenceRow[] = Object.fr
   }),
   row({
     parameter: "lvEndDiastolicVolumeIndex",
-    label: "LV end-diastolic volume / BSA",
-    unit: "mL/m^2",
+    quantity: indexedQuantity(LV_END_DIASTOLIC_VOLUME),
+    printedUnit: "mL/m^2",
     sex: "female",
     method: "2D biplane discs",
     mean: 45,
@@ -157,8 +166,8 @@ export const ADULT_REFERENCE_LANG_2015: readonly AdultReferenceRow[] = Object.fr
   }),
   row({
     parameter: "lvEndSystolicVolumeIndex",
-    label: "LV end-systolic volume / BSA",
-    unit: "mL/m^2",
+    quantity: indexedQuantity(LV_END_SYSTOLIC_VOLUME),
+    printedUnit: "mL/m^2",
     sex: "male",
     method: "2D biplane discs",
     mean: 21,
@@ -168,8 +177,8 @@ export const ADULT_REFERENCE_LANG_2015: readonly AdultReferenceRow[] = Object.fr
   }),
   row({
     parameter: "lvEndSystolicVolumeIndex",
-    label: "LV end-systolic volume / BSA",
-    unit: "mL/m^2",
+    quantity: indexedQuantity(LV_END_SYSTOLIC_VOLUME),
+    printedUnit: "mL/m^2",
     sex: "female",
     method: "2D biplane discs",
     mean: 16,
@@ -180,8 +189,8 @@ export const ADULT_REFERENCE_LANG_2015: readonly AdultReferenceRow[] = Object.fr
   // Table 2: LVEF and LA volume, normal ranges and severity partitions
   row({
     parameter: "lvEjectionFraction",
-    label: "LV ejection fraction",
-    unit: "%",
+    quantity: EJECTION_FRACTION,
+    printedUnit: "%",
     sex: "male",
     method: "2D biplane discs",
     mean: 62,
@@ -192,8 +201,8 @@ export const ADULT_REFERENCE_LANG_2015: readonly AdultReferenceRow[] = Object.fr
   }),
   row({
     parameter: "lvEjectionFraction",
-    label: "LV ejection fraction",
-    unit: "%",
+    quantity: EJECTION_FRACTION,
+    printedUnit: "%",
     sex: "female",
     method: "2D biplane discs",
     mean: 64,
@@ -204,8 +213,8 @@ export const ADULT_REFERENCE_LANG_2015: readonly AdultReferenceRow[] = Object.fr
   }),
   row({
     parameter: "laVolumeIndex",
-    label: "Maximum LA volume / BSA",
-    unit: "mL/m^2",
+    quantity: LA_VOLUME_INDEX,
+    printedUnit: "mL/m^2",
     sex: "any",
     method: "2D biplane",
     normal: { lower: 16, upper: 34 },
@@ -215,8 +224,8 @@ export const ADULT_REFERENCE_LANG_2015: readonly AdultReferenceRow[] = Object.fr
   // Table 6: LV mass indices (normal ranges only in this table)
   row({
     parameter: "lvMassIndexLinear",
-    label: "LV mass / BSA (linear method)",
-    unit: "g/m^2",
+    quantity: LV_MASS_INDEX,
+    printedUnit: "g/m^2",
     sex: "male",
     method: "linear (cube) formula",
     normal: { lower: 49, upper: 115 },
@@ -224,8 +233,8 @@ export const ADULT_REFERENCE_LANG_2015: readonly AdultReferenceRow[] = Object.fr
   }),
   row({
     parameter: "lvMassIndexLinear",
-    label: "LV mass / BSA (linear method)",
-    unit: "g/m^2",
+    quantity: LV_MASS_INDEX,
+    printedUnit: "g/m^2",
     sex: "female",
     method: "linear (cube) formula",
     normal: { lower: 43, upper: 95 },
@@ -233,8 +242,8 @@ export const ADULT_REFERENCE_LANG_2015: readonly AdultReferenceRow[] = Object.fr
   }),
   row({
     parameter: "lvMassIndex2d",
-    label: "LV mass / BSA (2D method)",
-    unit: "g/m^2",
+    quantity: LV_MASS_INDEX,
+    printedUnit: "g/m^2",
     sex: "male",
     method: "2D (area–length or truncated ellipsoid)",
     normal: { lower: 50, upper: 102 },
@@ -242,8 +251,8 @@ export const ADULT_REFERENCE_LANG_2015: readonly AdultReferenceRow[] = Object.fr
   }),
   row({
     parameter: "lvMassIndex2d",
-    label: "LV mass / BSA (2D method)",
-    unit: "g/m^2",
+    quantity: LV_MASS_INDEX,
+    printedUnit: "g/m^2",
     sex: "female",
     method: "2D (area–length or truncated ellipsoid)",
     normal: { lower: 44, upper: 88 },
@@ -251,8 +260,8 @@ export const ADULT_REFERENCE_LANG_2015: readonly AdultReferenceRow[] = Object.fr
   }),
   row({
     parameter: "relativeWallThickness",
-    label: "Relative wall thickness",
-    unit: "1",
+    quantity: RELATIVE_WALL_THICKNESS,
+    printedUnit: "1",
     sex: "male",
     method: "linear",
     normal: { lower: 0.24, upper: 0.42 },
@@ -260,8 +269,8 @@ export const ADULT_REFERENCE_LANG_2015: readonly AdultReferenceRow[] = Object.fr
   }),
   row({
     parameter: "relativeWallThickness",
-    label: "Relative wall thickness",
-    unit: "1",
+    quantity: RELATIVE_WALL_THICKNESS,
+    printedUnit: "1",
     sex: "female",
     method: "linear",
     normal: { lower: 0.22, upper: 0.42 },
@@ -272,8 +281,8 @@ export const ADULT_REFERENCE_LANG_2015: readonly AdultReferenceRow[] = Object.fr
   // RV size and function tables: one range for both sexes, upper or lower abnormality threshold
   row({
     parameter: "rvBasalDiameter",
-    label: "RV basal diameter",
-    unit: "mm",
+    quantity: RV_BASAL_DIAMETER,
+    printedUnit: "mm",
     sex: "any",
     method: "2D RV-focused apical view",
     mean: 33,
@@ -283,8 +292,8 @@ export const ADULT_REFERENCE_LANG_2015: readonly AdultReferenceRow[] = Object.fr
   }),
   row({
     parameter: "tapse",
-    label: "Tricuspid annular plane systolic excursion (TAPSE)",
-    unit: "mm",
+    quantity: TAPSE,
+    printedUnit: "mm",
     sex: "any",
     method: "M-mode",
     mean: 24,
@@ -317,155 +326,236 @@ export function adultReferenceRow(
   table: readonly AdultReferenceRow[] = ADULT_REFERENCE_LANG_2015,
 ): AdultReferenceRow {
   if (sex !== "male" && sex !== "female") {
-    throw new TypeError(
-      `Adult reference: expected 'sex' "male" or "female", got ${JSON.stringify(sex)}`,
-    );
+    throw choiceError("Adult reference", "sex", SEX_CHOICES, sex);
   }
   const found = table.find((r) => r.parameter === parameter && (r.sex === sex || r.sex === "any"));
   if (found === undefined) {
-    const known = [...new Set(table.map((r) => r.parameter))].join(", ");
-    throw new TypeError(
-      `Adult reference: expected 'parameter' in ${known}, got ${JSON.stringify(parameter)}`,
-    );
+    const known = [...new Set(table.map((r) => r.parameter))];
+    throw choiceError("Adult reference", "parameter", known, parameter);
   }
   return found;
 }
 
-/**
- * Classifies a value against a reference row.
- *
- * Printed integer bands are contiguous cut points: for a "high" partition (e.g. LA volume index
- * normal 16–34, mild 35–41, moderate 42–48, severe > 48) a value above 34 and up to 41 is mild,
- * above 41 up to 48 moderate, above 48 severe; for a "low" partition (e.g. LVEF in men: normal
- * 52–72, mild 41–51, moderate 30–40, severe < 30) a value below 52 and at least 41 is mild,
- * below 41 and at least 30 moderate, below 30 severe. (Interpretation of the printed bands for
- * non-integer values; no source.) A value beyond the normal range on the side without partitions
- * is "below normal range" / "above normal range"; where the guideline gives no partitions an
- * abnormal value is "abnormal" on its abnormal side.
- *
- * @param row The reference row.
- * @param value The value in the row's unit, finite.
- * @returns The class.
- * @throws {RangeError} For a non-finite value.
- *
- * @example
- * ```ts
- * import { adultReferenceRow, classifyAgainstRow } from "@sonorigor/sonorigor";
- * import assert from "node:assert/strict";
- * // Lang 2015 Table 2 (from memory): LA volume index 45 mL/m² is moderately abnormal
- * assert.equal(classifyAgainstRow(adultReferenceRow("laVolumeIndex", "male"), 45), "moderately abnormal");
- * ```
- */
-export function classifyAgainstRow(row: AdultReferenceRow, value: number): SeverityClass {
-  if (typeof value !== "number" || !Number.isFinite(value)) {
-    throw new RangeError(
-      `Classification (${row.label}): expected a finite value in ${row.unit}, got ${value}`,
+const SEX_CHOICES = ["male", "female"] as const;
+
+/** Where the printed limits of a row sit in the quantity's unit. */
+function toQuantityUnit(row: AdultReferenceRow): (printed: number) => number {
+  if (row.printedUnit === row.quantity.unit) return (x) => x;
+  const factor = readAmount(`1 ${row.printedUnit}`, row.quantity.unit);
+  if (typeof factor !== "number") {
+    throw new TypeError(
+      `Adult reference (${row.parameter}): expected a printed unit convertible to ${row.quantity.unit}, got ${row.printedUnit}`,
     );
   }
-  const { lower, upper } = row.normal;
-  const p = row.partitions;
-  if (p?.direction === "high" && upper !== undefined && value > upper) {
-    if (value <= p.mild[1]) return "mildly abnormal";
-    if (value <= p.moderate[1]) return "moderately abnormal";
-    return "severely abnormal";
-  }
-  if (p?.direction === "low" && lower !== undefined && value < lower) {
-    if (value >= p.mild[0]) return "mildly abnormal";
-    if (value >= p.moderate[0]) return "moderately abnormal";
-    return "severely abnormal";
-  }
-  const belowAbnormal = lower !== undefined && value < lower;
-  const aboveAbnormal = upper !== undefined && value > upper;
-  if (!belowAbnormal && !aboveAbnormal) return "normal";
-  if (p) return belowAbnormal ? "below normal range" : "above normal range";
-  // No partitions: one-sided thresholds are "abnormal"; two-sided ranges say which side.
-  if (lower === undefined || upper === undefined) return "abnormal";
-  return belowAbnormal ? "below normal range" : "above normal range";
+  return (x) => x * factor;
 }
 
-/** A classification result. */
-export interface AdultClassification {
-  /** The class. */
-  readonly class: SeverityClass;
-  /** The row used. */
-  readonly row: AdultReferenceRow;
-  /** The value classified. */
-  readonly value: number;
-  /** Cautions (from-memory provenance, clinical caution). */
-  readonly cautions: readonly string[];
+const tables = new Map<AdultReferenceRow, SeverityTable>();
+
+/**
+ * The severity table of a reference row, in the quantity's unit: printed integer bands become
+ * contiguous cut points. For a "high" partition (e.g. LA volume index normal 16–34, mild 35–41,
+ * moderate 42–48, severe > 48) a value above 34 and up to 41 is mild, above 41 up to 48
+ * moderate, above 48 severe; for a "low" partition (e.g. LVEF in men: normal 52–72, mild 41–51,
+ * moderate 30–40, severe < 30) a value below 52 and at least 41 is mild, below 41 and at least 30
+ * moderate, below 30 severe (interpretation of the printed bands for non-integer values; no
+ * source). A value beyond the normal range on the side without partitions is "below normal range"
+ * / "above normal range"; where the guideline gives no partitions an abnormal value is "abnormal"
+ * on a one-sided limit, "below normal range" / "above normal range" on a two-sided one.
+ *
+ * @param row The reference row.
+ * @returns The table (made once per row), graded by {@linkcode gradeSeverity}.
+ *
+ * @example LA volume index 45 mL/m² is moderately abnormal (Lang 2015 Table 2, from memory)
+ * ```ts
+ * import { adultReferenceRow, adultSeverityTable, gradeSeverity } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const table = adultSeverityTable(adultReferenceRow("laVolumeIndex", "male"));
+ * assert.equal(gradeSeverity(table, 45).grade, "moderately abnormal");
+ * assert.deepEqual(table.bands.map((b) => b.printed), ["< 16", "16–34", "35–41", "42–48", "> 48"]);
+ * ```
+ */
+export function adultSeverityTable(row: AdultReferenceRow): SeverityTable {
+  const made = tables.get(row);
+  if (made) return made;
+  const at = toQuantityUnit(row);
+  const citation: Citation = { ...row.source, locator: `${row.table}, ${row.method}` };
+  const band = (grade: string, range: ValueRange, printed: string): SeverityBand => ({
+    grade,
+    range,
+    printed,
+    citation,
+    fromMemory: row.fromMemory,
+  });
+  const { lower, upper } = row.normal;
+  const p = row.partitions;
+  const bands: SeverityBand[] = [];
+  const normalRange: ValueRange = {
+    min: lower === undefined ? -Infinity : at(lower),
+    max: upper === undefined ? Infinity : at(upper),
+    ...(lower === undefined ? { minExclusive: true } : {}),
+    ...(upper === undefined ? { maxExclusive: true } : {}),
+  };
+  const normalPrinted = lower !== undefined && upper !== undefined
+    ? `${lower}–${upper}`
+    : lower !== undefined
+    ? `≥ ${lower}`
+    : `≤ ${upper}`;
+  if (p?.direction === "low" && lower !== undefined) {
+    bands.push(
+      band("severely abnormal", {
+        min: -Infinity,
+        max: at(p.severe),
+        minExclusive: true,
+        maxExclusive: true,
+      }, `< ${p.severe}`),
+      band("moderately abnormal", {
+        min: at(p.moderate[0]),
+        max: at(p.mild[0]),
+        maxExclusive: true,
+      }, `${p.moderate[0]}–${p.moderate[1]}`),
+      band(
+        "mildly abnormal",
+        { min: at(p.mild[0]), max: at(lower), maxExclusive: true },
+        `${p.mild[0]}–${p.mild[1]}`,
+      ),
+    );
+  } else if (lower !== undefined) {
+    const grade = upper === undefined && !p ? "abnormal" : "below normal range";
+    bands.push(
+      band(
+        grade,
+        { min: -Infinity, max: at(lower), minExclusive: true, maxExclusive: true },
+        `< ${lower}`,
+      ),
+    );
+  }
+  bands.push(band("normal", normalRange, normalPrinted));
+  if (p?.direction === "high" && upper !== undefined) {
+    bands.push(
+      band(
+        "mildly abnormal",
+        { min: at(upper), max: at(p.mild[1]), minExclusive: true },
+        `${p.mild[0]}–${p.mild[1]}`,
+      ),
+      band("moderately abnormal", {
+        min: at(p.mild[1]),
+        max: at(p.moderate[1]),
+        minExclusive: true,
+      }, `${p.moderate[0]}–${p.moderate[1]}`),
+      band("severely abnormal", {
+        min: at(p.severe),
+        max: Infinity,
+        minExclusive: true,
+        maxExclusive: true,
+      }, `> ${p.severe}`),
+    );
+  } else if (upper !== undefined) {
+    const grade = lower === undefined && !p ? "abnormal" : "above normal range";
+    bands.push(
+      band(
+        grade,
+        { min: at(upper), max: Infinity, minExclusive: true, maxExclusive: true },
+        `> ${upper}`,
+      ),
+    );
+  }
+  const table = defineSeverityTable({
+    id: `lang2015.${row.parameter}.${row.sex}`,
+    title: `${row.quantity.label}, ${
+      row.sex === "any" ? "adults" : `adult ${row.sex === "male" ? "men" : "women"}`
+    } (Lang 2015, ${row.method})`,
+    quantity: row.quantity,
+    bands,
+    notes: [
+      ...(row.printedUnit !== row.quantity.unit
+        ? [`Limits printed in ${row.printedUnit}, applied in ${row.quantity.unit}`]
+        : []),
+      ...(row.note ? [row.note] : []),
+    ],
+  });
+  tables.set(row, table);
+  return table;
 }
 
 /**
- * Classifies a value of a parameter for a sex against the 2015 ASE/EACVI limits.
+ * Grades a value of a parameter for a sex against the 2015 ASE/EACVI adult limits: the severity
+ * table of {@linkcode adultReferenceRow} read by {@linkcode gradeSeverity}, so the result carries
+ * the row's citation, the "from memory" mark and the clinical caution, and displays itself.
  *
  * @param parameter Parameter key (see {@linkcode ADULT_REFERENCE_LANG_2015}).
  * @param sex "male" or "female".
- * @param value Value in the row's unit.
- * @returns Class, row and cautions.
- * @throws {TypeError} For an unknown parameter or sex.
- * @throws {RangeError} For a non-finite value.
+ * @param value The value: a number in the quantity's unit, or a quantity string ("51 mm").
+ * @returns The grade.
+ * @throws {TypeError} For an unknown parameter or sex, or a value of the wrong unit.
+ * @throws {RangeError} For a value outside the quantity's valid range.
  *
- * @example
+ * @example LVEF 45 % in a woman is mildly abnormal (41–53; Lang 2015 Table 2, from memory)
  * ```ts
  * import { classifyAdult } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
- * // Lang 2015 Table 2 (from memory): LVEF 45 % in a woman is mildly abnormal (41–53)
- * assert.equal(classifyAdult("lvEjectionFraction", "female", 45).class, "mildly abnormal");
+ * const g = classifyAdult("lvEjectionFraction", "female", 45);
+ * assert.equal(g.grade, "mildly abnormal");
+ * assert.equal(g.fromMemory, true);
  * ```
  */
 export function classifyAdult(
   parameter: string,
   sex: "male" | "female",
-  value: number,
-): AdultClassification {
-  const r = adultReferenceRow(parameter, sex);
-  return {
-    class: classifyAgainstRow(r, value),
-    row: r,
-    value,
-    cautions: [
-      ...(r.fromMemory
-        ? [`Reference limits of ${r.label} entered from memory of Lang 2015 ${r.table}: verify`]
-        : []),
-      "Not a diagnosis: verify against local guidelines and licensed clinical practice before acting on this number",
-    ],
-  };
+  value: QuantityInput,
+): SeverityGrade {
+  return gradeSeverity(adultSeverityTable(adultReferenceRow(parameter, sex)), value);
+}
+
+/** One limit line of a parameter: a band boundary of its severity table. */
+export interface AdultLimitLine {
+  /** "male", "female", or "both sexes" when the guideline gives one range. */
+  readonly sex: "male" | "female" | "both sexes";
+  /** The limit, in the quantity's unit. */
+  readonly value: number;
+  /** A limit of the normal range, or a cut point between abnormal classes. */
+  readonly kind: "normal limit" | "severity cut point";
 }
 
 /**
- * The probability of each class given Monte Carlo samples of a value (e.g. from
- * `monteCarlo(...).outputs.x.samples`).
+ * The limit lines of a parameter for both sexes: every finite boundary between two classes of
+ * its severity tables ({@linkcode adultSeverityTable}), in the quantity's unit.
  *
- * @param row The reference row.
- * @param samples Samples of the value in the row's unit.
- * @returns Probability per class (classes with zero probability omitted); sums to 1.
- * @throws {TypeError} For an empty sample set.
- * @throws {RangeError} For a non-finite sample.
+ * @param parameter Parameter key (see {@linkcode ADULT_REFERENCE_LANG_2015}).
+ * @param table The rows. @default ADULT_REFERENCE_LANG_2015
+ * @returns The lines, men's then women's (or one set for both sexes).
+ * @throws {RangeError} For an unknown parameter.
  *
- * @example
+ * @example LVEF in women: normal 54–74 %, cut points 41 and 30 % (Lang 2015 Table 2, from memory)
  * ```ts
- * import { adultReferenceRow, classProbabilities } from "@sonorigor/sonorigor";
+ * import { adultLimitLines } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
- * const p = classProbabilities(adultReferenceRow("lvEjectionFraction", "male"), [50, 53, 55, 60]);
- * assert.deepEqual(p, { "mildly abnormal": 0.25, normal: 0.75 });
+ * const women = adultLimitLines("lvEjectionFraction").filter((l) => l.sex === "female");
+ * assert.deepEqual(women.map((l) => [l.value, l.kind]), [
+ *   [30, "severity cut point"], [41, "severity cut point"], [54, "normal limit"], [74, "normal limit"],
+ * ]);
  * ```
  */
-export function classProbabilities(
-  row: AdultReferenceRow,
-  samples: ArrayLike<number>,
-): Partial<Record<SeverityClass, number>> {
-  if (!(samples.length > 0)) {
-    throw new TypeError(
-      `Class probabilities (${row.label}): expected at least one sample, got ${samples.length}`,
-    );
+export function adultLimitLines(
+  parameter: string,
+  table: readonly AdultReferenceRow[] = ADULT_REFERENCE_LANG_2015,
+): AdultLimitLine[] {
+  const men = adultReferenceRow(parameter, "male", table);
+  const women = adultReferenceRow(parameter, "female", table);
+  const sets = men === women
+    ? [["both sexes", men] as const]
+    : [["male", men] as const, ["female", women] as const];
+  const lines: AdultLimitLine[] = [];
+  for (const [sex, row] of sets) {
+    const bands = adultSeverityTable(row).bands;
+    for (let i = 0; i + 1 < bands.length; i++) {
+      const touchesNormal = bands[i]!.grade === "normal" || bands[i + 1]!.grade === "normal";
+      lines.push({
+        sex,
+        value: bands[i]!.range.max,
+        kind: touchesNormal ? "normal limit" : "severity cut point",
+      });
+    }
   }
-  const counts: Partial<Record<SeverityClass, number>> = {};
-  for (let i = 0; i < samples.length; i++) {
-    const c = classifyAgainstRow(row, samples[i]!);
-    counts[c] = (counts[c] ?? 0) + 1;
-  }
-  for (const key of Object.keys(counts) as SeverityClass[]) {
-    counts[key] = counts[key]! / samples.length;
-  }
-  return counts;
+  return lines;
 }

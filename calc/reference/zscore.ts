@@ -23,7 +23,7 @@ import { isUncertainValue } from "../uncertainty/uncertain_value.ts";
 import { propagate, type PropagateOptions } from "../uncertainty/propagate.ts";
 import type { UncertainArgument } from "../uncertainty/prepare.ts";
 import { isUncertainInput } from "../uncertainty/distributions.ts";
-import type { Interval, UncertainValue } from "../uncertainty/types.ts";
+import type { UncertainValue } from "../uncertainty/types.ts";
 import {
   defineZScoreModel,
   measurementFormula,
@@ -35,10 +35,26 @@ import {
   type ZScoreModel,
 } from "./zscore_models.ts";
 import { displayZScore, JUPYTER_DISPLAY } from "../../display/reference.ts";
+import type { ZScoreResult } from "./types.ts";
+export type { ZScoreResult } from "./types.ts";
 
 const Z_CAUTIONS = [
   "A Z-score is only as good as the model's reference population and its BSA formula; compare models before acting on a borderline value",
 ];
+
+/**
+ * A model as a reader names it: its first author and year, e.g. "Lopez 2017".
+ *
+ * @example
+ * ```ts
+ * import { modelCitation, PHN_2017_MODELS } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(modelCitation(PHN_2017_MODELS.lvMass), "Lopez 2017");
+ * ```
+ */
+export function modelCitation(model: ZScoreModel): string {
+  return `${model.source.authors.split(/[ ,]/)[0]} ${model.source.year}`;
+}
 
 const measured = new Map<string, Quantity>();
 
@@ -92,11 +108,11 @@ export function zScoreQuantity(model: ZScoreModel): Quantity {
     const m = measuredQuantity(model);
     q = defineQuantity({
       id: `zScore.${model.id}`,
-      label: `${m.label} Z-score (${model.source.authors.split(/[ ,]/)[0]} ${model.source.year})`,
+      label: `${m.label} Z-score (${modelCitation(model)})`,
       symbol: `Z(${m.symbol})`,
       unit: "1",
       description:
-        `Standard deviations of the ${m.label.toLowerCase()} from the mean for body surface area (model ${model.id})`,
+        `Standard deviations of the measured ${m.label} from the mean for body surface area (model ${model.id})`,
       valid: { min: -Infinity, max: Infinity },
       resolution: 0.01,
       rangeNote: "any real number",
@@ -121,7 +137,7 @@ function formOf(model: ZScoreModel): ZScoreForm {
  * import assert from "node:assert/strict";
  * const calc = Z_SCORE.calculation(PHN_2017_MODELS.aorticAnnulus);
  * // (1.48 + 2·0.14)·1^0.5 = 1.76 cm at BSA 1 m² gives Z = 2 (hand-checkable from the model)
- * const z = evaluate(calc, { aorticAnnulus: "17.6 mm", bsaM2: 1 }).outputs.zScore;
+ * const z = evaluate(calc, { aorticAnnulus: "17.6 mm", bsaM2: 1 }).outputs.zScore!;
  * assert.ok(Math.abs(z - 2) < 1e-12);
  * ```
  */
@@ -137,8 +153,8 @@ export const Z_SCORE: Family<ZScoreModel> = defineFamily<ZScoreModel>({
     const m = measuredQuantity(model);
     return {
       id: `zScore(${model.id})`,
-      title: `Z-score: ${model.measurement} (${model.id})`,
-      description: `Z-score of the ${model.measurement.toLowerCase()} for body surface area.`,
+      title: `Z-score: ${m.label} (${modelCitation(model)})`,
+      description: `Z-score of the measured ${m.label} for body surface area.`,
       inputs: {
         [m.id]: m,
         bsaM2: {
@@ -146,7 +162,7 @@ export const Z_SCORE: Family<ZScoreModel> = defineFamily<ZScoreModel>({
           description: `Body surface area by the ${model.bsaMethod} formula`,
           typical: model.bsaRange,
           typicalPediatric: model.bsaRange,
-          reason: `the BSA range of the population the model ${model.id} was built on`,
+          reason: `the BSA range of the reference population of ${modelCitation(model)}`,
         },
       },
       outputs: { zScore: zScoreQuantity(model) },
@@ -195,7 +211,8 @@ const fromBodySize = new Map<Calculation, Calculation>();
  * import assert from "node:assert/strict";
  * const c = zScoreFromBodySize(PHN_2017_MODELS.lvEndDiastolicDimension);
  * const r = evaluate(c, { lvEndDiastolicDiameter: 3.5, heightCm: 120, weightKg: 22 });
- * assert.ok(r.outputs.bsaM2 > 0.8 && r.outputs.bsaM2 < 0.9);
+ * // Haycock: 0.024265·22^0.5378·120^0.3964 = 0.8533 m² (hand computation of the formula)
+ * assert.ok(Math.abs(r.outputs.bsaM2! - 0.8533) < 1e-4);
  * ```
  */
 export function zScoreFromBodySize(model: ZScoreModel): Calculation {
@@ -203,7 +220,9 @@ export function zScoreFromBodySize(model: ZScoreModel): Calculation {
   let c = fromBodySize.get(z);
   if (c === undefined) {
     c = chain([bsaCalculation(model.bsaMethod), z], {
-      title: `Z-score from height and weight: ${model.measurement} (${model.id})`,
+      title: `Z-score from height and weight: ${measuredQuantity(model).label} (${
+        modelCitation(model)
+      })`,
     });
     fromBodySize.set(z, c);
   }
@@ -245,9 +264,9 @@ export function percentileFromZ(zScore: number): number {
  * ```
  */
 export function bsaOutsideModelFlag(model: ZScoreModel, bsaM2: number): string {
-  return `BSA ${
-    Number(bsaM2.toPrecision(4))
-  } m² lies outside the range the model '${model.id}' was built on ${
+  return `BSA ${Number(bsaM2.toPrecision(4))} m² lies outside the range the model (${
+    measuredQuantity(model).label
+  }, ${modelCitation(model)}) was built on ${
     formatRange(model.bsaRange, "m^2")
   }: the Z-score is an extrapolation`;
 }
@@ -267,41 +286,6 @@ export interface ZScoreArguments {
 
 /** Options of {@linkcode zScore}: the propagation's, when an input is uncertain. */
 export type ZScoreOptions = PropagateOptions;
-
-/** A Z-score with its context and, when an input was uncertain, its uncertainty. */
-export interface ZScoreResult {
-  /** Brand for displays. */
-  readonly kind: "sonorigor.zScore";
-  /** The model used. */
-  readonly model: ZScoreModel;
-  /** The measurement in the model's unit (estimate). */
-  readonly measurement: number;
-  /** The BSA used, m² (estimate). */
-  readonly bsaM2: number;
-  /** Z: at the estimates (exact and GUM) or the average of the samples (Monte Carlo). */
-  readonly zScore: number;
-  /** Percentile, 100·Φ(Z). */
-  readonly percentile: number;
-  /** The expected measurement (Z = 0) for this BSA. */
-  readonly expected: number;
-  /** The measurements at Z = −2 and Z = +2 for this BSA. */
-  readonly normalRange: Interval;
-  /** True when the BSA lies outside the model's BSA range. */
-  readonly bsaOutsideModelRange: boolean;
-  /** Z as an uncertain value (u, interval, budget), or null when every input was exact. */
-  readonly uncertainty: UncertainValue | null;
-  /** Percentiles at the ends of Z's coverage interval, or null. */
-  readonly percentileInterval: Interval | null;
-  /** Probability that the true Z exceeds +2, from the distribution that gives the interval
-   * (scaled t with ν_eff for the GUM law, the samples for Monte Carlo), or null. */
-  readonly probabilityAbovePlus2: number | null;
-  /** Probability that the true Z falls below −2, likewise, or null. */
-  readonly probabilityBelowMinus2: number | null;
-  /** Flags: inputs outside typical ranges, BSA outside the model's range, Monte Carlo notes. */
-  readonly flags: readonly string[];
-  /** Cautions (with the clinical caution and the coefficients' provenance). */
-  readonly cautions: readonly string[];
-}
 
 function isUncertain(v: unknown): boolean {
   return isUncertainValue(v) || (isUncertainInput(v) && v.kind !== "exact");
@@ -364,7 +348,7 @@ export function zScore(
   args: ZScoreArguments,
   options: ZScoreOptions = {},
 ): ZScoreResult {
-  const where = `Z-score (${model.id})`;
+  const where = `Z-score: ${measuredQuantity(model).label} (${modelCitation(model)})`;
   if (typeof args !== "object" || args === null) {
     throw new TypeError(`${where}: expected an object of inputs, got ${String(args)}`);
   }
@@ -403,6 +387,7 @@ export function zScore(
   const result: ZScoreResult = {
     kind: "sonorigor.zScore",
     model,
+    quantity: measuredQuantity(model),
     measurement: x,
     bsaM2,
     zScore: z,
@@ -612,8 +597,20 @@ export function compareZScoreModels(
 export interface ZScoreBandRow {
   /** BSA, m². */
   readonly bsa: number;
-  /** Measurement at Z = −3, −2, −1, 0, 1, 2, 3 (keys "z-3" … "z3"). */
-  readonly [z: `z${number}`]: number;
+  /** Measurement at Z = −3. */
+  readonly "z-3": number;
+  /** Measurement at Z = −2. */
+  readonly "z-2": number;
+  /** Measurement at Z = −1. */
+  readonly "z-1": number;
+  /** Measurement at Z = 0 (the mean). */
+  readonly z0: number;
+  /** Measurement at Z = 1. */
+  readonly z1: number;
+  /** Measurement at Z = 2. */
+  readonly z2: number;
+  /** Measurement at Z = 3. */
+  readonly z3: number;
 }
 
 /**

@@ -356,7 +356,7 @@ export const LOPEZ_2017: Citation = Object.freeze({
 });
 
 const PHN_PROVENANCE =
-  "Coefficients (α, M, S) as listed in the project's issue 4, which attributes them to Lopez et al. 2017; not re-checked against the paper's table here";
+  "Coefficients (α, M, S) transcribed from a secondary listing attributed to Lopez et al. 2017; not re-checked against the paper's table";
 const PHN_BSA_RANGE_NOTE =
   "Assumed span of the PHN reference population (healthy non-obese children 0–18 years, BSA by Haycock); the paper's exact BSA range was not available here: verify before relying on the out-of-range flag";
 const PHN_BSA_RANGE: ValueRange = { min: 0.15, max: 2.4 };
@@ -409,7 +409,8 @@ function phn(
 /**
  * The Pediatric Heart Network 2017 Z-score models (Lopez et al., Circ Cardiovasc Imaging
  * 2017;10:e006979): Z = (X / BSA^α − M) / S with BSA by Haycock; X in cm unless stated
- * (LV end-diastolic volume in mL, LV mass in g). Coefficients as listed in issue 4.
+ * (LV end-diastolic volume in mL, LV mass in g). Coefficients transcribed from a secondary
+ * listing and not yet verified against the paper: every result says so.
  *
  * @example
  * ```ts

@@ -15,10 +15,11 @@ import { formatRange, inRange } from "../core/range.ts";
 import { typicalRange } from "../core/quantity.ts";
 import { checkValue } from "../core/validate.ts";
 import { withUnit } from "../core/text.ts";
-import { renderIssue } from "../core/issues.ts";
+import { issueError, renderIssue } from "../core/issues.ts";
 import { normal } from "../uncertainty/distributions.ts";
 import type { UncertainInput } from "../uncertainty/distributions.ts";
-import { propagate } from "../uncertainty/propagate.ts";
+import { propagate, type PropagateOptions } from "../uncertainty/propagate.ts";
+import type { Propagation } from "../uncertainty/types.ts";
 import type { UncertainArgument } from "../uncertainty/prepare.ts";
 import { readAmount } from "../core/units.ts";
 import type { Column, NumericColumn, Table, UncertaintyModel } from "./types.ts";
@@ -103,6 +104,103 @@ function distributionOf(model: UncertaintyModel, value: number, unit: string): U
   return normal(value, u);
 }
 
+/** The arguments of one row: each wired cell, as a distribution where its column has a model. */
+function rowArguments(
+  calc: Calculation,
+  wired: readonly (NumericColumn | null)[],
+  inputs: readonly Float64Array[],
+  i: number,
+  models: Readonly<Record<string, UncertaintyModel>>,
+): Record<string, UncertainArgument> {
+  const args: Record<string, UncertainArgument> = {};
+  calc.inputNames.forEach((name, k) => {
+    const col = wired[k];
+    const v = inputs[k]![i]!;
+    const model = col ? models[col.name] ?? models[col.header] : undefined;
+    args[name] = model ? distributionOf(model, v, calc.inputs[name]!.unit) : v;
+  });
+  return args;
+}
+
+/** The propagation options of one row: its label keys its sources (and its random streams). */
+function rowPropagateOptions(
+  method: "gum" | "monteCarlo",
+  label: string,
+  options: EvaluateTableOptions,
+  keepSamples: boolean,
+): PropagateOptions {
+  return {
+    method,
+    label,
+    ...(options.coverage !== undefined ? { coverage: options.coverage } : {}),
+    ...(options.population !== undefined ? { population: options.population } : {}),
+    ...(method === "monteCarlo" ? { trials: options.trials ?? 10_000, keepSamples } : {}),
+    ...(options.seed !== undefined ? { seed: options.seed } : {}),
+  };
+}
+
+/**
+ * One row of {@linkcode evaluateTable}'s propagation, in full: the same wiring, uncertainty
+ * models, method, seed and row label (so the same numbers), returned as the propagation itself
+ * (budget, and for Monte Carlo the samples) to look into one patient, grade it or chain it on.
+ *
+ * @param table The table.
+ * @param calc The calculation or chain.
+ * @param row The row index (0-based; the file line is `table.lines[row]`).
+ * @param options As for {@linkcode evaluateTable}; the method defaults to "gum".
+ * @returns The row's propagation.
+ * @throws {RangeError} For a row index outside the table or a row that cannot be computed (its
+ * issues attached, as {@linkcode evaluateTable} records them).
+ * @throws {TypeError} For an input no column can feed, or a bad uncertainty model.
+ *
+ * @example The budget of one patient, identical to that row's columns
+ * ```ts
+ * import { continuityValveArea, evaluateTable, propagateRow, readTable } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const table = readTable("patient,lvot diameter [mm],lvot vti [cm],av vti [cm]\nA,20,20,80\nB,22,21,70\n");
+ * const options = { uncertainty: { lvotDiameter: { standardUncertainty: "0.8 mm" } } };
+ * const b = propagateRow(table, continuityValveArea, 1, options);
+ * const column = evaluateTable(table, continuityValveArea, options).columns.get("aorticValveArea u")!;
+ * assert.equal(b.outputs.avaCm2.standardUncertainty, column.kind === "numeric" ? column.values[1] : NaN);
+ * // the LVOT diameter is the only uncertain input, so it holds the whole budget
+ * assert.equal(b.outputs.avaCm2.budget[0]!.label, "B: LVOT diameter");
+ * ```
+ */
+export function propagateRow<I extends string, O extends string>(
+  table: Table,
+  calc: Calculation<I, O>,
+  row: number,
+  options: EvaluateTableOptions = {},
+): Propagation<I, O> {
+  if (!(Number.isInteger(row) && row >= 0 && row < table.rowCount)) {
+    throw new RangeError(
+      `${calc.title}: expected a row index in [0, ${table.rowCount - 1}], got ${row}`,
+    );
+  }
+  const c = calc as unknown as Calculation;
+  const method = options.method === "monteCarlo" ? "monteCarlo" : "gum";
+  // the same row checks as the whole table's (missing, range, relations), without propagating
+  const one = selectRows(table, (_, i) => i === row);
+  const evaluated = evaluateOne(one, c, "exact", options);
+  const problems = evaluated.issues.filter((i) =>
+    i.where === calc.title && (i.severity === "error" || i.kind === "notMeasured")
+  );
+  if (problems.length > 0) {
+    throw issueError(problems.map((i) => ({ ...i, severity: "error" as const })));
+  }
+  const wired = wire(table, c, options.inputs ?? {});
+  const inputs = c.inputNames.map((name, k) => {
+    const col = wired[k];
+    return col ? col.values : new Float64Array(table.rowCount).fill(c.inputs[name]!.default!);
+  });
+  const label = rowLabels(table, options.rowLabels)[row]!;
+  return propagate(
+    calc,
+    rowArguments(c, wired, inputs, row, options.uncertainty ?? {}) as never,
+    rowPropagateOptions(method, label, options, true),
+  );
+}
+
 /** Result columns are keyed by their quantity, like the columns read (two outputs of one
  * quantity, or a quantity already in the table: "calculation id.output"). */
 function outputName(table: Table, calc: Calculation, o: string): string {
@@ -182,9 +280,13 @@ function evaluateOne(
           kind: "notMeasured",
           severity: "warning",
           where,
-          field: calc.outputNames.join(", "),
-          received: `no value of '${name}' (${def.label})`,
-          expected: "every input",
+          field: wired[k]?.header ?? name,
+          label: def.label,
+          received: "an empty cell",
+          expected: "a value",
+          note: `${
+            calc.outputNames.map((o) => calc.outputs[o]!.label).join(", ")
+          } not computed for this row`,
           ...at(i),
         });
         break;
@@ -211,12 +313,16 @@ function evaluateOne(
       const def = calc.inputs[name]!;
       const typical = typicalRange(def, options.population ?? "adult");
       // the table checked each column against its quantity; a calculation may narrow the range
-      if (typical && wired[k] && !inRange(x[name]!, typical) && typical !== wired[k]!.quantity.typical) {
-        issues.push(...checkValue(name, def, x[name], {
-          where,
-          population: options.population ?? "adult",
-          ...at(i),
-        }).issues);
+      if (
+        typical && wired[k] && !inRange(x[name]!, typical) && typical !== wired[k]!.quantity.typical
+      ) {
+        issues.push(
+          ...checkValue(name, def, x[name], {
+            where,
+            population: options.population ?? "adult",
+            ...at(i),
+          }).issues,
+        );
       }
     }
     for (const c of calc.constraints) {
@@ -269,28 +375,15 @@ function evaluateOne(
       }
     });
   } else {
-    const models = options.uncertainty ?? {};
     const labels = rowLabels(table, options.rowLabels);
     for (let i = 0; i < n; i++) {
       if (skip[i]) continue;
-      const args: Record<string, UncertainArgument> = {};
-      calc.inputNames.forEach((name, k) => {
-        const col = wired[k];
-        const v = inputs[k]![i]!;
-        const model = col ? models[col.name] ?? models[col.header] : undefined;
-        args[name] = model ? distributionOf(model, v, calc.inputs[name]!.unit) : v;
-      });
       try {
-        const r = propagate(calc, args, {
-          method,
-          label: labels[i]!,
-          ...(options.coverage !== undefined ? { coverage: options.coverage } : {}),
-          ...(options.population !== undefined ? { population: options.population } : {}),
-          ...(method === "monteCarlo"
-            ? { trials: options.trials ?? 10_000, keepSamples: false }
-            : {}),
-          ...(options.seed !== undefined ? { seed: options.seed } : {}),
-        });
+        const r = propagate(
+          calc,
+          rowArguments(calc, wired, inputs, i, options.uncertainty ?? {}),
+          rowPropagateOptions(method, labels[i]!, options, false),
+        );
         outs.forEach((o, k) => {
           const y = r.outputs[o]!;
           value[k]![i] = y.value;
@@ -495,7 +588,9 @@ export function selectColumns(table: Table, names: readonly string[]): Table {
       );
     }
     columns.set(name, c);
-    const related = [...table.columns.values()].filter((x) => x.kind === "numeric" && x.of === name);
+    const related = [...table.columns.values()].filter((x) =>
+      x.kind === "numeric" && x.of === name
+    );
     for (const r of related) columns.set(r.name, r);
   }
   return makeTable({ ...table, columns });

@@ -10,11 +10,13 @@ export { decodeUtf8, detectDelimiter, readTable, type ReadTableOptions } from ".
 export {
   evaluateTable,
   type EvaluateTableOptions,
+  propagateRow,
   rowIssues,
   rowLabels,
   selectColumns,
   selectRows,
-  tableRow,
   type TableRow,
+  tableRow,
 } from "./evaluate.ts";
 export { csvTextCell, writeTableCsv, type WriteTableOptions } from "./write.ts";
+export { adultSeverityBySex, gradeTable, type SeverityChoice } from "./grade.ts";

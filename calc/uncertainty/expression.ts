@@ -5,7 +5,7 @@
  * @module
  */
 import type { MathNode } from "mathjs";
-import { defineCalculation } from "../core/define.ts";
+import { defineCalculation } from "../core/calculation.ts";
 import type { Calculation, Citation, InputValues } from "../core/types.ts";
 import type { InputSpec } from "../core/calculation.ts";
 import { math } from "../core/units.ts";

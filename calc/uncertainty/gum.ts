@@ -18,6 +18,7 @@ import { warningMessages } from "./prepare.ts";
 import { budgetOf, linearCovariance, NO_SOURCES, welchSatterthwaite } from "./sources.ts";
 import type { Propagation, Source, SourceSet, UncertainValue } from "./types.ts";
 import type { InputDefinition, OutputDefinition } from "../core/types.ts";
+import { withValueDisplay } from "../../display/uncertainty.ts";
 
 /** Options of the GUM law. */
 export interface GumOptions {
@@ -75,7 +76,7 @@ export function gumValue(parts: ValueParts): { value: UncertainValue; dofNote: s
     k = coverageFactor(coverage, ws.dof);
   }
   const U = k * u;
-  const value: UncertainValue = Object.freeze({
+  const value: UncertainValue = withValueDisplay({
     kind: "sonorigor.uncertainValue" as const,
     name: parts.name,
     label: parts.def.label,
@@ -110,7 +111,7 @@ function inputValue(
   coverage: number,
 ): UncertainValue {
   if (p.given !== null && p.factor === 1) return p.given;
-  const own: SourceSet = p.fresh ? restrictTo(sources, p.fresh) : p.given ? sources : NO_SOURCES;
+  const own: SourceSet = p.fresh ? sourceOnly(p.fresh) : p.given ? sources : NO_SOURCES;
   return gumValue({
     name: p.name,
     def: calc.inputs[p.name]!,
@@ -121,7 +122,8 @@ function inputValue(
   }).value;
 }
 
-function restrictTo(set: SourceSet, source: Source): SourceSet {
+/** The set of one fresh source (its correlations with others travel with the outputs' sets). */
+function sourceOnly(source: Source): SourceSet {
   return { sources: new Map([[source.key, source]]), correlations: new Map(), samples: new Map() };
 }
 
@@ -274,7 +276,9 @@ function linearityWarnings<I extends string, O extends string>(
       curvature > 1e-12 * Math.abs(y0)
     ) {
       warnings.push(
-        `First-order propagation is inadequate for '${output}' with respect to '${p.name}': over ±u the output moves by ${
+        `First-order propagation is inadequate for ${calc.outputs[output]!.label} with respect to ${
+          calc.inputs[p.name as I]!.label
+        }: over ±u the output moves by ${
           curvature.toPrecision(2)
         } from curvature against a first-order contribution of ${linear.toPrecision(2)}${
           linear < 1e-12 ? " (the sensitivity vanishes at the estimate)" : ""

@@ -79,10 +79,10 @@ export function validateGumWithMonteCarlo(
     const highDifference = Math.abs(g.interval.upper - symmetric.upper);
     const validated = lowDifference <= tolerance && highDifference <= tolerance;
     const verdict = validated
-      ? `The GUM interval for '${name}' is validated by Monte Carlo at ${significantDigits} significant digit(s): endpoint differences ${
+      ? `The GUM interval of ${g.label} is validated by Monte Carlo at ${significantDigits} significant digit(s): endpoint differences ${
         lowDifference.toPrecision(2)
       } and ${highDifference.toPrecision(2)} are within δ = ${tolerance}`
-      : `The GUM interval for '${name}' is NOT validated by Monte Carlo at ${significantDigits} significant digit(s): endpoint differences ${
+      : `The GUM interval of ${g.label} is NOT validated by Monte Carlo at ${significantDigits} significant digit(s): endpoint differences ${
         lowDifference.toPrecision(2)
       } and ${
         highDifference.toPrecision(2)

@@ -50,7 +50,7 @@ export {
   welchSatterthwaite,
 } from "./sources.ts";
 export { correlation, covariance, isUncertainValue } from "./uncertain_value.ts";
-export { planPropagation, propagate, type PropagateOptions } from "./propagate.ts";
+export { propagate, type PropagateOptions } from "./propagate.ts";
 export { type AdaptiveOptions } from "./adaptive.ts";
 export { DEFAULT_SEED, DEFAULT_TRIALS } from "./monte_carlo.ts";
 export { coverageIntervals, sampleCovariance } from "./intervals.ts";
@@ -59,11 +59,4 @@ export { expressionModel, type ExpressionModelSpec } from "./expression.ts";
 export { numericalTolerance } from "./rounding.ts";
 export { type RandomStream, randomStream } from "./random.ts";
 export { createMonteCarloPool, type MonteCarloPool, type MonteCarloPoolOptions } from "./pool.ts";
-export {
-  gum,
-  type GumResult,
-  monteCarlo,
-  monteCarloAdaptive,
-  type MonteCarloResult,
-} from "./legacy.ts";
 export { densityHistogram, gumDensity, type HistogramBar, histogramRange } from "./histogram.ts";

@@ -27,6 +27,7 @@ import {
   type TrialPlan,
 } from "./sampling.ts";
 import { correlationFromCovariance } from "./gum.ts";
+import { withValueDisplay } from "../../display/uncertainty.ts";
 import type {
   AdaptiveSummary,
   Interval,
@@ -245,7 +246,7 @@ export function sampledValue(parts: {
     },
     layout: parts.layout,
   };
-  return Object.freeze(value);
+  return withValueDisplay(value);
 }
 
 /** An uncertain value of the Monte Carlo method for an input given as a distribution: its exact
@@ -261,7 +262,7 @@ export function distributionValue(parts: {
 }): UncertainValue {
   const d = parts.distribution;
   const interval = distributionInterval(d, parts.coverage);
-  return Object.freeze({
+  return withValueDisplay({
     kind: "sonorigor.uncertainValue" as const,
     name: parts.name,
     label: parts.def.label,

@@ -197,7 +197,7 @@ export function prepareInputs<I extends string>(
       });
       continue;
     }
-    const resolved = resolveDistribution(g, name, def.unit, where);
+    const resolved = resolveDistribution(g, name, def.unit, where, def.label);
     // a plain value (or an exact one) that cannot be read: the validator says why
     const unreadable = resolved.distribution === undefined && resolved.issues.length === 0
       ? checkValue(name, def, isUncertainInput(g) ? (g as { value?: unknown }).value : g, context)

@@ -229,7 +229,8 @@ export function budgetOf(
  * });
  * const ava = r.outputs.avaCm2;
  * // one source with ν = 2: ν_eff = 2
- * assert.equal(welchSatterthwaite(ava.sources, ava.sensitivities, ava.standardUncertainty ** 2).dof, 2);
+ * const dof = welchSatterthwaite(ava.sources, ava.sensitivities, ava.standardUncertainty ** 2).dof!;
+ * assert.ok(Math.abs(dof - 2) < 1e-12);
  * ```
  */
 export function welchSatterthwaite(

@@ -1,19 +1,14 @@
 import assert from "node:assert/strict";
+import { close } from "./close.ts";
 import {
   blandAltman,
   blandAltmanRatio,
   blandAltmanRepeated,
   nonCentralTCdf,
   nonCentralTQuantile,
-  tQuantile,
-} from "../../mod.ts";
+} from "../../calc/agreement/mod.ts";
+import { tQuantile } from "../../calc/stats/mod.ts";
 import { MINI1, MINI2, PEAK_FLOW, WRIGHT1, WRIGHT2 } from "./data.ts";
-
-const close = (actual: number, expected: number, tol: number, what = "") =>
-  assert.ok(
-    Math.abs(actual - expected) <= tol,
-    `${what} expected ${expected} ± ${tol}, got ${actual}`,
-  );
 
 Deno.test("Bland-Altman on the 1986 peak-flow data reproduces the published bias, SD and 2 SD limits", () => {
   const r = blandAltman(WRIGHT1, MINI1, { multiplier: 2 });
@@ -126,19 +121,20 @@ Deno.test("repeated-measures variant matches a REML random-intercept model on ba
 Deno.test("Bland-Altman rejects bad input with named fields", () => {
   assert.throws(() => blandAltman([1], [2]), {
     name: "RangeError",
-    message: /^Bland-Altman analysis: expected at least 2 values in 'methodA', got 1$/,
+    message: /^Bland-Altman analysis: expected 'methodA' with at least 2 values, got 1$/,
   });
   assert.throws(() => blandAltman([1, NaN, 3], [1, 2, 3]), {
     name: "RangeError",
-    message: /expected a finite number at 'methodA\[1\]', got NaN$/,
+    message: /^Bland-Altman analysis: expected 'methodA\[1\]' as a finite number, got NaN$/,
   });
   assert.throws(() => blandAltman([1, 2, 3], [1, 2]), {
     name: "TypeError",
-    message: /equal length \(paired readings\), got 3 and 2$/,
+    message:
+      /^Bland-Altman analysis: expected 'methodB' with 3 values, one per reading of 'methodA' \(paired readings\), got 2$/,
   });
   assert.throws(() => blandAltman([1, 2, "3" as unknown as number], [1, 2, 3]), {
     name: "TypeError",
-    message: /expected a number at 'methodA\[2\]', got "3"$/,
+    message: /^Bland-Altman analysis: expected 'methodA\[2\]' as a number, got "3"$/,
   });
   assert.throws(() => blandAltman([1, 2, 3], [0, 1, 2]), {
     name: "RangeError",
@@ -146,10 +142,10 @@ Deno.test("Bland-Altman rejects bad input with named fields", () => {
   });
   assert.throws(() => blandAltman([1, 2, 3], [0, 1, 3], { multiplier: 0 }), {
     name: "RangeError",
-    message: /expected 'multiplier' in \(0, 5\], got 0$/,
+    message: /^Bland-Altman analysis: expected 'multiplier' in \(0, 5\], got 0$/,
   });
   assert.throws(() => blandAltman([1, 2, 3], [0, 1, 3], { confidence: 1.5 }), {
     name: "RangeError",
-    message: /expected 'confidence' in \(0, 1\), got 1.5$/,
+    message: /^Bland-Altman analysis: expected 'confidence' in \(0, 1\), got 1\.5$/,
   });
 });

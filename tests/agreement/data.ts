@@ -72,3 +72,53 @@ export const FLEISS_EXAMPLE: readonly (readonly number[])[] = [
   [6, 5, 2, 1, 0],
   [0, 2, 2, 3, 7],
 ];
+
+/** The peak-flow data as a long table (subject, meter, replicate, peak flow in L/min): the
+ * Wright meter as "wright", the mini Wright meter as "mini", two readings each. */
+export function peakFlowCsv(): string {
+  const lines = ["subject,meter,replicate,peak flow [L/min]"];
+  PEAK_FLOW.forEach((r, i) => {
+    lines.push(`s${i + 1},wright,1,${r[0]}`, `s${i + 1},wright,2,${r[1]}`);
+    lines.push(`s${i + 1},mini,1,${r[2]}`, `s${i + 1},mini,2,${r[3]}`);
+  });
+  return lines.join("\n") + "\n";
+}
+
+/** Shrout & Fleiss (1979) Table 2 as a long table: target, judge (j1..j4), rating. */
+export function shroutFleissCsv(): string {
+  const lines = ["target,judge,rating"];
+  SHROUT_FLEISS.forEach((row, i) => row.forEach((v, j) => lines.push(`t${i + 1},j${j + 1},${v}`)));
+  return lines.join("\n") + "\n";
+}
+
+/** The categories of {@linkcode SEXUAL_FUN} in order. */
+export const FUN_GRADES = ["never", "fairly", "very", "always"] as const;
+
+/** The sexual-fun table as a long table of graded findings: couple, rater (husband, wife),
+ * grade; one couple per count of the table. */
+export function sexualFunCsv(): string {
+  const lines = ["couple,rater,grade"];
+  let k = 0;
+  SEXUAL_FUN.forEach((row, i) =>
+    row.forEach((count, j) => {
+      for (let c = 0; c < count; c++) {
+        k++;
+        lines.push(`c${k},husband,${FUN_GRADES[i]}`, `c${k},wife,${FUN_GRADES[j]}`);
+      }
+    })
+  );
+  return lines.join("\n") + "\n";
+}
+
+/** The Fleiss example as a long table: subject, rater (r1..r14), category (1..5); raters are
+ * assigned to the counts in order (Fleiss' kappa depends only on the counts per subject). */
+export function fleissExampleCsv(): string {
+  const lines = ["subject,rater,category"];
+  FLEISS_EXAMPLE.forEach((counts, i) => {
+    let r = 0;
+    counts.forEach((n, c) => {
+      for (let k = 0; k < n; k++) lines.push(`s${i + 1},r${++r},${c + 1}`);
+    });
+  });
+  return lines.join("\n") + "\n";
+}

@@ -1,12 +1,7 @@
 import assert from "node:assert/strict";
-import { cohenKappa, cohenKappaFromTable, fleissKappa } from "../../mod.ts";
+import { close } from "./close.ts";
+import { cohenKappa, cohenKappaFromTable, fleissKappa } from "../../calc/agreement/mod.ts";
 import { FLEISS_EXAMPLE, SEXUAL_FUN } from "./data.ts";
-
-const close = (actual: number, expected: number, tol: number, what = "") =>
-  assert.ok(
-    Math.abs(actual - expected) <= tol,
-    `${what} expected ${expected} ± ${tol}, got ${actual}`,
-  );
 
 Deno.test("Cohen's kappa and weighted kappa with standard errors match R vcd", () => {
   // R 4.2.2, vcd 1.4.11: Kappa(SexualFun)$Unweighted = 0.1293302540416, ASE 0.0685985324807

@@ -62,7 +62,18 @@ Deno.test("validate: demo table gives an HTML report with inline charts and a Ma
   const hex = [...new Uint8Array(digest)].map((b) => b.toString(16).padStart(2, "0")).join("");
   assert.match(md, new RegExp(`SHA-256 ${hex}`));
   const results = JSON.parse(await Deno.readTextFile(`${out}/results.json`));
-  assert.equal(results.icc.forms.length, 6);
+  assert.equal(results.icc.outcome.result.forms.length, 6);
+  assert.equal(results.provenance.inputSha256, hex);
+  assert.equal(results.readings, undefined); // the input file holds them
+  // one SVG file per figure, named after the observers
+  const files = [...Deno.readDirSync(out)].map((e) => e.name).filter((n) => n.endsWith(".svg"));
+  assert.deepEqual(files.sort(), [
+    "bland_altman_auto-trace_vs_sonographer-a.svg",
+    "bland_altman_sonographer-b_vs_sonographer-a.svg",
+    "method_comparison_auto-trace_vs_sonographer-a.svg",
+    "method_comparison_sonographer-b_vs_sonographer-a.svg",
+    "observers.svg",
+  ]);
   await Deno.remove(out, { recursive: true });
 });
 
@@ -101,18 +112,32 @@ Deno.test("validate: defective table fails with line-numbered errors and writes 
     out,
   ]);
   assert.equal(r.code, 1);
-  assert.match(r.stderr, /line 4: column 'lvef_percent': expected a number, got "abc"/);
-  assert.match(r.stderr, /line 8: column 'patient': expected a subject identifier, got ""/);
+  // the messages of the one reader and the one validator, with the label and valid range
   assert.match(
     r.stderr,
-    /line 9: column 'replicate': expected a replicate number 1, 2, …, got "x"/,
+    /5 problem\(s\) in examples\/data\/validation_defects.csv; nothing was computed/,
   );
   assert.match(
     r.stderr,
-    /line 11: duplicate reading for subject 'P05', observer 'sonographer_A', replicate 1 \(first on line 10\)/,
+    /line 4, expected 'lvef_percent' \(LV ejection fraction\) as a number in \[0, 100\] %, got "abc"/,
   );
-  assert.match(r.stderr, /line 12: Too many fields/);
-  assert.match(r.stderr, /line 6: subject 'P03'.*empty value cell/);
+  assert.match(
+    r.stderr,
+    /line 8, missing column 'patient' \(Subject\): expected a subject identifier, got an empty cell/,
+  );
+  assert.match(
+    r.stderr,
+    /line 9, expected 'replicate' \(Replicate number\) as a number in \[1, ∞\), got "x"/,
+  );
+  assert.match(
+    r.stderr,
+    /line 11, expected one reading per subject, observer and replicate, got a second reading for subject 'P05', observer 'sonographer_A', replicate 1 \(first on line 10\)/,
+  );
+  assert.match(r.stderr, /line 12, expected 4 fields as in the header.*, got 5 fields/);
+  assert.match(
+    r.stderr,
+    /line 6: subject 'P03', observer 'sonographer_A', replicate 1: empty value cell/,
+  );
   await assert.rejects(() => Deno.stat(out), Deno.errors.NotFound);
 });
 
@@ -121,9 +146,41 @@ Deno.test("validate: unknown column and missing file are reported", async () => 
   assert.equal(a.code, 1);
   assert.match(
     a.stderr,
-    /value column 'nope' not found; the header has patient, observer, replicate, lvef_percent/,
+    /unknown input 'value' \(Value column\): expected a column of the table: patient, observer, replicate, lvef_percent, got "nope"/,
   );
   const b = await runValidate(["examples/data/no-such-file.csv"]);
   assert.equal(b.code, 1);
   assert.match(b.stderr, /cannot read 'examples\/data\/no-such-file.csv'/);
+});
+
+Deno.test("validate: a value column the package does not know needs its unit and label", async () => {
+  const dir = await Deno.makeTempDir();
+  const csv = `${dir}/flow.csv`;
+  // invented readings: three subjects, two meters
+  await Deno.writeTextFile(
+    csv,
+    "subject,method,value\nS1,W,494\nS1,M,512\nS2,W,395\nS2,M,430\nS3,W,516\nS3,M,520\nS4,W,434\nS4,M,428\n",
+  );
+  const bare = await runValidate([csv, "--out", `${dir}/a`]);
+  assert.equal(bare.code, 1);
+  assert.match(
+    bare.stderr,
+    /column 'value' holds values of no quantity the package knows: state their unit with --unit/,
+  );
+  const stated = await runValidate([
+    csv,
+    "--unit",
+    "L/min",
+    "--label",
+    "Peak flow",
+    "--out",
+    `${dir}/b`,
+  ]);
+  assert.equal(stated.code, 0, stated.stderr);
+  const md = await Deno.readTextFile(`${dir}/b/report.md`);
+  assert.match(md, /the reading of Peak flow \(L\/min\), a quantity stated by the user/);
+  assert.match(md, /\| Bias \(mean of M − W\) \(L\/min\) \|/);
+  const svg = await Deno.readTextFile(`${dir}/b/bland_altman_m_vs_w.svg`);
+  assert.match(svg, /Peak flow: M − W \(L\/min\)/);
+  await Deno.remove(dir, { recursive: true });
 });

@@ -1,5 +1,6 @@
 import assert from "node:assert/strict";
 import { CLINICAL_CAUTION, evaluate } from "../../calc/core/mod.ts";
+import { normal, propagate } from "../../calc/uncertainty/mod.ts";
 import {
   ejectionFraction,
   fractionalAreaChange,
@@ -38,19 +39,21 @@ Deno.test("ejection fraction and stroke volume from volumes", () => {
     {
       name: "RangeError",
       message:
-        "Ejection fraction: expected 'endSystolicVolumeMl' <= 'endDiastolicVolumeMl', got endSystolicVolumeMl = 60, endDiastolicVolumeMl = 50",
+        "Ejection fraction: expected 'endSystolicVolumeMl' <= 'endDiastolicVolumeMl', got endSystolicVolumeMl = 60 mL, endDiastolicVolumeMl = 50 mL",
     },
   );
   assert.throws(
     () => evaluate(ejectionFraction, { endDiastolicVolumeMl: -5, endSystolicVolumeMl: 2 }),
     {
       name: "RangeError",
-      message: /^Ejection fraction: expected 'endDiastolicVolumeMl' in \(0, 2000\] mL, got -5$/,
+      message:
+        "Ejection fraction: expected 'endDiastolicVolumeMl' (LV end-diastolic volume) in (0, 2000] mL, got -5",
     },
   );
   assert.throws(() => evaluate(ejectionFraction, { endDiastolicVolumeMl: 120 }), {
     name: "TypeError",
-    message: /missing input 'endSystolicVolumeMl'/,
+    message:
+      "Ejection fraction: missing input 'endSystolicVolumeMl' (LV end-systolic volume): expected a value in [0, 2000] mL, got nothing",
   });
 });
 
@@ -66,7 +69,7 @@ Deno.test("RV fractional area change", () => {
     {
       name: "RangeError",
       message:
-        /expected 'endSystolicAreaCm2' <= 'endDiastolicAreaCm2', got endSystolicAreaCm2 = 24, endDiastolicAreaCm2 = 14$/,
+        "RV fractional area change: expected 'endSystolicAreaCm2' <= 'endDiastolicAreaCm2', got endSystolicAreaCm2 = 24 cm², endDiastolicAreaCm2 = 14 cm²",
     },
   );
 });
@@ -90,7 +93,7 @@ Deno.test("TAPSE and MAPSE from M-mode annular depths", () => {
     {
       name: "RangeError",
       message:
-        /expected 'annulusDepthPeakSystoleMm' <= 'annulusDepthEndDiastoleMm', got annulusDepthPeakSystoleMm = 110, annulusDepthEndDiastoleMm = 100$/,
+        "Tricuspid annular plane systolic excursion (TAPSE): expected 'annulusDepthPeakSystoleMm' <= 'annulusDepthEndDiastoleMm', got annulusDepthPeakSystoleMm = 110 mm, annulusDepthEndDiastoleMm = 100 mm",
     },
   );
   // Hand-checkable (Hu 2013: mean of sites): septal 120 − 108 = 12, lateral 125 − 111 = 14 → 13 mm.
@@ -101,6 +104,31 @@ Deno.test("TAPSE and MAPSE from M-mode annular depths", () => {
     lateralDepthPeakSystoleMm: 111,
   }).outputs;
   assert.deepEqual(m, { septalExcursionMm: 12, lateralExcursionMm: 14, mapseMm: 13 });
+  // Each site's depths are a declared relation, named in the error.
+  assert.throws(
+    () =>
+      evaluate(mapse, {
+        septalDepthEndDiastoleMm: 120,
+        septalDepthPeakSystoleMm: 108,
+        lateralDepthEndDiastoleMm: 111,
+        lateralDepthPeakSystoleMm: 125,
+      }),
+    {
+      name: "RangeError",
+      message:
+        "Mitral annular plane systolic excursion (MAPSE): expected 'lateralDepthPeakSystoleMm' <= 'lateralDepthEndDiastoleMm', got lateralDepthPeakSystoleMm = 125 mm, lateralDepthEndDiastoleMm = 111 mm",
+    },
+  );
+  // A physically impossible excursion is an output error naming the inputs: 300 − 100 = 200 mm
+  // is beyond any human annulus (TAPSE valid range, common practice, no source).
+  assert.throws(
+    () => evaluate(tapse, { annulusDepthEndDiastoleMm: 300, annulusDepthPeakSystoleMm: 100 }),
+    {
+      name: "RangeError",
+      message:
+        "Tricuspid annular plane systolic excursion (TAPSE): output 'tapseMm' (TAPSE) expected in [0, 60] mm, got 200 from annulusDepthEndDiastoleMm = 300 mm, annulusDepthPeakSystoleMm = 100 mm",
+    },
+  );
 });
 
 Deno.test("myocardial performance index: both forms agree", () => {
@@ -138,7 +166,11 @@ Deno.test("myocardial performance index: both forms agree", () => {
         closureToOpeningTimeMs: 250,
         ejectionTimeMs: 280,
       }),
-    { name: "RangeError", message: /closureToOpeningTimeMs = 250, ejectionTimeMs = 280, got NaN$/ },
+    {
+      name: "RangeError",
+      message:
+        "Myocardial performance index from closure-to-opening time: expected 'ejectionTimeMs' <= 'closureToOpeningTimeMs', got ejectionTimeMs = 280 ms, closureToOpeningTimeMs = 250 ms",
+    },
   );
   assert.throws(
     () =>
@@ -147,7 +179,11 @@ Deno.test("myocardial performance index: both forms agree", () => {
         isovolumicRelaxationTimeMs: 80,
         ejectionTimeMs: 0,
       }),
-    { name: "RangeError", message: /expected 'ejectionTimeMs' in \(0, 1000\] ms, got 0$/ },
+    {
+      name: "RangeError",
+      message:
+        "Myocardial performance index (Tei): expected 'ejectionTimeMs' (Ejection time) in (0, 1000] ms, got 0",
+    },
   );
 });
 
@@ -165,18 +201,70 @@ Deno.test("global longitudinal strain: mean of 16, 17 or 18 segment peaks", () =
   assert.throws(() => globalLongitudinalStrain(Array(15).fill(-20)), {
     name: "TypeError",
     message:
-      /^Global longitudinal strain: expected 16, 17 or 18 segment strains \(one per segment of the model\), got 15$/,
+      "Global longitudinal strain: expected 'segmentPeakStrainsPercent' (Segment peak longitudinal strains) as an array of 16, 17 or 18 values in % (one per segment of the model), got 15 values",
   });
   const withNaN = Array(17).fill(-20);
   withNaN[3] = NaN;
   assert.throws(() => globalLongitudinalStrain(withNaN), {
     name: "RangeError",
-    message: /^Global longitudinal strain: expected segment 3 in \(-100, 100\) %, got NaN$/,
+    message:
+      "Global longitudinal strain: expected 'segmentPeakStrainsPercent[3]' (Segment peak longitudinal strain) in (-100, 100) %, got NaN",
   });
   const withNull = Array(16).fill(-20);
   withNull[5] = null;
   assert.throws(() => globalLongitudinalStrain(withNull), {
     name: "TypeError",
-    message: /expected segment 5 as a number in %, got null$/,
+    message:
+      "Global longitudinal strain: expected 'segmentPeakStrainsPercent[5]' (Segment peak longitudinal strain) as a number or a quantity in (-100, 100) %, got null",
+  });
+});
+
+Deno.test("outputs are quantities: labels and units come from the vocabulary", () => {
+  assert.equal(ejectionFraction.outputs.ejectionFractionPercent.quantity.id, "ejectionFraction");
+  assert.equal(ejectionFraction.outputs.strokeVolumeMl.quantity.id, "strokeVolume");
+  assert.equal(tapse.outputs.tapseMm.label, "TAPSE");
+  assert.equal(mapse.outputs.septalExcursionMm.label, "Septal annular excursion");
+  assert.equal(
+    mapse.inputs.lateralDepthPeakSystoleMm.label,
+    "Lateral mitral annulus depth at peak systole",
+  );
+  assert.equal(myocardialPerformanceIndex.inputs.ejectionTimeMs.quantity.id, "ejectionTime");
+  assert.equal(
+    myocardialPerformanceIndexFromClosureTime.inputs.ejectionTimeMs.quantity,
+    myocardialPerformanceIndex.inputs.ejectionTimeMs.quantity,
+  );
+});
+
+Deno.test("EF by Monte Carlo: draws that cross the ESV ≤ EDV relation are flagged, not NaN", () => {
+  // EDV 60 ± 10 mL, ESV 55 ± 10 mL: the estimates satisfy ESV ≤ EDV, but P(ESV > EDV) =
+  // Φ(−5/√200) = 0.362 (normal difference, hand-computed). Those trials give a negative EF, outside
+  // its valid range [0, 100] %: the run warns and counts them instead of stopping.
+  const r = propagate(ejectionFraction, {
+    endDiastolicVolumeMl: normal(60, 10),
+    endSystolicVolumeMl: normal(55, 10),
+  }, { method: "monteCarlo", trials: 20_000, seed: 2 });
+  const warning = r.warnings.find((w) => /model values of 'ejectionFractionPercent'/.test(w));
+  assert.ok(warning !== undefined, r.warnings.join("; "));
+  const count = Number(/^(\d+) of 20000/.exec(warning)![1]);
+  // binomial standard error √(0.362·0.638/20000) = 0.0034; tolerance 0.015
+  assert.ok(Math.abs(count / 20_000 - 0.362) < 0.015, `${count}`);
+});
+
+Deno.test("global longitudinal strain carries citations, flags and the clinical caution", () => {
+  const r = globalLongitudinalStrain([...Array(15).fill(-20), -45]);
+  // −45 % lies outside the typical segment range [−40, 10] % (common practice, no source): flagged.
+  assert.equal(r.flags.length, 1);
+  assert.match(
+    r.flags[0]!,
+    /'segmentPeakStrainsPercent\[15\]' \(Segment peak longitudinal strain\) = -45 %/,
+  );
+  // (15·(−20) − 45)/16 = −21.5625 % (hand-checkable).
+  close(r.glsPercent, -21.5625);
+  assert.deepEqual(r.citations.map((c) => c.year), [2015, 2015]);
+  assert.ok(r.cautions.includes(CLINICAL_CAUTION));
+  assert.throws(() => globalLongitudinalStrain("-20" as never), {
+    name: "TypeError",
+    message:
+      `Global longitudinal strain: expected 'segmentPeakStrainsPercent' (Segment peak longitudinal strains) as an array of 16, 17 or 18 values in % (one per segment of the model), got "-20"`,
   });
 });

@@ -1,19 +1,29 @@
 import assert from "node:assert/strict";
-import { CLINICAL_CAUTION, evaluate } from "../../calc/core/mod.ts";
+import { CLINICAL_CAUTION, evaluate, type Recipe } from "../../calc/core/mod.ts";
+import { normal, propagate } from "../../calc/uncertainty/mod.ts";
+import { bsaMosteller } from "../../calc/body/mod.ts";
 import {
-  classifyLvGeometry,
+  ejectionFraction,
   fractionalShortening,
-  LV_GEOMETRY_LIMITS,
   lvGeometryMeasures,
   lvMassIndex,
   lvMassLinear,
   relativeWallThickness,
   teichholzEjectionFraction,
   teichholzVolume,
+  teichholzVolumes,
 } from "../../calc/chamber/mod.ts";
+import { HYPERTROPHY_CALIPERS, HYPERTROPHY_LV_MASS_G } from "./cases.ts";
 
 const close = (actual: number, expected: number, tol = 1e-9): void =>
   assert.ok(Math.abs(actual - expected) <= tol, `expected ${expected}, got ${actual}`);
+/** The recipes of a chain's steps (a worker makes the chain again from them). */
+function chainSteps(c: { readonly recipe: Recipe }): readonly Recipe[] {
+  assert.equal(c.recipe.kind, "chain");
+  return c.recipe.kind === "chain" ? c.recipe.steps : [];
+}
+const relClose = (actual: number, expected: number, tol: number): void =>
+  assert.ok(Math.abs(actual / expected - 1) <= tol, `expected ${expected}, got ${actual}`);
 
 Deno.test("fractional shortening: 100·(LVIDd − LVIDs)/LVIDd", () => {
   // Hand-checkable arithmetic from the published formula (Lang 2015): (5.0 − 3.2)/5.0 = 36 %.
@@ -47,7 +57,7 @@ Deno.test("Teichholz volume V = 7/(2.4 + D)·D³ at hand-checkable diameters", (
   );
 });
 
-Deno.test("Teichholz EF composes the volume and EF calculations", () => {
+Deno.test("Teichholz EF is the chain Teichholz volumes → ejection fraction", () => {
   // Hand-checkable: EDV = T(6) = 180 mL, ESV = T(4) = 70 mL → SV 110 mL, EF 110/180 = 61.11 %.
   const r = evaluate(teichholzEjectionFraction, {
     lvInternalDiameterDiastoleCm: 6,
@@ -57,6 +67,37 @@ Deno.test("Teichholz EF composes the volume and EF calculations", () => {
   close(r.endSystolicVolumeMl, 70);
   close(r.strokeVolumeMl, 110);
   close(r.ejectionFractionPercent, (100 * 110) / 180);
+  // The chain's recipe names its two steps (a worker makes it again from them).
+  assert.deepEqual(chainSteps(teichholzEjectionFraction), [
+    { kind: "catalog", id: teichholzVolumes.id },
+    { kind: "catalog", id: ejectionFraction.id },
+  ]);
+  // Outputs keep their quantities: the EF output is the ejection-fraction quantity.
+  assert.equal(
+    teichholzEjectionFraction.outputs.ejectionFractionPercent.quantity.id,
+    "ejectionFraction",
+  );
+});
+
+Deno.test("Teichholz EF chain: GUM uncertainty from hand-derived sensitivities", () => {
+  // EF = 100·(1 − T(s)/T(d)), T(D) = 7D³/(2.4 + D) (Teichholz 1976), T'(D) = 7D²(2D + 7.2)/(2.4 + D)²
+  // (hand-derived). ∂EF/∂d = 100·T(s)·T'(d)/T(d)², ∂EF/∂s = −100·T'(s)/T(d); u = √Σ(cᵢ·uᵢ)²
+  // (JCGM 100 eq. (10), uncorrelated). d = 6 ± 0.1 cm, s = 4 ± 0.1 cm → c_d = 14.815 %/cm,
+  // c_s = −23.090 %/cm, u(EF) = 2.7434 %.
+  const T = (d: number) => (7 * d ** 3) / (2.4 + d);
+  const dT = (d: number) => (7 * d ** 2 * (2 * d + 7.2)) / (2.4 + d) ** 2;
+  const cD = (100 * T(4) * dT(6)) / T(6) ** 2, cS = (-100 * dT(4)) / T(6);
+  const g = propagate(teichholzEjectionFraction, {
+    lvInternalDiameterDiastoleCm: normal(6, 0.1),
+    lvInternalDiameterSystoleCm: normal(4, 0.1),
+  });
+  const ef = g.outputs.ejectionFractionPercent;
+  const budget = Object.fromEntries(ef.budget.map((row) => [row.source, row]));
+  relClose(budget.lvInternalDiameterDiastoleCm!.sensitivity, cD, 1e-6);
+  relClose(budget.lvInternalDiameterSystoleCm!.sensitivity, cS, 1e-6);
+  relClose(ef.standardUncertainty, Math.hypot(cD * 0.1, cS * 0.1), 1e-6);
+  close(cD, 14.8148, 1e-4); // the hand values quoted above
+  close(cS, -23.0903, 1e-4);
 });
 
 Deno.test("LV mass by the 2015 guideline linear formula", () => {
@@ -85,6 +126,51 @@ Deno.test("LV mass by the 2015 guideline linear formula", () => {
   close(idx.lvMassIndexGPerM2, 90.988);
 });
 
+Deno.test("LV mass index is the chain LV mass → indexed to BSA, with the public keys", () => {
+  assert.deepEqual(lvMassIndex.inputNames, [
+    "septalThicknessDiastoleCm",
+    "lvInternalDiameterDiastoleCm",
+    "posteriorWallThicknessDiastoleCm",
+    "bodySurfaceAreaM2",
+  ]);
+  assert.deepEqual(lvMassIndex.outputNames, ["lvMassG", "lvMassIndexGPerM2"]);
+  assert.deepEqual(chainSteps(lvMassIndex), [
+    { kind: "catalog", id: "lvMassLinear" },
+    { kind: "family", family: "indexedToBsa", parameter: "lvMass" },
+  ]);
+  assert.equal(lvMassIndex.outputs.lvMassIndexGPerM2.quantity.id, "lvMassIndex");
+  assert.equal(lvMassIndex.inputs.bodySurfaceAreaM2.quantity.id, "bsa");
+});
+
+Deno.test("LV mass index with BSA from height and weight: uncertainty chains through BSA", () => {
+  // BSA by Mosteller (N Engl J Med 1987): √(180·80/3600) = 2 m², ∂BSA/∂H = BSA/(2H),
+  // ∂BSA/∂W = BSA/(2W) (hand-derived). Calipers as in uncertainty_test.ts: u = 0.05 cm each,
+  // ∂M/∂IVSd = ∂M/∂LVPWd = 122.304 g/cm, ∂M/∂LVIDd = 59.904 g/cm (hand-derived).
+  // LVMi = M/BSA: u² = (u_M/BSA)² + (M·u_BSA/BSA²)² (JCGM 100 eq. (10), independent sources).
+  const bsa = propagate(bsaMosteller, { heightCm: normal(180, 1), weightKg: normal(80, 1) });
+  const r = propagate(lvMassIndex, {
+    septalThicknessDiastoleCm: normal(1.0, 0.05),
+    lvInternalDiameterDiastoleCm: normal(5.0, 0.05),
+    posteriorWallThicknessDiastoleCm: normal(1.0, 0.05),
+    bodySurfaceAreaM2: bsa.outputs.bsaM2,
+  });
+  const uBsa = Math.hypot(2 / 360, 2 / 160);
+  const uMass = Math.hypot(122.304 * 0.05, 59.904 * 0.05, 122.304 * 0.05);
+  const hand = Math.hypot(uMass / 2, (181.976 * uBsa) / 4);
+  const lvmi = r.outputs.lvMassIndexGPerM2;
+  close(lvmi.value, 90.988);
+  relClose(lvmi.standardUncertainty, hand, 1e-6);
+  // The budget names height and weight as sources: the BSA step did not hide them.
+  const sources = lvmi.budget.map((row) => row.source).sort();
+  assert.deepEqual(sources, [
+    "heightCm",
+    "lvInternalDiameterDiastoleCm",
+    "posteriorWallThicknessDiastoleCm",
+    "septalThicknessDiastoleCm",
+    "weightKg",
+  ]);
+});
+
 Deno.test("relative wall thickness 2·LVPWd/LVIDd", () => {
   // Hand-checkable from Lang 2015: 2·1.1/4.8 = 0.458333…
   close(
@@ -97,49 +183,38 @@ Deno.test("relative wall thickness 2·LVPWd/LVIDd", () => {
   );
 });
 
-Deno.test("LV geometry: the four classes with the guideline limits", () => {
-  // Limits from Lang 2015 (LV mass table, linear method; geometry figure): RWT 0.42,
-  // LVMi 115 g/m² (men), 95 g/m² (women).
-  assert.equal(LV_GEOMETRY_LIMITS.relativeWallThickness.upperNormal, 0.42);
-  assert.equal(LV_GEOMETRY_LIMITS.lvMassIndexGPerM2.male.upperNormal, 115);
-  assert.equal(LV_GEOMETRY_LIMITS.lvMassIndexGPerM2.female.upperNormal, 95);
-  const cases: [number, number, "male" | "female", string][] = [
-    // Classification rule of Lang 2015 / Ganau 1992: (RWT, LVMi, sex) → class.
-    [0.38, 90, "male", "normal"],
-    [0.48, 90, "male", "concentric remodeling"],
-    [0.48, 130, "male", "concentric hypertrophy"],
-    [0.38, 130, "male", "eccentric hypertrophy"],
-    [0.38, 100, "female", "eccentric hypertrophy"], // 100 > 95 for women
-    [0.38, 100, "male", "normal"], // 100 ≤ 115 for men
-    [0.42, 115, "male", "normal"], // values at the limit are within normal (guideline: RWT ≤ 0.42)
-    [0.4201, 95.01, "female", "concentric hypertrophy"],
-  ];
-  for (const [rwt, lvmi, sex, expected] of cases) {
-    assert.equal(
-      classifyLvGeometry({ relativeWallThickness: rwt, lvMassIndexGPerM2: lvmi, sex }).geometry,
-      expected,
-      `${rwt}, ${lvmi}, ${sex}`,
-    );
-  }
-});
-
-Deno.test("LV geometry measures compose mass, index and RWT", () => {
-  // Hand-checkable: IVSd 1.3, LVIDd 4.8, LVPWd 1.2 → (7.3³ − 4.8³) = 389.017 − 110.592 = 278.425;
-  // 0.832·278.425 + 0.6 = 232.2496 g; /1.9 = 122.2366 g/m²; RWT = 2.4/4.8 = 0.5 → concentric
-  // hypertrophy for a man (122 > 115, 0.5 > 0.42; Lang 2015).
-  const r = evaluate(lvGeometryMeasures, {
-    septalThicknessDiastoleCm: 1.3,
-    lvInternalDiameterDiastoleCm: 4.8,
-    posteriorWallThicknessDiastoleCm: 1.2,
-    bodySurfaceAreaM2: 1.9,
-  }).outputs;
-  close(r.lvMassG, 232.2496, 1e-9);
-  close(r.lvMassIndexGPerM2, 232.2496 / 1.9, 1e-9);
+Deno.test("LV geometry measures chain mass, index and RWT", () => {
+  // Hand-checkable (cases.ts, Lang 2015 formulas): LV mass 232.2496 g; /1.9 = 122.2366 g/m²;
+  // RWT = 2.4/4.8 = 0.5.
+  const r = evaluate(lvGeometryMeasures, HYPERTROPHY_CALIPERS).outputs;
+  close(r.lvMassG, HYPERTROPHY_LV_MASS_G, 1e-9);
+  close(r.lvMassIndexGPerM2, HYPERTROPHY_LV_MASS_G / 1.9, 1e-9);
   close(r.relativeWallThickness, 0.5, 1e-15);
-  assert.equal(classifyLvGeometry({ ...r, sex: "male" }).geometry, "concentric hypertrophy");
+  assert.deepEqual(lvGeometryMeasures.outputNames, [
+    "lvMassG",
+    "lvMassIndexGPerM2",
+    "relativeWallThickness",
+  ]);
 });
 
-Deno.test("bad input: negative or missing dimensions, LVIDs above LVIDd, bad sex", () => {
+Deno.test("LV geometry measures: the chain keeps the covariance of LVMi and RWT", () => {
+  // Shared calipers (LVIDd, LVPWd) feed both outputs. Sensitivities at IVSd 1, LVIDd 5, LVPWd 1,
+  // BSA 2 (hand-derived): LVMi: 122.304/2, 59.904/2, 122.304/2 g/m² per cm; RWT = 2·LVPWd/LVIDd:
+  // ∂/∂LVPWd = 2/5 = 0.4, ∂/∂LVIDd = −2/25 = −0.08 per cm. cov = Σ c₁ᵢ·c₂ᵢ·u² (JCGM 100 §5.2,
+  // from the linear parts) = (61.152·0.4 − 29.952·0.08)·0.05² = 0.0551616 g/m².
+  const g = propagate(lvGeometryMeasures, {
+    septalThicknessDiastoleCm: normal(1.0, 0.05),
+    lvInternalDiameterDiastoleCm: normal(5.0, 0.05),
+    posteriorWallThicknessDiastoleCm: normal(1.0, 0.05),
+    bodySurfaceAreaM2: 2,
+  });
+  const i = g.outputNames.indexOf("lvMassIndexGPerM2"),
+    j = g.outputNames.indexOf("relativeWallThickness");
+  relClose(g.covariance[i]![j]!, (61.152 * 0.4 - 29.952 * 0.08) * 0.05 ** 2, 1e-6);
+  relClose(g.outputs.relativeWallThickness.standardUncertainty, Math.hypot(0.4, 0.08) * 0.05, 1e-6);
+});
+
+Deno.test("bad input: negative or missing dimensions, LVIDs above LVIDd", () => {
   assert.throws(
     () =>
       evaluate(lvMassLinear, {
@@ -150,20 +225,23 @@ Deno.test("bad input: negative or missing dimensions, LVIDs above LVIDd, bad sex
     {
       name: "RangeError",
       message:
-        /LV mass \(linear cube formula\): expected 'septalThicknessDiastoleCm' in \(0, 5\] cm, got -1$/,
+        "LV mass (linear cube formula): expected 'septalThicknessDiastoleCm' (Septal thickness) in (0, 5] cm, got -1",
     },
   );
   assert.throws(() => evaluate(teichholzVolume, { lvInternalDiameterCm: 0 }), {
     name: "RangeError",
-    message: /expected 'lvInternalDiameterCm' in \(0, 12\] cm, got 0$/,
+    message:
+      "Teichholz LV volume: expected 'lvInternalDiameterCm' (LV internal diameter) in (0, 12] cm, got 0",
   });
   assert.throws(() => evaluate(teichholzVolume, { lvInternalDiameterCm: NaN }), {
     name: "RangeError",
-    message: /got NaN$/,
+    message:
+      "Teichholz LV volume: expected 'lvInternalDiameterCm' (LV internal diameter) in (0, 12] cm, got NaN",
   });
   assert.throws(() => evaluate(teichholzVolume, { lvInternalDiameterCm: "5 mmHg" }), {
     name: "TypeError",
-    message: /expected a quantity convertible to cm/,
+    message:
+      `Teichholz LV volume: expected 'lvInternalDiameterCm' (LV internal diameter) in (0, 12] cm (a unit convertible to cm), got "5 mmHg"`,
   });
   assert.throws(
     () =>
@@ -174,35 +252,51 @@ Deno.test("bad input: negative or missing dimensions, LVIDs above LVIDd, bad sex
     {
       name: "RangeError",
       message:
-        /expected 'lvInternalDiameterSystoleCm' <= 'lvInternalDiameterDiastoleCm', got lvInternalDiameterSystoleCm = 5, lvInternalDiameterDiastoleCm = 3.2$/,
+        "LV fractional shortening: expected 'lvInternalDiameterSystoleCm' <= 'lvInternalDiameterDiastoleCm', got lvInternalDiameterSystoleCm = 5 cm, lvInternalDiameterDiastoleCm = 3.2 cm",
     },
   );
+  // Previously NaN inside the formula; now a declared constraint of the chain's first step.
   assert.throws(
     () =>
       evaluate(teichholzEjectionFraction, {
         lvInternalDiameterDiastoleCm: 4,
         lvInternalDiameterSystoleCm: 4.5,
       }),
-    { name: "RangeError", message: /output 'ejectionFractionPercent' is not finite/ },
+    {
+      name: "RangeError",
+      message:
+        "Teichholz LV volumes and ejection fraction: expected 'lvInternalDiameterSystoleCm' <= 'lvInternalDiameterDiastoleCm', got lvInternalDiameterSystoleCm = 4.5 cm, lvInternalDiameterDiastoleCm = 4 cm",
+    },
   );
   assert.throws(
     () =>
-      classifyLvGeometry({
-        relativeWallThickness: 0.4,
-        lvMassIndexGPerM2: 90,
-        sex: "M" as unknown as "male",
+      propagate(teichholzEjectionFraction, {
+        lvInternalDiameterDiastoleCm: normal(4, 0.1),
+        lvInternalDiameterSystoleCm: normal(4.5, 0.1),
       }),
-    { name: "TypeError", message: /expected 'sex' as "male" or "female", got "M"$/ },
+    { name: "RangeError", message: /expected 'lvInternalDiameterSystoleCm' <= / },
   );
   assert.throws(
-    () => classifyLvGeometry({ relativeWallThickness: -0.1, lvMassIndexGPerM2: 90, sex: "male" }),
-    { name: "RangeError", message: /expected 'relativeWallThickness' in \(0, 5\], got -0.1$/ },
+    () =>
+      evaluate(lvMassIndex, {
+        septalThicknessDiastoleCm: 1,
+        lvInternalDiameterDiastoleCm: 5,
+        posteriorWallThicknessDiastoleCm: 1,
+      }),
+    {
+      name: "TypeError",
+      message:
+        "LV mass index (linear method): missing input 'bodySurfaceAreaM2' (Body surface area): expected a value in (0, 5] m², got nothing",
+    },
   );
 });
 
 Deno.test("values outside the typical range are flagged, not rejected", () => {
-  // LVIDd 8.5 cm lies outside the typical adult span [3, 7.5] cm (common practice, no source).
+  // LVID 8.5 cm lies outside the typical adult span [1.5, 7.5] cm (common practice, no source).
   const r = evaluate(teichholzVolume, { lvInternalDiameterCm: 8.5 });
   assert.equal(r.flags.length, 1);
-  assert.match(r.flags[0]!, /'lvInternalDiameterCm' = 8.5 cm lies outside the validated range/);
+  assert.equal(
+    r.flags[0],
+    "Teichholz LV volume: 'lvInternalDiameterCm' (LV internal diameter) = 8.5 cm lies outside the typical range [1.5, 7.5] cm: interpret with care",
+  );
 });

@@ -53,7 +53,8 @@ Deno.test("the catalog registers every calculation once and refuses two under on
   }
   assert.throws(() => defineCatalog({ calculations: [scaled(2), scaled(3)] }), {
     name: "TypeError",
-    message: "Catalog: two different calculations share the id 'catalogTestScaled'; give each its own id",
+    message:
+      "Catalog: two different calculations share the id 'catalogTestScaled'; give each its own id",
   });
   assert.equal(combineCatalogs([CATALOG, CATALOG]).calculations.size, CATALOG.calculations.size);
 });

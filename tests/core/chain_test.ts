@@ -79,7 +79,7 @@ Deno.test("a chain is made again from its recipe (catalog members by id, familie
     bsaM2: 2,
     lvMassIndex: 95,
   });
-  assert.equal(c.outputs.bsaM2.quantity, BODY_SURFACE_AREA);
+  assert.equal(c.outputs.bsaM2!.quantity, BODY_SURFACE_AREA);
 });
 
 Deno.test("chain errors: one step, two steps giving one output, two quantities under one name", () => {

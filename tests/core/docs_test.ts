@@ -31,7 +31,10 @@ Deno.test("the reference lists every calculation, every family member, with quan
     assert.match(section, /Citations:\n- /);
     for (const input of c.inputNames) {
       const d = c.inputs[input]!;
-      assert.ok(section.includes(`| \`${input}\` | ${d.label.replace(/\|/g, "\\|")} |`), `${c.id}: ${input}`);
+      assert.ok(
+        section.includes(`| \`${input}\` | ${d.label.replace(/\|/g, "\\|")} |`),
+        `${c.id}: ${input}`,
+      );
     }
   }
 });

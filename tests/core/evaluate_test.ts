@@ -73,7 +73,7 @@ Deno.test("evaluate carries the clinical caution and flags values outside the ty
   assert.ok(r.cautions.includes(CLINICAL_CAUTION));
   assert.match(
     r.flags[0]!,
-    /^Test continuity area: 'lvotDiameterCm' \(LVOT diameter\) = 3\.5 cm lies outside the typical range \[1\.6, 3\] cm: interpret with care$/,
+    /^Test continuity area: 'lvotDiameterCm' \(LVOT diameter\) = 3\.5 cm lies outside the typical range \[1\.6, 3\] cm \(the adult range of the test\): interpret with care$/,
   );
 });
 
@@ -115,7 +115,7 @@ Deno.test("bad input: wrong unit, unknown and missing inputs, out of range, NaN,
   assert.throws(() => evaluate(area, { ...ok, lvotVtiCm: "twenty cm" }), {
     name: "TypeError",
     message:
-      "Test continuity area: expected 'lvotVtiCm' (LVOT VTI) in (0, 100] cm (a unit convertible to cm), got \"twenty cm\"",
+      "Test continuity area: expected 'lvotVtiCm' (LVOT VTI) as a number or a quantity in (0, 100] cm, got \"twenty cm\"",
   });
   // every problem at once, as structured issues; the message renders the first
   try {
@@ -125,7 +125,7 @@ Deno.test("bad input: wrong unit, unknown and missing inputs, out of range, NaN,
     assert.ok(e instanceof InputRangeError);
     assert.deepEqual(e.issues.map((i) => [i.field, i.kind]), [
       ["lvotDiameterCm", "range"],
-      ["lvotVtiCm", "unit"],
+      ["lvotVtiCm", "type"],
       ["valveVtiCm", "range"],
     ]);
     assert.match(e.message, /\(and 2 more problems\)$/);
@@ -160,7 +160,10 @@ Deno.test("defineCalculation rejects a spec without citations or with an empty r
         inputs: { a: { unit: "1", description: "a", range: { min: 2, max: 1 } } },
         citations: [{ authors: "a", year: 1, title: "t", publication: "p" }],
       }),
-    { name: "TypeError", message: /input 'a' has an empty range/ },
+    {
+      name: "TypeError",
+      message: `Quantity 'x.a': expected a non-empty valid range, got {"min":2,"max":1}`,
+    },
   );
 });
 
@@ -178,7 +181,14 @@ Deno.test("a non-finite or impossible output is an error naming the inputs, neve
   });
   assert.throws(() => evaluate(bad, { a: -0.5 }), {
     name: "RangeError",
-    message: "Log ratio: output 'b' is not finite for a = -0.5, got NaN",
+    message: "Log ratio: output 'b' expected a finite number, got NaN from a = -0.5",
+  });
+  // an output outside its quantity's valid range: a negative area is impossible
+  const negative = defineCalculation({ ...area, formula: () => ({ areaCm2: -1 }) });
+  assert.throws(() => evaluate(negative, { lvotDiameterCm: 2, lvotVtiCm: 20, valveVtiCm: 80 }), {
+    name: "RangeError",
+    message:
+      "Test continuity area: output 'areaCm2' (Valve area) expected in (0, 10] cm², got -1 from lvotDiameterCm = 2 cm, lvotVtiCm = 20 cm, valveVtiCm = 80 cm",
   });
 });
 

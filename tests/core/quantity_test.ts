@@ -4,8 +4,8 @@ import {
   BODY_SURFACE_AREA,
   defineQuantity,
   formatRange,
-  HEIGHT,
   headerMatches,
+  HEIGHT,
   isQuantity,
   LVOT_DIAMETER,
   normalizeHeader,
@@ -76,7 +76,8 @@ Deno.test("every exported quantity is listed once in QUANTITIES, with a sane dec
     }
     assert.ok(q.resolution > 0, where);
     // the unit is one the unit engine reads (or a plain label for %, 1, dB, bpm)
-    assert.equal(typeof readAmount(`1 ${q.unit}`, q.unit), "number", `${where}: unit ${q.unit}`);
+    const one = q.unit === "1" ? "1" : `1 ${q.unit}`;
+    assert.equal(typeof readAmount(one, q.unit), "number", `${where}: unit ${q.unit}`);
   }
   // no two quantities claim one header
   const claimed = new Map<string, string>();

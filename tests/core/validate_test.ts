@@ -3,6 +3,8 @@ import {
   checkInputs,
   checkValue,
   defineArguments,
+  discSummationVolume,
+  evaluate,
   HEIGHT,
   InputTypeError,
   issueError,
@@ -40,9 +42,21 @@ Deno.test("checkValue: converts, checks the range, flags the typical range", () 
 
 Deno.test("checkValue: every failure names the field, the value and the valid range", () => {
   const cases: [unknown, string, string][] = [
-    [undefined, "missing", "Demo: missing input 'h' (Height): expected a value in [15, 280] cm, got nothing"],
-    [true, "type", "Demo: expected 'h' (Height) as a number or a quantity in [15, 280] cm, got true"],
-    ["2 kg", "unit", `Demo: expected 'h' (Height) in [15, 280] cm (a unit convertible to cm), got "2 kg"`],
+    [
+      undefined,
+      "missing",
+      "Demo: missing input 'h' (Height): expected a value in [15, 280] cm, got nothing",
+    ],
+    [
+      true,
+      "type",
+      "Demo: expected 'h' (Height) as a number or a quantity in [15, 280] cm, got true",
+    ],
+    [
+      "2 kg",
+      "unit",
+      `Demo: expected 'h' (Height) in [15, 280] cm (a unit convertible to cm), got "2 kg"`,
+    ],
     [NaN, "range", "Demo: expected 'h' (Height) in [15, 280] cm, got NaN"],
     [-Infinity, "range", "Demo: expected 'h' (Height) in [15, 280] cm, got -Infinity"],
     ["3 m", "range", `Demo: expected 'h' (Height) in [15, 280] cm, got "3 m" (300 cm)`],
@@ -72,17 +86,24 @@ Deno.test("checkValue: counts accept whole numbers only", () => {
     renderIssue(r.issues[0]!),
     "Demo: expected 'discs' (Disc count) as a whole number in [1, 100], got 2.5",
   );
+  // a calculation's input takes the flag from its quantity (a count of discs is whole: the
+  // method of discs divides the long axis into N equal slices: common practice, no source)
+  assert.throws(
+    () =>
+      evaluate(discSummationVolume, { diameterProductSumCm2: 300, longAxisCm: 8, discCount: 2.5 }),
+    { name: "RangeError", message: /'discCount' \(.*\) as a whole number in .*, got 2\.5/ },
+  );
 });
 
 Deno.test("checkInputs collects every issue; validateInputs throws the first with all attached", () => {
   const schema = defineArguments("Body size", { heightCm: HEIGHT, weightKg: WEIGHT });
   const r = checkInputs(schema, { heightCm: "tall", weightKg: 700, extra: 1 });
-  assert.deepEqual(r.issues.map((i) => i.kind), ["unknown", "unit", "range"]);
+  assert.deepEqual(r.issues.map((i) => i.kind), ["unknown", "type", "range"]);
   assert.throws(() => validateInputs(schema, { heightCm: "tall", weightKg: 700 }), (e) => {
     assert.ok(e instanceof InputTypeError);
     assert.equal(
       e.message,
-      `Body size: expected 'heightCm' (Height) in [15, 280] cm (a unit convertible to cm), got "tall" (and 1 more problems)`,
+      `Body size: expected 'heightCm' (Height) as a number or a quantity in [15, 280] cm, got "tall" (and 1 more problem)`,
     );
     assert.equal(e.issues.length, 2);
     return true;

@@ -1,9 +1,13 @@
 import assert from "node:assert/strict";
+import normalCdf from "@stdlib/stats-base-dists-normal-cdf";
 import {
   AORTIC_REGURGITATION_2017,
   AORTIC_STENOSIS_2009,
   AORTIC_STENOSIS_2017,
+  CLINICAL_CAUTION,
+  continuityValveArea,
   defineSeverityTable,
+  effectiveRegurgitantOrificeArea,
   gradeSeverity,
   JUPYTER_DISPLAY,
   MITRAL_REGURGITATION_2017,
@@ -11,11 +15,17 @@ import {
   MITRAL_STENOSIS_MEAN_GRADIENT_2009,
   MITRAL_STENOSIS_STAGES_2014,
   mitralStenosisAreaTable,
+  normal,
+  propagate,
   PULMONARY_HYPERTENSION_2015,
   PULMONARY_HYPERTENSION_2022,
   pulmonaryHypertensionTable,
+  QUANTITIES,
+  REGURGITANT_FRACTION,
   type SeverityTable,
+  simplifiedBernoulli,
 } from "../../mod.ts";
+import { close } from "./helpers.ts";
 
 const grade = (t: SeverityTable, v: number) => gradeSeverity(t, v).grade;
 
@@ -85,7 +95,8 @@ Deno.test("mitral stenosis: older grading and newer staging are both selectable"
   assert.equal(mitralStenosisAreaTable("AHA/ACC 2014"), MITRAL_STENOSIS_STAGES_2014);
   assert.throws(() => mitralStenosisAreaTable("ESC 2030" as never), {
     name: "RangeError",
-    message: /expected 'scheme' "EAE\/ASE 2009" or "AHA\/ACC 2014", got "ESC 2030"$/,
+    message:
+      `Mitral stenosis grading: expected 'scheme' one of "EAE/ASE 2009", "AHA/ACC 2014", got "ESC 2030"`,
   });
 });
 
@@ -135,64 +146,81 @@ Deno.test("pulmonary hypertension echo probability by TR velocity (ESC/ERS 2015 
   assert.equal(pulmonaryHypertensionTable("ESC/ERS 2015", true), s15);
   assert.throws(() => pulmonaryHypertensionTable("ESC/ERS 2015", "yes" as never), {
     name: "TypeError",
-    message: /'otherEchoSigns' as true or false, got string$/,
+    message:
+      `Pulmonary hypertension probability: expected 'otherEchoSigns' as true or false, got "yes"`,
+  });
+  assert.throws(() => pulmonaryHypertensionTable("ESC/ERS 2030" as never, false), {
+    name: "RangeError",
+    message:
+      `Pulmonary hypertension probability: expected 'guideline' one of "ESC/ERS 2015", "ESC/ERS 2022", got "ESC/ERS 2030"`,
   });
 });
 
-Deno.test("every table row carries a source and the tables are contiguous", () => {
+const TABLES: SeverityTable[] = [
+  ...Object.values(AORTIC_STENOSIS_2009),
+  ...Object.values(AORTIC_STENOSIS_2017),
+  MITRAL_STENOSIS_AREA_2009,
+  MITRAL_STENOSIS_MEAN_GRADIENT_2009,
+  MITRAL_STENOSIS_STAGES_2014,
+  ...Object.values(MITRAL_REGURGITATION_2017),
+  ...Object.values(AORTIC_REGURGITATION_2017),
+  ...Object.values(PULMONARY_HYPERTENSION_2015),
+  ...Object.values(PULMONARY_HYPERTENSION_2022),
+];
+
+Deno.test("every table row carries a citation and the tables are contiguous", () => {
   // Project rule (HELPER_RULES): each guideline row carries its source
-  const tables: SeverityTable[] = [
-    ...Object.values(AORTIC_STENOSIS_2009),
-    ...Object.values(AORTIC_STENOSIS_2017),
-    MITRAL_STENOSIS_AREA_2009,
-    MITRAL_STENOSIS_MEAN_GRADIENT_2009,
-    MITRAL_STENOSIS_STAGES_2014,
-    ...Object.values(MITRAL_REGURGITATION_2017),
-    ...Object.values(AORTIC_REGURGITATION_2017),
-    ...Object.values(PULMONARY_HYPERTENSION_2015),
-    ...Object.values(PULMONARY_HYPERTENSION_2022),
-  ];
-  assert.equal(tables.length, 23); // 5 + 5 AS, 3 MS, 3 + 3 regurgitation, 2 + 2 PH
-  for (const t of tables) {
+  assert.equal(TABLES.length, 23); // 5 + 5 AS, 3 MS, 3 + 3 regurgitation, 2 + 2 PH
+  for (const t of TABLES) {
     for (const b of t.bands) {
-      assert.ok(b.source.authors.length > 0 && b.source.year >= 2009, `${t.id} ${b.grade}`);
-      assert.ok(b.source.locator !== undefined && b.printed.length > 0, `${t.id} ${b.grade}`);
+      assert.ok(b.citation.authors.length > 0 && b.citation.year >= 2009, `${t.id} ${b.grade}`);
+      assert.ok(b.citation.locator !== undefined && b.printed.length > 0, `${t.id} ${b.grade}`);
+      // project rule: a recalled threshold says so where the user reads it (the locator)
+      assert.equal(b.fromMemory, /from memory/.test(b.citation.locator!), `${t.id} ${b.grade}`);
     }
+    // the graded quantity is a declared one (label, unit, valid range from the vocabulary)
+    assert.equal(QUANTITIES.get(t.quantity.id), t.quantity, t.id);
     // defineSeverityTable re-checks contiguity; this throws if a table were malformed
     defineSeverityTable(t);
   }
 });
 
 Deno.test("malformed tables are rejected", () => {
-  const source = { authors: "A", year: 2020, title: "T", publication: "P" };
-  const b = (lower: number | null, li: boolean, upper: number | null, ui: boolean) => ({
+  const citation = { authors: "A", year: 2020, title: "T", publication: "P" };
+  const b = (lower: number, li: boolean, upper: number, ui: boolean) => ({
     grade: `${lower}-${upper}`,
-    lower,
-    lowerInclusive: li,
-    upper,
-    upperInclusive: ui,
+    range: { min: lower, max: upper, minExclusive: !li, maxExclusive: !ui },
     printed: "",
-    source,
+    citation,
     fromMemory: false,
   });
-  const base = { id: "t", title: "T", quantity: "x", unit: "1", notes: [] };
+  const base = { id: "t", title: "T", quantity: REGURGITANT_FRACTION, notes: [] };
   assert.throws(
-    () => defineSeverityTable({ ...base, bands: [b(0, true, 1, false), b(2, true, null, false)] }),
+    () =>
+      defineSeverityTable({ ...base, bands: [b(0, true, 1, false), b(2, true, Infinity, false)] }),
     {
       name: "TypeError",
-      message: /must start where '0-1' ends \(1\), got 2$/,
+      message: "Severity table 't': band '2-Infinity' must start where '0-1' ends (1), got 2",
     },
   );
   assert.throws(
-    () => defineSeverityTable({ ...base, bands: [b(0, true, 1, true), b(1, true, null, false)] }),
+    () =>
+      defineSeverityTable({ ...base, bands: [b(0, true, 1, true), b(1, true, Infinity, false)] }),
     {
       name: "TypeError",
-      message: /exactly one of .* got both$/,
+      message:
+        "Severity table 't': the bound 1 must belong to exactly one of '0-1' and '1-Infinity', got both",
     },
   );
   assert.throws(() => defineSeverityTable({ ...base, bands: [] }), {
     name: "TypeError",
-    message: /at least one band, got 0$/,
+    message: "Severity table 't': expected at least one band, got 0",
+  });
+  // a regurgitant fraction of 80 % would have no class
+  assert.throws(() => defineSeverityTable({ ...base, bands: [b(0, true, 50, true)] }), {
+    name: "TypeError",
+    message:
+      "Severity table 't': expected the bands to cover the valid range of Regurgitant fraction [0, 100], got [0, 50]",
   });
 });
 
@@ -207,38 +235,165 @@ Deno.test("grading samples gives the probability of each class", () => {
   assert.equal(d.median, 1.0);
   assert.equal(d.grade, "moderate"); // class of the median
   assert.equal(d.mostLikely, "severe"); // first of the tied classes in table order
-  // an object with samples (a Monte Carlo output) and typed arrays work the same
-  const d2 = gradeSeverity(AORTIC_STENOSIS_2017.valveArea, {
-    samples: new Float64Array([0.8, 0.95, 1.0, 1.4, 1.6]),
-  });
+  assert.equal(d.method, "samples");
+  // typed arrays work the same
+  const d2 = gradeSeverity(
+    AORTIC_STENOSIS_2017.valveArea,
+    new Float64Array([0.8, 0.95, 1.0, 1.4, 1.6]),
+  );
   assert.deepEqual(d2.probabilities, d.probabilities);
   const shown = d[JUPYTER_DISPLAY]()["text/plain"] as string;
-  assert.match(shown, /severe .* 0\.4/);
+  assert.match(shown, /severe .* 40\.0 %/);
+});
+
+Deno.test("probability of each AS class from Monte Carlo samples matches the exact normal probability", () => {
+  // AVA = π d²/4 · 20/60 is monotone in d, so P(AVA < 1.0) = P(d < d*) with
+  // d* = √(4·1.0·60/(π·20)) = 1.95441 cm; d ~ N(2.0, 0.1) → Φ(−0.4559) = 0.3242
+  // (normal CDF from the @stdlib reference library)
+  const m = propagate(
+    continuityValveArea,
+    { lvotDiameterCm: normal(2.0, 0.1), lvotVtiCm: 20, avVtiCm: 60 },
+    { method: "monteCarlo", trials: 100_000, seed: 3 },
+  );
+  const d = gradeSeverity(AORTIC_STENOSIS_2017.valveArea, m.outputs.avaCm2);
+  const dSevere = Math.sqrt((4 * 1.0 * 60) / (Math.PI * 20));
+  const dModerateTop = Math.sqrt((4 * 1.5 * 60) / (Math.PI * 20));
+  const pSevere = normalCdf(dSevere, 2.0, 0.1);
+  const pMild = 1 - normalCdf(dModerateTop, 2.0, 0.1);
+  const p = Object.fromEntries(d.probabilities.map((x) => [x.grade, x.probability]));
+  close(pSevere, 0.3242, 2e-4, "exact P(severe)");
+  close(p.severe!, pSevere, 0.006, "MC P(severe)");
+  close(p.mild!, pMild, 0.003, "MC P(mild)");
+  close(p.severe! + p.moderate! + p.mild!, 1, 1e-12, "probabilities sum to 1");
+  // the point estimate 1.047 cm² is "moderate", yet severe has about a one-in-three chance
+  assert.equal(d.grade, "moderate");
+  assert.equal(d.count, 100_000);
+  assert.equal(d.method, "samples");
+  assert.deepEqual(d.interval, m.outputs.avaCm2.interval);
+});
+
+Deno.test("a GUM value is graded by its normal distribution N(y, u²), and says so", () => {
+  const r = propagate(continuityValveArea, {
+    lvotDiameterCm: normal(2.0, 0.1),
+    lvotVtiCm: 20,
+    avVtiCm: 60,
+  });
+  const d = gradeSeverity(AORTIC_STENOSIS_2017.valveArea, r.outputs.avaCm2);
+  // y = π/3 = 1.047198 cm², u = 0.1·y (JCGM 100 §5.1.6: 2 × 5 %); P(AVA < 1.0) = Φ((1 − y)/u)
+  // = Φ(−0.45070) = 0.32610 and P(AVA > 1.5) = 1 − Φ(4.3254) = 7.66e-6 (normal CDF from the
+  // @stdlib reference library)
+  const y = Math.PI / 3, u = 0.1 * y;
+  const p = Object.fromEntries(d.probabilities.map((x) => [x.grade, x.probability]));
+  close(p.severe!, 0.32610, 1e-5, "P(severe)");
+  close(p.severe!, normalCdf(1.0, y, u), 1e-12, "P(severe) exact");
+  close(p.mild!, 1 - normalCdf(1.5, y, u), 1e-12, "P(mild)");
+  close(p.severe! + p.moderate! + p.mild!, 1, 1e-12, "sum");
+  assert.equal(d.method, "normal");
+  assert.match(d.basis, /normal distribution N\(y, u²\) of the GUM result/);
+  assert.equal(d.count, null);
+  assert.equal(d.median, d.value);
+  close(d.standardUncertainty, u, 1e-9, "u");
+  // the linearised (normal) answer differs from Monte Carlo's 0.3242 above: AVA ∝ d² is skewed
+  assert.ok(Math.abs(p.severe! - 0.3242) > 1e-3);
+});
+
+Deno.test("the part of a distribution outside the valid range is reported, not hidden", () => {
+  // EROA = Q/(100·V): Q = 25 ± 20 mL/s, V = 5 m/s → 0.05 ± 0.04 cm²; P(EROA ≤ 0) = Φ(−1.25)
+  // = 0.10565 (standard normal table)
+  const r = propagate(effectiveRegurgitantOrificeArea, {
+    flowRateMlPerS: normal(25, 20),
+    regurgitantPeakVelocity: 5,
+  });
+  const d = gradeSeverity(MITRAL_REGURGITATION_2017.eroa, r.outputs.eroaCm2);
+  close(d.outsideValid, 0.10565, 1e-5, "P(EROA ≤ 0)");
+  // it is counted in the lowest class, so the classes still sum to 1
+  close(d.probabilities[0]!.probability, normalCdf(0.2, 0.05, 0.04), 1e-12, "P(mild)");
+  const text = String(d[JUPYTER_DISPLAY]()["text/plain"]);
+  assert.match(text, /10\.6 % of the distribution lies outside the valid range/);
+  // samples outside the valid range: counted (hand-checkable), not an error
+  const s = gradeSeverity(AORTIC_STENOSIS_2017.valveArea, [1, 0]);
+  assert.equal(s.outsideValid, 0.5);
+  assert.equal(s.probabilities[0]!.probability, 0.5);
+});
+
+Deno.test("results carry their provenance and the clinical caution, and display them", () => {
+  // Project rule: a "from memory" mark reaches the user with the number; clinical caution travels
+  const g = gradeSeverity(AORTIC_STENOSIS_2017.peakVelocity, 4.2);
+  assert.equal(g.fromMemory, true);
+  assert.ok(g.cautions.includes(CLINICAL_CAUTION));
+  assert.ok(g.cautions.some((c) => /recalled from memory/.test(c)));
+  assert.equal(g.citations.length, 1);
+  assert.match(g.citations[0]!.locator!, /from memory/);
+  const bundle = g[JUPYTER_DISPLAY]();
+  const text = String(bundle["text/plain"]);
+  assert.match(text, /Aortic jet peak velocity = 4\.20 m\/s → severe/);
+  assert.match(text, /severe\s+≥ 4\.0 m\/s\s+this value/);
+  assert.match(text, /Source: Baumgartner H, Hung J, .* \(2017\)\. .*Table 3.*\(from memory\)/);
+  assert.match(text, /Caution: Not a diagnosis/);
+  assert.match(String(bundle["text/html"]), /from memory/);
+  const d = gradeSeverity(
+    AORTIC_STENOSIS_2017.valveArea,
+    propagate(continuityValveArea, {
+      lvotDiameterCm: normal(2.0, 0.1),
+      lvotVtiCm: 20,
+      avVtiCm: 60,
+    }).outputs.avaCm2,
+  );
+  const shown = String(d[JUPYTER_DISPLAY]()["text/plain"]);
+  assert.match(shown, /Note: Probability of each class under the normal distribution .*: N\(/);
+  assert.match(shown, /95 % coverage interval of the value: \[/);
+  assert.match(shown, /\(from memory\)/);
+  assert.match(shown, /Caution: Not a diagnosis/);
 });
 
 Deno.test("bad values for grading", () => {
   assert.throws(() => gradeSeverity(AORTIC_STENOSIS_2017.peakVelocity, -1), {
     name: "RangeError",
-    message: /expected a value in \[0, ∞\) m\/s, got -1$/,
+    message:
+      "Severity grading (Aortic stenosis by peak velocity (2017)): expected 'value' (Aortic jet peak velocity) in [0, 10] m/s, got -1",
   });
   assert.throws(() => gradeSeverity(AORTIC_STENOSIS_2017.valveArea, Number.NaN), {
     name: "RangeError",
-    message: /got NaN$/,
+    message: /^Severity grading \(Aortic stenosis by valve area \(2017\)\): .* got NaN$/,
   });
   assert.throws(() => gradeSeverity(AORTIC_STENOSIS_2017.valveArea, [1, Number.NaN]), {
     name: "RangeError",
-    message: /'samples\[1\]' finite, got NaN$/,
-  });
-  assert.throws(() => gradeSeverity(AORTIC_STENOSIS_2017.valveArea, [1, 0]), {
-    name: "RangeError",
-    message: /'samples\[1\]': expected a value in \(0, ∞\) cm², got 0$/,
+    message:
+      "Severity grading (Aortic stenosis by valve area (2017)): expected 'samples[1]' finite, got NaN",
   });
   assert.throws(() => gradeSeverity(AORTIC_STENOSIS_2017.valveArea, []), {
     name: "TypeError",
-    message: /at least one sample, got 0$/,
+    message:
+      "Severity grading (Aortic stenosis by valve area (2017)): expected 'samples' with at least one value, got an empty array",
   });
-  assert.throws(() => gradeSeverity(AORTIC_STENOSIS_2017.valveArea, "1.0" as never), {
+  // a quantity string is read in the quantity's unit; another dimension is a TypeError
+  assert.equal(gradeSeverity(AORTIC_STENOSIS_2017.valveArea, "90 mm^2").grade, "severe");
+  assert.throws(() => gradeSeverity(AORTIC_STENOSIS_2017.valveArea, "1.0 mmHg"), {
     name: "TypeError",
-    message: /got string$/,
+    message:
+      `Severity grading (Aortic stenosis by valve area (2017)): expected 'value' (Aortic valve area) in (0, 10] cm² (a unit convertible to cm^2), got "1.0 mmHg"`,
+  });
+  assert.throws(() => gradeSeverity(AORTIC_STENOSIS_2017.valveArea, {} as never), {
+    name: "TypeError",
+    message:
+      "Severity grading (Aortic stenosis by valve area (2017)): expected 'value' (Aortic valve area) as a number or a quantity in (0, 10] cm², got a value of type object",
+  });
+  // an uncertain value of another unit, and a Monte Carlo value without its samples
+  const gradient =
+    propagate(simplifiedBernoulli, { peakVelocity: normal(4, 0.1) }).outputs.gradient;
+  assert.throws(() => gradeSeverity(AORTIC_STENOSIS_2017.valveArea, gradient), {
+    name: "TypeError",
+    message:
+      "Severity grading (Aortic stenosis by valve area (2017)): expected 'gradient' as a value convertible to cm^2 (Aortic valve area), got a value in mmHg (Peak gradient)",
+  });
+  const noSamples = propagate(simplifiedBernoulli, { peakVelocity: normal(4, 0.1) }, {
+    method: "monteCarlo",
+    trials: 1000,
+    keepSamples: false,
+  }).outputs.gradient;
+  assert.throws(() => gradeSeverity(AORTIC_STENOSIS_2017.meanGradient, noSamples), {
+    name: "TypeError",
+    message:
+      /expected 'gradient' as a Monte Carlo value with its samples .* got a Monte Carlo value without samples$/,
   });
 });

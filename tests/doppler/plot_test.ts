@@ -2,68 +2,11 @@ import assert from "node:assert/strict";
 import { AORTIC_STENOSIS_2017, gradeSeverity } from "../../mod.ts";
 import {
   angleUnderestimationChart,
-  angleUnderestimationData,
   severityProbabilityChart,
   valveAreaDiameterErrorChart,
-  valveAreaDiameterErrorData,
 } from "../../plot/mod.ts";
 
-const close = (actual: number, expected: number, tol: number, what = "") =>
-  assert.ok(
-    Math.abs(actual - expected) <= tol,
-    `${what} expected ${expected} ± ${tol}, got ${actual}`,
-  );
-
-Deno.test("angle curve reproduces 1 − cos θ and 1 − cos²θ", () => {
-  const rows = angleUnderestimationData({ maxAngleDeg: 60, stepDeg: 5 });
-  assert.equal(rows.length, 2 * 13);
-  const at = (a: number, q: string) =>
-    rows.find((r) => r.angleDeg === a && r.quantity === q)!.underestimationPercent;
-  // Common practice (issue 3): velocity error under about 6 % below 20° → 6.03 % at 20°
-  close(at(20, "velocity"), 6.03, 0.005);
-  assert.ok(at(15, "velocity") < 6);
-  // trigonometry: cos 60° = ½ exactly; gradient 1 − ¼ = 75 %
-  close(at(60, "velocity"), 50, 1e-9);
-  close(at(60, "gradient"), 75, 1e-9);
-  close(at(0, "gradient"), 0, 1e-12);
-  // the gradient error is always at least the velocity error (v² vs v)
-  for (const a of [5, 10, 30, 45]) assert.ok(at(a, "gradient") > at(a, "velocity"));
-});
-
-Deno.test("valve-area error curve: the diameter is squared", () => {
-  const rows = valveAreaDiameterErrorData({
-    lvotDiametersCm: [1.8, 2.2],
-    maxErrorMm: 2,
-    stepMm: 1,
-  });
-  assert.equal(rows.length, 2 * 5);
-  const at = (d: number, e: number) =>
-    rows.find((r) => r.lvotDiameterCm === d && r.diameterErrorMm === e)!.areaErrorPercent;
-  // (d + e)²/d² − 1 (hand-checkable): 1.9²/1.8² − 1 = 11.42 %; 2.3²/2.2² − 1 = 9.30 %
-  close(at(1.8, 1), 11.42, 0.005);
-  close(at(2.2, 1), 9.30, 0.005);
-  close(at(2.2, -2), 100 * ((2.0 / 2.2) ** 2 - 1), 1e-9);
-  close(at(1.8, 0), 0, 1e-12);
-});
-
-Deno.test("chart options are validated", () => {
-  assert.throws(() => angleUnderestimationData({ maxAngleDeg: 90 }), {
-    name: "RangeError",
-    message: /^Angle underestimation chart: expected 'maxAngleDeg' in \(0, 89\] deg, got 90$/,
-  });
-  assert.throws(() => valveAreaDiameterErrorData({ stepMm: 0 }), {
-    name: "RangeError",
-    message: /'stepMm' in \(0, 1\] mm, got 0$/,
-  });
-  assert.throws(() => valveAreaDiameterErrorData({ lvotDiametersCm: [0.2], maxErrorMm: 3 }), {
-    name: "RangeError",
-    message: /'maxErrorMm' below the diameter 2 mm, got 3$/,
-  });
-  assert.throws(() => valveAreaDiameterErrorData({ lvotDiametersCm: [2, -1] }), {
-    name: "RangeError",
-    message: /'lvotDiametersCm\[1\]' in \(0, 5\] cm, got -1$/,
-  });
-});
+type Encoding = Record<string, { title?: string | null; field?: string }>;
 
 Deno.test("charts render to SVG and carry their data in the spec", async () => {
   const a = angleUnderestimationChart({ maxAngleDeg: 40, stepDeg: 10 });
@@ -78,4 +21,24 @@ Deno.test("charts render to SVG and carry their data in the spec", async () => {
   // counting (hand-checkable): 1 of 4 severe, 2 moderate, 1 mild
   assert.deepEqual(values.map((x) => x.probability), [0.25, 0.5, 0.25]);
   assert.match(await s.toSVG(), /^<svg/);
+});
+
+Deno.test("axis titles and legends are quantity labels with units, never code names", () => {
+  // Project rule (issue 11): labels come from the quantities, with labelWithUnit
+  const angle = angleUnderestimationChart({ maxAngleDeg: 40, stepDeg: 10 }).spec;
+  const line = (angle.layer as { encoding: Encoding }[])[0]!.encoding;
+  assert.equal(line.x!.title, "Insonation angle (°)");
+  assert.equal(line.y!.title, "Underestimation of the true value (%)");
+  const valve = valveAreaDiameterErrorChart().spec.encoding as Encoding;
+  assert.equal(valve.x!.title, "LVOT diameter error (mm)");
+  assert.equal(valve.y!.title, "Valve-area error (%)");
+  assert.equal(valve.color!.title, "LVOT diameter (cm)");
+  const d = gradeSeverity(AORTIC_STENOSIS_2017.valveArea, [0.9, 1.1]);
+  const bars = severityProbabilityChart(d).spec.encoding as Encoding;
+  assert.equal(bars.x!.title, "Class: Aortic valve area (cm²)");
+  for (const e of [line, valve, bars]) {
+    for (const channel of Object.values(e)) {
+      if (typeof channel.title === "string") assert.doesNotMatch(channel.title, /[a-z][A-Z]/);
+    }
+  }
 });

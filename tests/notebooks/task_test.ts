@@ -14,7 +14,17 @@ async function task(cwd: string, args: string[]) {
   const out = await new Deno.Command(Deno.execPath(), {
     args: ["task", "--quiet", "notebooks", ...args],
     cwd,
-    env: { NO_COLOR: "1" },
+    // a fresh environment: under `deno task test` this process inherits INIT_CWD (the folder the
+    // outer task was typed in), which an inner `deno task` would keep instead of setting its own
+    clearEnv: true,
+    env: {
+      NO_COLOR: "1",
+      ...Object.fromEntries(
+        ["PATH", "HOME", "DENO_DIR", "XDG_CACHE_HOME", "TMPDIR"]
+          .map((k) => [k, Deno.env.get(k)])
+          .filter((e): e is [string, string] => e[1] !== undefined),
+      ),
+    },
     stdin: "null",
     stdout: "piped",
     stderr: "piped",

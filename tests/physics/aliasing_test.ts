@@ -5,15 +5,15 @@ import {
   type AliasingRemedy,
   evaluate,
   JUPYTER_DISPLAY,
+  maximumPrfForDepth,
+  NYQUIST_VELOCITY,
   nyquistVelocity,
   nyquistVelocityAtDepth,
 } from "../../mod.ts";
+import { close } from "./helpers.ts";
 
-const close = (actual: number, expected: number, tol: number, what: string) =>
-  assert.ok(
-    Math.abs(actual - expected) <= tol,
-    `${what}: expected ${expected} ± ${tol}, got ${actual}`,
-  );
+/** Pulsed-Doppler settings of the worked examples: 4 kHz PRF at 2 MHz, sample volume at 15 cm. */
+const SETTINGS = { prfHz: 4000, transmitFrequencyMHz: 2, sampleDepthCm: 15 } as const;
 
 const option = (r: AliasingCheck, remedy: AliasingRemedy) => {
   const o = r.options.find((x) => x.remedy === remedy);
@@ -40,12 +40,20 @@ Deno.test("Nyquist limit at a depth: c²/(8·d·f0) and deeper or higher-frequen
   );
 });
 
+Deno.test("the Nyquist limit at a depth is a chain of the PRF limit and the Nyquist limit", () => {
+  assert.equal(nyquistVelocityAtDepth.recipe.kind, "chain");
+  assert.equal(nyquistVelocityAtDepth.outputs.nyquistVelocity.quantity, NYQUIST_VELOCITY);
+  assert.deepEqual(nyquistVelocityAtDepth.outputNames, ["maxPrfHz", "nyquistVelocity"]);
+  // Its caution comes from the PRF limit it is built on.
+  assert.ok(
+    maximumPrfForDepth.cautions.every((c) => nyquistVelocityAtDepth.cautions.includes(c)),
+  );
+});
+
 Deno.test("aliasing check: 1.5 m/s at 2 MHz, 4 kHz, 15 cm aliases; the remedies and their limits", () => {
   const r = aliasingCheck({
+    ...SETTINGS,
     velocity: 1.5,
-    prfHz: 4000,
-    transmitFrequencyMHz: 2,
-    sampleDepthCm: 15,
   });
   // Current limit 2000·1540/(2·2e6) = 0.77 m/s (hand check from the Doppler equation).
   close(r.nyquistVelocity, 0.77, 1e-12, "current");
@@ -86,10 +94,8 @@ Deno.test("aliasing check: 1.5 m/s at 2 MHz, 4 kHz, 15 cm aliases; the remedies 
 Deno.test("aliasing check: a given lower frequency reports its own Nyquist limit", () => {
   // 1.5 MHz at 4 kHz PRF: 2000·1540/(2·1.5e6) = 1.0267 m/s < 1.5 (hand check).
   const r = aliasingCheck({
+    ...SETTINGS,
     velocity: 1.5,
-    prfHz: 4000,
-    transmitFrequencyMHz: 2,
-    sampleDepthCm: 15,
     lowerTransmitFrequencyMHz: "1.5 MHz",
   });
   const lower = option(r, "lowerTransmitFrequency");
@@ -119,10 +125,8 @@ Deno.test("aliasing check: an aortic-stenosis jet of 5 m/s needs continuous-wave
 
 Deno.test("aliasing check: a velocity under the limit does not alias", () => {
   const r = aliasingCheck({
+    ...SETTINGS,
     velocity: "50 cm/s",
-    prfHz: 4000,
-    transmitFrequencyMHz: 2,
-    sampleDepthCm: 15,
   });
   assert.equal(r.aliases, false);
   assert.equal(r.velocity, 0.5);
@@ -131,7 +135,7 @@ Deno.test("aliasing check: a velocity under the limit does not alias", () => {
   assert.ok(r.options.every((o) => o.resolves));
   // Zero velocity never aliases.
   assert.equal(
-    aliasingCheck({ velocity: 0, prfHz: 4000, transmitFrequencyMHz: 2, sampleDepthCm: 15 }).aliases,
+    aliasingCheck({ ...SETTINGS, velocity: 0 }).aliases,
     false,
   );
 });
@@ -139,26 +143,139 @@ Deno.test("aliasing check: a velocity under the limit does not alias", () => {
 Deno.test("aliasing check: angle raises the Nyquist limit by 1/cos θ", () => {
   // At 60° the limit doubles (cos 60° = 0.5, hand check).
   const r = aliasingCheck({
+    ...SETTINGS,
     velocity: 1,
-    prfHz: 4000,
-    transmitFrequencyMHz: 2,
-    sampleDepthCm: 15,
     angleDeg: 60,
   });
   close(r.nyquistVelocity, 1.54, 1e-12, "60°");
   assert.equal(r.aliases, false);
   assert.equal(r.flags.length, 1); // 60° is outside the usual ≤ 20° practice
+  assert.match(r.flags[0]!, /'angleDeg' \(Insonation angle\) = 60° lies outside the typical range/);
+});
+
+Deno.test("aliasing check keeps the checked arguments and labels its settings", () => {
+  const r = aliasingCheck({
+    velocity: "150 cm/s",
+    prfHz: "4 kHz",
+    transmitFrequencyMHz: 2,
+    sampleDepthCm: 15,
+  });
+  // Defaults filled in: beam aligned, soft-tissue speed of sound (common practice); the optional
+  // lower frequency, not given, is absent.
+  assert.deepEqual(r.arguments.values, {
+    ...SETTINGS,
+    velocity: 1.5,
+    angleDeg: 0,
+    soundSpeedMps: 1540,
+  });
+  const prf = option(r, "maximumPrf").setting!;
+  assert.equal(prf.name, "prfHz");
+  assert.equal(prf.label, "Pulse repetition frequency");
+  assert.equal(prf.unit, "Hz");
+  assert.equal(option(r, "shallowerSampleVolume").setting!.label, "Sample-volume depth");
+  assert.equal(r.outputDefinitions.nyquistVelocity.label, "Nyquist velocity");
 });
 
 Deno.test("aliasing check displays a table of remedies in notebooks", () => {
   const r = aliasingCheck({
+    ...SETTINGS,
     velocity: 1.5,
-    prfHz: 4000,
-    transmitFrequencyMHz: 2,
-    sampleDepthCm: 15,
   });
   const bundle = r[JUPYTER_DISPLAY]();
-  assert.match(String(bundle["text/plain"]), /1\.5 m\/s aliases \(Nyquist limit 0\.77 m\/s\)/);
-  assert.match(String(bundle["text/plain"]), /continuousWave\s+no limit\s+yes/);
+  const text = String(bundle["text/plain"]);
+  // Current limit 2000·1540/(2·2e6) = 0.77 m/s; at the depth limit 0.99 m/s (hand checks above).
+  assert.match(text, /^Aliasing check: 1\.50 m\/s aliases \(Nyquist velocity 0\.77 m\/s\)/);
+  assert.match(text, /Nyquist velocity \(m\/s\)/);
+  assert.match(
+    text,
+    /Raise the PRF to its depth limit\s+Pulse repetition frequency = 5133 Hz\s+0\.99\s+no/,
+  );
+  assert.match(text, /Continuous-wave Doppler\s+no limit\s+yes/);
+  assert.match(text, /Setting: Insonation angle = 0°/);
   assert.match(String(bundle["text/html"]), /<table/);
+});
+
+// Bad input: clear errors naming the field, its label, the valid range and the value (project
+// rules, bad-input list); messages from the one validator.
+
+Deno.test("aliasing check: a velocity or lower frequency outside its range is a RangeError", () => {
+  assert.throws(
+    () => aliasingCheck({ ...SETTINGS, velocity: -1 }),
+    {
+      name: "RangeError",
+      message:
+        /^Aliasing check: expected 'velocity' \(Velocity to display\) in \[0, 20\] m\/s, got -1$/,
+    },
+  );
+  assert.throws(
+    () =>
+      aliasingCheck({
+        ...SETTINGS,
+        velocity: 1,
+        lowerTransmitFrequencyMHz: 0,
+      }),
+    {
+      name: "RangeError",
+      message:
+        /^Aliasing check: expected 'lowerTransmitFrequencyMHz' \(Lower transmit frequency\) in \(0, 100\] MHz, got 0$/,
+    },
+  );
+});
+
+Deno.test("aliasing check: a PRF beyond what the sample depth allows is a RangeError naming both", () => {
+  // 15 cm allows at most c/(2d) = 5133.33 Hz (hand check): 6000 Hz breaks the relation.
+  assert.throws(
+    () => aliasingCheck({ velocity: 1, prfHz: 6000, transmitFrequencyMHz: 2, sampleDepthCm: 15 }),
+    {
+      name: "RangeError",
+      message:
+        /^Aliasing check: expected 'prfHz' <= 'soundSpeedMps' \/ \(2·'sampleDepthCm'\), the highest PRF the sample depth allows \(beyond it pulsed Doppler is high-PRF and range-ambiguous: see rangeAmbiguity\), got prfHz = 6000 Hz, sampleDepthCm = 15 cm, soundSpeedMps = 1540 m\/s$/,
+    },
+  );
+  // Exactly at the limit is allowed (the maximum PRF option uses it).
+  const limit = evaluate(maximumPrfForDepth, { depthCm: 15 }).outputs.maxPrfHz;
+  assert.equal(
+    aliasingCheck({ velocity: 1, prfHz: limit, transmitFrequencyMHz: 2, sampleDepthCm: 15 })
+      .maxPrfHz,
+    limit,
+  );
+});
+
+Deno.test("aliasing check rejects unknown keys, non-objects and a 'lower' frequency that is not lower", () => {
+  assert.throws(
+    () =>
+      aliasingCheck(
+        { ...SETTINGS, velocity: 1, depth: 3 } as never,
+      ),
+    {
+      name: "TypeError",
+      message:
+        /^Aliasing check: unknown input 'depth': expected one of velocity, prfHz, transmitFrequencyMHz, sampleDepthCm, angleDeg, soundSpeedMps, lowerTransmitFrequencyMHz, got 3$/,
+    },
+  );
+  assert.throws(() => aliasingCheck(null as never), {
+    name: "TypeError",
+    message:
+      /^Aliasing check: expected 'inputs' as an object with velocity, prfHz, transmitFrequencyMHz, sampleDepthCm, angleDeg, soundSpeedMps, lowerTransmitFrequencyMHz, got null$/,
+  });
+  assert.throws(
+    () =>
+      aliasingCheck({
+        ...SETTINGS,
+        velocity: 1,
+        lowerTransmitFrequencyMHz: 3,
+      }),
+    {
+      name: "RangeError",
+      message:
+        /^Aliasing check: expected 'lowerTransmitFrequencyMHz' < 'transmitFrequencyMHz', got lowerTransmitFrequencyMHz = 3 MHz, transmitFrequencyMHz = 2 MHz$/,
+    },
+  );
+  // A lower frequency given as undefined is the same as not given.
+  const r = aliasingCheck({
+    ...SETTINGS,
+    velocity: 1,
+    lowerTransmitFrequencyMHz: undefined,
+  });
+  assert.equal(r.arguments.values.lowerTransmitFrequencyMHz, undefined);
 });

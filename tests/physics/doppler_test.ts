@@ -1,28 +1,38 @@
 import assert from "node:assert/strict";
 import {
   angleCorrectedVelocity,
+  BLOOD_VELOCITY,
   CLINICAL_CAUTION,
   DEFAULT_SOUND_SPEED_MPS,
+  DOPPLER_SHIFT,
   dopplerShiftFromVelocity,
   evaluate,
-  gum,
-  monteCarlo,
+  INSONATION_ANGLE,
   normal,
+  NYQUIST_VELOCITY,
   nyquistVelocity,
+  propagate,
   rectangular,
   velocityFromDopplerShift,
 } from "../../mod.ts";
+import { close } from "./helpers.ts";
 
-const close = (actual: number, expected: number, tol: number, what: string) =>
-  assert.ok(
-    Math.abs(actual - expected) <= tol,
-    `${what}: expected ${expected} ± ${tol}, got ${actual}`,
-  );
+const base = { dopplerShiftHz: 3000, transmitFrequencyMHz: 2, angleDeg: 0 };
 
 Deno.test("default speed of sound is the soft-tissue 1540 m/s", () => {
   // Soft-tissue c ≈ 1540 m/s (common practice; Kremkau 2015 ch. 2, from memory).
   assert.equal(DEFAULT_SOUND_SPEED_MPS, 1540);
   assert.equal(velocityFromDopplerShift.inputs.soundSpeedMps.default, 1540);
+});
+
+Deno.test("the Doppler calculations take and give the declared quantities", () => {
+  assert.equal(velocityFromDopplerShift.inputs.dopplerShiftHz.quantity, DOPPLER_SHIFT);
+  assert.equal(velocityFromDopplerShift.inputs.angleDeg.quantity, INSONATION_ANGLE);
+  assert.equal(velocityFromDopplerShift.outputs.velocity.quantity, BLOOD_VELOCITY);
+  assert.equal(dopplerShiftFromVelocity.inputs.velocity.quantity, BLOOD_VELOCITY);
+  assert.equal(nyquistVelocity.outputs.nyquistVelocity.quantity, NYQUIST_VELOCITY);
+  // A displayed velocity is a magnitude: its narrower range carries the reason.
+  assert.match(angleCorrectedVelocity.inputs.measuredVelocity.narrowedBecause!, /magnitude/);
 });
 
 Deno.test("Doppler equation: velocity from shift, hand-checked values", () => {
@@ -102,14 +112,24 @@ Deno.test("angle correction: cos θ error under about 6 % below 20°", () => {
   close(at60.outputs.trueVelocity, 4, 1e-12, "60° true velocity");
   // 60° is outside the usual ≤ 20° practice: flagged, not rejected (common practice).
   assert.equal(at60.flags.length, 1);
-  assert.match(
-    at60.flags[0]!,
-    /'angleDeg' = 60 deg lies outside the validated range \[0, 20\] deg/,
+  assert.equal(
+    at60.flags[0],
+    "Angle-corrected velocity: 'angleDeg' (Insonation angle) = 60° lies outside the typical range [0, 20]°: interpret with care",
   );
   // θ = 0 leaves the velocity unchanged.
   const at0 = evaluate(angleCorrectedVelocity, { measuredVelocity: 2.5, angleDeg: 0 });
   assert.equal(at0.outputs.trueVelocity, 2.5);
   assert.equal(at0.outputs.underestimationPercent, 0);
+});
+
+Deno.test("angle correction refuses a corrected velocity no blood can reach", () => {
+  // 8 m/s read at 80°: 8/cos 80° = 46 m/s, beyond the blood-velocity range [−20, 20] m/s
+  // (hand check): an impossible output is an error naming the inputs, not a number.
+  assert.throws(() => evaluate(angleCorrectedVelocity, { measuredVelocity: 8, angleDeg: 80 }), {
+    name: "RangeError",
+    message:
+      /^Angle-corrected velocity: output 'trueVelocity' \(Angle-corrected velocity\) expected in \[-20, 20\] m\/s, got 46\.0\d* from measuredVelocity = 8 m\/s, angleDeg = 80°$/,
+  });
 });
 
 Deno.test("Nyquist limit: hand value and falls with transmit frequency at the same PRF", () => {
@@ -139,10 +159,14 @@ Deno.test("uncertainty: a 2 % shift uncertainty gives 2 % on velocity (GUM and M
     transmitFrequencyMHz: 2,
     angleDeg: 0,
   };
-  const g = gum(velocityFromDopplerShift, inputs);
+  const g = propagate(velocityFromDopplerShift, inputs);
   const v = g.outputs.velocity;
   close(v.standardUncertainty / v.value, 0.02, 1e-6, "GUM relative u");
-  const m = monteCarlo(velocityFromDopplerShift, inputs, { trials: 20000, seed: 7 });
+  const m = propagate(velocityFromDopplerShift, inputs, {
+    method: "monteCarlo",
+    trials: 20000,
+    seed: 7,
+  });
   close(m.outputs.velocity.standardUncertainty / v.value, 0.02, 0.0008, "MC relative u");
 });
 
@@ -152,21 +176,110 @@ Deno.test("uncertainty: angle uniform on [0, 20°] biases the true velocity by E
   const a = (20 * Math.PI) / 180;
   const expected = Math.log(1 / Math.cos(a) + Math.tan(a)) / a;
   close(expected, 1.020949, 1e-6, "analytic mean");
-  const m = monteCarlo(angleCorrectedVelocity, {
+  const m = propagate(angleCorrectedVelocity, {
     measuredVelocity: 1,
     angleDeg: rectangular(0, 20),
-  }, { trials: 100000, seed: 11 });
+  }, { method: "monteCarlo", trials: 100000, seed: 11 });
   // Monte Carlo standard error ≈ 0.017/√1e5 ≈ 5e-5; allow 4e-4.
-  close(m.outputs.trueVelocity.estimate, expected, 4e-4, "MC mean");
+  close(m.outputs.trueVelocity.value, expected, 4e-4, "MC mean");
   // The GUM first-order law at θ = 0 would see zero sensitivity to the angle (∂/∂θ of 1/cos θ
   // vanishes at 0): its uncertainty is zero while Monte Carlo's is not.
-  const g = gum(angleCorrectedVelocity, { measuredVelocity: 1, angleDeg: normal(0, 5) });
+  const g = propagate(angleCorrectedVelocity, { measuredVelocity: 1, angleDeg: normal(0, 5) });
   close(g.outputs.trueVelocity.standardUncertainty, 0, 1e-6, "GUM at θ = 0");
   // ... and the zero sensitivity is flagged rather than reported as certainty.
   assert.ok(
     g.warnings.some((w) =>
-      /First-order propagation is inadequate for 'trueVelocity' with respect to 'angleDeg'/.test(w)
+      /First-order propagation is inadequate for Angle-corrected velocity with respect to Insonation angle/
+        .test(w)
     ),
   );
+  assert.equal(g.outputs.trueVelocity.firstOrderAdequate, false);
   assert.ok(m.outputs.trueVelocity.standardUncertainty > 0.01);
+});
+
+// Bad input: clear errors naming the field, its label, the valid range and the value (project
+// rules, bad-input list); messages from the one validator.
+
+Deno.test("angle ≥ 90° is a RangeError naming the field and [0, 90)", () => {
+  assert.throws(() => evaluate(velocityFromDopplerShift, { ...base, angleDeg: 90 }), {
+    name: "RangeError",
+    message:
+      /^Velocity from Doppler shift: expected 'angleDeg' \(Insonation angle\) in \[0, 90\)°, got 90$/,
+  });
+  assert.throws(() => evaluate(angleCorrectedVelocity, { measuredVelocity: 1, angleDeg: 120 }), {
+    name: "RangeError",
+    message:
+      /^Angle-corrected velocity: expected 'angleDeg' \(Insonation angle\) in \[0, 90\)°, got 120$/,
+  });
+  // 1.6 rad = 91.67° (unit conversion before the range check).
+  assert.throws(() => evaluate(velocityFromDopplerShift, { ...base, angleDeg: "1.6 rad" }), {
+    name: "RangeError",
+    message: /expected 'angleDeg' \(Insonation angle\) in \[0, 90\)°, got "1\.6 rad" \(91\.67/,
+  });
+  assert.throws(() => evaluate(velocityFromDopplerShift, { ...base, angleDeg: -5 }), {
+    name: "RangeError",
+    message: /expected 'angleDeg' \(Insonation angle\) in \[0, 90\)°, got -5$/,
+  });
+  assert.throws(() => evaluate(velocityFromDopplerShift, { ...base, angleDeg: NaN }), {
+    name: "RangeError",
+    message: /expected 'angleDeg' \(Insonation angle\) in \[0, 90\)°, got NaN$/,
+  });
+});
+
+Deno.test("zero or negative frequency is a RangeError naming the field and (0, 100] MHz", () => {
+  for (const f of [0, -2]) {
+    assert.throws(() => evaluate(velocityFromDopplerShift, { ...base, transmitFrequencyMHz: f }), {
+      name: "RangeError",
+      message:
+        /^Velocity from Doppler shift: expected 'transmitFrequencyMHz' \(Transmit frequency\) in \(0, 100\] MHz, got -?[02]$/,
+    });
+  }
+  assert.throws(
+    () => evaluate(velocityFromDopplerShift, { ...base, transmitFrequencyMHz: "-2 MHz" }),
+    {
+      name: "RangeError",
+      message:
+        /^Velocity from Doppler shift: expected 'transmitFrequencyMHz' \(Transmit frequency\) in \(0, 100\] MHz, got "-2 MHz" \(-2 MHz\)$/,
+    },
+  );
+  assert.throws(() => evaluate(nyquistVelocity, { prfHz: 0, transmitFrequencyMHz: 2 }), {
+    name: "RangeError",
+    message:
+      /^Nyquist velocity limit: expected 'prfHz' \(Pulse repetition frequency\) in \(0, 1000000\] Hz, got 0$/,
+  });
+});
+
+Deno.test("a wrong unit or type, or a missing input, is a TypeError naming the field and range", () => {
+  assert.throws(
+    () => evaluate(velocityFromDopplerShift, { ...base, transmitFrequencyMHz: "2 cm" }),
+    {
+      name: "TypeError",
+      message:
+        /^Velocity from Doppler shift: expected 'transmitFrequencyMHz' \(Transmit frequency\) in \(0, 100\] MHz \(a unit convertible to MHz\), got "2 cm"$/,
+    },
+  );
+  assert.throws(
+    () => evaluate(velocityFromDopplerShift, { ...base, angleDeg: [] as unknown as number }),
+    {
+      name: "TypeError",
+      message:
+        /^Velocity from Doppler shift: expected 'angleDeg' \(Insonation angle\) as a number or a quantity in \[0, 90\)°, got an array$/,
+    },
+  );
+  assert.throws(
+    () => evaluate(velocityFromDopplerShift, { dopplerShiftHz: 3000, angleDeg: 0 } as never),
+    {
+      name: "TypeError",
+      message:
+        /^Velocity from Doppler shift: missing input 'transmitFrequencyMHz' \(Transmit frequency\): expected a value in \(0, 100\] MHz, got nothing$/,
+    },
+  );
+});
+
+Deno.test("negative velocity where a magnitude is required is a RangeError", () => {
+  assert.throws(() => evaluate(angleCorrectedVelocity, { measuredVelocity: -1, angleDeg: 0 }), {
+    name: "RangeError",
+    message:
+      /^Angle-corrected velocity: expected 'measuredVelocity' \(Displayed velocity\) in \[0, 10\] m\/s, got -1$/,
+  });
 });

@@ -28,8 +28,12 @@ Deno.test("histogram chart: density integrates to 1 and the GUM curve is N(y, uÂ
 });
 
 Deno.test("histogram chart is deterministic for a seed (snapshot of the spec)", () => {
-  const a = histogramChart(propagate(model, inputs, { method: "monteCarlo", trials: 5_000, seed: 9 }));
-  const b = histogramChart(propagate(model, inputs, { method: "monteCarlo", trials: 5_000, seed: 9 }));
+  const a = histogramChart(
+    propagate(model, inputs, { method: "monteCarlo", trials: 5_000, seed: 9 }),
+  );
+  const b = histogramChart(
+    propagate(model, inputs, { method: "monteCarlo", trials: 5_000, seed: 9 }),
+  );
   assert.deepEqual(a.spec, b.spec);
 });
 
@@ -57,7 +61,12 @@ Deno.test("chart errors: bad spec, unknown output, no samples", () => {
     name: "TypeError",
     message: "Chart: expected a vega-lite spec object, got object",
   });
-  const mc = propagate(model, inputs, { method: "monteCarlo", trials: 1000, seed: 1, keepSamples: false });
+  const mc = propagate(model, inputs, {
+    method: "monteCarlo",
+    trials: 1000,
+    seed: 1,
+    keepSamples: false,
+  });
   assert.throws(() => histogramChart(mc), {
     name: "TypeError",
     message: /expected a Monte Carlo result with its samples, got a result without samples/,

@@ -1,10 +1,11 @@
 import assert from "node:assert/strict";
 import {
   ADULT_REFERENCE_LANG_2015,
+  adultLimitLines,
   adultReferenceRow,
+  adultSeverityTable,
   classifyAdult,
-  classifyAgainstRow,
-  classProbabilities,
+  gradeSeverity,
 } from "../../mod.ts";
 
 // All limits below: Lang RM et al., J Am Soc Echocardiogr 2015;28:1–39, from memory (the rows
@@ -39,20 +40,20 @@ Deno.test("Lang 2015 Table 1 LV dimensions and indexed volumes by sex (from memo
 
 Deno.test("Lang 2015 Table 2 LVEF partitions by sex (from memory)", () => {
   // Table 2: men normal 52–72, mildly abnormal 41–51, moderately 30–40, severely < 30
-  assert.equal(classifyAdult("lvEjectionFraction", "male", 60).class, "normal");
-  assert.equal(classifyAdult("lvEjectionFraction", "male", 52).class, "normal");
-  assert.equal(classifyAdult("lvEjectionFraction", "male", 51).class, "mildly abnormal");
-  assert.equal(classifyAdult("lvEjectionFraction", "male", 41).class, "mildly abnormal");
-  assert.equal(classifyAdult("lvEjectionFraction", "male", 40).class, "moderately abnormal");
-  assert.equal(classifyAdult("lvEjectionFraction", "male", 30).class, "moderately abnormal");
-  assert.equal(classifyAdult("lvEjectionFraction", "male", 29).class, "severely abnormal");
+  assert.equal(classifyAdult("lvEjectionFraction", "male", 60).grade, "normal");
+  assert.equal(classifyAdult("lvEjectionFraction", "male", 52).grade, "normal");
+  assert.equal(classifyAdult("lvEjectionFraction", "male", 51).grade, "mildly abnormal");
+  assert.equal(classifyAdult("lvEjectionFraction", "male", 41).grade, "mildly abnormal");
+  assert.equal(classifyAdult("lvEjectionFraction", "male", 40).grade, "moderately abnormal");
+  assert.equal(classifyAdult("lvEjectionFraction", "male", 30).grade, "moderately abnormal");
+  assert.equal(classifyAdult("lvEjectionFraction", "male", 29).grade, "severely abnormal");
   // Table 2: women normal 54–74, mildly abnormal 41–53
-  assert.equal(classifyAdult("lvEjectionFraction", "female", 53).class, "mildly abnormal");
-  assert.equal(classifyAdult("lvEjectionFraction", "male", 53).class, "normal");
+  assert.equal(classifyAdult("lvEjectionFraction", "female", 53).grade, "mildly abnormal");
+  assert.equal(classifyAdult("lvEjectionFraction", "male", 53).grade, "normal");
   // Above the normal range: not an abnormality class in the partitions (project interpretation)
-  assert.equal(classifyAdult("lvEjectionFraction", "female", 78).class, "above normal range");
+  assert.equal(classifyAdult("lvEjectionFraction", "female", 78).grade, "above normal range");
   // Between printed integer bands: 51.5 % in a man lies below 52 → mildly abnormal (project convention)
-  assert.equal(classifyAdult("lvEjectionFraction", "male", 51.5).class, "mildly abnormal");
+  assert.equal(classifyAdult("lvEjectionFraction", "male", 51.5).grade, "mildly abnormal");
 });
 
 Deno.test("Lang 2015 Table 2 LA volume index partitions, both sexes (from memory)", () => {
@@ -68,8 +69,8 @@ Deno.test("Lang 2015 Table 2 LA volume index partitions, both sexes (from memory
     [12, "below normal range"],
   ];
   for (const [value, cls] of expected) {
-    assert.equal(classifyAdult("laVolumeIndex", "male", value).class, cls, `LAVI ${value}`);
-    assert.equal(classifyAdult("laVolumeIndex", "female", value).class, cls, `LAVI ${value}`);
+    assert.equal(classifyAdult("laVolumeIndex", "male", value).grade, cls, `LAVI ${value}`);
+    assert.equal(classifyAdult("laVolumeIndex", "female", value).grade, cls, `LAVI ${value}`);
   }
 });
 
@@ -79,14 +80,22 @@ Deno.test("Lang 2015 Table 6 LV mass index and RWT; RV basal diameter and TAPSE 
     lower: 49,
     upper: 115,
   });
-  assert.equal(classifyAdult("lvMassIndexLinear", "female", 100).class, "above normal range");
-  assert.equal(classifyAdult("lvMassIndexLinear", "male", 100).class, "normal");
+  assert.equal(classifyAdult("lvMassIndexLinear", "female", 100).grade, "above normal range");
+  assert.equal(classifyAdult("lvMassIndexLinear", "male", 100).grade, "normal");
   // Table 6: RWT upper limit 0.42 for both sexes
-  assert.equal(classifyAdult("relativeWallThickness", "male", 0.45).class, "above normal range");
-  // RV basal diameter > 41 mm abnormal; TAPSE < 17 mm abnormal (one-sided threshold)
-  assert.equal(classifyAdult("rvBasalDiameter", "female", 43).class, "above normal range");
-  assert.equal(classifyAdult("tapse", "male", 15).class, "abnormal");
-  assert.equal(classifyAdult("tapse", "male", 30).class, "normal");
+  assert.equal(classifyAdult("relativeWallThickness", "male", 0.45).grade, "above normal range");
+  // RV basal diameter > 41 mm abnormal (printed in mm, graded in the quantity's cm); TAPSE
+  // < 17 mm abnormal (one-sided threshold)
+  assert.equal(classifyAdult("rvBasalDiameter", "female", "43 mm").grade, "above normal range");
+  assert.equal(classifyAdult("tapse", "male", 15).grade, "abnormal");
+  assert.equal(classifyAdult("tapse", "male", 30).grade, "normal");
+  assert.equal(classifyAdult("rvBasalDiameter", "male", 4.1).grade, "normal");
+  assert.equal(classifyAdult("rvBasalDiameter", "male", 4.15).grade, "above normal range");
+  // LVIDd women 37.8–52.2 mm (Table 1): 5.3 cm lies above
+  assert.equal(
+    classifyAdult("lvInternalDiameterDiastole", "female", 5.3).grade,
+    "above normal range",
+  );
   for (const r of ADULT_REFERENCE_LANG_2015) {
     assert.equal(r.fromMemory, true);
     assert.equal(r.source.year, 2015);
@@ -96,33 +105,49 @@ Deno.test("Lang 2015 Table 6 LV mass index and RWT; RV basal diameter and TAPSE 
 
 Deno.test("adult classification: bad input names the field and value", () => {
   assert.throws(() => classifyAdult("lvEjectionFraction", "unknown" as never, 55), {
-    name: "TypeError",
-    message: `Adult reference: expected 'sex' "male" or "female", got "unknown"`,
+    name: "RangeError",
+    message: `Adult reference: expected 'sex' one of "male", "female", got "unknown"`,
   });
   assert.throws(() => classifyAdult("lvEjectionFractio", "male", 55), {
-    name: "TypeError",
-    message:
-      /^Adult reference: expected 'parameter' in lvInternalDiameterDiastole, .*, got "lvEjectionFractio"$/,
-  });
-  assert.throws(() => classifyAgainstRow(adultReferenceRow("tapse", "male"), NaN), {
     name: "RangeError",
-    message: /expected a finite value in mm, got NaN$/,
+    message:
+      /^Adult reference: expected 'parameter' one of "lvInternalDiameterDiastole", .*, got "lvEjectionFractio"$/,
   });
-  assert.ok(classifyAdult("tapse", "male", 20).cautions.some((c) => /from memory/.test(c)));
+  assert.throws(() => classifyAdult("tapse", "male", NaN), {
+    name: "RangeError",
+    message:
+      /^Severity grading \(TAPSE, adults \(Lang 2015, M-mode\)\): expected 'value' \(TAPSE\) in .* mm, got NaN$/,
+  });
+  const g = classifyAdult("tapse", "male", 20);
+  assert.ok(g.cautions.some((c) => /from memory/.test(c)));
+  assert.ok(g.cautions.some((c) => /Not a diagnosis/.test(c)));
 });
 
 Deno.test("class probabilities from samples sum to one", () => {
-  const row = adultReferenceRow("lvEjectionFraction", "male");
-  const p = classProbabilities(row, Float64Array.from([28, 35, 45, 55, 60]));
+  const table = adultSeverityTable(adultReferenceRow("lvEjectionFraction", "male"));
+  const p = gradeSeverity(table, Float64Array.from([28, 35, 45, 55, 60])).probabilities;
   // hand count against Table 2 partitions (from memory): 1 severe, 1 moderate, 1 mild, 2 normal
-  assert.deepEqual(p, {
-    "severely abnormal": 0.2,
-    "moderately abnormal": 0.2,
-    "mildly abnormal": 0.2,
-    normal: 0.4,
-  });
-  assert.throws(() => classProbabilities(row, []), {
-    name: "TypeError",
-    message: "Class probabilities (LV ejection fraction): expected at least one sample, got 0",
-  });
+  assert.deepEqual(
+    Object.fromEntries(p.filter((c) => c.probability > 0).map((c) => [c.grade, c.probability])),
+    {
+      "severely abnormal": 0.2,
+      "moderately abnormal": 0.2,
+      "mildly abnormal": 0.2,
+      normal: 0.4,
+    },
+  );
+});
+
+Deno.test("limit lines are the band boundaries, in the quantity's unit", () => {
+  // Table 1 LVIDd (from memory): men 42.0–58.4 mm, women 37.8–52.2 mm, shown in cm
+  assert.deepEqual(
+    adultLimitLines("lvInternalDiameterDiastole").map((l) => [l.sex, Number(l.value.toFixed(2))]),
+    [["male", 4.2], ["male", 5.84], ["female", 3.78], ["female", 5.22]],
+  );
+  // TAPSE: one threshold for both sexes, < 17 mm (from memory)
+  assert.deepEqual(adultLimitLines("tapse"), [{
+    sex: "both sexes",
+    value: 17,
+    kind: "normal limit",
+  }]);
 });

@@ -54,7 +54,8 @@ Deno.test("units from headers: brackets, the units option, a trailing unit word;
   });
   assert.throws(() => readTable("height [mmHg],weight [kg]\n180,80\n", { source: "x.csv" }), {
     name: "TypeError",
-    message: "x.csv: column 'height [mmHg]' (Height): expected a unit convertible to cm, got 'mmHg'",
+    message:
+      "x.csv: column 'height [mmHg]' (Height): expected a unit convertible to cm, got 'mmHg'",
   });
 });
 
@@ -66,7 +67,7 @@ Deno.test("bad cells: line-numbered issues naming the column, the value and the 
   assert.throws(() => throwIfErrors(t.issues), {
     name: "TypeError",
     message:
-      `clinic.csv: line 3, expected 'weight [kg]' (Weight) as a number in [0.2, 650] kg, got "abc" (and 1 more problems)`,
+      `clinic.csv: line 3, expected 'weight [kg]' (Weight) as a number in [0.2, 650] kg, got "abc" (and 1 more problem)`,
   });
   assert.throws(() => readTable("id,height [cm],weight [kg]\nC,900,70\n", { onInvalid: "throw" }), {
     name: "RangeError",
@@ -103,11 +104,18 @@ Deno.test("delimiters: comma, semicolon and tab detected from the header line", 
 });
 
 Deno.test("strict UTF-8: an invalid byte is an error with its offset and line, never replaced", () => {
-  // "Ren" + 0xE8: "è" in Latin-1, not UTF-8 (RFC 3629)
-  const bytes = Uint8Array.of(...new TextEncoder().encode("id,v\nRené,1\n"), 0x52, 0x65, 0x6e, 0xe8);
+  // "Ren" + 0xE8: "è" in Latin-1, not UTF-8 (RFC 3629); "é" before it takes two bytes, so the
+  // bad byte is byte 16 (0-based) of line 3
+  const bytes = Uint8Array.of(
+    ...new TextEncoder().encode("id,v\nRené,1\n"),
+    0x52,
+    0x65,
+    0x6e,
+    0xe8,
+  );
   assert.throws(() => decodeUtf8(bytes, "people.csv"), {
     name: "TypeError",
-    message: /^people\.csv: expected UTF-8 text, got an invalid byte 0xe8 at byte 15, line 3/,
+    message: /^people\.csv: expected UTF-8 text, got an invalid byte 0xe8 at byte 16, line 3/,
   });
   assert.throws(() => readTable(bytes, { source: "people.csv" }), TypeError);
   assert.equal(decodeUtf8(new TextEncoder().encode("René"), "x"), "René");

@@ -1,11 +1,5 @@
 import assert from "node:assert/strict";
-import {
-  bsaMosteller,
-  csvTextCell,
-  evaluateTable,
-  readTable,
-  writeTableCsv,
-} from "../../mod.ts";
+import { bsaMosteller, csvTextCell, evaluateTable, readTable, writeTableCsv } from "../../mod.ts";
 
 Deno.test("written CSV reads back: headers label [unit], values as reported, flags per row", () => {
   const t = evaluateTable(
@@ -35,7 +29,7 @@ Deno.test("written CSV reads back: headers label [unit], values as reported, fla
 
 Deno.test("text cells are neutralised against spreadsheet formulas and quoted per RFC 4180", () => {
   // OWASP, CSV injection: prefix a cell starting with = + - @ tab or CR with an apostrophe
-  for (const cell of ["=HYPERLINK(\"x\")", "+1+1", "-2", "@SUM(A1)", "\tx"]) {
+  for (const cell of ['=HYPERLINK("x")', "+1+1", "-2", "@SUM(A1)", "\tx"]) {
     assert.ok(csvTextCell(cell).replace(/^"/, "").startsWith("'"), cell);
   }
   assert.equal(csvTextCell("René"), "René");

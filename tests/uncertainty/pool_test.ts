@@ -7,7 +7,6 @@ import {
   defineCalculation,
   expressionModel,
   normal,
-  planPropagation,
   propagate,
   type PropagateOptions,
   type Propagation,
@@ -15,6 +14,7 @@ import {
   studentT,
   triangular,
 } from "../../mod.ts";
+import { planPropagation } from "../../calc/uncertainty/propagate.ts";
 import { mergeTails, sortedTails } from "../../calc/uncertainty/intervals.ts";
 import { BLOCK_TRIALS, range, runBlocks } from "../../calc/uncertainty/sampling.ts";
 import {

@@ -1,0 +1,242 @@
+/**
+ * The tables of one agreement result (rows of formatted cells with labelled, unit-bearing
+ * headers), shared by the notebook displays (display/agreement.ts) and the method-validation
+ * report (display/method_validation.ts). Internal to display/: not re-exported by the package.
+ *
+ * @module
+ */
+import type { Interval } from "../calc/uncertainty/types.ts";
+import type { Measured } from "../calc/agreement/types.ts";
+import type { BlandAltmanRepeatedResult, BlandAltmanResult } from "../calc/agreement/types.ts";
+import type { RepeatabilityResult } from "../calc/agreement/types.ts";
+import type { IntraclassCorrelationResult } from "../calc/agreement/types.ts";
+import type { ConcordanceResult } from "../calc/agreement/types.ts";
+import type { DemingResult, PassingBablokResult } from "../calc/agreement/types.ts";
+import type { CohenKappaResult, FleissKappaResult } from "../calc/agreement/types.ts";
+import { formatCount, formatInterval, formatNumber, roundLike } from "./format.ts";
+import { labelWithUnit } from "./uncertainty.ts";
+
+// ---------------------------------------------------------------------------------------------
+// Numbers
+
+export const halfWidth = (i: Interval) => (i.upper - i.lower) / 2;
+/** A confidence level as a column header: "95 % CI". */
+export const level = (confidence: number) => `${formatNumber(100 * confidence, 3)} % CI`;
+/** An interval rounded like its estimate. */
+export const ci = (i: Interval, u: number) => formatInterval(i, u);
+/** A p-value: "< 0.001" below 0.001, else two significant digits. */
+export function pValue(p: number): string {
+  return p < 0.001 ? "< 0.001" : formatNumber(p, 2);
+}
+/** A label with the unit of what was measured (none when it was not stated). */
+export const inUnit = (label: string, q: Measured | null) => labelWithUnit(label, q?.unit ?? "1");
+/** A label with the square of the unit (variances). */
+export function inUnitSquared(label: string, q: Measured | null): string {
+  const u = q?.unit ?? "1";
+  if (u === "1") return label;
+  return labelWithUnit(label, /[ /*]/.test(u) ? `(${u})^2` : `${u}^2`);
+}
+/** The title of a result: "<statistic>: <what was measured>". */
+export const titled = (statistic: string, q: Measured | null) =>
+  q ? `${statistic}: ${q.label}` : statistic;
+
+// ---------------------------------------------------------------------------------------------
+// Tables of one result (shared by the notebook displays and the report)
+
+export interface Rows {
+  readonly header: readonly string[];
+  readonly rows: readonly (readonly string[])[];
+}
+
+export function blandAltmanRows(r: BlandAltmanResult): Rows {
+  const q = r.quantity;
+  const [a, b] = r.methodNames;
+  const u = halfWidth(r.biasCi);
+  const m = formatNumber(r.multiplier, 3);
+  const rows: string[][] = [
+    ["Pairs", formatCount(r.n), "", ""],
+    [inUnit(`Bias (mean of ${a} − ${b})`, q), roundLike(r.bias, u), ci(r.biasCi, u), "–"],
+    [inUnit("SD of differences", q), roundLike(r.sdDifferences, u), "–", "–"],
+    ...([["Lower", r.lowerLimit, "−"], ["Upper", r.upperLimit, "+"]] as const).map((
+      [name, l, sign],
+    ) => [
+      inUnit(`${name} limit of agreement (bias ${sign} ${m} SD)`, q),
+      roundLike(l.value, u),
+      ci(l.approximateCi, u),
+      ci(l.exactCi, u),
+    ]),
+  ];
+  const p = r.proportionalBias;
+  if (p) {
+    const us = halfWidth(p.slopeCi);
+    rows.push([
+      "Proportional bias: slope of difference on mean",
+      roundLike(p.slope, us),
+      ci(p.slopeCi, us),
+      `p ${p.pValue < 0.001 ? "" : "= "}${pValue(p.pValue)}`,
+    ]);
+  }
+  return {
+    header: [
+      "Statistic",
+      "Estimate",
+      `${level(r.confidence)} (approximate)`,
+      `${level(r.confidence)} (exact, Carkeet 2015)`,
+    ],
+    rows,
+  };
+}
+
+export function repeatedRows(r: BlandAltmanRepeatedResult): Rows {
+  const q = r.quantity;
+  const [a, b] = r.methodNames;
+  const n = (v: number) => formatNumber(v, 4);
+  const m = formatNumber(r.multiplier, 3);
+  return {
+    header: ["Statistic", "Estimate"],
+    rows: [
+      ["Pairs (subjects)", `${formatCount(r.pairs)} (${formatCount(r.subjects)})`],
+      [inUnit(`Bias (mean of ${a} − ${b})`, q), n(r.bias)],
+      [inUnitSquared("Between-subject variance of differences", q), n(r.betweenSubjectVariance)],
+      [inUnitSquared("Within-subject variance of differences", q), n(r.withinSubjectVariance)],
+      [inUnit("SD of a single difference", q), n(r.sdDifferences)],
+      [
+        inUnit(`Limits of agreement (bias ∓ ${m} SD)`, q),
+        `${n(r.lowerLimit)} to ${n(r.upperLimit)}`,
+      ],
+    ],
+  };
+}
+
+export function repeatabilityCells(r: RepeatabilityResult): string[] {
+  const u = halfWidth(r.withinSubjectSdCi);
+  const uc = halfWidth(r.repeatabilityCoefficientCi);
+  return [
+    `${roundLike(r.withinSubjectSd, u)} ${ci(r.withinSubjectSdCi, u)}`,
+    `${roundLike(r.repeatabilityCoefficient, uc)} ${ci(r.repeatabilityCoefficientCi, uc)}`,
+    r.withinSubjectCv === null
+      ? "undefined (a subject mean ≤ 0)"
+      : `${formatNumber(100 * r.withinSubjectCv, 3)} %`,
+  ];
+}
+
+export function repeatabilityHeader(q: Measured | null, multiplier: number, confidence: number) {
+  return [
+    inUnit(`Within-subject SD s_w [${level(confidence)}]`, q),
+    inUnit(
+      `Repeatability coefficient ${formatNumber(multiplier * Math.SQRT2, 3)}·s_w [${
+        level(confidence)
+      }]`,
+      q,
+    ),
+    "Within-subject CV (RMS)",
+  ];
+}
+
+export function iccRows(r: IntraclassCorrelationResult): Rows {
+  return {
+    header: [
+      "Shrout & Fleiss",
+      "McGraw & Wong",
+      "Model",
+      "Definition",
+      "Reading",
+      "ICC",
+      level(r.confidence),
+      "F (df1, df2)",
+      "p",
+    ],
+    rows: r.forms.map((f) => {
+      const u = halfWidth(f.ci);
+      return [
+        f.form,
+        f.mcGrawWong,
+        f.model,
+        f.definition,
+        f.unit,
+        roundLike(f.value, u),
+        ci(f.ci, u),
+        `${formatNumber(f.f, 4)} (${formatNumber(f.df1, 4)}, ${formatNumber(f.df2, 4)})`,
+        pValue(f.pValue),
+      ];
+    }),
+  };
+}
+
+export function concordanceRows(r: ConcordanceResult): string[][] {
+  const u = halfWidth(r.ci);
+  return [
+    ["Lin's concordance correlation ρ_c", roundLike(r.value, u), ci(r.ci, u), ""],
+    ["Pearson r (precision)", roundLike(r.pearson, u), "–", ""],
+    ["Bias-correction factor C_b (accuracy)", roundLike(r.biasCorrectionFactor, u), "–", ""],
+    ["Location shift u", formatNumber(r.locationShift, 3), "–", ""],
+    ["Scale shift v", formatNumber(r.scaleShift, 3), "–", ""],
+  ];
+}
+
+export function regressionRows(r: DemingResult | PassingBablokResult): string[][] {
+  const us = halfWidth(r.slopeCi);
+  const ui = halfWidth(r.interceptCi);
+  const rows = [
+    [`${r.method} slope`, roundLike(r.slope, us), ci(r.slopeCi, us), ""],
+    [
+      inUnit(`${r.method} intercept`, r.quantity),
+      roundLike(r.intercept, ui),
+      ci(r.interceptCi, ui),
+      "",
+    ],
+  ];
+  if (r.method === "Deming") {
+    rows[0]![3] = `jackknife SE ${formatNumber(r.slopeStandardError, 2)}; error variance ratio ${
+      formatNumber(r.errorVarianceRatio, 3)
+    }`;
+    rows[1]![3] = `jackknife SE ${formatNumber(r.interceptStandardError, 2)}`;
+  } else {
+    rows[0]![3] = `${formatCount(r.slopesUsed)} pairwise slopes`;
+    rows.push([
+      "Cusum linearity statistic",
+      formatNumber(r.linearity.statistic, 3),
+      "–",
+      `${
+        r.linearity.nonLinear ? "exceeds" : "does not exceed"
+      } the 5 % critical value ${r.linearity.criticalValue}`,
+    ]);
+  }
+  return rows;
+}
+
+export function kappaStatistic(weights: CohenKappaResult["weights"]): string {
+  return weights === "none" ? "Cohen's kappa" : `weighted kappa (${weights})`;
+}
+
+export function kappaCells(r: CohenKappaResult): string[] {
+  const u = halfWidth(r.ci);
+  return [
+    formatCount(r.n),
+    formatNumber(r.observedAgreement, 3),
+    formatNumber(r.expectedAgreement, 3),
+    roundLike(r.kappa, u),
+    formatNumber(r.standardError, 2),
+    ci(r.ci, u),
+  ];
+}
+
+export function kappaHeader(confidence: number): string[] {
+  return ["Subjects", "Observed agreement", "Chance agreement", "κ", "SE", level(confidence)];
+}
+
+export function fleissRows(r: FleissKappaResult): Rows {
+  return {
+    header: ["Subjects", "Ratings per subject", "P̄", "P̄e", "κ", "SE under κ = 0", "z", "p"],
+    rows: [[
+      formatCount(r.subjects),
+      formatCount(r.ratersPerSubject),
+      formatNumber(r.observedAgreement, 3),
+      formatNumber(r.expectedAgreement, 3),
+      formatNumber(r.kappa, 3),
+      formatNumber(r.standardErrorNull, 3),
+      formatNumber(r.z, 3),
+      pValue(r.pValue),
+    ]],
+  };
+}

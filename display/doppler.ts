@@ -1,6 +1,0 @@
-/**
- * Notebook displays of doppler results.
- *
- * @module
- */
-export {};
