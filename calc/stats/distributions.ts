@@ -1,17 +1,18 @@
 /**
  * Quantiles and distribution functions used across the project, delegated to the @stdlib
- * packages (well-kept, tested implementations) behind one small typed facade.
+ * packages (well-kept, tested implementations) behind one small typed facade. The t, F and χ²
+ * quantiles invert the library's own CDFs (calc/stats/invert.ts): the library's quantile functions
+ * load a logging package that reads the whole environment at import, which the project refuses
+ * (the calculation module runs with no permission at all).
  *
  * @module
  */
-import tQuantileImpl from "@stdlib/stats-base-dists-t-quantile";
 import tCdfImpl from "@stdlib/stats-base-dists-t-cdf";
 import normalQuantileImpl from "@stdlib/stats-base-dists-normal-quantile";
 import normalCdfImpl from "@stdlib/stats-base-dists-normal-cdf";
-import fQuantileImpl from "@stdlib/stats-base-dists-f-quantile";
 import fCdfImpl from "@stdlib/stats-base-dists-f-cdf";
-import chiSquareQuantileImpl from "@stdlib/stats-base-dists-chisquare-quantile";
 import chiSquareCdfImpl from "@stdlib/stats-base-dists-chisquare-cdf";
+import { quantileByInversion } from "./invert.ts";
 
 function checkProbability(p: number, where: string): void {
   if (!(p >= 0 && p <= 1)) {
@@ -65,7 +66,13 @@ export function normalCdf(z: number): number {
 export function tQuantile(p: number, dof: number): number {
   checkProbability(p, "Student t quantile");
   checkDof(dof, "Student t quantile");
-  return dof === Infinity ? normalQuantileImpl(p, 0, 1) : tQuantileImpl(p, dof);
+  if (dof === Infinity) return normalQuantileImpl(p, 0, 1);
+  if (p === 0) return -Infinity;
+  if (p === 1) return Infinity;
+  // the lower tail by symmetry: the CDF resolves small probabilities better than ones near 1
+  if (p > 0.5) return -tQuantile(1 - p, dof);
+  if (p === 0.5) return 0;
+  return quantileByInversion((t) => tCdfImpl(t, dof), p, -Infinity, normalQuantileImpl(p, 0, 1));
 }
 
 /** Cumulative distribution function of Student's t distribution.
@@ -96,7 +103,9 @@ export function fQuantile(p: number, d1: number, d2: number): number {
   checkProbability(p, "F quantile");
   checkDof(d1, "F quantile");
   checkDof(d2, "F quantile");
-  return fQuantileImpl(p, d1, d2);
+  if (p === 0) return 0;
+  if (p === 1) return Infinity;
+  return quantileByInversion((x) => fCdfImpl(x, d1, d2), p, 0, 1);
 }
 
 /** Cumulative distribution function of the F distribution.
@@ -127,7 +136,9 @@ export function fCdf(x: number, d1: number, d2: number): number {
 export function chiSquareQuantile(p: number, dof: number): number {
   checkProbability(p, "Chi-square quantile");
   checkDof(dof, "Chi-square quantile");
-  return chiSquareQuantileImpl(p, dof);
+  if (p === 0) return 0;
+  if (p === 1) return Infinity;
+  return quantileByInversion((x) => chiSquareCdfImpl(x, dof), p, 0, Math.max(dof, 1e-3));
 }
 
 /** Cumulative distribution function of the χ² distribution.

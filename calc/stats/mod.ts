@@ -4,3 +4,4 @@
  * @module
  */
 export * from "./distributions.ts";
+export { quantileByInversion } from "./invert.ts";
