@@ -6,8 +6,14 @@
  * parses arguments, reads and writes files.
  *
  * Usage: `deno task validate <table.csv> [--subject col] [--rater col] [--replicate col]
- * [--value col] [--unit u] [--label text] [--out dir] [--seed n] [--graded] [--categories a,b,c]
- * [--reference name] [--multiplier 1.96|2] [--confidence 0.95] [--title text]`
+ * [--value col] [--unit u] [--label text] [--encoding label] [--out dir] [--seed n] [--graded]
+ * [--categories a,b,c] [--reference name] [--multiplier 1.96|2] [--confidence 0.95]
+ * [--title text]`
+ *
+ * The table is streamed from the file (its SHA-256 computed on the way), so its size is limited
+ * by the readings held for the statistics, not by the file: a table of several million readings
+ * gives a report (bench/large_table.md has the figures). Charts with more points than
+ * `MAX_CHART_POINTS` are not drawn; the report says which and why.
  *
  * Missing-cell policy: a reading whose value cell is empty is reported by line number and left
  * out; every statistic then states how many subjects it used, and balanced methods (ICC, Fleiss'
@@ -19,15 +25,18 @@
  * @module
  */
 import { parseArgs } from "node:util";
+import { createHash, type Hash } from "node:crypto";
 import {
   InputRangeError,
   InputTypeError,
   methodValidation,
   methodValidationHtml,
   methodValidationMarkdown,
+  type MethodValidationReport,
   missingReadingText,
   type Quantity,
-  readTable,
+  type ReadTableOptions,
+  readTableStream,
   renderIssue,
   statedQuantity,
   type Table,
@@ -49,6 +58,8 @@ const HELP = `Usage: deno task validate <table.csv> [options]
   --unit u           unit of the values in the file (e.g. "mm"; a known quantity is converted from it);
                      required, with --label, when the value column is not a quantity the package knows
   --label text       what was measured, for a value column the package does not know (default: its header)
+  --encoding label   text encoding of the file, e.g. windows-1252 or iso-8859-1 (default utf-8; decoding is
+                     strict: a byte the encoding cannot hold stops the command with its offset and line)
   --out dir          output folder (default "out/validation")
   --seed n           recorded in provenance (all statistics here are deterministic)
   --graded           values are ordered categories: kappa statistics
@@ -81,9 +92,100 @@ function orFail<T>(step: () => T): T {
   }
 }
 
-async function sha256(bytes: Uint8Array<ArrayBuffer>): Promise<string> {
-  const digest = new Uint8Array(await crypto.subtle.digest("SHA-256", bytes));
-  return Array.from(digest, (b) => b.toString(16).padStart(2, "0")).join("");
+/** The file's bytes as a stream, each chunk also fed to `hash` when one is given. */
+async function fileStream(path: string, hash: Hash | null): Promise<ReadableStream<Uint8Array>> {
+  const file = await Deno.open(path, { read: true });
+  if (hash === null) return file.readable;
+  return file.readable.pipeThrough(
+    new TransformStream<Uint8Array, Uint8Array>({
+      transform(chunk, controller) {
+        hash.update(chunk);
+        controller.enqueue(chunk);
+      },
+    }),
+  );
+}
+
+/** Reads the table from the file, streamed; stops with the reader's message on a defect. */
+async function readStreamed(
+  path: string,
+  options: ReadTableOptions,
+  hash: Hash | null,
+): Promise<Table> {
+  let stream: ReadableStream<Uint8Array>;
+  try {
+    stream = await fileStream(path, hash);
+  } catch (e) {
+    return fail([`error: cannot read '${path}': ${(e as Error).message}`]);
+  }
+  try {
+    return await readTableStream(stream, options);
+  } catch (e) {
+    return fail(messagesOf(e));
+  }
+}
+
+/** The pieces of `JSON.stringify(value, null, 2)`, in order, without building the whole text. */
+function* jsonPieces(value: unknown, indent: string): Generator<string> {
+  const v = (value as { toJSON?: () => unknown } | null)?.toJSON
+    ? (value as { toJSON: () => unknown }).toJSON()
+    : value;
+  if (v === null || typeof v !== "object") {
+    yield JSON.stringify(v) ?? "null";
+    return;
+  }
+  const inner = indent + "  ";
+  if (Array.isArray(v)) {
+    if (v.length === 0) return yield "[]";
+    yield "[\n";
+    for (let i = 0; i < v.length; i++) {
+      yield inner;
+      const x = v[i];
+      if (x === undefined || typeof x === "function" || typeof x === "symbol") yield "null";
+      else yield* jsonPieces(x, inner);
+      yield i < v.length - 1 ? ",\n" : "\n";
+    }
+    return yield `${indent}]`;
+  }
+  const keys = Object.keys(v).filter((k) => {
+    const x = (v as Record<string, unknown>)[k];
+    return x !== undefined && typeof x !== "function" && typeof x !== "symbol";
+  });
+  if (keys.length === 0) return yield "{}";
+  yield "{\n";
+  for (let i = 0; i < keys.length; i++) {
+    yield `${inner}${JSON.stringify(keys[i])}: `;
+    yield* jsonPieces((v as Record<string, unknown>)[keys[i]!], inner);
+    yield i < keys.length - 1 ? ",\n" : "\n";
+  }
+  yield `${indent}}`;
+}
+
+/** Writes `JSON.stringify(value, null, 2)` and a line break to a file, in blocks of about 1 MB. */
+async function writeJson(path: string, value: unknown): Promise<void> {
+  const file = await Deno.open(path, { write: true, create: true, truncate: true });
+  const encoder = new TextEncoder();
+  const write = async (text: string) => {
+    const bytes = encoder.encode(text);
+    for (let off = 0; off < bytes.length;) off += await file.write(bytes.subarray(off));
+  };
+  try {
+    let block: string[] = [];
+    let size = 0;
+    for (const piece of jsonPieces(value, "")) {
+      block.push(piece);
+      size += piece.length;
+      if (size >= 1 << 20) {
+        await write(block.join(""));
+        block = [];
+        size = 0;
+      }
+    }
+    block.push("\n");
+    await write(block.join(""));
+  } finally {
+    file.close();
+  }
 }
 
 /** Tool name, version and the pinned dependencies the report depends on, from deno.json. */
@@ -100,22 +202,20 @@ async function toolInfo(): Promise<{ tool: string; dependencies: string[] }> {
   };
 }
 
-/** Reads the table with the one reader; a second time only when the value column must be
- * mapped (a unit or quantity stated on the command line, text for graded findings). */
-function readStudyTable(
-  bytes: Uint8Array,
-  source: string,
+/** The column mapping a second reading needs (a unit or quantity stated on the command line,
+ * text for graded findings), or null when the table as read will do. */
+function remapping(
+  table: Table,
+  mapped: Readonly<Record<string, string | Quantity>>,
   design: ValidationDesignOptions,
   stated: { unit?: string | undefined; label?: string | undefined },
-): Table {
-  const mapped = validationReadOptions(design).columns;
-  const table = orFail(() => readTable(bytes, { source, columns: mapped }));
+): Pick<ReadTableOptions, "columns" | "units"> | null {
   const header = orFail(() => validationColumns(table, design)).value;
   const column = [...table.columns.values()].find((c) => c.header === header)!;
   const columns: Record<string, string | Quantity> = { ...mapped };
   const units: Record<string, string> = {};
   if (design.graded) {
-    if (column.kind === "text") return table;
+    if (column.kind === "text") return null;
     columns[header] = "text";
   } else if (column.kind === "text") {
     if (stated.unit === undefined) {
@@ -132,8 +232,26 @@ function readStudyTable(
       ]);
     }
     units[header] = stated.unit;
-  } else return table;
-  return orFail(() => readTable(bytes, { source, columns, units }));
+  } else return null;
+  return { columns, units };
+}
+
+/** Reads the table with the one reader, streamed (hashing the bytes on the first pass); a second
+ * time only when the value column must be mapped, the first table dropped before. */
+async function readStudyTable(
+  path: string,
+  encoding: string | undefined,
+  design: ValidationDesignOptions,
+  stated: { unit?: string | undefined; label?: string | undefined },
+  hash: Hash,
+): Promise<Table> {
+  const mapped = validationReadOptions(design).columns;
+  const common = { source: path, ...(encoding !== undefined ? { encoding } : {}) };
+  let first: Table | null = await readStreamed(path, { ...common, columns: mapped }, hash);
+  const remap = remapping(first, mapped, design, stated);
+  if (remap === null) return first;
+  first = null; // released before the second pass
+  return await readStreamed(path, { ...common, ...remap }, null);
 }
 
 async function main(): Promise<void> {
@@ -155,6 +273,7 @@ async function main(): Promise<void> {
       multiplier: { type: "string", default: "1.96" },
       confidence: { type: "string", default: "0.95" },
       title: { type: "string" },
+      encoding: { type: "string" },
       help: { type: "boolean", default: false },
     },
   });
@@ -181,12 +300,6 @@ async function main(): Promise<void> {
   }
 
   progress(`reading ${path}`);
-  let bytes: Uint8Array<ArrayBuffer>;
-  try {
-    bytes = await Deno.readFile(path);
-  } catch (e) {
-    fail([`error: cannot read '${path}': ${(e as Error).message}`]);
-  }
   const design: ValidationDesignOptions = {
     ...(opt.subject !== undefined ? { subject: opt.subject } : {}),
     ...(opt.rater !== undefined ? { observer: opt.rater } : {}),
@@ -197,30 +310,18 @@ async function main(): Promise<void> {
       ? { categories: opt.categories.split(",").map((c) => c.trim()) }
       : {}),
   };
-  const table = readStudyTable(bytes, path, design, { unit: opt.unit, label: opt.label });
+  const hash = createHash("sha256");
+  const table = await readStudyTable(path, opt.encoding, design, {
+    unit: opt.unit,
+    label: opt.label,
+  }, hash);
+  const inputSha256 = hash.digest("hex");
 
-  progress("checking the readings");
-  const study = orFail(() => validationReadings(table, design));
-  const errors = study.issues.filter((i) => i.severity === "error");
-  if (errors.length > 0) {
-    fail([
-      `error: ${errors.length} problem(s) in ${path}; nothing was computed:`,
-      ...errors.map((i) => `  ${renderIssue(i)}`),
-      ...study.missing.map((m) =>
-        `  ${
-          missingReadingText(m)
-        }: empty value cell (would be left out under the missing-cell policy)`
-      ),
-    ]);
-  }
-  progress(
-    `${study.readings.length} readings, ${study.subjects.length} subjects, ${study.observers.length} observers/methods`,
-  );
-
+  progress("analysing the readings");
   const { tool, dependencies } = await toolInfo();
-  const inputSha256 = await sha256(bytes);
-  const report = orFail(() =>
-    methodValidation(table, {
+  let report: MethodValidationReport;
+  try {
+    report = methodValidation(table, {
       ...design,
       ...(opt.reference !== undefined ? { reference: opt.reference } : {}),
       multiplier,
@@ -234,7 +335,26 @@ async function main(): Promise<void> {
         date: new Date().toISOString(),
         seed,
       },
-    })
+    });
+  } catch (e) {
+    // a defective table: every problem with its line, and the empty value cells for context
+    const study = orFail(() => validationReadings(table, design));
+    const errors = study.issues.filter((i) => i.severity === "error");
+    if (errors.length > 0) {
+      fail([
+        `error: ${errors.length} problem(s) in ${path}; nothing was computed:`,
+        ...errors.map((i) => `  ${renderIssue(i)}`),
+        ...study.missing.map((m) =>
+          `  ${
+            missingReadingText(m)
+          }: empty value cell (would be left out under the missing-cell policy)`
+        ),
+      ]);
+    }
+    return fail(messagesOf(e));
+  }
+  progress(
+    `${report.data.readingsUsed} readings, ${report.data.subjects} subjects, ${report.data.observers.length} observers/methods`,
   );
   const svgs: Record<string, string> = {};
   for (const figure of report.figures) {
@@ -249,9 +369,10 @@ async function main(): Promise<void> {
   }
   await Deno.writeTextFile(`${opt.out}/report.html`, methodValidationHtml(report, { svgs }));
   await Deno.writeTextFile(`${opt.out}/report.md`, methodValidationMarkdown(report));
-  // results.json: the report without the readings (the input file holds them; its hash is above)
+  // results.json: the report without the readings (the input file holds them; its hash is above),
+  // written piece by piece: for millions of readings the text would pass the longest string
   const { readings: _readings, ...results } = report;
-  await Deno.writeTextFile(`${opt.out}/results.json`, JSON.stringify(results, null, 2) + "\n");
+  await writeJson(`${opt.out}/results.json`, results);
   progress(`done: ${opt.out}/report.html, ${opt.out}/report.md`);
 }
 

@@ -5,17 +5,23 @@
  * With no paths, every `*.ipynb` in notebooks/ and examples/ is run. Relative paths given on the
  * command line are taken from the folder the command was typed in (`INIT_CWD` under `deno task`);
  * the defaults (notebooks/, examples/, out/notebooks) from the current folder of the process,
- * which `deno task` sets to the folder of the deno.json defining the task. Exit status: 0 when
- * every notebook ran; 1 when a cell failed, timed out or the kernel died; 2 for bad input (usage,
- * a missing notebook, invalid JSON, a non-Deno kernelspec); 3 when the kernel could not be
- * started (e.g. the deno binary is missing); 130 when interrupted (Ctrl-C) or terminated.
+ * which `deno task` sets to the folder of the deno.json defining the task.
+ *
+ * Exit status ({@linkcode EXIT_CODES}, {@linkcode SIGNAL_EXIT_CODES}): 0 when every notebook ran;
+ * 1 when a cell failed, timed out (`--timeout`) or the kernel died; 2 for bad input (usage, a
+ * missing notebook, invalid JSON, a non-Deno kernelspec); 3 when the kernel could not be started
+ * (e.g. the deno binary is missing); 128 + the signal number when stopped by a signal: 130 for
+ * SIGINT (Ctrl-C), 143 for SIGTERM. A timed-out or interrupted run stops the kernel (interrupt,
+ * then kill its process group) and writes `*.partial.ipynb` beside the notebook with the outputs
+ * so far and an error output saying why: the limit, or the signal.
  *
  * @module
  */
 import { parseArgs } from "node:util";
 import { isAbsolute, relative, resolve } from "node:path";
 import { findNotebooks } from "./find_notebooks.ts";
-import { runNotebook, type RunResult } from "./runner.ts";
+import { runNotebook } from "./isolation.ts";
+import type { RunResult } from "./runner.ts";
 
 const USAGE = `Usage: deno task notebooks [paths...] [options]
 
@@ -30,16 +36,30 @@ Options:
   -h, --help         show this help
 
 With no paths, runs every *.ipynb in notebooks/ and examples/ (skipping *.partial.ipynb).
+A cell that fails, passes --timeout or is interrupted leaves NAME.partial.ipynb beside the
+notebook: the outputs so far and an error output saying why.
+
+Exit status: 0 all ran; 1 a cell failed or timed out, or the kernel died; 2 bad input;
+3 the kernel could not be started; 130 interrupted by SIGINT (Ctrl-C); 143 by SIGTERM.
 Relative paths you give (notebooks, --out, --deno) are taken from the folder you are in; the
 defaults (notebooks/, examples/, out/notebooks) from the project folder where the task is defined.`;
 
-/** Exit status per outcome. */
+/** Exit status per outcome ("interrupted" by anything but a signal below). */
 export const EXIT_CODES: Readonly<Record<RunResult["status"], number>> = {
   ok: 0,
   failed: 1,
   invalid: 2,
   kernel: 3,
   interrupted: 130,
+};
+
+/**
+ * Exit status when stopped by a signal: 128 + the signal number, the shell convention (signal
+ * numbers from POSIX signal.h as Linux defines them, signal(7): SIGINT 2, SIGTERM 15).
+ */
+export const SIGNAL_EXIT_CODES: Readonly<Record<"SIGINT" | "SIGTERM", number>> = {
+  SIGINT: 130,
+  SIGTERM: 143,
 };
 
 /**
@@ -126,14 +146,17 @@ export async function main(args: string[]): Promise<number> {
   }
 
   const controller = new AbortController();
-  const signals: Deno.Signal[] = ["SIGINT", "SIGTERM"];
-  const onSignal = () => {
-    if (!controller.signal.aborted) {
-      console.error("\nInterrupted: stopping the kernel…");
-      controller.abort();
-    }
-  };
-  for (const s of signals) Deno.addSignalListener(s, onSignal);
+  const signals = ["SIGINT", "SIGTERM"] as const;
+  const listeners = signals.map((name) => {
+    const listener = () => {
+      if (!controller.signal.aborted) {
+        console.error(`\nInterrupted by ${name}: stopping the kernel…`);
+        controller.abort(name); // forwarded to the notebook client and named in the partial
+      }
+    };
+    Deno.addSignalListener(name, listener);
+    return [name, listener] as const;
+  });
 
   const results: RunResult[] = [];
   try {
@@ -153,7 +176,7 @@ export async function main(args: string[]): Promise<number> {
       }
     }
   } finally {
-    for (const s of signals) Deno.removeSignalListener(s, onSignal);
+    for (const [name, listener] of listeners) Deno.removeSignalListener(name, listener);
   }
 
   const count = (status: RunResult["status"]) => results.filter((r) => r.status === status).length;
@@ -165,7 +188,9 @@ export async function main(args: string[]): Promise<number> {
     );
     for (const r of results) console.error(`  ${r.status.padEnd(11)} ${r.path}`);
   }
-  if (controller.signal.aborted) return EXIT_CODES.interrupted;
+  if (controller.signal.aborted) {
+    return SIGNAL_EXIT_CODES[controller.signal.reason as "SIGINT" | "SIGTERM"];
+  }
   return Math.max(0, ...results.map((r) => EXIT_CODES[r.status]));
 }
 

@@ -11,6 +11,7 @@
  */
 import { randomBytes, randomUUID } from "node:crypto";
 import * as zmq from "zeromq";
+import { drainInBatches } from "./drain.ts";
 import {
   createMessage,
   deserializeMessage,
@@ -67,6 +68,11 @@ export interface KernelStartOptions {
    * the npm zeromq addon under Deno now and then (SIGSEGV), and process exit frees them anyway.
    */
   closeSockets?: boolean;
+  /**
+   * Gives up the start when it fires (checked at least every 2.5 s): the kernel is killed and
+   * `start` rejects with a {@linkcode KernelError} saying so.
+   */
+  signal?: AbortSignal;
 }
 
 /** The outcome of {@linkcode DenoKernel.execute}. */
@@ -82,6 +88,11 @@ export interface ExecuteOutcome {
   error?: { ename: string; evalue: string; traceback: string[] };
   /** Milliseconds from request to completion. */
   elapsedMs: number;
+  /**
+   * True when the time limit passed after the code had finished but while its output was still
+   * arriving (status "timeout"): the stored output is incomplete.
+   */
+  outputPending?: boolean;
 }
 
 /** Options of {@linkcode DenoKernel.execute}. */
@@ -151,8 +162,17 @@ export function resolveDenoPath(explicit?: string): string {
   return Deno.execPath();
 }
 
-/** Quiet time on iopub after "idle" before a cell counts as finished, in milliseconds. */
-const SETTLE_MS = 60;
+/**
+ * The start of the marker an output barrier prints (a random id follows), by which the end of a
+ * cell's console output is recognised; see {@linkcode DenoKernel.execute}.
+ */
+export const OUTPUT_BARRIER = "sonorigor-output-barrier-";
+
+/**
+ * Quiet time on iopub after a failed barrier (its code threw, so no marker comes) after which a
+ * cell's output counts as complete, in milliseconds.
+ */
+const BARRIER_QUIET_MS = 1_000;
 
 const sleep = (ms: number) => new Promise<void>((resolve) => setTimeout(resolve, ms));
 
@@ -164,6 +184,33 @@ class SendQueue {
     const next = this.#tail.then(() => this.socket.send(frames));
     this.#tail = next.catch(() => {});
     return next;
+  }
+}
+
+/** Wakes a waiting loop when what it waits for may have happened. */
+class Progress {
+  #wake: () => void = () => {};
+
+  /** Wakes the current wait, if any. */
+  notify(): void {
+    this.#wake();
+  }
+
+  /** Waits up to `ms` for {@linkcode Progress.notify}, an abort or `end`. */
+  async wait(ms: number, signal: AbortSignal | undefined, end: Promise<unknown>): Promise<void> {
+    let timer: ReturnType<typeof setTimeout> | undefined;
+    const onAbort = () => this.#wake();
+    await Promise.race([
+      new Promise<void>((resolve) => {
+        this.#wake = resolve;
+        timer = setTimeout(resolve, Math.max(0, ms));
+        signal?.addEventListener("abort", onAbort, { once: true });
+      }),
+      end,
+    ]);
+    clearTimeout(timer);
+    signal?.removeEventListener("abort", onAbort);
+    this.#wake = () => {};
   }
 }
 
@@ -179,7 +226,8 @@ export class DenoKernel {
   exitStatus: Deno.CommandStatus | null = null;
 
   readonly #child: Deno.ChildProcess;
-  readonly #connectionDir: string;
+  /** The private temporary folder holding the connection file (removed by `kill`). */
+  readonly connectionFolder: string;
   readonly #session = randomUUID();
   readonly #shell = new zmq.Dealer({ linger: 0 });
   readonly #control = new zmq.Dealer({ linger: 0 });
@@ -201,7 +249,7 @@ export class DenoKernel {
     this.#child = child;
     this.pid = child.pid;
     this.connection = connection;
-    this.#connectionDir = dir;
+    this.connectionFolder = dir;
     this.#exited = child.status.then((s) => (this.exitStatus = s));
     this.#drain(child.stdout, false);
     this.#drain(child.stderr, true);
@@ -249,7 +297,20 @@ export class DenoKernel {
     const kernel = new DenoKernel(child, connection, dir);
     kernel.#closeSockets = options.closeSockets ?? true;
     try {
-      await kernel.#connect(options.startupTimeoutMs ?? 60_000);
+      const startupMs = options.startupTimeoutMs ?? 60_000;
+      const deadline = Date.now() + startupMs;
+      await kernel.#connect(startupMs, options.signal);
+      // the first barrier saves the console functions later barriers print with
+      const ready = await kernel.#outputBarrier(undefined, deadline, options.signal);
+      if (ready === "died") throw kernel.#diedError("while starting");
+      if (ready === "aborted") throw new KernelError("Kernel start interrupted");
+      if (ready === "timeout") {
+        throw new KernelError(
+          `Kernel did not deliver console output within ${
+            startupMs / 1000
+          } s${kernel.#stderrSuffix()}`,
+        );
+      }
     } catch (error) {
       await kernel.kill();
       throw error;
@@ -277,29 +338,28 @@ export class DenoKernel {
     return `tcp://${this.connection.ip}:${port}`;
   }
 
-  async #receiveLoop(socket: zmq.Readable & zmq.Socket, iopub: boolean): Promise<void> {
-    while (!this.#closed) {
-      let frames: Uint8Array[];
-      try {
-        frames = await socket.receive();
-      } catch {
-        return; // socket closed
-      }
+  /**
+   * Dispatches every message of a socket to its waiter or listener, in bounded batches: a flood
+   * of iopub messages must not starve the timers, signal listeners and process events that stop
+   * a cell (see drain.ts).
+   */
+  #receiveLoop(socket: zmq.Readable & zmq.Socket, iopub: boolean): Promise<void> {
+    return drainInBatches(() => socket.receive(), (frames) => {
       let message: JupyterMessage;
       try {
         message = deserializeMessage(frames, this.connection.key);
       } catch (error) {
         console.error(`warning: dropped a kernel message: ${(error as Error).message}`);
-        continue;
+        return;
       }
       const parentId = message.parent_header.msg_id;
-      if (parentId === undefined) continue;
+      if (parentId === undefined) return;
       const handler = iopub ? this.#iopubListeners.get(parentId) : this.#replyWaiters.get(parentId);
       handler?.(message);
-    }
+    }, { isOpen: () => !this.#closed });
   }
 
-  async #connect(timeoutMs: number): Promise<void> {
+  async #connect(timeoutMs: number, signal: AbortSignal | undefined): Promise<void> {
     this.#shell.connect(this.#url(this.connection.shell_port));
     this.#control.connect(this.#url(this.connection.control_port));
     this.#stdin.connect(this.#url(this.connection.stdin_port));
@@ -316,6 +376,7 @@ export class DenoKernel {
     while (true) {
       const remaining = deadline - Date.now();
       if (this.exitStatus !== null) throw this.#diedError("while starting");
+      if (signal?.aborted) throw new KernelError("Kernel start interrupted");
       if (remaining <= 0) {
         throw new KernelError(
           `Kernel did not answer kernel_info_request within ${
@@ -414,7 +475,17 @@ export class DenoKernel {
   }
 
   /**
-   * Executes code and waits until the kernel has replied and gone idle for this request.
+   * Executes code and waits until the kernel has replied, gone idle, and delivered all the
+   * console output of the code.
+   *
+   * The Deno kernel forwards console output asynchronously, after "idle", and labels each stream
+   * message with the request running when it is sent: the tail of a flood would otherwise land
+   * in the next cell, or be lost when the kernel shuts down. So once the code has finished, an
+   * output barrier runs (see {@linkcode OUTPUT_BARRIER}) and the stream text that comes before
+   * its markers, the rest of the cell's output, is passed to `onIopub` too.
+   *
+   * The time limit covers the code and the delivery of its output, and is checked while
+   * messages pour in; an abort or the kernel's exit ends the wait at any point.
    *
    * @param code The cell source.
    * @param options Time limit, iopub callback, abort signal.
@@ -422,36 +493,28 @@ export class DenoKernel {
    */
   async execute(code: string, options: ExecuteOptions): Promise<ExecuteOutcome> {
     const started = Date.now();
-    const request = createMessage("execute_request", {
-      code,
-      silent: false,
-      store_history: true,
-      user_expressions: {},
-      allow_stdin: false,
-      stop_on_error: true,
-    }, { session: this.#session });
+    const deadline = started + options.timeoutMs;
+    const { signal } = options;
+    const progress = new Progress();
+    const request = this.#request(code, false);
     const id = request.header.msg_id;
     let reply: JupyterMessage | null = null;
     let idle = false;
-    let wake: () => void = () => {};
-    const progressed = () => wake();
-    let lastIopubAt = Date.now();
+    // The listener stays after this call: console output that a timer of the cell prints later
+    // is labelled with this request (or its barrier's) until the next cell runs.
     this.#iopubListeners.set(id, (message) => {
-      lastIopubAt = Date.now();
+      if (Date.now() >= deadline) progress.notify(); // the limit passed while messages pour in
       options.onIopub?.(message);
       if (message.header.msg_type === "status" && message.content.execution_state === "idle") {
         idle = true;
-        progressed();
+        progress.notify();
       }
     });
     this.#replyWaiters.set(id, (message) => {
       reply = message;
-      progressed();
+      progress.notify();
     });
-    const finish = (status: ExecuteOutcome["status"]): ExecuteOutcome => {
-      // The iopub listener stays: the Deno kernel forwards console output asynchronously, so a
-      // stream message may arrive after "idle", even while the next cell runs; it still carries
-      // this request as parent and so still reaches this cell's outputs.
+    const finish = (status: ExecuteOutcome["status"], outputPending = false): ExecuteOutcome => {
       this.#replyWaiters.delete(id);
       const content = (reply as JupyterMessage | null)?.content;
       const count = content?.execution_count;
@@ -460,6 +523,7 @@ export class DenoKernel {
         executionCount: typeof count === "number" ? count : null,
         elapsedMs: Date.now() - started,
       };
+      if (outputPending) outcome.outputPending = true;
       if (status === "error" && content !== undefined) {
         outcome.error = {
           ename: String(content.ename ?? "Error"),
@@ -469,38 +533,112 @@ export class DenoKernel {
       }
       return outcome;
     };
-    if (this.exitStatus !== null) return finish("died");
+    const before = this.#stopReason(deadline, signal);
+    if (before !== undefined) return finish(before); // not sent: the kernel stays idle
     await this.#shellQueue.send(serializeMessage(request, this.connection.key));
-    const deadline = started + options.timeoutMs;
-    while (true) {
-      if (reply !== null && idle) {
-        // let late console output settle: wait for a short quiet spell on iopub
-        const quiet = Date.now() - lastIopubAt;
-        if (quiet >= SETTLE_MS || Date.now() - deadline >= 0) {
-          const status = (reply as JupyterMessage).content.status;
-          return finish(status === "ok" ? "ok" : "error");
-        }
-        await sleep(SETTLE_MS - quiet);
-        continue;
-      }
-      if (options.signal?.aborted) return finish("aborted");
-      if (this.exitStatus !== null) return finish("died");
-      const remaining = deadline - Date.now();
-      if (remaining <= 0) return finish("timeout");
-      let timer: ReturnType<typeof setTimeout> | undefined;
-      let onAbort: (() => void) | undefined;
-      await Promise.race([
-        new Promise<void>((resolve) => {
-          wake = resolve;
-          timer = setTimeout(resolve, remaining);
-          onAbort = () => resolve();
-          options.signal?.addEventListener("abort", onAbort, { once: true });
-        }),
-        this.#exited,
-      ]);
-      clearTimeout(timer);
-      if (onAbort !== undefined) options.signal?.removeEventListener("abort", onAbort);
+    while (reply === null || !idle) {
+      const stop = this.#stopReason(deadline, signal);
+      if (stop !== undefined) return finish(stop);
+      await progress.wait(deadline - Date.now(), signal, this.#exited);
     }
+    const status = (reply as JupyterMessage).content.status === "ok" ? "ok" : "error";
+    const delivery = await this.#outputBarrier(options.onIopub, deadline, signal);
+    if (delivery === "delivered" || delivery === "unconfirmed") return finish(status);
+    if (delivery === "timeout") {
+      // The code ended in time, but its output is still pouring in. "ok" here would let the
+      // rest land in the next cell or be lost at shutdown: the cell has not finished.
+      return status === "ok" ? finish("timeout", true) : finish("error");
+    }
+    return finish(delivery);
+  }
+
+  /** Why a wait must end now: an abort, the kernel's exit, or the deadline. */
+  #stopReason(
+    deadline: number,
+    signal: AbortSignal | undefined,
+  ): "aborted" | "died" | "timeout" | undefined {
+    if (signal?.aborted) return "aborted";
+    if (this.exitStatus !== null) return "died";
+    if (Date.now() >= deadline) return "timeout";
+    return undefined;
+  }
+
+  /**
+   * Runs an output barrier: a silent request, kept out of the history (no execution count), that
+   * prints a unique marker on stdout and on stderr through console functions saved at the first
+   * barrier (so a cell that replaces `console` cannot silence it). The kernel delivers console
+   * output in order, so once both markers have come, all console output printed before the
+   * barrier has been delivered: the text before the markers goes to `onOutput`, the markers do
+   * not.
+   *
+   * @param onOutput Receives the stream messages (markers removed) labelled with the barrier.
+   * @param deadline Time (ms since the epoch) after which the wait gives up.
+   * @param signal Ends the wait when it fires.
+   * @returns "delivered"; "unconfirmed" when the barrier code itself failed and iopub stayed
+   *   quiet for a second; else why the wait ended.
+   */
+  async #outputBarrier(
+    onOutput: ((message: JupyterMessage) => void) | undefined,
+    deadline: number,
+    signal: AbortSignal | undefined,
+  ): Promise<"delivered" | "unconfirmed" | "aborted" | "died" | "timeout"> {
+    const marker = `${OUTPUT_BARRIER}${randomUUID()}`;
+    const request = this.#request(
+      `(globalThis[Symbol.for("sonorigor.outputBarrier")] ??= ` +
+        `[console.log.bind(console), console.error.bind(console)])` +
+        `.forEach((print) => print(${JSON.stringify(marker)}));`,
+      true,
+    );
+    const id = request.header.msg_id;
+    const progress = new Progress();
+    const marked = new Set<string>();
+    let reply: JupyterMessage | null = null;
+    let lastIopubAt = Date.now();
+    this.#iopubListeners.set(id, (message) => {
+      lastIopubAt = Date.now();
+      if (lastIopubAt >= deadline) progress.notify();
+      if (message.header.msg_type !== "stream") return;
+      const text = String(message.content.text ?? "");
+      const rest = text.replace(`${marker}\n`, "");
+      if (rest !== text) {
+        marked.add(String(message.content.name));
+        progress.notify();
+      }
+      if (rest !== "") onOutput?.({ ...message, content: { ...message.content, text: rest } });
+    });
+    this.#replyWaiters.set(id, (message) => {
+      reply = message;
+      progress.notify();
+    });
+    try {
+      await this.#shellQueue.send(serializeMessage(request, this.connection.key));
+      while (marked.size < 2) {
+        const stop = this.#stopReason(deadline, signal);
+        if (stop !== undefined) return stop;
+        let waitMs = deadline - Date.now();
+        if ((reply as JupyterMessage | null)?.content.status === "error") {
+          const quiet = Date.now() - lastIopubAt;
+          if (quiet >= BARRIER_QUIET_MS) return "unconfirmed";
+          waitMs = Math.min(waitMs, BARRIER_QUIET_MS - quiet);
+        }
+        await progress.wait(waitMs, signal, this.#exited);
+      }
+      return "delivered";
+    } finally {
+      this.#replyWaiters.delete(id);
+    }
+  }
+
+  /** An execute_request; a barrier is silent and kept out of the history. */
+  #request(code: string, barrier: boolean): JupyterMessage {
+    return createMessage("execute_request", {
+      code,
+      silent: barrier,
+      store_history: !barrier,
+      user_expressions: {},
+      allow_stdin: false,
+      stop_on_error: true,
+    }, { session: this.#session });
   }
 
   /**
@@ -532,8 +670,11 @@ export class DenoKernel {
   }
 
   /**
-   * Kills the kernel's whole process group (SIGTERM, then SIGKILL), waits for the kernel process
-   * to be reaped, closes the sockets and removes the connection file. Safe to call twice.
+   * Stops the kernel's whole process group: an interrupt first (SIGINT, as a Jupyter front end
+   * interrupts a kernel without a message interrupt mode; the Deno kernel exits on it), then
+   * SIGTERM, then SIGKILL, each after a short grace; waits for the kernel process to be reaped,
+   * closes the sockets and removes the connection file. Safe to call twice. Takes at most about
+   * 2 s plus the reaping.
    *
    * @returns When the kernel process has exited and been reaped.
    */
@@ -545,9 +686,10 @@ export class DenoKernel {
         // no such process group: already gone
       }
     };
-    if (this.exitStatus === null) {
-      signalGroup("SIGTERM");
-      await Promise.race([this.#exited, sleep(1_500)]);
+    for (const [signal, graceMs] of [["SIGINT", 500], ["SIGTERM", 1_500]] as const) {
+      if (this.exitStatus !== null) break;
+      signalGroup(signal);
+      await Promise.race([this.#exited, sleep(graceMs)]);
     }
     signalGroup("SIGKILL"); // also reaches anything the notebook started in the group
     await this.#exited;
@@ -557,7 +699,7 @@ export class DenoKernel {
         for (const s of [this.#shell, this.#control, this.#stdin, this.#iopub, this.#hb]) s.close();
       }
       this.#iopubListeners.clear();
-      await Deno.remove(this.#connectionDir, { recursive: true }).catch(() => {});
+      await Deno.remove(this.connectionFolder, { recursive: true }).catch(() => {});
     }
   }
 }

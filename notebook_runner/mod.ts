@@ -4,7 +4,11 @@
  *
  * - {@linkcode runNotebook} runs one notebook in a child process: code cells in order, outputs
  *   stored as nbformat 4.5, the first failing cell reported with its source line and traceback,
- *   the kernel's process group always stopped; a failed run leaves `*.partial.ipynb` beside it.
+ *   the kernel's process group always stopped; a failed, timed-out or interrupted run leaves
+ *   `*.partial.ipynb` beside it with the outputs so far and an error output saying why.
+ * - Per-cell limits and stop signals hold even while a cell floods output: stream text is
+ *   accumulated in linear time ({@linkcode OutputCollector}) and kernel messages are drained in
+ *   bounded batches ({@linkcode drainInBatches}) so timers and signals keep their turn.
  * - {@linkcode findNotebooks} lists the notebooks of a project's folders.
  * - {@linkcode parseNotebook}, {@linkcode notebookProblems} and {@linkcode assertValidNotebook}
  *   read and check nbformat 4 documents; {@linkcode notebookToHtml} renders one offline.
@@ -58,6 +62,7 @@ export {
   resolveDenoPath,
 } from "./kernel.ts";
 export {
+  appendLines,
   assertValidNotebook,
   type Cell,
   checkDenoKernelspec,
@@ -73,16 +78,21 @@ export {
   NotebookInputError,
   notebookProblems,
   type Output,
+  OutputCollector,
   parseNotebook,
   type RawCell,
   type StreamOutput,
 } from "./nbformat.ts";
 export { type JupyterMessage, type MessageHeader, PROTOCOL_VERSION } from "./protocol.ts";
+export { drainInBatches, type DrainOptions, yieldToEventLoop } from "./drain.ts";
+export { DEFAULT_STOP_GRACE_SECONDS, runNotebook } from "./isolation.ts";
 export {
+  interruptionText,
+  markStopped,
   partialPathOf,
-  runNotebook,
-  runNotebookInProcess,
-  type RunOptions,
-  type RunResult,
+  readNotebook,
+  type StopRecord,
+  timeoutText,
   writeNotebook,
-} from "./runner.ts";
+} from "./notebook_files.ts";
+export { runNotebookInProcess, type RunOptions, type RunResult } from "./runner.ts";

@@ -378,13 +378,55 @@ export function checkDenoKernelspec(notebook: Notebook, label: string): boolean 
 }
 
 /**
+ * Appends text to stored lines in place: the text continues the last line when that line has no
+ * "\n" yet, and each further line is pushed. Work is proportional to the text and the open last
+ * line, never to the lines before it.
+ *
+ * @param lines Lines as {@linkcode splitLines} makes them (changed in place).
+ * @param text The text to append.
+ * @returns The same array.
+ *
+ * @example
+ * ```ts
+ * import { appendLines } from "@sonorigor/notebook-runner";
+ * import assert from "node:assert/strict";
+ * const lines = ["done\n", "progress 4"];
+ * assert.deepEqual(appendLines(lines, "0%\nnext\n"), ["done\n", "progress 40%\n", "next\n"]);
+ * ```
+ */
+export function appendLines(lines: string[], text: string): string[] {
+  if (text === "") return lines;
+  const open = lines.length > 0 && !lines[lines.length - 1]!.endsWith("\n");
+  for (const line of splitLines(open ? lines.pop() + text : text)) lines.push(line);
+  return lines;
+}
+
+/**
  * Collects the iopub messages of one execution into nbformat outputs the way Jupyter front ends
  * do: consecutive stream text of the same name is merged, `clear_output` (with `wait`) and
- * `update_display_data` are honoured.
+ * `update_display_data` are honoured. Carriage returns are stored as sent (no terminal
+ * overwriting).
+ *
+ * Stream text is accumulated in linear time: a message only appends its text to a list of
+ * chunks, and the chunks become stored lines (joined once, split once) when the outputs are
+ * read, so an output flood of N lines costs O(N), not O(N²).
+ *
+ * @example Two stdout messages merge; a line cut between messages is joined
+ * ```ts
+ * import { OutputCollector } from "@sonorigor/notebook-runner";
+ * import assert from "node:assert/strict";
+ * const collector = new OutputCollector();
+ * collector.handle("stream", { name: "stdout", text: "peak vel" });
+ * collector.handle("stream", { name: "stdout", text: "ocity 2.5 m/s\ndone\n" });
+ * assert.deepEqual(collector.outputs, [
+ *   { output_type: "stream", name: "stdout", text: ["peak velocity 2.5 m/s\n", "done\n"] },
+ * ]);
+ * ```
  */
 export class OutputCollector {
-  /** The outputs collected so far. */
-  readonly outputs: Output[] = [];
+  readonly #outputs: Output[] = [];
+  /** Stream outputs with text not yet turned into lines, and that text's chunks. */
+  readonly #pending = new Map<StreamOutput, string[]>();
   #clearOnNext = false;
   /** display_id → outputs (in any cell of the run) showing it; shared across collectors. */
   readonly #displays: Map<string, DisplayDataOutput[]>;
@@ -398,12 +440,46 @@ export class OutputCollector {
     this.#displays = displays;
   }
 
+  /**
+   * The outputs collected so far, with all stream text stored as lines (see
+   * {@linkcode OutputCollector.flush}). The same array every time.
+   */
+  get outputs(): Output[] {
+    return this.flush();
+  }
+
+  /**
+   * Turns the pending stream chunks into stored lines (each chunk list joined once and appended
+   * with {@linkcode appendLines}). Call it before the outputs are written or compared.
+   *
+   * @returns The outputs.
+   */
+  flush(): Output[] {
+    for (const [output, chunks] of this.#pending) {
+      appendLines(output.text as string[], chunks.join(""));
+    }
+    this.#pending.clear();
+    return this.#outputs;
+  }
+
+  #clear(): void {
+    this.#outputs.length = 0;
+    this.#pending.clear();
+  }
+
   #add(output: Output): void {
     if (this.#clearOnNext) {
-      this.outputs.length = 0;
+      this.#clear();
       this.#clearOnNext = false;
     }
-    this.outputs.push(output);
+    this.#outputs.push(output);
+  }
+
+  /** Queues stream text for an output (its lines are made in {@linkcode OutputCollector.flush}). */
+  #append(output: StreamOutput, text: string): void {
+    const chunks = this.#pending.get(output);
+    if (chunks === undefined) this.#pending.set(output, [text]);
+    else chunks.push(text);
   }
 
   /**
@@ -416,24 +492,26 @@ export class OutputCollector {
     const data = (content.data ?? {}) as Record<string, unknown>;
     const metadata = (content.metadata ?? {}) as Record<string, unknown>;
     const transient = (content.transient ?? {}) as Record<string, unknown>;
+    const outputs = this.#outputs;
     switch (msgType) {
       case "stream": {
         const name = String(content.name ?? "stdout");
         const text = String(content.text ?? "");
         // An error ends the cell, so console output that arrives after it was written before it:
         // the Deno kernel forwards console output asynchronously and it can trail the error.
-        const tail = this.outputs[this.outputs.length - 1];
+        const tail = outputs[outputs.length - 1];
         const at = tail?.output_type === "error" && !this.#clearOnNext
-          ? this.outputs.length - 1
-          : this.outputs.length;
-        const last = this.outputs[at - 1];
+          ? outputs.length - 1
+          : outputs.length;
+        const last = outputs[at - 1];
         if (!this.#clearOnNext && last?.output_type === "stream" && last.name === name) {
-          last.text = splitLines(joinText(last.text) + text);
-        } else if (at < this.outputs.length) {
-          this.outputs.splice(at, 0, { output_type: "stream", name, text: splitLines(text) });
-        } else {
-          this.#add({ output_type: "stream", name, text: splitLines(text) });
+          this.#append(last, text);
+          break;
         }
+        const output: StreamOutput = { output_type: "stream", name, text: [] };
+        if (at < outputs.length) outputs.splice(at, 0, output);
+        else this.#add(output);
+        this.#append(output, text);
         break;
       }
       case "display_data": {
@@ -478,7 +556,7 @@ export class OutputCollector {
         break;
       case "clear_output":
         if (content.wait === true) this.#clearOnNext = true;
-        else this.outputs.length = 0;
+        else this.#clear();
         break;
       default:
         break; // status, execute_input, comm messages: not outputs

@@ -4,17 +4,17 @@
  * with the cell number, the source line and the traceback, and always shuts the kernel down.
  *
  * Files: the executed notebook goes to the output folder (or over the original with `inPlace`);
- * on failure a partially executed notebook is written beside the original as `*.partial.ipynb`;
- * the original is never touched unless `inPlace` is set and the run succeeded.
+ * when a run fails, times out or is interrupted, a partially executed notebook is written beside
+ * the original as `*.partial.ipynb` (outputs so far, and an error output on the cell where it
+ * stopped saying why); the original is never touched unless `inPlace` is set and the run
+ * succeeded.
  *
- * {@linkcode runNotebook} does the work in a child deno process (`child.ts`) that owns the
- * kernel and its ZeroMQ sockets, and kills the kernel's process group itself if that child ends
- * without a result; {@linkcode runNotebookInProcess} is the in-process core both share.
+ * {@linkcode runNotebookInProcess} is the in-process core; `runNotebook` (isolation.ts) runs it
+ * in a child deno process that owns the kernel and its ZeroMQ sockets.
  *
  * @module
  */
 import { basename, dirname, extname, join, resolve } from "node:path";
-import { fileURLToPath } from "node:url";
 import {
   type CellFailure,
   diagnoseSyntax,
@@ -25,7 +25,6 @@ import {
 import { notebookToHtml, stripAnsi } from "./html.ts";
 import { DenoKernel, type ExecuteOutcome, KernelError, resolveDenoPath } from "./kernel.ts";
 import {
-  assertValidNotebook,
   checkDenoKernelspec,
   type CodeCell,
   type DisplayDataOutput,
@@ -33,8 +32,16 @@ import {
   type Notebook,
   NotebookInputError,
   OutputCollector,
-  parseNotebook,
 } from "./nbformat.ts";
+import {
+  interruptionText,
+  markStopped,
+  partialPathOf,
+  readNotebook,
+  STOP_ERROR_NAMES,
+  timeoutText,
+  writeNotebook,
+} from "./notebook_files.ts";
 
 /** Options of {@linkcode runNotebook}. */
 export interface RunOptions {
@@ -50,12 +57,26 @@ export interface RunOptions {
   html?: boolean;
   /** The deno binary (default: `SONORIGOR_DENO`, else the running deno). */
   denoPath?: string;
-  /** Aborts the run (Ctrl-C): the kernel is killed and a partial notebook written. */
+  /**
+   * Aborts the run (Ctrl-C): the kernel is interrupted and killed and a partial notebook
+   * written. A string reason (a signal name such as "SIGTERM") is named in the error output.
+   */
   signal?: AbortSignal;
+  /**
+   * How long the notebook client of {@linkcode runNotebook} may take to stop, after the abort
+   * signal or past a cell's limit, before it is killed with the kernel's process group and the
+   * partial notebook is written without its outputs, in seconds (default 30).
+   */
+  stopGraceSeconds?: number;
   /** Receives progress and report lines (default: written to stderr). */
   log?: (line: string) => void;
-  /** Called with the kernel pid as soon as the kernel has started. */
-  onKernelStarted?: (pid: number) => void;
+  /**
+   * Called as soon as the kernel has started, with its pid and the temporary folder of its
+   * connection file (which holds the signing key; removed when the kernel is stopped).
+   */
+  onKernelStarted?: (pid: number, connectionFolder: string) => void;
+  /** Called when a code cell starts ("started") and when it ends ("ended"), with its number. */
+  onCell?: (cellNumber: number, state: "started" | "ended") => void;
 }
 
 /** The result of {@linkcode runNotebook}; never thrown, always returned. */
@@ -91,35 +112,12 @@ export interface RunResult {
   elapsedMs: number;
 }
 
-/**
- * Writes a notebook after validating it against nbformat 4.5.
- *
- * @param path Destination.
- * @param notebook The notebook.
- * @returns When written.
- * @throws {TypeError} When the notebook is not valid (a runner defect; nothing is written).
- */
-export async function writeNotebook(path: string, notebook: Notebook): Promise<void> {
-  assertValidNotebook(notebook, path);
-  await Deno.mkdir(dirname(path), { recursive: true });
-  await Deno.writeTextFile(path, JSON.stringify(notebook, null, 1) + "\n");
-}
-
 const STATUS_WORD: Readonly<Record<CellFailure["kind"], string>> = {
   error: "FAILED",
   timeout: "TIMED OUT",
   died: "KERNEL DIED",
   aborted: "INTERRUPTED",
 };
-
-function stemOf(path: string): string {
-  return basename(path, extname(path));
-}
-
-/** The path of the partial notebook beside `path`: `name.partial.ipynb`. */
-export function partialPathOf(path: string): string {
-  return join(dirname(path), `${stemOf(path)}.partial.ipynb`);
-}
 
 function firstCodeLine(source: string): string {
   const line = source.split("\n").find((l) => l.trim() !== "" && !l.trim().startsWith("//")) ??
@@ -186,21 +184,7 @@ export async function runNotebookInProcess(
   // ---- input ---------------------------------------------------------------------------------
   let notebook: Notebook;
   try {
-    let text: string;
-    try {
-      text = await Deno.readTextFile(path);
-    } catch (error) {
-      if (error instanceof Deno.errors.NotFound) {
-        throw new NotebookInputError(
-          `Notebook not found: ${basename(path)} (looked in ${dirname(resolve(path))})`,
-        );
-      }
-      if (error instanceof Deno.errors.IsADirectory) {
-        throw new NotebookInputError(`Notebook path is a directory: ${path}`);
-      }
-      throw new NotebookInputError(`Notebook ${path}: cannot read: ${(error as Error).message}`);
-    }
-    notebook = parseNotebook(text, path);
+    notebook = await readNotebook(path);
     if (!checkDenoKernelspec(notebook, path)) {
       log(`${path}: no kernelspec in the notebook metadata; running it on the Deno kernel`);
     }
@@ -217,111 +201,165 @@ export async function runNotebookInProcess(
   }
 
   // ---- kernel --------------------------------------------------------------------------------
-  if (options.signal?.aborted) return done("interrupted", `${path}: interrupted before start`);
-  let kernel: DenoKernel;
-  try {
-    kernel = await DenoKernel.start({
-      cwd: dirname(resolve(path)),
-      startupTimeoutMs: (options.startupTimeoutSeconds ?? 60) * 1000,
-      closeSockets,
-      ...(options.denoPath === undefined ? {} : { denoPath: options.denoPath }),
-    });
-  } catch (error) {
-    if (error instanceof KernelError) return done("kernel", `${path}: ${error.message}`);
-    throw error;
-  }
-  result.kernelPid = kernel.pid;
-  options.onKernelStarted?.(kernel.pid);
-  const info = kernel.kernelInfo;
-  log(
-    `${path}: kernel started (pid ${kernel.pid}, ${String(info.implementation ?? "kernel")} ${
-      String(info.implementation_version ?? "")
-    }, protocol ${String(info.protocol_version ?? "?")})`,
-  );
-  if (!(await kernel.heartbeat())) log(`${path}: warning: the kernel heartbeat did not answer`);
-
-  // ---- cells ---------------------------------------------------------------------------------
-  const displays = new Map<string, DisplayDataOutput[]>();
+  const signal = options.signal;
+  const firstCode = notebook.cells.findIndex((c) => c.cell_type === "code") + 1;
+  /** A failure for a stop (timeout, interruption, kernel exit) at a cell. */
+  const stopFailure = (
+    kind: "timeout" | "aborted" | "died",
+    cellNumber: number,
+    executionCount: number | null,
+    evalue: string,
+  ): CellFailure => ({
+    kind,
+    cellNumber,
+    cellCount: notebook.cells.length,
+    cellId: notebook.cells[cellNumber - 1]?.id ?? "",
+    executionCount,
+    ename: STOP_ERROR_NAMES[kind],
+    evalue,
+    traceback: [],
+  });
+  const interrupted = () => `${interruptionText(signal?.reason)}; the kernel was stopped`;
+  let kernel: DenoKernel | undefined;
   let failure: CellFailure | undefined;
-  try {
-    let codeIndex = 0;
-    for (const [index, cell] of notebook.cells.entries()) {
-      if (cell.cell_type !== "code") continue;
-      codeIndex++;
-      const source = joinText(cell.source);
-      const label = `${path} [cell ${
-        index + 1
-      }/${notebook.cells.length}, code ${codeIndex}/${codeCells.length}]`;
-      if (source.trim() === "") {
-        log(`${label} empty, skipped`);
-        continue;
-      }
-      const collector = new OutputCollector(displays);
-      cell.outputs = collector.outputs;
-      const stderrBefore = kernel.stderrTail;
-      const outcome: ExecuteOutcome = await kernel.execute(source, {
-        timeoutMs: timeoutSeconds * 1000,
-        onIopub: (m) => collector.handle(m.header.msg_type, m.content),
-        ...(options.signal === undefined ? {} : { signal: options.signal }),
+  if (signal?.aborted) {
+    failure = stopFailure("aborted", firstCode, null, interrupted());
+  } else {
+    try {
+      kernel = await DenoKernel.start({
+        cwd: dirname(resolve(path)),
+        startupTimeoutMs: (options.startupTimeoutSeconds ?? 60) * 1000,
+        closeSockets,
+        ...(options.denoPath === undefined ? {} : { denoPath: options.denoPath }),
+        ...(signal === undefined ? {} : { signal }),
       });
-      result.cellsExecuted++;
-      cell.execution_count = outcome.executionCount;
-      const seconds = (outcome.elapsedMs / 1000).toFixed(2);
-      if (outcome.status === "ok") {
-        log(`${label} ok in ${seconds} s · ${firstCodeLine(source)}`);
-        continue;
+    } catch (error) {
+      if (!(error instanceof KernelError)) throw error;
+      if (!signal?.aborted) return done("kernel", `${path}: ${error.message}`);
+      failure = stopFailure("aborted", firstCode, null, interrupted());
+    }
+  }
+  const info = kernel?.kernelInfo ?? {};
+  if (kernel !== undefined) {
+    result.kernelPid = kernel.pid;
+    options.onKernelStarted?.(kernel.pid, kernel.connectionFolder);
+    log(
+      `${path}: kernel started (pid ${kernel.pid}, ${String(info.implementation ?? "kernel")} ${
+        String(info.implementation_version ?? "")
+      }, protocol ${String(info.protocol_version ?? "?")})`,
+    );
+    if (!(await kernel.heartbeat())) log(`${path}: warning: the kernel heartbeat did not answer`);
+    failure = await runCells(kernel);
+  }
+
+  async function runCells(kernel: DenoKernel): Promise<CellFailure | undefined> {
+    const displays = new Map<string, DisplayDataOutput[]>();
+    const collectors: OutputCollector[] = [];
+    let failure: CellFailure | undefined;
+    let stopped = false;
+    try {
+      let codeIndex = 0;
+      for (const [index, cell] of notebook.cells.entries()) {
+        if (cell.cell_type !== "code") continue;
+        codeIndex++;
+        const source = joinText(cell.source);
+        const label = `${path} [cell ${
+          index + 1
+        }/${notebook.cells.length}, code ${codeIndex}/${codeCells.length}]`;
+        if (source.trim() === "") {
+          log(`${label} empty, skipped`);
+          continue;
+        }
+        const collector = new OutputCollector(displays);
+        collectors.push(collector);
+        cell.outputs = collector.outputs;
+        const stderrBefore = kernel.stderrTail;
+        options.onCell?.(index + 1, "started");
+        const outcome: ExecuteOutcome = await kernel.execute(source, {
+          timeoutMs: timeoutSeconds * 1000,
+          onIopub: (m) => collector.handle(m.header.msg_type, m.content),
+          ...(signal === undefined ? {} : { signal }),
+        });
+        if (outcome.status !== "ok" && outcome.status !== "error") {
+          // interrupt, then kill the process group: no output arrives after this
+          await kernel.kill();
+          stopped = true;
+        }
+        options.onCell?.(index + 1, "ended");
+        result.cellsExecuted++;
+        cell.execution_count = outcome.executionCount;
+        const seconds = (outcome.elapsedMs / 1000).toFixed(2);
+        if (outcome.status === "ok") {
+          log(`${label} ok in ${seconds} s · ${firstCodeLine(source)}`);
+          continue;
+        }
+        if (outcome.status === "error") {
+          failure = await errorFailure(outcome, index, cell.id, source, collector);
+        } else {
+          const evalue = outcome.status === "timeout"
+            ? `${timeoutText(timeoutSeconds, outcome.outputPending)}; the kernel was stopped`
+            : outcome.status === "aborted"
+            ? interrupted()
+            : `The kernel process exited during the cell${describeExit(kernel.exitStatus)}`;
+          failure = stopFailure(outcome.status, index + 1, outcome.executionCount, evalue);
+        }
+        const newStderr = stderrSince(stderrBefore, kernel.stderrTail);
+        if (newStderr.trim() !== "") failure.kernelStderr = stripAnsi(newStderr);
+        log(`${label} ${STATUS_WORD[failure.kind]} after ${seconds} s · ${firstCodeLine(source)}`);
+        break;
       }
-      const base = {
-        cellNumber: index + 1,
-        cellCount: notebook.cells.length,
-        cellId: cell.id,
-        executionCount: outcome.executionCount,
-      };
-      if (outcome.status === "error") {
-        let error = outcome.error ?? { ename: "Error", evalue: "", traceback: [] };
-        let line: SourceLine | undefined;
-        if (error.traceback.length === 0) {
-          // The Deno kernel answers a syntax error with a bare "Execution failed": ask the
-          // parser of the same deno binary for the message and position.
-          const syntax = await diagnoseSyntax(resolveDenoPath(options.denoPath), source);
-          if (syntax !== undefined) {
-            error = { ename: "SyntaxError", evalue: syntax.message, traceback: [] };
-            error.traceback.push(`SyntaxError: ${syntax.message} (line ${syntax.line.number})`);
-            line = syntax.line;
-          }
-        }
-        const traceback = error.traceback.map(stripAnsi);
-        failure = { kind: "error", ...base, ename: error.ename, evalue: error.evalue, traceback };
-        line ??= locateErrorLine(source, error.evalue, traceback);
-        if (line !== undefined) failure.line = line;
-        if (!collector.outputs.some((o) => o.output_type === "error")) {
-          collector.handle("error", error);
-        }
+    } finally {
+      if (stopped) {
+        result.cleanShutdown = false;
+      } else if (failure === undefined || failure.kind === "error") {
+        result.cleanShutdown = await kernel.shutdown();
       } else {
-        const evalue = outcome.status === "timeout"
-          ? `Cell did not finish within ${timeoutSeconds} s; the kernel was stopped`
-          : outcome.status === "aborted"
-          ? "Run interrupted; the kernel was stopped"
-          : `The kernel process exited during the cell${describeExit(kernel.exitStatus)}`;
-        const ename =
-          { timeout: "CellTimeoutError", aborted: "InterruptedError", died: "KernelDiedError" }[
-            outcome.status
-          ];
-        failure = { kind: outcome.status, ...base, ename, evalue, traceback: [] };
-        collector.handle("error", { ename, evalue, traceback: [`${ename}: ${evalue}`] });
+        await kernel.kill();
+        result.cleanShutdown = false;
       }
-      const newStderr = stderrSince(stderrBefore, kernel.stderrTail);
-      if (newStderr.trim() !== "") failure.kernelStderr = stripAnsi(newStderr);
-      log(`${label} ${STATUS_WORD[failure.kind]} after ${seconds} s · ${firstCodeLine(source)}`);
-      break;
+      // the stream text of every cell (late console output included) becomes stored lines
+      for (const collector of collectors) collector.flush();
     }
-  } finally {
-    if (failure === undefined || failure.kind === "error") {
-      result.cleanShutdown = await kernel.shutdown();
-    } else {
-      await kernel.kill(); // hung, dead or interrupted: no point asking politely
-      result.cleanShutdown = false;
+    return failure;
+  }
+
+  /** The failure of a cell the kernel reported an error for (a syntax error located). */
+  async function errorFailure(
+    outcome: ExecuteOutcome,
+    index: number,
+    cellId: string,
+    source: string,
+    collector: OutputCollector,
+  ): Promise<CellFailure> {
+    let error = outcome.error ?? { ename: "Error", evalue: "", traceback: [] };
+    let line: SourceLine | undefined;
+    if (error.traceback.length === 0) {
+      // The Deno kernel answers a syntax error with a bare "Execution failed": ask the parser
+      // of the same deno binary for the message and position.
+      const syntax = await diagnoseSyntax(resolveDenoPath(options.denoPath), source);
+      if (syntax !== undefined) {
+        error = { ename: "SyntaxError", evalue: syntax.message, traceback: [] };
+        error.traceback.push(`SyntaxError: ${syntax.message} (line ${syntax.line.number})`);
+        line = syntax.line;
+      }
     }
+    const traceback = error.traceback.map(stripAnsi);
+    const failure: CellFailure = {
+      kind: "error",
+      cellNumber: index + 1,
+      cellCount: notebook.cells.length,
+      cellId,
+      executionCount: outcome.executionCount,
+      ename: error.ename,
+      evalue: error.evalue,
+      traceback,
+    };
+    line ??= locateErrorLine(source, error.evalue, traceback);
+    if (line !== undefined) failure.line = line;
+    if (!collector.outputs.some((o) => o.output_type === "error")) {
+      collector.handle("error", error);
+    }
+    return failure;
   }
 
   // ---- files ---------------------------------------------------------------------------------
@@ -332,10 +370,7 @@ export async function runNotebookInProcess(
   const partialPath = partialPathOf(path);
   if (failure !== undefined) {
     result.failure = failure;
-    notebook.metadata.sonorigor_partial = {
-      failed_cell: failure.cellNumber,
-      reason: `${failure.ename}: ${failure.evalue}`,
-    };
+    markStopped(notebook, failure);
     await writeNotebook(partialPath, notebook);
     result.partialPath = partialPath;
     const report = `${formatFailure(path, failure)}\n  partial notebook: ${partialPath}`;
@@ -348,7 +383,7 @@ export async function runNotebookInProcess(
   await writeNotebook(outputPath, notebook);
   result.outputPath = outputPath;
   if (options.html) {
-    const htmlPath = join(outDir, `${stemOf(path)}.html`);
+    const htmlPath = join(outDir, `${basename(path, extname(path))}.html`);
     await Deno.mkdir(outDir, { recursive: true });
     await Deno.writeTextFile(
       htmlPath,
@@ -380,103 +415,4 @@ function stderrSince(before: string, after: string): string {
 function describeExit(status: Deno.CommandStatus | null): string {
   if (status === null) return "";
   return status.signal === null ? ` (exit ${status.code})` : ` (signal ${status.signal})`;
-}
-
-/**
- * Executes one notebook on the real Deno kernel, isolated in a child deno process that speaks
- * ZeroMQ to the kernel. The native zeromq addon could crash its process under Deno now and then
- * when sockets to a killed kernel were torn down; isolation means such a crash can neither take
- * the caller down nor leave the kernel behind: this parent kills the kernel's process group
- * whenever the child ends without a result. Progress lines, the kernel pid and the result come
- * back over the child's stdout.
- *
- * @param path The .ipynb file.
- * @param options Output folder, in-place, per-cell timeout, HTML export, deno binary, abort
- *   signal (forwarded to the child as SIGTERM), logger.
- * @returns What happened (never throws for bad input or cell errors).
- */
-export async function runNotebook(path: string, options: RunOptions = {}): Promise<RunResult> {
-  const started = Date.now();
-  const log = options.log ?? ((line: string) => console.error(line));
-  const { signal, log: _log, onKernelStarted, ...serializable } = options;
-  const config = fileURLToPath(new URL("./deno.json", import.meta.url));
-  const entry = fileURLToPath(new URL("./child.ts", import.meta.url));
-  const child = new Deno.Command(Deno.execPath(), {
-    args: [
-      "run",
-      "--allow-all",
-      "--quiet",
-      "--config",
-      config,
-      entry,
-      JSON.stringify({ path, options: serializable }),
-    ],
-    stdin: "piped", // held open until the end: its closing tells the child the parent is gone
-    stdout: "piped",
-    stderr: "inherit",
-  }).spawn();
-  const onAbort = () => {
-    try {
-      child.kill("SIGTERM");
-    } catch {
-      // already gone
-    }
-  };
-  signal?.addEventListener("abort", onAbort, { once: true });
-  if (signal?.aborted) onAbort();
-  let kernelPid: number | undefined;
-  let result: RunResult | undefined;
-  let pending = "";
-  const decoder = new TextDecoder();
-  const handle = (line: string) => {
-    if (line.trim() === "") return;
-    let event: { type: string; line?: string; pid?: number; result?: RunResult };
-    try {
-      event = JSON.parse(line);
-    } catch {
-      log(line); // not ours: pass it on
-      return;
-    }
-    if (event.type === "log" && event.line !== undefined) log(event.line);
-    else if (event.type === "kernel" && event.pid !== undefined) {
-      kernelPid = event.pid;
-      onKernelStarted?.(event.pid);
-    } else if (event.type === "result" && event.result !== undefined) result = event.result;
-  };
-  try {
-    for await (const chunk of child.stdout) {
-      pending += decoder.decode(chunk, { stream: true });
-      let newline: number;
-      while ((newline = pending.indexOf("\n")) >= 0) {
-        handle(pending.slice(0, newline));
-        pending = pending.slice(newline + 1);
-      }
-    }
-    handle(pending);
-  } finally {
-    signal?.removeEventListener("abort", onAbort);
-  }
-  const status = await child.status;
-  await child.stdin.close().catch(() => {});
-  if (kernelPid !== undefined) {
-    // whatever happened in the child, nothing of the kernel's process group survives
-    try {
-      Deno.kill(-kernelPid, "SIGKILL");
-    } catch {
-      // group already empty
-    }
-  }
-  if (result !== undefined) return result;
-  const how = status.signal !== null ? `signal ${status.signal}` : `exit ${status.code}`;
-  return {
-    path,
-    status: signal?.aborted ? "interrupted" : "failed",
-    message: `${path}: the notebook client process ended without a result (${how})${
-      kernelPid === undefined ? "" : `; kernel process group ${kernelPid} was killed`
-    }`,
-    ...(kernelPid === undefined ? {} : { kernelPid }),
-    cellsExecuted: 0,
-    codeCells: 0,
-    elapsedMs: Date.now() - started,
-  };
 }

@@ -102,3 +102,49 @@ export function processGroupAlive(pgid: number): boolean {
   }
   return kill0(`-${pgid}`); // dash: "kill -0 -PGID" targets the group
 }
+
+/** A process found by {@linkcode childProcesses}. */
+export interface ProcessEntry {
+  /** Process id. */
+  pid: number;
+  /** Its command line as `ps` shows it. */
+  command: string;
+}
+
+/**
+ * The live child processes of a process (e.g. the notebook client a runner started), from `ps`.
+ *
+ * @param pid Parent process id, an integer above 1.
+ * @returns Each child's pid and command line (empty when it has none).
+ * @throws {RangeError} When `pid` is not an integer above 1.
+ *
+ * @example
+ * ```ts
+ * import { childProcesses } from "@sonorigor/notebook-runner/testing";
+ * import assert from "node:assert/strict";
+ * const sleeper = new Deno.Command("sleep", { args: ["5"] }).spawn();
+ * assert.ok(childProcesses(Deno.pid).some((c) => c.pid === sleeper.pid));
+ * sleeper.kill("SIGKILL");
+ * await sleeper.status;
+ * assert.ok(!childProcesses(Deno.pid).some((c) => c.pid === sleeper.pid));
+ * ```
+ */
+export function childProcesses(pid: number): ProcessEntry[] {
+  if (!(Number.isInteger(pid) && pid > 1)) {
+    throw new RangeError(`Expected a process id above 1, got ${pid}`);
+  }
+  const out = new Deno.Command("ps", {
+    args: ["-o", "pid=,stat=,args=", "--ppid", String(pid)],
+    stdout: "piped",
+    stderr: "null",
+  }).outputSync();
+  const entries: ProcessEntry[] = [];
+  for (const line of new TextDecoder().decode(out.stdout).split("\n")) {
+    const match = /^\s*(\d+)\s+(\S+)\s+(.*)$/.exec(line);
+    // a zombie (state Z) has ended and only waits for its parent to collect the status
+    if (match !== null && !match[2]!.startsWith("Z")) {
+      entries.push({ pid: Number(match[1]), command: match[3]! });
+    }
+  }
+  return entries;
+}

@@ -133,3 +133,73 @@ Deno.test("no transition shim is left: define.ts, display.ts in calc/core, legac
     assert.equal(exists, false, path);
   }
 });
+
+/**
+ * Argument spreads (`Math.min(...values)`, `list.push(...more)`, `String.fromCharCode(...bytes)`)
+ * and `f.apply(that, values)` put every element on the call stack: above roughly 10^5 elements
+ * they throw "Maximum call stack size exceeded", so over data they are a crash waiting for a large
+ * file. Found on the syntax tree (Deno's lint plugin API), not by a text search. Allowed: the spread
+ * of an array literal, or of a choice between array literals (`...(flag ? [x] : [])`), whose size
+ * is what the source writes.
+ */
+const SPREAD_RULE: Deno.lint.Plugin = {
+  name: "sonorigor",
+  rules: {
+    "no-argument-spread": {
+      create(context) {
+        const literal = (n: Deno.lint.Node): boolean =>
+          (n.type === "ArrayExpression" && n.elements.every((e) => e?.type !== "SpreadElement")) ||
+          (n.type === "ConditionalExpression" && literal(n.consequent) && literal(n.alternate));
+        const spread = (node: Deno.lint.SpreadElement) => {
+          if (!literal(node.argument)) {
+            context.report({ node, message: "argument spread over an array of any size" });
+          }
+        };
+        return {
+          "CallExpression > SpreadElement": spread,
+          "NewExpression > SpreadElement": spread,
+          CallExpression(node) {
+            const callee = node.callee;
+            const applied = callee.type === "MemberExpression" &&
+              callee.property.type === "Identifier" && callee.property.name === "apply";
+            const reflected = callee.type === "MemberExpression" &&
+              callee.object.type === "Identifier" && callee.object.name === "Reflect";
+            const list = node.arguments[applied ? 1 : 2];
+            if ((applied || reflected) && list !== undefined && !literal(list)) {
+              context.report({ node, message: "apply with an array of any size" });
+            }
+          },
+        };
+      },
+    },
+  },
+};
+
+Deno.test("no argument spread over data: every spread argument is an array literal", async () => {
+  const files = [
+    ...await sources("calc/", /\.ts$/),
+    ...await sources("display/", /\.ts$/),
+    ...await sources("plot/", /\.ts$/),
+    ...await sources("cli/", /\.ts$/),
+    new URL("mod.ts", ROOT).pathname,
+  ];
+  const found: string[] = [];
+  for (const f of files) {
+    const text = await Deno.readTextFile(f);
+    for (const d of Deno.lint.runPlugin(SPREAD_RULE, f, text)) {
+      const line = text.slice(0, d.range[0]).split("\n").length;
+      found.push(`${f.slice(new URL(ROOT).pathname.length)}:${line}: ${d.message}`);
+    }
+  }
+  assert.deepEqual(found, []);
+  // the rule itself, on the patterns it must catch and the literals it lets through
+  const caught = Deno.lint.runPlugin(
+    SPREAD_RULE,
+    "probe.ts",
+    "Math.min(...counts); out.push(...rows); String.fromCharCode(...bytes); new Set(...x);" +
+      "Math.max.apply(null, xs); Reflect.apply(f, null, xs);" +
+      "f(...[a, b]); g(...(c ? [d] : [])); const all = [...xs]; function h(...rest) {}" +
+      "k(...[...xs]);",
+  );
+  assert.equal(caught.length, 7);
+});

@@ -316,13 +316,12 @@ function evaluateOne(
       if (
         typical && wired[k] && !inRange(x[name]!, typical) && typical !== wired[k]!.quantity.typical
       ) {
-        issues.push(
-          ...checkValue(name, def, x[name], {
-            where,
-            population: options.population ?? "adult",
-            ...at(i),
-          }).issues,
-        );
+        const flagged = checkValue(name, def, x[name], {
+          where,
+          population: options.population ?? "adult",
+          ...at(i),
+        });
+        for (const issue of flagged.issues) issues.push(issue);
       }
     }
     for (const c of calc.constraints) {
@@ -394,7 +393,7 @@ function evaluateOne(
       } catch (e) {
         if (!(e instanceof TypeError || e instanceof RangeError)) throw e;
         const found = (e as { issues?: ValidationIssue[] }).issues;
-        if (found) issues.push(...found.map((issue) => ({ ...issue, ...at(i) })));
+        if (found) { for (const issue of found) issues.push({ ...issue, ...at(i) }); }
         else {
           issues.push({
             kind: "output",

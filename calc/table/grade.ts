@@ -81,7 +81,7 @@ export function gradeTable(table: Table, column: string, severity: SeverityChoic
       const found = (e as { issues?: ValidationIssue[] }).issues;
       if (!found) throw e;
       classes.push("");
-      issues.push(...found.map((issue) => ({ ...issue, ...at })));
+      for (const issue of found) issues.push({ ...issue, ...at });
     }
   }
   for (const t of used.values()) {

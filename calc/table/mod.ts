@@ -5,8 +5,25 @@
  *
  * @module
  */
-export type { Column, NumericColumn, Table, TextColumn, UncertaintyModel } from "./types.ts";
-export { decodeUtf8, detectDelimiter, readTable, type ReadTableOptions } from "./read.ts";
+export type {
+  Column,
+  NumericColumn,
+  ReadTableOptions,
+  Table,
+  TextColumn,
+  UncertaintyModel,
+} from "./types.ts";
+export {
+  detectDelimiter,
+  makeTable,
+  MAX_RECORD_CHARS,
+  readTable,
+  readTableFile,
+  readTableStream,
+} from "./read.ts";
+export { decodeUtf8, TableDecoder } from "./decode.ts";
+export { type ColumnPlan, planColumns } from "./header.ts";
+export { neutraliseFormula, restoreFormula } from "./formula_guard.ts";
 export {
   evaluateTable,
   type EvaluateTableOptions,

@@ -1,137 +1,53 @@
 /**
- * Reading a table from CSV: the one module that parses CSV (papaparse for the grammar). Bytes
- * are decoded as strict UTF-8 (an invalid byte is an error with its offset and line, never a
- * silent replacement); the delimiter is detected from the header line; each header is mapped to a
- * quantity (by its id, label or recognised headers), with the unit in the header ("lvot diameter
- * [mm]"); every numeric cell is checked by the one validator and converted to the canonical unit.
- * Every problem becomes a structured issue with its line; no row is dropped.
+ * Reading a table from CSV: the one module that parses CSV (papaparse for the grammar). Text is
+ * read record by record, so a file of any size is read in bounded working memory (a chunk of
+ * text and one record at a time) into typed columns that grow as rows arrive: `readTable` for
+ * text or bytes in memory, `readTableStream` for a byte stream, `readTableFile` for a file.
+ * Bytes are decoded strictly (UTF-8 unless another encoding is named: an invalid byte is an error
+ * with its offset and line, never a silent replacement); the delimiter is detected from the
+ * header line; each header is mapped to a quantity (by its id, label or recognised headers), with
+ * the unit in the header ("lvot diameter [mm]"); every numeric cell is checked by the one
+ * validator and converted to the canonical unit. Every problem becomes a structured issue with
+ * the line where its record starts (quoted line breaks counted); no row is dropped.
  *
  * @module
  */
 import Papa from "papaparse";
-import type { Population, Quantity, ValidationIssue } from "../core/types.ts";
-import { headerMatches, normalizeHeader } from "../core/quantity.ts";
-import { checkValue, quantityField } from "../core/validate.ts";
+import type { ValidationIssue, ValueRange } from "../core/types.ts";
+import { type CheckedField, checkValue, quantityField } from "../core/validate.ts";
+import { inRange } from "../core/range.ts";
+import { typicalRange } from "../core/quantity.ts";
 import { readAmount } from "../core/units.ts";
 import { formatUnit, withUnit } from "../core/text.ts";
 import { formatRange } from "../core/range.ts";
 import { throwIfErrors } from "../core/issues.ts";
-import { QUANTITIES } from "../quantities/mod.ts";
-import type { Column, NumericColumn, Table, TextColumn } from "./types.ts";
+import type { Column, NumericColumn, ReadTableOptions, Table, TextColumn } from "./types.ts";
+import { type ColumnPlan, planColumns } from "./header.ts";
+import { TableDecoder } from "./decode.ts";
+import { restoreFormula } from "./formula_guard.ts";
 import { displayTable, JUPYTER_DISPLAY } from "../../display/table.ts";
 
-/** Options of {@linkcode readTable}. */
-export interface ReadTableOptions {
-  /** Name of the source in messages (a file name). @default "table" */
-  readonly source?: string;
-  /** Columns mapped by hand: header (with or without its "[unit]") → quantity (or its id), or
-   * "text" to keep a column as text. Other headers are recognised automatically. */
-  readonly columns?: Readonly<Record<string, string | Quantity>>;
-  /** The unit of a column whose header has none: header → unit. */
-  readonly units?: Readonly<Record<string, string>>;
-  /** Quantities to recognise headers by. @default every quantity of the package */
-  readonly quantities?: Iterable<Quantity>;
-  /** The delimiter, or "auto" to detect it from the header line. @default "auto" */
-  readonly delimiter?: "," | ";" | "\t" | "auto";
-  /** Which typical ranges flag the values. @default "adult" */
-  readonly population?: Population;
-  /** "flag" keeps invalid cells as NaN with an error issue; "throw" throws the first error after
-   * the whole file is checked (its `issues` list all). @default "flag" */
-  readonly onInvalid?: "flag" | "throw";
-}
+export type { ReadTableOptions } from "./types.ts";
 
 const DECIMAL = /^\s*[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?\s*$/;
-/** Unit words written at the end of a header without brackets ("lvotDiameterMm"). */
-const UNIT_WORDS: Readonly<Record<string, string>> = {
-  mm: "mm",
-  cm: "cm",
-  m: "m",
-  ml: "mL",
-  l: "L",
-  g: "g",
-  kg: "kg",
-  ms: "ms",
-  s: "s",
-  mps: "m/s",
-  cmps: "cm/s",
-  hz: "Hz",
-  mhz: "MHz",
-  mmhg: "mmHg",
-  percent: "%",
-  pct: "%",
-  deg: "deg",
-  m2: "m^2",
-  cm2: "cm^2",
-  y: "year",
-  years: "year",
-};
+/** The longest record accepted (characters): a quoted field left open would otherwise swallow
+ * the rest of the file. */
+export const MAX_RECORD_CHARS = 1 << 24;
+/** Distinct values of a text column shared as one string each (identifiers repeat on many rows);
+ * beyond this, values are kept as read. */
+const INTERNED_VALUES = 1 << 22;
 
 /**
- * Checks that bytes are UTF-8 and decodes them; an invalid sequence is an error naming its byte
- * offset and line (RFC 3629 for what is valid).
- *
- * @param bytes The file's bytes.
- * @param source Name for messages.
- * @returns The text, without a leading byte-order mark.
- * @throws {TypeError} At the first invalid byte, with its offset and line.
+ * The delimiter of a CSV text: the most frequent of , ; tab in its first line outside quotes
+ * (a comma when there is none, or on a tie with it).
  *
  * @example
  * ```ts
- * import { decodeUtf8 } from "@sonorigor/sonorigor";
+ * import { detectDelimiter } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
- * assert.equal(decodeUtf8(new TextEncoder().encode("René"), "demo.csv"), "René");
- * // "Ren" + 0xE8 (è in Latin-1) is not UTF-8
- * assert.throws(() => decodeUtf8(Uint8Array.of(0x52, 0x65, 0x6e, 0xe8), "demo.csv"),
- *   /byte 3, line 1/);
+ * assert.equal(detectDelimiter("id;height [cm];\"a;b,c\"\n1;2;3"), ";");
  * ```
  */
-export function decodeUtf8(bytes: Uint8Array, source: string): string {
-  try {
-    return new TextDecoder("utf-8", { fatal: true, ignoreBOM: false }).decode(bytes);
-  } catch {
-    const at = firstInvalidByte(bytes);
-    let line = 1;
-    for (let i = 0; i < at; i++) if (bytes[i] === 0x0a) line++;
-    throw new TypeError(
-      `${source}: expected UTF-8 text, got an invalid byte 0x${
-        bytes[at]!.toString(16).padStart(2, "0")
-      } at byte ${at}, line ${line}: save the file as UTF-8 (a Latin-1 or Windows-1252 export turns "é" into one such byte)`,
-    );
-  }
-}
-
-/** Offset of the first byte that breaks UTF-8 (RFC 3629 §4). */
-function firstInvalidByte(b: Uint8Array): number {
-  let i = 0;
-  while (i < b.length) {
-    const c = b[i]!;
-    const n = c < 0x80
-      ? 0
-      : c >= 0xc2 && c <= 0xdf
-      ? 1
-      : c >= 0xe0 && c <= 0xef
-      ? 2
-      : c >= 0xf0 && c <= 0xf4
-      ? 3
-      : -1;
-    if (n < 0) return i;
-    for (let k = 1; k <= n; k++) {
-      const d = b[i + k];
-      if (d === undefined || (d & 0xc0) !== 0x80) return i;
-    }
-    const second = b[i + 1] ?? 0;
-    if (
-      (c === 0xe0 && second < 0xa0) || (c === 0xed && second > 0x9f) ||
-      (c === 0xf0 && second < 0x90) || (c === 0xf4 && second > 0x8f)
-    ) {
-      return i;
-    }
-    i += n + 1;
-  }
-  return b.length;
-}
-
-/** The delimiter of a CSV text: the most frequent of , ; tab in its first line outside quotes. */
 export function detectDelimiter(text: string): "," | ";" | "\t" {
   const counts = { ",": 0, ";": 0, "\t": 0 };
   let quoted = false;
@@ -141,47 +57,358 @@ export function detectDelimiter(text: string): "," | ";" | "\t" {
     else if (!quoted && (ch === "\n" || ch === "\r")) break;
     else if (!quoted && ch in counts) counts[ch as keyof typeof counts]++;
   }
-  const best = (Object.entries(counts) as [keyof typeof counts, number][])
-    .sort((a, b) => b[1] - a[1])[0]!;
-  return best[1] > 0 ? best[0] : ",";
+  let best: "," | ";" | "\t" = ",";
+  for (const d of [";", "\t"] as const) if (counts[d] > counts[best]) best = d;
+  return best;
 }
 
-/** Splits "weight [kg]" into name and unit. */
-function splitHeader(header: string): { name: string; unit: string | undefined } {
-  const m = /^(.*?)\s*\[([^\]]+)\]\s*$/.exec(header);
-  return m ? { name: m[1]!.trim(), unit: m[2]!.trim() } : { name: header.trim(), unit: undefined };
-}
-
-function countNewlines(fields: readonly string[]): number {
-  let count = 0;
-  for (const f of fields) {
-    for (let k = f.indexOf("\n"); k !== -1; k = f.indexOf("\n", k + 1)) count++;
+/** Line breaks in a field (each "\r\n" counts once, through its "\n"; a lone "\r" only in a
+ * file whose lines end with "\r"). */
+function countBreaks(text: string, newline: string, from = 0, to = text.length): number {
+  let n = 0;
+  for (let k = text.indexOf(newline, from); k !== -1 && k < to; k = text.indexOf(newline, k + 1)) {
+    n++;
   }
-  return count;
+  return n;
 }
 
-interface Plan {
-  readonly index: number;
-  readonly header: string;
-  readonly name: string;
-  readonly quantity: Quantity | null;
-  readonly sourceUnit: string;
-  /** Multiply by `factor`, or divide by `divisor` when the conversion is 1/integer (so 38 mm
-   * gives exactly 3.8 cm). */
-  readonly factor: number;
-  readonly divisor: number;
+/** A Float64Array that grows by doubling. */
+class GrowingNumbers {
+  values = new Float64Array(1024);
+  push(i: number, v: number): void {
+    if (i >= this.values.length) {
+      const bigger = new Float64Array(this.values.length * 2);
+      bigger.set(this.values);
+      this.values = bigger;
+    }
+    this.values[i] = v;
+  }
+  done(n: number): Float64Array {
+    return this.values.length === n ? this.values : this.values.slice(0, n);
+  }
+}
+
+/** Text cells, with repeated values held once. */
+class TextCells {
+  readonly values: string[] = [];
+  readonly #seen = new Map<string, string>();
+  push(cell: string): void {
+    let shared = this.#seen.get(cell);
+    if (shared === undefined) {
+      shared = cell;
+      if (this.#seen.size < INTERNED_VALUES) this.#seen.set(cell, cell);
+    }
+    this.values.push(shared);
+  }
+}
+
+// papaparse's package ships no types: the part of its low-level parser used here
+interface PapaResult {
+  data: string[][];
+  errors: { code: string; message: string; row?: number; index?: number }[];
+  meta: { cursor: number };
+}
+interface PapaParser {
+  parse(input: string, baseIndex: number, ignoreLastRow: boolean): PapaResult;
+}
+const PapaParserClass = (Papa as unknown as {
+  Parser: new (config: { delimiter: string; newline: string }) => PapaParser;
+}).Parser;
+
+/**
+ * Reads decoded text, chunk by chunk, into a table: comments and header first, then one record
+ * at a time into growing columns.
+ */
+class TableReader {
+  readonly #options: ReadTableOptions;
+  readonly #source: string;
+  readonly #population;
+  #pending = "";
+  #started = false;
+  /** Line where the text in `#pending` starts. */
+  #line = 1;
+  #newline = "\n";
+  #delimiter = ",";
+  #parser: PapaParser | null = null;
+  #plans: ColumnPlan[] | null = null;
+  #columns: (GrowingNumbers | TextCells)[] = [];
+  /** Per numeric column: the checked field, and the range inside which a value needs no check
+   * (valid and typical, whole where the quantity counts): the validator sees every other value. */
+  #fields: (CheckedField | null)[] = [];
+  #quiet: (ValueRange | null)[] = [];
+  #lines = new Int32Array(1024);
+  #rows = 0;
+  readonly #blankLines: number[] = [];
+  readonly #issues: ValidationIssue[] = [];
+
+  constructor(options: ReadTableOptions) {
+    this.#options = options;
+    this.#source = options.source ?? "table";
+    this.#population = options.population ?? "adult";
+  }
+
+  #fail(message: string): never {
+    throw new TypeError(`${this.#source}: ${message}`);
+  }
+
+  /** Adds the next piece of text (`last` for the end of the file). */
+  push(text: string, last: boolean): void {
+    let pending = this.#pending + text;
+    let fresh = text; // the text no parse has seen
+    if (!this.#started) {
+      fresh = pending;
+      if (pending.charCodeAt(0) === 0xfeff) pending = pending.slice(1);
+      // leading "# …" lines (cautions written by writeTableCsv) are comments, not data
+      for (;;) {
+        const comment = pending.startsWith("#") || pending.startsWith('"#');
+        const nl = pending.indexOf("\n");
+        if (!comment || (nl < 0 && !last)) break;
+        pending = nl < 0 ? "" : pending.slice(nl + 1);
+        this.#line++;
+      }
+      const nl = pending.search(/[\r\n]/);
+      if ((nl < 0 || nl === pending.length - 1) && !last && pending.length < MAX_RECORD_CHARS) {
+        this.#pending = pending; // the header line is not complete yet
+        return;
+      }
+      this.#start(pending, nl);
+    }
+    if (!last && !fresh.includes(this.#newline)) {
+      // no record can have ended in the new text
+      this.#pending = pending;
+      if (pending.length >= MAX_RECORD_CHARS) this.#tooLong();
+      return;
+    }
+    this.#parse(pending, last);
+  }
+
+  /** Detects the delimiter and the line break from the header line; makes the parser. */
+  #start(text: string, nl: number) {
+    this.#started = true;
+    const given = this.#options.delimiter;
+    this.#delimiter = !given || given === "auto" ? detectDelimiter(text) : given;
+    // lines end with "\n" (a "\r" before it is taken off), or with "\r" alone (old Mac files)
+    this.#newline = nl >= 0 && text[nl] === "\r" && text[nl + 1] !== "\n" ? "\r" : "\n";
+    this.#parser = new PapaParserClass({ delimiter: this.#delimiter, newline: this.#newline });
+  }
+
+  #parse(text: string, last: boolean) {
+    const result = this.#parser!.parse(text, 0, !last);
+    const records = result.data;
+    // errors on the unfinished last record are found again when it is complete
+    const error = result.errors.find((e) => last || (e.row ?? 0) < records.length);
+    if (error) {
+      const at = error.index ?? 0;
+      this.#fail(
+        `line ${this.#line + countBreaks(text, this.#newline, 0, at)}, ${
+          error.code === "MissingQuotes"
+            ? "expected every quoted field to be closed, got a quote that opens a field here and is never closed"
+            : error.code === "InvalidQuotes"
+            ? "expected a quoted field to end at its closing quote, got text after the closing quote (write a quote inside a quoted field as two quotes)"
+            : `expected well-formed CSV, got ${error.message}`
+        }`,
+      );
+    }
+    let count = records.length;
+    // the empty text after a final line break is not a record
+    if (last && text.endsWith(this.#newline)) {
+      const end = records[count - 1];
+      if (end && end.length === 1 && end[0] === "") count--;
+    }
+    for (let r = 0; r < count; r++) {
+      const fields = records[r]!;
+      const line = this.#line;
+      let breaks = 0;
+      for (const f of fields) if (f.length > 0) breaks += countBreaks(f, this.#newline);
+      this.#line += 1 + breaks;
+      if (this.#newline === "\n") {
+        const lastField = fields[fields.length - 1]!;
+        if (lastField.endsWith("\r")) fields[fields.length - 1] = lastField.slice(0, -1);
+      }
+      this.#record(fields, line);
+    }
+    this.#pending = last ? "" : text.slice(result.meta.cursor);
+    if (this.#pending.length >= MAX_RECORD_CHARS) this.#tooLong();
+  }
+
+  #tooLong(): never {
+    return this.#fail(
+      `line ${this.#line}, expected a record of at most ${MAX_RECORD_CHARS} characters, got a longer one (a quote that opens a field and is never closed?)`,
+    );
+  }
+
+  #record(fields: string[], line: number) {
+    if (this.#plans === null) {
+      if (fields.every((h) => h.trim() === "")) {
+        this.#fail(`line ${line}, expected a header line, got an empty line`);
+      }
+      this.#plans = planColumns(fields, line, this.#delimiter, this.#options, this.#source);
+      this.#columns = this.#plans.map((p) => (p.quantity ? new GrowingNumbers() : new TextCells()));
+      this.#fields = this.#plans.map((p) => (p.quantity ? quantityField(p.quantity) : null));
+      this.#quiet = this.#plans.map((p) =>
+        p.quantity
+          ? typicalRange(this.#fields[p.index]!, this.#population) ?? p.quantity.valid
+          : null
+      );
+      return;
+    }
+    if (fields.length === 1 && fields[0]!.trim() === "") {
+      this.#blankLines.push(line);
+      return;
+    }
+    const i = this.#rows++;
+    if (i >= this.#lines.length) {
+      const bigger = new Int32Array(this.#lines.length * 2);
+      bigger.set(this.#lines);
+      this.#lines = bigger;
+    }
+    this.#lines[i] = line;
+    const plans = this.#plans;
+    const source = this.#source;
+    if (fields.length !== plans.length) {
+      this.#issues.push({
+        kind: "format",
+        severity: "error",
+        where: source,
+        field: "",
+        received: `${fields.length} fields`,
+        expected:
+          `${plans.length} fields as in the header (the row is kept; missing cells are empty)`,
+        row: i,
+        line,
+      });
+    }
+    for (let c = 0; c < plans.length; c++) {
+      const p = plans[c]!;
+      const cell = fields[p.index] ?? "";
+      const q = p.quantity;
+      if (q === null) {
+        // a cell the writer neutralised against spreadsheet formulas reads back as written
+        (this.#columns[c] as TextCells).push(restoreFormula(cell));
+        continue;
+      }
+      const col = this.#columns[c] as GrowingNumbers;
+      if (cell.trim() === "") {
+        col.push(i, NaN);
+        this.#issues.push({
+          kind: "notMeasured",
+          severity: "warning",
+          where: source,
+          field: p.header,
+          label: q.label,
+          received: "an empty cell",
+          expected: "a value",
+          row: i,
+          line,
+        });
+        continue;
+      }
+      let v: number;
+      if (DECIMAL.test(cell)) {
+        const x = Number(cell);
+        v = p.divisor ? x / p.divisor : x * p.factor;
+      } else {
+        const read = readAmount(cell, q.unit);
+        if (typeof read !== "number") {
+          col.push(i, NaN);
+          this.#issues.push({
+            kind: "type",
+            severity: "error",
+            where: source,
+            field: p.header,
+            label: q.label,
+            received: JSON.stringify(cell),
+            range: q.valid,
+            expected: `as a number in ${
+              p.sourceUnit === q.unit
+                ? formatRange(q.valid, q.unit)
+                : `${formatUnit(p.sourceUnit)} (valid: ${formatRange(q.valid, q.unit)})`
+            }`,
+            row: i,
+            line,
+          });
+          continue;
+        }
+        v = read;
+      }
+      const quiet = this.#quiet[c]!;
+      if (inRange(v, quiet) && inRange(v, q.valid) && (!q.integer || Number.isInteger(v))) {
+        col.push(i, v);
+        continue;
+      }
+      const checked = checkValue(p.header, this.#fields[c]!, v, {
+        where: source,
+        population: this.#population,
+        row: i,
+        line,
+      });
+      col.push(i, checked.value ?? NaN);
+      for (const issue of checked.issues) {
+        this.#issues.push(
+          p.factor === 1 && p.divisor === 0 ? issue : {
+            ...issue,
+            received: `${JSON.stringify(`${cell.trim()} ${formatUnit(p.sourceUnit)}`)} (${
+              withUnit(String(v), q.unit)
+            })`,
+          },
+        );
+      }
+    }
+  }
+
+  /** The table read. */
+  finish(): Table {
+    const plans = this.#plans;
+    if (plans === null) this.#fail("expected a header line, got an empty file");
+    const n = this.#rows;
+    const columns = new Map<string, Column>();
+    plans.forEach((p, c) => {
+      const cells = this.#columns[c]!;
+      const column: Column = p.quantity
+        ? {
+          kind: "numeric",
+          name: p.name,
+          header: p.header,
+          quantity: p.quantity,
+          sourceUnit: p.sourceUnit,
+          role: "value",
+          computed: false,
+          values: (cells as GrowingNumbers).done(n),
+        } satisfies NumericColumn
+        : {
+          kind: "text",
+          name: p.name,
+          header: p.header,
+          values: (cells as TextCells).values,
+        } satisfies TextColumn;
+      columns.set(p.name, column);
+    });
+    const table = makeTable({
+      source: this.#source,
+      rowCount: n,
+      lines: this.#lines.length === n ? this.#lines : this.#lines.slice(0, n),
+      columns,
+      issues: this.#issues,
+      blankLines: this.#blankLines,
+      cautions: [],
+    });
+    if (this.#options.onInvalid === "throw") throwIfErrors(this.#issues);
+    return table;
+  }
 }
 
 /**
  * Reads a table from CSV text or bytes: headers mapped to quantities, units from the headers,
- * values converted and checked, line-numbered issues, nothing dropped.
+ * values converted and checked, line-numbered issues, nothing dropped. For a large file, read it
+ * with {@linkcode readTableFile} instead: the bytes are then never all in memory.
  *
- * @param input CSV text, or its bytes (decoded as strict UTF-8).
- * @param options Column mapping, units, quantities, delimiter, population, policy.
+ * @param input CSV text, or its bytes (decoded strictly, as UTF-8 unless `encoding` is set).
+ * @param options Column mapping, units, quantities, delimiter, encoding, population, policy.
  * @returns The table; it displays itself in a notebook.
- * @throws {TypeError} For bytes that are not UTF-8, an empty file, a header without a name, two
- * columns of one quantity, a recognised numeric column without a unit, a unit that cannot be
- * converted, malformed quotes; with `onInvalid: "throw"`, for the first invalid cell.
+ * @throws {TypeError} For bytes the encoding cannot hold (with their offset and line), an
+ * unknown encoding, an empty file, a header without a name, two columns of one quantity, a
+ * recognised numeric column without a unit, a unit that cannot be converted, malformed quotes
+ * (with their line); with `onInvalid: "throw"`, for the first invalid cell.
  * @throws {RangeError} With `onInvalid: "throw"`, for the first value outside its valid range.
  *
  * @example
@@ -201,282 +428,92 @@ interface Plan {
  */
 export function readTable(input: string | Uint8Array, options: ReadTableOptions = {}): Table {
   const source = options.source ?? "table";
-  let text: string;
-  if (typeof input === "string") text = input.replace(/^\uFEFF/, "");
-  else if (input instanceof Uint8Array) text = decodeUtf8(input, source).replace(/^\uFEFF/, "");
-  else {
+  const reader = new TableReader(options);
+  if (typeof input === "string") reader.push(input, true);
+  else if (input instanceof Uint8Array) {
+    reader.push(new TableDecoder(source, options.encoding).decode(input, true), true);
+  } else {
     throw new TypeError(`${source}: expected CSV text or bytes, got ${typeof input}`);
   }
-  // leading "# …" lines (cautions written by writeTableCsv) are comments, not data
-  let skipped = 0;
-  while (text.startsWith("#")) {
-    const nl = text.indexOf("\n");
-    text = nl < 0 ? "" : text.slice(nl + 1);
-    skipped++;
-  }
-  const delimiter = !options.delimiter || options.delimiter === "auto"
-    ? detectDelimiter(text)
-    : options.delimiter;
-  // papaparse's package ships no types: the part of its result used here
-  const parsed = Papa.parse(text, { delimiter, skipEmptyLines: false }) as {
-    data: string[][];
-    errors: { code: string; message: string; row?: number }[];
-  };
-  const rows = parsed.data;
-  const headerRow = rows[0];
-  if (headerRow === undefined || headerRow.every((h) => h.trim() === "")) {
-    throw new TypeError(`${source}: expected a header line, got an empty file`);
-  }
-  const issues: ValidationIssue[] = [];
-  const fail = (message: string): never => {
-    throw new TypeError(`${source}: ${message}`);
-  };
-  // line where each parsed record starts
-  const lineOf: number[] = [];
-  let line = 1 + skipped;
-  for (const fields of rows) {
-    lineOf.push(line);
-    line += 1 + countNewlines(fields);
-  }
-  const quoteError = parsed.errors.find((e) =>
-    e.code === "MissingQuotes" || e.code === "InvalidQuotes"
-  );
-  if (quoteError) {
-    fail(
-      `line ${lineOf[quoteError.row ?? 0] ?? "?"}: expected every quoted field to be closed, got ${
-        quoteError.code === "MissingQuotes"
-          ? "an unclosed quote"
-          : "a quote inside an unquoted field"
-      } (${quoteError.message})`,
-    );
-  }
-  const quantities = [...(options.quantities ?? QUANTITIES.values())];
-  const explicit = options.columns ?? {};
-  const headers = headerRow.map((h) => h.trim());
-  if (headers.length === 1 && delimiter === "," && /[;\t]/.test(headers[0]!)) {
-    fail(`expected columns separated by ',', ';' or tabs, got one column '${headers[0]}'`);
-  }
-  const plans: Plan[] = headers.map((header, index) => {
-    if (header === "") fail(`line 1: expected a name for column ${index + 1}, got an empty header`);
-    const split = splitHeader(header);
-    const mapped = explicit[header] ?? explicit[split.name];
-    let quantity: Quantity | null = null;
-    let unit = split.unit ?? options.units?.[header] ?? options.units?.[split.name];
-    if (mapped === "text") quantity = null;
-    else if (mapped !== undefined) {
-      quantity = typeof mapped === "string"
-        ? QUANTITIES.get(mapped) ?? quantities.find((q) => q.id === mapped) ?? null
-        : mapped;
-      if (quantity === null) {
-        fail(`column '${header}' is mapped to an unknown quantity '${mapped}'`);
-      }
-    } else {
-      let matches = quantities.filter((q) => headerMatches(q, split.name));
-      if (matches.length === 0 && unit === undefined) {
-        // a unit written as the header's last word: "lvotDiameterMm", "lvef_percent"
-        const words = normalizeHeader(split.name).split(" ");
-        const word = UNIT_WORDS[words.at(-1) ?? ""];
-        if (word !== undefined && words.length > 1) {
-          const stem = words.slice(0, -1).join(" ");
-          matches = quantities.filter((q) => headerMatches(q, stem));
-          if (matches.length > 0) unit = word;
-        }
-      }
-      if (matches.length > 1) {
-        fail(
-          `column '${header}' could mean ${
-            matches.map((q) => q.label).join(" or ")
-          }; map it with the option columns`,
-        );
-      }
-      quantity = matches[0] ?? null;
-    }
-    if (quantity === null) {
-      return {
-        index,
-        header,
-        name: split.name,
-        quantity: null,
-        sourceUnit: "",
-        factor: 1,
-        divisor: 0,
-      };
-    }
-    if (unit === undefined) {
-      if (quantity.unit === "1" || quantity.unit === "%") unit = quantity.unit;
-      else {
-        fail(
-          `column '${header}' (${quantity.label}) has no unit: expected it in the header, e.g. '${split.name} [${quantity.unit}]', got '${header}'`,
-        );
-      }
-    }
-    if (unit !== quantity.unit && typeof readAmount(`1 ${unit}`, quantity.unit) !== "number") {
-      unit = UNIT_WORDS[unit!.toLowerCase()] ?? unit; // "y", "mps", "pct"
-    }
-    const factor = unit === quantity.unit ? 1 : readAmount(`1 ${unit}`, quantity.unit);
-    if (typeof factor !== "number") {
-      return fail(
-        `column '${header}' (${quantity.label}): expected a unit convertible to ${
-          formatUnit(quantity.unit) || "a number"
-        }, got '${unit}'`,
-      );
-    }
-    const inverse = Math.round(1 / factor);
-    const divisor = factor < 1 && Math.abs(1 / factor - inverse) < 1e-9 * inverse ? inverse : 0;
-    return { index, header, name: quantity.id, quantity, sourceUnit: unit!, factor, divisor };
-  });
-  const seen = new Map<string, string>();
-  for (const p of plans) {
-    const before = seen.get(p.name);
-    if (before !== undefined) {
-      fail(
-        p.quantity
-          ? `columns '${before}' and '${p.header}' both hold ${p.quantity.label}; expected one (map one of them as text)`
-          : `expected unique column names, got '${p.name}' twice`,
-      );
-    }
-    seen.set(p.name, p.header);
-  }
-
-  // data rows: blank lines are recorded and skipped, every other line is a row
-  const width = headers.length;
-  const dataRows: number[] = [];
-  const blankLines: number[] = [];
-  for (let r = 1; r < rows.length; r++) {
-    const fields = rows[r]!;
-    if (fields.length === 1 && fields[0]!.trim() === "") {
-      // a final empty record after the last line break is not a line of data
-      if (r !== rows.length - 1) blankLines.push(lineOf[r]!);
-      continue;
-    }
-    dataRows.push(r);
-  }
-  const n = dataRows.length;
-  const lines = Int32Array.from(dataRows.map((r) => lineOf[r]!));
-  const population = options.population ?? "adult";
-  const columns = new Map<string, Column>();
-  const values = plans.map((p) => (p.quantity ? new Float64Array(n) : new Array<string>(n)));
-  for (let i = 0; i < n; i++) {
-    const fields = rows[dataRows[i]!]!;
-    const at = lines[i]!;
-    if (fields.length !== width) {
-      issues.push({
-        kind: "format",
-        severity: "error",
-        where: source,
-        field: "",
-        received: `${fields.length} fields`,
-        expected: `${width} fields as in the header (the row is kept; missing cells are empty)`,
-        row: i,
-        line: at,
-      });
-    }
-    for (let c = 0; c < plans.length; c++) {
-      const p = plans[c]!;
-      const cell = fields[p.index] ?? "";
-      if (p.quantity === null) {
-        // a cell the writer neutralised against spreadsheet formulas reads back as written
-        (values[c] as string[])[i] = /^'[=+\-@\t\r]/.test(cell) ? cell.slice(1) : cell;
-        continue;
-      }
-      const col = values[c] as Float64Array;
-      const q = p.quantity;
-      if (cell.trim() === "") {
-        col[i] = NaN;
-        issues.push({
-          kind: "notMeasured",
-          severity: "warning",
-          where: source,
-          field: p.header,
-          label: q.label,
-          received: "an empty cell",
-          expected: "a value",
-          row: i,
-          line: at,
-        });
-        continue;
-      }
-      let v: number;
-      if (DECIMAL.test(cell)) {
-        const x = Number(cell);
-        v = p.divisor ? x / p.divisor : x * p.factor;
-      } else {
-        const read = readAmount(cell, q.unit);
-        v = typeof read === "number" ? read : NaN;
-        if (typeof read !== "number") {
-          col[i] = NaN;
-          issues.push({
-            kind: "type",
-            severity: "error",
-            where: source,
-            field: p.header,
-            label: q.label,
-            received: JSON.stringify(cell),
-            range: q.valid,
-            expected: `as a number in ${
-              p.sourceUnit === q.unit
-                ? formatRange(q.valid, q.unit)
-                : `${formatUnit(p.sourceUnit)} (valid: ${formatRange(q.valid, q.unit)})`
-            }`,
-            row: i,
-            line: at,
-          });
-          continue;
-        }
-      }
-      const checked = checkValue(p.header, quantityField(q), v, {
-        where: source,
-        population,
-        row: i,
-        line: at,
-      });
-      col[i] = checked.value ?? NaN;
-      for (const issue of checked.issues) {
-        issues.push(
-          p.factor === 1 && p.divisor === 0 ? issue : {
-            ...issue,
-            received: `${JSON.stringify(`${cell.trim()} ${formatUnit(p.sourceUnit)}`)} (${
-              withUnit(String(v), q.unit)
-            })`,
-          },
-        );
-      }
-    }
-  }
-  plans.forEach((p, c) => {
-    const column: Column = p.quantity
-      ? {
-        kind: "numeric",
-        name: p.name,
-        header: p.header,
-        quantity: p.quantity,
-        sourceUnit: p.sourceUnit,
-        role: "value",
-        computed: false,
-        values: values[c] as Float64Array,
-      } satisfies NumericColumn
-      : {
-        kind: "text",
-        name: p.name,
-        header: p.header,
-        values: values[c] as string[],
-      } satisfies TextColumn;
-    columns.set(p.name, column);
-  });
-  const table = makeTable({
-    source,
-    rowCount: n,
-    lines,
-    columns,
-    issues,
-    blankLines,
-    cautions: [],
-  });
-  if (options.onInvalid === "throw") throwIfErrors(issues);
-  return table;
+  return reader.finish();
 }
 
-/** A table that displays itself in a notebook. */
+/**
+ * Reads a table from a stream of bytes, chunk by chunk: the same table as {@linkcode readTable}
+ * on the whole file, in working memory bounded by one chunk of text and one record besides the
+ * columns themselves (8 bytes per numeric cell; text cells share repeated values).
+ *
+ * @param stream The file's bytes (e.g. `(await Deno.open(path)).readable`).
+ * @param options As for `readTable`.
+ * @returns The table.
+ * @throws {TypeError} As `readTable`; for a record longer than {@linkcode MAX_RECORD_CHARS}.
+ *
+ * @example
+ * ```ts
+ * import { readTableStream } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * // "é" and a quoted line break split across chunks
+ * const bytes = new TextEncoder().encode('patient,note\nRené,"two\nlines"\nB,x\n');
+ * const stream = ReadableStream.from([bytes.subarray(0, 16), bytes.subarray(16)]);
+ * const t = await readTableStream(stream, { source: "notes.csv" });
+ * const patient = t.columns.get("patient")!;
+ * assert.ok(patient.kind === "text" && patient.values[0] === "René");
+ * assert.deepEqual(Array.from(t.lines), [2, 4]); // the second row starts on line 4
+ * ```
+ */
+export async function readTableStream(
+  stream: ReadableStream<Uint8Array>,
+  options: ReadTableOptions = {},
+): Promise<Table> {
+  const decoder = new TableDecoder(options.source ?? "table", options.encoding);
+  const reader = new TableReader(options);
+  for await (const chunk of stream) reader.push(decoder.decode(chunk), false);
+  reader.push(decoder.decode(new Uint8Array(0), true), true);
+  return reader.finish();
+}
+
+/**
+ * Reads a table from a file, streamed (see {@linkcode readTableStream}); the source of messages
+ * is the path unless given.
+ *
+ * @param path The file.
+ * @param options As for `readTable`.
+ * @returns The table.
+ * @throws {Deno.errors.NotFound} When the file does not exist (and the other errors of opening a
+ * file).
+ * @throws {TypeError} As `readTableStream`.
+ *
+ * @example
+ * ```ts
+ * import { readTableFile } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * // invented demo data: 30 subjects × 3 observers × 2 replicates
+ * const t = await readTableFile(new URL("../../examples/data/validation_demo.csv", import.meta.url));
+ * assert.equal(t.rowCount, 180);
+ * const ef = t.columns.get("ejectionFraction")!;
+ * assert.ok(ef.kind === "numeric" && ef.values[0] === 74.3); // the first reading, as written
+ * ```
+ */
+export async function readTableFile(
+  path: string | URL,
+  options: ReadTableOptions = {},
+): Promise<Table> {
+  const file = await Deno.open(path, { read: true });
+  return await readTableStream(file.readable, { source: String(path), ...options });
+}
+
+/**
+ * A table that displays itself in a notebook.
+ *
+ * @example
+ * ```ts
+ * import { makeTable } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const t = makeTable({ source: "x", rowCount: 0, lines: new Int32Array(0), columns: new Map(),
+ *   issues: [], blankLines: [], cautions: [] });
+ * assert.equal(t.kind, "sonorigor.table");
+ * ```
+ */
 export function makeTable(parts: Omit<Table, "kind">): Table {
   const table: Table = { kind: "sonorigor.table", ...parts };
   return Object.assign(table, { [JUPYTER_DISPLAY]: () => displayTable(table) });

@@ -5,7 +5,7 @@
  *
  * @module
  */
-import type { Quantity, ValidationIssue } from "../core/types.ts";
+import type { Population, Quantity, ValidationIssue } from "../core/types.ts";
 import type { UncertainInput } from "../uncertainty/distributions.ts";
 
 /** A column of numbers of one quantity, in its canonical unit (NaN where missing or invalid). */
@@ -74,3 +74,28 @@ export type UncertaintyModel =
   | { readonly standardUncertainty: number | string }
   | { readonly relative: number }
   | ((value: number) => UncertainInput);
+
+/** Options of the table readers (`readTable`, `readTableStream`, `readTableFile`). */
+export interface ReadTableOptions {
+  /** Name of the source in messages (a file name). @default "table" (the path for a file) */
+  readonly source?: string;
+  /** Columns mapped by hand: header (with or without its "[unit]") → quantity (or its id), or
+   * "text" to keep a column as text. Other headers are recognised automatically. */
+  readonly columns?: Readonly<Record<string, string | Quantity>>;
+  /** The unit of a column whose header has none: header → unit. */
+  readonly units?: Readonly<Record<string, string>>;
+  /** Quantities to recognise headers by. @default every quantity of the package */
+  readonly quantities?: Iterable<Quantity>;
+  /** The delimiter, or "auto" to detect it from the header line. @default "auto" */
+  readonly delimiter?: "," | ";" | "\t" | "auto";
+  /** The encoding of bytes: a label of the WHATWG Encoding Standard ("utf-8", "windows-1252",
+   * "iso-8859-1", "utf-16le", …). Decoding is strict whatever the encoding: a byte sequence the
+   * encoding cannot hold is an error with its byte offset and line, never a replacement
+   * character. Ignored for text input. @default "utf-8" */
+  readonly encoding?: string;
+  /** Which typical ranges flag the values. @default "adult" */
+  readonly population?: Population;
+  /** "flag" keeps invalid cells as NaN with an error issue; "throw" throws the first error after
+   * the whole file is checked (its `issues` list all). @default "flag" */
+  readonly onInvalid?: "flag" | "throw";
+}

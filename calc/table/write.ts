@@ -2,14 +2,18 @@
  * Writing a table as CSV: headers "label [unit]" that read back to the same quantities, numbers
  * as reported (by the metrology rule next to an uncertainty, to the quantity's resolution
  * otherwise) or at full precision, empty cells for missing values, a flags column with every
- * row's issues, the cautions in a leading comment line, and text cells neutralised against
- * spreadsheet formula injection.
+ * row's issues, the cautions in leading comment lines, and every text cell (headers, identifiers,
+ * flags, comments) neutralised against spreadsheet formula injection.
  *
  * @module
  */
 import type { Table } from "./types.ts";
 import { renderIssue } from "../core/issues.ts";
+import { neutraliseFormula } from "./formula_guard.ts";
 import { reportedCell } from "../../display/table.ts";
+
+/** A number as written: optional minus, digits, optional fraction and exponent (or nothing). */
+const PLAIN_NUMBER = /^(-?\d+(\.\d+)?([eE][-+]?\d+)?)?$/;
 
 /** Options of {@linkcode writeTableCsv}. */
 export interface WriteTableOptions {
@@ -22,21 +26,32 @@ export interface WriteTableOptions {
 }
 
 /**
- * A text cell made safe for CSV (RFC 4180 quoting) and for spreadsheets: a cell that starts with
- * =, +, -, @, a tab or a carriage return is prefixed with an apostrophe so that no spreadsheet
- * evaluates it as a formula (the OWASP recommendation against CSV injection).
+ * A text cell made safe for CSV and for spreadsheets. Spreadsheets evaluate a cell that starts
+ * with =, +, -, @, a tab, a carriage return, a line feed or a NUL as a formula (CSV or formula
+ * injection: OWASP, "CSV Injection"; OWASP ASVS 5.0 requirement 1.2.10); the common practice,
+ * used here, is to prefix such a cell with an apostrophe, which spreadsheets take as a text
+ * marker and do not show (see `neutraliseFormula`; `readTable` removes it again, so a written
+ * table reads back as it was). Then the cell is quoted as RFC 4180 §2.6–2.7 says when it holds a
+ * quote, a comma, a semicolon, a tab or a line break (so it stays one cell whatever delimiter a
+ * spreadsheet guesses). Numbers are written by `writeTableCsv` as plain decimals ("-2.5", never
+ * an expression), which spreadsheets read as numbers.
+ *
+ * @param text The cell's text.
+ * @returns The cell as written in the file.
  *
  * @example
  * ```ts
  * import { csvTextCell } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
  * assert.equal(csvTextCell("+1+1"), "'+1+1");
+ * assert.equal(csvTextCell("@SUM(A1)"), "'@SUM(A1)");
  * assert.equal(csvTextCell('a "b", c'), '"a ""b"", c"');
+ * assert.equal(csvTextCell("=1;=2"), `"'=1;=2"`);
  * ```
  */
 export function csvTextCell(text: string): string {
-  const safe = /^[=+\-@\t\r]/.test(text) ? `'${text}` : text;
-  return /[",\r\n]/.test(safe) ? `"${safe.replace(/"/g, '""')}"` : safe;
+  const safe = neutraliseFormula(text);
+  return /[",;\t\r\n]/.test(safe) ? `"${safe.replace(/"/g, '""')}"` : safe;
 }
 
 /**
@@ -51,7 +66,8 @@ export function csvTextCell(text: string): string {
  * import { bsaMosteller, evaluateTable, readTable, writeTableCsv } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
  * const t = evaluateTable(readTable("id,height [cm],weight [kg]\nA,180,80\n"), bsaMosteller);
- * const lines = writeTableCsv(t).split("\n").filter((l) => !l.startsWith("#"));
+ * // the cautions come first, as comment lines ("#", quoted when they hold a delimiter)
+ * const lines = writeTableCsv(t).split("\n").filter((l) => !/^"?#/.test(l));
  * // Mosteller: √(180·80/3600) = 2 m² (hand-checkable)
  * assert.equal(lines[0], "id,Height [cm],Weight [kg],Body surface area [m^2],flags");
  * assert.equal(lines[1], "A,180,80,2.00,");
@@ -83,12 +99,15 @@ export function writeTableCsv(table: Table, options: WriteTableOptions = {}): st
       if (c.kind === "text") cells[k++] = csvTextCell(c.values[i] ?? "");
       else {
         const v = c.values[i]!;
-        cells[k++] = v !== v ? "" : full ? String(v) : reportedCell(table, c, i);
+        const cell = v !== v ? "" : full ? String(v) : reportedCell(table, c, i);
+        // a plain decimal is a number to a spreadsheet; anything else is written as text
+        cells[k++] = PLAIN_NUMBER.test(cell) ? cell : csvTextCell(cell);
       }
     }
     if (withFlags) cells[k] = csvTextCell((byRow.get(i) ?? []).join("; "));
     out[i + 1] = cells.join(",");
   }
-  const comments = table.cautions.map((c) => `# ${c.replace(/[\r\n]+/g, " ")}`);
-  return [...comments, ...out].join("\n") + "\n";
+  // a comment line is one quoted cell when it holds a delimiter, so no part of it starts a cell
+  const comments = table.cautions.map((c) => csvTextCell(`# ${c.replace(/[\r\n]+/g, " ")}`));
+  return (comments.length > 0 ? comments.join("\n") + "\n" : "") + out.join("\n") + "\n";
 }

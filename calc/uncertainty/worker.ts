@@ -8,10 +8,16 @@
  * The worker never handles units: it marks itself formula-only before loading any module of the
  * package, which then skips loading mathjs (calc/core/units.ts).
  *
+ * It runs on `node:worker_threads` (see pool.ts for why), says "ready" once it listens, and
+ * handles its messages strictly one after the other, in the order sent, a load included: the pool
+ * may send a new worker its modules and its runs at once, and knows which run a worker was busy
+ * with when it died (the oldest one not answered).
+ *
  * Internal: not exported from the package.
  *
  * @module
  */
+import { parentPort } from "node:worker_threads";
 import type { Calculation, Recipe } from "../core/types.ts";
 import type { Catalog } from "../core/catalog.ts";
 import type { SequenceStatistics } from "./adaptive.ts";
@@ -51,9 +57,11 @@ export interface PlainError {
   readonly message: string;
 }
 
-/** Replies from a worker. Tasks run in order; on a failure, `failedTask` is its index and the
- * tasks before it are complete. */
+/** Messages from a worker: "ready" once it listens (Deno drops what a `node:worker_threads`
+ * worker is sent before it listens, so nothing is sent before), then one reply per request. Tasks
+ * run in order; on a failure, `failedTask` is its index and the tasks before it are complete. */
 export type WorkerReply =
+  | { readonly type: "ready" }
   | {
     readonly type: "loaded";
     readonly job: number;
@@ -74,14 +82,15 @@ export type WorkerReply =
     readonly error: PlainError | null;
   };
 
-const scope = globalThis as unknown as {
-  onmessage: ((event: MessageEvent<WorkerRequest>) => void) | null;
-  postMessage(message: WorkerReply, transfer?: Transferable[]): void;
-  [key: symbol]: unknown;
-};
+if (parentPort === null) {
+  throw new Error(
+    "Monte Carlo pool: calc/uncertainty/worker.ts runs only as a worker of createMonteCarloPool()",
+  );
+}
+const port = parentPort;
 // FORMULA_ONLY_WORKER of calc/core/units.ts, set before any module of the package is loaded
 // (importing units.ts to read it would load mathjs)
-scope[Symbol.for("sonorigor.formulaOnlyWorker")] = true;
+(globalThis as Record<symbol, unknown>)[Symbol.for("sonorigor.formulaOnlyWorker")] = true;
 const { BLOCK_TRIALS, runBlocks } = await import("./sampling.ts");
 const { sequenceStatistics } = await import("./adaptive.ts");
 const { sortedTails } = await import("./intervals.ts");
@@ -104,8 +113,8 @@ async function load(modules: readonly string[]): Promise<void> {
     }
     const values = Object.values(module);
     const kindOf = (v: unknown) => (v as { kind?: unknown } | null)?.kind;
+    for (const v of values) if (kindOf(v) === "sonorigor.catalog") found.push(v as Catalog);
     found.push(
-      ...values.filter((v) => kindOf(v) === "sonorigor.catalog") as Catalog[],
       defineCatalog({
         calculations: values.filter(isCalculation),
         families: values.filter((v) => kindOf(v) === "sonorigor.family") as never[],
@@ -205,13 +214,14 @@ function run(request: Extract<WorkerRequest, { type: "run" }>): WorkerReply {
   return reply(-1, null);
 }
 
-scope.onmessage = async ({ data }) => {
+/** Answers one request. */
+async function answer(data: WorkerRequest): Promise<void> {
   if (data.type === "load") {
     try {
       await load(data.modules);
-      scope.postMessage({ type: "loaded", job: data.job, error: null });
+      port.postMessage({ type: "loaded", job: data.job, error: null } satisfies WorkerReply);
     } catch (e) {
-      scope.postMessage({ type: "loaded", job: data.job, error: plain(e) });
+      port.postMessage({ type: "loaded", job: data.job, error: plain(e) } satisfies WorkerReply);
     }
   } else {
     const reply = run(data) as Extract<WorkerReply, { type: "done" }>;
@@ -220,6 +230,13 @@ scope.onmessage = async ({ data }) => {
       ...reply.draws.flat().filter((d): d is Float64Array => d !== null),
       ...reply.tails.flat().flatMap((t) => [t.low, t.high]),
     ];
-    scope.postMessage(reply, [...new Set(arrays.map((a) => a.buffer as ArrayBuffer))]);
+    port.postMessage(reply, [...new Set(arrays.map((a) => a.buffer as ArrayBuffer))]);
   }
-};
+}
+
+/** Requests answered in the order sent: each waits for the one before (a load awaits imports). */
+let answered: Promise<void> = Promise.resolve();
+port.on("message", (data: WorkerRequest) => {
+  answered = answered.then(() => answer(data));
+});
+port.postMessage({ type: "ready" } satisfies WorkerReply);

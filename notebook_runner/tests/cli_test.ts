@@ -4,7 +4,8 @@
  */
 import assert from "node:assert/strict";
 import { pathFromCaller } from "../cli.ts";
-import { processExists, processGroupAlive } from "../testing.ts";
+import type { Notebook, Output } from "../nbformat.ts";
+import { childProcesses, processExists, processGroupAlive } from "../testing.ts";
 import { CAN_RUN_KERNEL, copyFixtures, FIXTURES, PACKAGE } from "./helpers.ts";
 
 Deno.test("pathFromCaller: relative to the caller, shown relative to the current folder", () => {
@@ -145,7 +146,7 @@ kernelTest("CLI: Ctrl-C during a hanging cell stops the kernel and exits 130", a
   const status = await child.status;
   assert.ok(aliveBeforeInterrupt, "the kernel ran before Ctrl-C (so the check below can fail)");
   assert.equal(status.code, 130, stderr);
-  assert.match(stderr, /Interrupted: stopping the kernel/);
+  assert.match(stderr, /Interrupted by SIGINT: stopping the kernel/);
   assert.match(stderr, /cell 3 of 4 was interrupted/);
   assert.ok(kernelPid !== undefined);
   assert.equal(processExists(kernelPid), false, "kernel still running after Ctrl-C");
@@ -212,5 +213,199 @@ kernelTest(
     }
     await Deno.stat(`${dir}/hangs.partial.ipynb`);
     await Deno.remove(dir, { recursive: true });
+  },
+);
+
+/** What {@linkcode runDuringFlood} saw. */
+interface FloodRun {
+  /** The CLI's exit status. */
+  status: Deno.CommandStatus;
+  /** Everything the CLI wrote on stderr. */
+  stderr: string;
+  /** The kernel's pid (its process group id). */
+  kernelPid: number;
+  /** The notebook client the CLI started. */
+  clientPid: number;
+  /** Milliseconds from the start of the flooding cell to the CLI's exit. */
+  afterFloodStartMs: number;
+  /** The copy of the flood fixture's folder. */
+  dir: string;
+}
+
+/**
+ * Runs the CLI on the flood fixture (cell 3 of 4 prints 200,000 lines); `during`, when given, is
+ * called `afterMs` after the flooding cell started. Whatever happens, nothing is left running: after
+ * 120 s the CLI, its notebook client and the kernel's group are killed (and the test fails).
+ */
+async function runDuringFlood(
+  args: string[],
+  during?: { afterMs: number; act: (cli: Deno.ChildProcess) => void },
+): Promise<FloodRun> {
+  const dir = await copyFixtures("floods.ipynb");
+  const child = cli([`${dir}/floods.ipynb`, ...args]).spawn();
+  let stderr = "";
+  let kernelPid: number | undefined;
+  let clientPid: number | undefined;
+  let floodStarted: number | undefined;
+  let actTimer: ReturnType<typeof setTimeout> | undefined;
+  const decoder = new TextDecoder();
+  let watchdogFired = false;
+  const watchdog = setTimeout(() => {
+    watchdogFired = true;
+    for (
+      const [pid, target] of [[child.pid, child.pid], [clientPid, clientPid], [
+        kernelPid,
+        -kernelPid!,
+      ]]
+    ) {
+      if (pid !== undefined) {
+        try {
+          Deno.kill(target!, "SIGKILL");
+        } catch {
+          // already gone
+        }
+      }
+    }
+  }, 120_000);
+  try {
+    for await (const chunk of child.stderr) {
+      stderr += decoder.decode(chunk);
+      kernelPid ??= Number(/kernel started \(pid (\d+)/.exec(stderr)?.[1]) || undefined;
+      clientPid ??= childProcesses(child.pid).find((c) => c.command.includes("child.ts"))?.pid;
+      if (floodStarted === undefined && /\[cell 2\/4, code 1\/3\] ok in/.test(stderr)) {
+        floodStarted = Date.now();
+        if (during !== undefined) actTimer = setTimeout(() => during.act(child), during.afterMs);
+      }
+    }
+  } finally {
+    clearTimeout(watchdog);
+    clearTimeout(actTimer);
+  }
+  await child.stdout.cancel();
+  const status = await child.status;
+  assert.ok(!watchdogFired, `the runner was still running 120 s after it started:\n${stderr}`);
+  assert.ok(
+    kernelPid !== undefined && clientPid !== undefined && floodStarted !== undefined,
+    stderr,
+  );
+  return {
+    status,
+    stderr,
+    kernelPid,
+    clientPid,
+    afterFloodStartMs: Date.now() - floodStarted,
+    dir,
+  };
+}
+
+/** The flooding cell of the partial notebook the run left, and its stdout lines. */
+async function floodCellOfPartial(dir: string): Promise<{ outputs: Output[]; lines: string[] }> {
+  const partial = JSON.parse(await Deno.readTextFile(`${dir}/floods.partial.ipynb`)) as Notebook;
+  const cells = partial.cells.filter((c) => c.cell_type === "code");
+  const flood = cells[1];
+  assert.ok(flood?.cell_type === "code");
+  assert.equal(
+    cells[2]?.cell_type === "code" && cells[2].execution_count,
+    null,
+    "cell 4 never ran",
+  );
+  const lines = flood.outputs.flatMap((o) =>
+    o.output_type === "stream" && o.name === "stdout"
+      ? (Array.isArray(o.text) ? o.text : [o.text])
+      : []
+  );
+  // the outputs so far: a prefix of what the cell prints, in order, nothing lost in between
+  assert.ok(lines.length > 0, "some flood output reached the partial notebook");
+  assert.equal(lines.findIndex((line, i) => line !== `line ${i}\n`), -1);
+  return { outputs: flood.outputs, lines };
+}
+
+function assertNothingLeft(run: FloodRun): void {
+  assert.equal(processExists(run.kernelPid), false, `kernel ${run.kernelPid} still running`);
+  assert.equal(
+    processGroupAlive(run.kernelPid),
+    false,
+    `kernel group ${run.kernelPid} still alive`,
+  );
+  assert.equal(
+    processExists(run.clientPid),
+    false,
+    `notebook client ${run.clientPid} still running`,
+  );
+}
+
+/**
+ * Checks a run stopped by the cell limit: noticed within a second of the limit while messages
+ * poured in, the CLI gone within 10 s more (interrupt, kill, write), nothing left running, and
+ * the partial notebook with the outputs so far and the timeout error naming the limit.
+ */
+async function assertTimedOutDuringFlood(run: FloodRun, limit: number) {
+  assert.equal(run.status.code, 1, run.stderr);
+  const seconds = Number(
+    /\[cell 3\/4, code 2\/3\] TIMED OUT after (\d+\.\d+) s/.exec(run.stderr)?.[1],
+  );
+  assert.ok(
+    seconds >= limit && seconds <= limit + 1,
+    `timed out after ${seconds} s:\n${run.stderr}`,
+  );
+  // interrupt, kill, write: the whole stop is bounded too
+  assert.ok(
+    run.afterFloodStartMs < (limit + 10) * 1000,
+    `the CLI exited ${run.afterFloodStartMs} ms after the flood began`,
+  );
+  assert.match(run.stderr, /cell 3 of 4 timed out/);
+  assertNothingLeft(run);
+  const { outputs } = await floodCellOfPartial(run.dir);
+  const last = outputs.at(-1);
+  assert.ok(last?.output_type === "error");
+  assert.equal(last.ename, "CellTimeoutError");
+  assert.match(
+    last.evalue,
+    new RegExp(
+      `^Cell did not finish within ${limit} s( \\(its output was still arriving\\))?; the kernel was stopped$`,
+    ),
+  );
+  await Deno.remove(run.dir, { recursive: true });
+}
+
+kernelTest(
+  "CLI: --timeout 2 stops a flooding cell promptly and writes the partial notebook",
+  async () => {
+    await assertTimedOutDuringFlood(await runDuringFlood(["--timeout", "2"]), 2);
+  },
+);
+
+kernelTest("CLI: --timeout 10 holds deep into a flood (tens of thousands of lines)", async () => {
+  // 10 s in, a per-message cost that grows with the output so far and a drain loop that never
+  // yields had let the cell run seconds past its limit and the stop take up to a minute
+  await assertTimedOutDuringFlood(await runDuringFlood(["--timeout", "10"]), 10);
+});
+
+kernelTest(
+  "CLI: SIGTERM during an output flood stops everything, exits 143, writes the partial",
+  async () => {
+    // 10 s in: tens of thousands of lines so far, the flood still going
+    const run = await runDuringFlood(["--timeout", "120"], {
+      afterMs: 10_000,
+      act: (cli) => cli.kill("SIGTERM"),
+    });
+    // exit status 128 + the signal number (SIGTERM is 15, POSIX signal.h / Linux signal(7))
+    assert.equal(run.status.code, 143, run.stderr);
+    assert.ok(
+      run.afterFloodStartMs < 25_000,
+      `the CLI exited ${run.afterFloodStartMs} ms after the flood began`,
+    );
+    assert.match(run.stderr, /Interrupted by SIGTERM: stopping the kernel/);
+    assert.match(run.stderr, /cell 3 of 4 was interrupted/);
+    assertNothingLeft(run);
+    const { outputs, lines } = await floodCellOfPartial(run.dir);
+    assert.ok(lines.length < 200_000, "the flood was cut short");
+    assert.deepEqual(outputs.at(-1), {
+      output_type: "error",
+      ename: "InterruptedError",
+      evalue: "Run interrupted by SIGTERM; the kernel was stopped",
+      traceback: ["InterruptedError: Run interrupted by SIGTERM; the kernel was stopped"],
+    });
+    await Deno.remove(run.dir, { recursive: true });
   },
 );

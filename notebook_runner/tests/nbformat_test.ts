@@ -1,5 +1,6 @@
 import assert from "node:assert/strict";
 import {
+  appendLines,
   assertValidNotebook,
   checkDenoKernelspec,
   joinText,
@@ -240,4 +241,141 @@ Deno.test("OutputCollector places console output that trails an error before the
   fresh.handle("error", { ename: "E", evalue: "v", traceback: [] });
   fresh.handle("stream", { name: "stdout", text: "late\n" });
   assert.deepEqual(fresh.outputs.map((o) => o.output_type), ["stream", "error"]);
+});
+
+/**
+ * Counting harness: the characters that `String.prototype.split` and `Array.prototype.join`
+ * process while `work` runs (the two operations that turn stream chunks into stored lines).
+ */
+function textWork(work: () => void): number {
+  const split = String.prototype.split;
+  const join = Array.prototype.join;
+  let characters = 0;
+  String.prototype.split = function (this: string, ...args: Parameters<typeof split>) {
+    characters += this.length;
+    return split.apply(this, args);
+  } as typeof split;
+  Array.prototype.join = function (this: unknown[], separator?: string) {
+    const joined = join.call(this, separator);
+    characters += joined.length;
+    return joined;
+  };
+  try {
+    work();
+  } finally {
+    String.prototype.split = split;
+    Array.prototype.join = join;
+  }
+  return characters;
+}
+
+Deno.test("OutputCollector: stream text is accumulated in linear work, not re-split per message", () => {
+  // A flood of 5,000 one-line messages (40 kB). Re-joining and re-splitting all earlier text on
+  // every message processes about 5,000² / 2 lines (≈ 10⁸ characters); appending chunks and
+  // splitting once when the outputs are read processes each character a bounded number of times.
+  const chunks = Array.from({ length: 5_000 }, (_, i) => `line ${i}\n`);
+  const size = chunks.reduce((sum, chunk) => sum + chunk.length, 0);
+  const once = new OutputCollector();
+  const onceWork = textWork(() => {
+    for (const text of chunks) once.handle("stream", { name: "stdout", text });
+    void once.outputs;
+  });
+  assert.ok(onceWork <= 4 * size, `read once: ${onceWork} characters processed for ${size}`);
+  // a reader that looks at the outputs after every message (a progress view) stays linear too
+  const often = new OutputCollector();
+  const oftenWork = textWork(() => {
+    for (const text of chunks) {
+      often.handle("stream", { name: "stdout", text });
+      void often.outputs;
+    }
+  });
+  assert.ok(oftenWork <= 4 * size, `read often: ${oftenWork} characters processed for ${size}`);
+  for (const collector of [once, often]) {
+    assert.equal(collector.outputs.length, 1);
+    const [output] = collector.outputs;
+    assert.ok(output?.output_type === "stream");
+    assert.deepEqual(output.text, chunks); // one stored line per printed line, in order
+  }
+});
+
+Deno.test("OutputCollector: chunks cut anywhere give the lines of the whole text", () => {
+  // nbformat docs, "multiline strings": stored as lines that keep their "\n"; the kernel may cut
+  // console output anywhere (mid-line, several lines per message). Chunk lengths follow a fixed
+  // sequence (no randomness) so every cut position class occurs: mid-line, at "\n", several lines.
+  const text = Array.from({ length: 2_000 }, (_, i) => `velocity ${i} m/s\n`).join("") + "tail";
+  const collector = new OutputCollector();
+  let at = 0;
+  for (let k = 0; at < text.length; k++) {
+    const length = [1, 7, 16, 17, 18, 40, 300][k % 7]!;
+    collector.handle("stream", { name: "stdout", text: text.slice(at, at + length) });
+    if (k % 97 === 0) void collector.outputs; // reads in between must not change the result
+    at += length;
+  }
+  collector.handle("stream", { name: "stdout", text: "" }); // an empty message adds nothing
+  assert.deepEqual(collector.outputs, [
+    { output_type: "stream", name: "stdout", text: splitLines(text) },
+  ]);
+  assert.equal(joinText((collector.outputs[0] as { text: string[] }).text), text);
+});
+
+Deno.test("OutputCollector: stdout and stderr alternate as separate outputs; \\r is kept as sent", () => {
+  // Consecutive stream messages of one name merge; a message of the other name starts a new
+  // output (Jupyter front ends, nbformat "stream output"). Carriage returns are stored verbatim:
+  // the runner does not apply terminal overwriting (neither did it before).
+  const c = new OutputCollector();
+  for (let i = 0; i < 300; i++) {
+    c.handle("stream", { name: "stdout", text: `out ${i}\n` });
+    c.handle("stream", { name: "stdout", text: `progress ${i}%\r` });
+    if (i % 100 === 99) c.handle("stream", { name: "stderr", text: `warn ${i}\n` });
+  }
+  const outputs = c.outputs;
+  assert.deepEqual(outputs.map((o) => o.output_type === "stream" && o.name), [
+    "stdout",
+    "stderr",
+    "stdout",
+    "stderr",
+    "stdout",
+    "stderr",
+  ]);
+  const first = outputs[0] as { text: string[] };
+  assert.equal(first.text[0], "out 0\n");
+  assert.equal(first.text[1], "progress 0%\rout 1\n");
+  assert.equal(first.text.length, 101);
+  assert.equal(first.text.at(-2), "progress 98%\rout 99\n");
+  // an unterminated last line stays with its output; the next stdout output starts afresh
+  assert.equal(first.text.at(-1), "progress 99%\r");
+  assert.deepEqual(outputs[1], { output_type: "stream", name: "stderr", text: ["warn 99\n"] });
+  assert.equal((outputs[2] as { text: string[] }).text[0], "out 100\n");
+  assert.equal((outputs[4] as { text: string[] }).text.at(-1), "progress 299%\r");
+});
+
+Deno.test("OutputCollector: clear_output drops pending stream text; late text merges before an error", () => {
+  const c = new OutputCollector();
+  c.handle("stream", { name: "stdout", text: "old 1\n" });
+  c.handle("stream", { name: "stdout", text: "old 2\n" });
+  c.handle("clear_output", { wait: false });
+  c.handle("stream", { name: "stdout", text: "new\n" });
+  assert.deepEqual(c.outputs, [{ output_type: "stream", name: "stdout", text: ["new\n"] }]);
+  c.handle("stream", { name: "stdout", text: "kept until the next output\n" });
+  c.handle("clear_output", { wait: true });
+  c.handle("stream", { name: "stdout", text: "after wait\n" });
+  assert.deepEqual(c.outputs, [{ output_type: "stream", name: "stdout", text: ["after wait\n"] }]);
+  c.handle("stream", { name: "stdout", text: "par" });
+  c.handle("error", { ename: "E", evalue: "v", traceback: [] });
+  c.handle("stream", { name: "stdout", text: "tial\n" });
+  assert.deepEqual(c.outputs, [
+    { output_type: "stream", name: "stdout", text: ["after wait\n", "partial\n"] },
+    { output_type: "error", ename: "E", evalue: "v", traceback: [] },
+  ]);
+});
+
+Deno.test("appendLines continues an open last line and pushes the rest", () => {
+  // nbformat docs, "multiline strings": every stored line but the last ends with "\n"
+  assert.deepEqual(appendLines([], "a\nb"), ["a\n", "b"]);
+  assert.deepEqual(appendLines(["a\n", "b"], "c\nd\n"), ["a\n", "bc\n", "d\n"]);
+  assert.deepEqual(appendLines(["a\n"], "b"), ["a\n", "b"]);
+  assert.deepEqual(appendLines(["a"], ""), ["a"]);
+  assert.deepEqual(appendLines(["a"], "\n"), ["a\n"]);
+  const lines = ["x\n"];
+  assert.equal(appendLines(lines, "y"), lines, "changed in place");
 });

@@ -4,9 +4,9 @@
  */
 import assert from "node:assert/strict";
 import { stripAnsi } from "../html.ts";
-import { joinText, type Notebook, notebookProblems } from "../nbformat.ts";
-import { partialPathOf, runNotebook } from "../runner.ts";
-import { processExists, processGroupAlive } from "../testing.ts";
+import { joinText, type Notebook, notebookProblems, type Output } from "../nbformat.ts";
+import { runNotebook } from "../isolation.ts";
+import { childProcesses, processExists, processGroupAlive } from "../testing.ts";
 import { CAN_RUN_KERNEL, copyFixtures, FIXTURES, readJson } from "./helpers.ts";
 
 const kernelTest = (name: string, fn: () => Promise<void>) =>
@@ -18,9 +18,19 @@ function assertKernelGone(pid: number | undefined): void {
   assert.equal(processGroupAlive(pid), false, `processes left in the kernel's group ${pid}`);
 }
 
-Deno.test("partialPathOf puts the partial notebook beside the original", () => {
-  assert.equal(partialPathOf("notebooks/01-phantom.ipynb"), "notebooks/01-phantom.partial.ipynb");
-  assert.equal(partialPathOf("/tmp/a.b.ipynb"), "/tmp/a.b.partial.ipynb");
+Deno.test("runNotebook refuses a time limit or a stop grace outside its range", async () => {
+  await assert.rejects(runNotebook("x.ipynb", { timeoutSeconds: 0 }), {
+    name: "RangeError",
+    message: "Expected 'timeoutSeconds' in (0, ∞) seconds, got 0",
+  });
+  await assert.rejects(runNotebook("x.ipynb", { stopGraceSeconds: -1 }), {
+    name: "RangeError",
+    message: "Expected 'stopGraceSeconds' in [0, ∞) seconds, got -1",
+  });
+  await assert.rejects(runNotebook("x.ipynb", { stopGraceSeconds: Number.NaN }), {
+    name: "RangeError",
+    message: "Expected 'stopGraceSeconds' in [0, ∞) seconds, got NaN",
+  });
 });
 
 const code = (nb: Notebook) => nb.cells.filter((c) => c.cell_type === "code");
@@ -279,24 +289,7 @@ kernelTest("the kernel binary missing: clear message, status kernel", async () =
 
 kernelTest("a syntax error is located by the parser; a kernel that exits is reported", async () => {
   const dir = await Deno.makeTempDir({ prefix: "sonorigor-nb-test-" });
-  const cells = (sources: string[]) =>
-    JSON.stringify({
-      metadata: { kernelspec: { name: "deno", display_name: "Deno" } },
-      nbformat: 4,
-      nbformat_minor: 5,
-      cells: sources.map((source, i) => ({
-        id: `c${i}`,
-        cell_type: "code",
-        metadata: {},
-        source,
-        outputs: [],
-        execution_count: null,
-      })),
-    });
-  await Deno.writeTextFile(
-    `${dir}/syntax.ipynb`,
-    cells(["const a = 1;", "const b = 2;\nconst c = ;"]),
-  );
+  await codeNotebook(`${dir}/syntax.ipynb`, ["const a = 1;", "const b = 2;\nconst c = ;"]);
   const syntax = await runNotebook(`${dir}/syntax.ipynb`, { log: () => {} });
   assert.equal(syntax.status, "failed");
   assert.equal(syntax.failure?.ename, "SyntaxError");
@@ -304,7 +297,7 @@ kernelTest("a syntax error is located by the parser; a kernel that exits is repo
   assert.deepEqual(syntax.failure?.line, { number: 2, text: "const c = ;", how: "parser" });
   assertKernelGone(syntax.kernelPid);
 
-  await Deno.writeTextFile(`${dir}/exits.ipynb`, cells(["Deno.exit(3);", "1"]));
+  await codeNotebook(`${dir}/exits.ipynb`, ["Deno.exit(3);", "1"]);
   const exits = await runNotebook(`${dir}/exits.ipynb`, { log: () => {} });
   assert.equal(exits.status, "failed");
   assert.equal(exits.failure?.kind, "died");
@@ -351,3 +344,253 @@ kernelTest("--in-place replaces the original only after a successful run", async
   await Deno.stat(`${dir}/throws.partial.ipynb`);
   await Deno.remove(dir, { recursive: true });
 });
+
+/** The stdout lines of a cell's outputs, joined across stream outputs. */
+function stdoutLines(outputs: readonly Output[]): string[] {
+  return outputs.flatMap((o) =>
+    o.output_type === "stream" && o.name === "stdout"
+      ? (Array.isArray(o.text) ? o.text : [o.text])
+      : []
+  );
+}
+
+/** The index of the first line that is not `line ${i}\n`, or -1 when all are. */
+function firstMismatch(lines: readonly string[]): number {
+  return lines.findIndex((line, i) => line !== `line ${i}\n`);
+}
+
+kernelTest("an output flood of 200,000 lines is stored exactly, as one stream output", async () => {
+  // floods.ipynb prints "line 0" … "line 199999", one console.log (one iopub message) each
+  const out = await Deno.makeTempDir({ prefix: "sonorigor-nb-out-" });
+  const result = await runNotebook(`${FIXTURES}/floods.ipynb`, {
+    outDir: out,
+    timeoutSeconds: 300,
+    log: () => {},
+  });
+  assert.equal(result.status, "ok", result.message);
+  assertKernelGone(result.kernelPid);
+  const [before, flood, after] = code(readJson(`${out}/floods.ipynb`) as Notebook);
+  assert.ok(before?.cell_type === "code" && flood?.cell_type === "code");
+  assert.ok(after?.cell_type === "code");
+  assert.deepEqual(before.outputs, [
+    { output_type: "stream", name: "stdout", text: ["before the flood\n"] },
+  ]);
+  assert.equal(flood.outputs.length, 1, "consecutive stdout messages merge into one output");
+  const lines = stdoutLines(flood.outputs);
+  assert.equal(lines.length, 200_000);
+  assert.equal(firstMismatch(lines), -1, "every line stored once, in order");
+  assert.deepEqual(after.outputs, [
+    { output_type: "stream", name: "stdout", text: ["after the flood\n"] },
+  ]);
+  await Deno.remove(out, { recursive: true });
+});
+
+kernelTest(
+  "output still arriving when the cell limit passes is a timeout, not a silent truncation",
+  async () => {
+    // 30,000 lines: the kernel ends the loop in about a second but delivers the lines for several
+    // more; an "ok" at the limit would let the kernel be shut down with most of them unsent.
+    const dir = await Deno.makeTempDir({ prefix: "sonorigor-nb-test-" });
+    await Deno.writeTextFile(
+      `${dir}/trickle.ipynb`,
+      JSON.stringify({
+        metadata: { kernelspec: { name: "deno", display_name: "Deno" } },
+        nbformat: 4,
+        nbformat_minor: 5,
+        cells: [
+          "for (let i = 0; i < 30_000; i++) console.log(`line ${i}`);",
+          'console.log("next");',
+        ].map((source, i) => ({
+          id: `c${i}`,
+          cell_type: "code",
+          metadata: {},
+          source,
+          outputs: [],
+          execution_count: null,
+        })),
+      }),
+    );
+    const result = await runNotebook(`${dir}/trickle.ipynb`, { timeoutSeconds: 2, log: () => {} });
+    assert.equal(result.status, "failed", result.message);
+    assert.equal(result.failure?.kind, "timeout");
+    assert.equal(result.failure?.cellNumber, 1);
+    assert.match(
+      result.failure?.evalue ?? "",
+      /^Cell did not finish within 2 s( \(its output was still arriving\))?; the kernel was stopped$/,
+    );
+    assertKernelGone(result.kernelPid);
+    const [trickle, next] = code(readJson(`${dir}/trickle.partial.ipynb`) as Notebook);
+    assert.ok(trickle?.cell_type === "code" && next?.cell_type === "code");
+    const lines = stdoutLines(trickle.outputs);
+    assert.ok(lines.length > 0 && lines.length < 30_000, `${lines.length} lines stored`);
+    assert.equal(firstMismatch(lines), -1, "the lines so far, in order");
+    assert.equal(trickle.outputs.at(-1)?.output_type, "error");
+    assert.equal(next.execution_count, null);
+    await Deno.remove(dir, { recursive: true });
+  },
+);
+
+/** The notebook client (`child.ts`) this test process started, once it runs. */
+function notebookClient(): number | undefined {
+  return childProcesses(Deno.pid).find((c) => c.command.includes("child.ts"))?.pid;
+}
+
+kernelTest(
+  "a notebook client that does not stop after a signal is killed; kernel gone, partial written",
+  async () => {
+    const dir = await copyFixtures("hangs.ipynb");
+    const controller = new AbortController();
+    let client: number | undefined;
+    let connectionFolder: string | undefined;
+    const result = await runNotebook(`${dir}/hangs.ipynb`, {
+      timeoutSeconds: 60,
+      stopGraceSeconds: 1,
+      signal: controller.signal,
+      onKernelStarted: (_pid, folder) => (connectionFolder = folder),
+      log: (line) => {
+        if (client === undefined && line.includes("[cell 2/4") && line.includes(" ok in ")) {
+          client = notebookClient();
+          Deno.kill(client!, "SIGSTOP"); // frozen: it can neither stop the kernel nor write
+          setTimeout(() => controller.abort("SIGTERM"), 300);
+        }
+      },
+    });
+    assert.ok(client !== undefined, "the notebook client was found and frozen");
+    assert.equal(processExists(client), false, `notebook client ${client} still exists`);
+    // the connection file (it holds the signing key) went with the kernel
+    assert.ok(connectionFolder !== undefined);
+    await assert.rejects(Deno.stat(connectionFolder), Deno.errors.NotFound);
+    assert.equal(result.status, "interrupted", result.message);
+    assert.match(
+      result.message!,
+      /the notebook client process did not stop within 1 s of SIGTERM and was killed/,
+    );
+    assertKernelGone(result.kernelPid);
+    const partial = readJson(`${dir}/hangs.partial.ipynb`) as Notebook;
+    assert.deepEqual(notebookProblems(partial), []);
+    assert.equal((partial.metadata.sonorigor_partial as { failed_cell: number }).failed_cell, 3);
+    const hanging = code(partial)[1];
+    assert.ok(hanging?.cell_type === "code");
+    assert.deepEqual(hanging.outputs.map((o) => o.output_type), ["error"]);
+    assert.match(
+      (hanging.outputs[0] as { evalue: string }).evalue,
+      /^Run interrupted by SIGTERM; the notebook client did not stop within 1 s and was killed, so the outputs of this run are lost$/,
+    );
+    await Deno.remove(dir, { recursive: true });
+  },
+);
+
+kernelTest(
+  "a notebook client frozen in a cell is killed at the cell limit plus the grace; partial written",
+  async () => {
+    const dir = await copyFixtures("hangs.ipynb");
+    let client: number | undefined;
+    let connectionFolder: string | undefined;
+    const result = await runNotebook(`${dir}/hangs.ipynb`, {
+      timeoutSeconds: 2,
+      stopGraceSeconds: 1,
+      onKernelStarted: (_pid, folder) => (connectionFolder = folder),
+      log: (line) => {
+        if (client === undefined && line.includes("[cell 2/4") && line.includes(" ok in ")) {
+          client = notebookClient();
+          Deno.kill(client!, "SIGSTOP"); // its own cell limit can no longer fire
+        }
+      },
+    });
+    assert.ok(client !== undefined, "the notebook client was found and frozen");
+    assert.equal(processExists(client), false, `notebook client ${client} still exists`);
+    // the connection file (it holds the signing key) went with the kernel
+    assert.ok(connectionFolder !== undefined);
+    await assert.rejects(Deno.stat(connectionFolder), Deno.errors.NotFound);
+    assert.equal(result.status, "failed", result.message);
+    assert.equal(result.failure?.kind, "timeout");
+    assert.equal(result.failure?.cellNumber, 3);
+    assertKernelGone(result.kernelPid);
+    const hanging = code(readJson(`${dir}/hangs.partial.ipynb`) as Notebook)[1];
+    assert.ok(hanging?.cell_type === "code");
+    assert.deepEqual(hanging.outputs, [{
+      output_type: "error",
+      ename: "CellTimeoutError",
+      evalue:
+        "Cell did not finish within 2 s; the notebook client did not stop within 1 s and was killed, so the outputs of this run are lost",
+      traceback: [
+        "CellTimeoutError: Cell did not finish within 2 s; the notebook client did not stop within 1 s and was killed, so the outputs of this run are lost",
+      ],
+    }]);
+    await Deno.remove(dir, { recursive: true });
+  },
+);
+
+/** Writes a notebook of code cells with these sources. */
+async function codeNotebook(path: string, sources: string[]): Promise<void> {
+  await Deno.writeTextFile(
+    path,
+    JSON.stringify({
+      metadata: { kernelspec: { name: "deno", display_name: "Deno" } },
+      nbformat: 4,
+      nbformat_minor: 5,
+      cells: sources.map((source, i) => ({
+        id: `c${i}`,
+        cell_type: "code",
+        metadata: {},
+        source,
+        outputs: [],
+        execution_count: null,
+      })),
+    }),
+  );
+}
+
+kernelTest(
+  "output barriers: a cell that wraps console keeps every cell's output whole",
+  async () => {
+    const dir = await Deno.makeTempDir({ prefix: "sonorigor-nb-test-" });
+    await codeNotebook(`${dir}/wrapped.ipynb`, [
+      'const original = console.log;\nconsole.log = (...a) => original("[wrapped]", ...a);\nconsole.error = () => {};',
+      "for (let i = 0; i < 3_000; i++) console.log(`line ${i}`);",
+      'console.log("end"); console.error("silenced");',
+    ]);
+    const result = await runNotebook(`${dir}/wrapped.ipynb`, { outDir: dir, log: () => {} });
+    assert.equal(result.status, "ok", result.message);
+    const [wrap, flood, end] = code(readJson(`${dir}/wrapped.ipynb`) as Notebook);
+    assert.ok(wrap?.cell_type === "code" && flood?.cell_type === "code");
+    assert.ok(end?.cell_type === "code");
+    // the barrier requests are silent and out of the history: the counts are the cells' own
+    assert.deepEqual([wrap.execution_count, flood.execution_count, end.execution_count], [1, 2, 3]);
+    assert.deepEqual(wrap.outputs.filter((o) => o.output_type === "stream"), []);
+    const lines = stdoutLines(flood.outputs);
+    assert.equal(lines.length, 3_000);
+    assert.equal(lines.findIndex((line, i) => line !== `[wrapped] line ${i}\n`), -1);
+    assert.deepEqual(end.outputs, [
+      { output_type: "stream", name: "stdout", text: ["[wrapped] end\n"] },
+    ]);
+    assert.doesNotMatch(
+      await Deno.readTextFile(`${dir}/wrapped.ipynb`),
+      /sonorigor-output-barrier/,
+    );
+    assertKernelGone(result.kernelPid);
+    await Deno.remove(dir, { recursive: true });
+  },
+);
+
+kernelTest(
+  "output barriers: when a barrier cannot print, the cell ends after a quiet spell",
+  async () => {
+    const dir = await Deno.makeTempDir({ prefix: "sonorigor-nb-test-" });
+    await codeNotebook(`${dir}/no_console.ipynb`, [
+      'delete globalThis[Symbol.for("sonorigor.outputBarrier")];\nglobalThis.console = undefined;',
+      "6 * 7",
+    ]);
+    const result = await runNotebook(`${dir}/no_console.ipynb`, {
+      outDir: dir,
+      timeoutSeconds: 30,
+      log: () => {},
+    });
+    assert.equal(result.status, "ok", result.message);
+    assert.equal(result.cellsExecuted, 2);
+    const answer = code(readJson(`${dir}/no_console.ipynb`) as Notebook)[1];
+    assert.ok(answer?.cell_type === "code" && answer.outputs[0]?.output_type === "execute_result");
+    assert.equal(stripAnsi(joinText(answer.outputs[0].data["text/plain"])), "42");
+    await Deno.remove(dir, { recursive: true });
+  },
+);

@@ -65,6 +65,9 @@ Deno.test("validate: demo table gives an HTML report with inline charts and a Ma
   assert.equal(results.icc.outcome.result.forms.length, 6);
   assert.equal(results.provenance.inputSha256, hex);
   assert.equal(results.readings, undefined); // the input file holds them
+  // written piece by piece, it is the text JSON.stringify gives (the platform's serialiser)
+  const json = await Deno.readTextFile(`${out}/results.json`);
+  assert.equal(json, JSON.stringify(JSON.parse(json), null, 2) + "\n");
   // one SVG file per figure, named after the observers
   const files = [...Deno.readDirSync(out)].map((e) => e.name).filter((n) => n.endsWith(".svg"));
   assert.deepEqual(files.sort(), [
@@ -182,5 +185,45 @@ Deno.test("validate: a value column the package does not know needs its unit and
   assert.match(md, /\| Bias \(mean of M − W\) \(L\/min\) \|/);
   const svg = await Deno.readTextFile(`${dir}/b/bland_altman_m_vs_w.svg`);
   assert.match(svg, /Peak flow: M − W \(L\/min\)/);
+  await Deno.remove(dir, { recursive: true });
+});
+
+Deno.test("validate: hostile files — another encoding, semicolons, an unclosed quote", async () => {
+  const dir = await Deno.makeTempDir();
+  // invented readings; "René" and "Renè" are two people (Windows-1252: é = 0xE9, è = 0xE8)
+  const rows = ["patient;observer;lvef percent"];
+  const people = ["René", "Renè", "Zoë", "Zoe"];
+  people.forEach((p, i) => rows.push(`${p};A;${50 + 3 * i}`, `${p};B;${51 + 3 * i + (i % 2)}`));
+  const csv = `${dir}/people.csv`;
+  await Deno.writeFile(csv, Uint8Array.from(rows.join("\r\n") + "\r\n", (c) => c.charCodeAt(0)));
+  const strict = await runValidate([csv, "--out", `${dir}/a`]);
+  assert.equal(strict.code, 1);
+  // "patient;observer;lvef percent\r\n" is 31 bytes, "Ren" 3 more: 0xE9 at byte 34, line 2
+  assert.match(
+    strict.stderr,
+    /error: .*people\.csv: expected UTF-8 text, got an invalid byte 0xe9 at byte 34, line 2/,
+  );
+  await assert.rejects(() => Deno.stat(`${dir}/a`), Deno.errors.NotFound);
+  const named = await runValidate([csv, "--encoding", "windows-1252", "--out", `${dir}/b`]);
+  assert.equal(named.code, 0, named.stderr);
+  // four people, none merged with another: 8 readings, 4 subjects (semicolons detected)
+  assert.match(named.stderr, /\[validate\] 8 readings, 4 subjects, 2 observers\/methods/);
+  const md = await Deno.readTextFile(`${dir}/b/report.md`);
+  assert.match(md, /4 subjects with a first reading by both/);
+
+  const unclosed = `${dir}/unclosed.csv`;
+  await Deno.writeTextFile(
+    unclosed,
+    'patient,observer,lvef percent\nP1,A,55\n"P1,B,54\nP2,A,40\nP2,B,43\n',
+  );
+  const bad = await runValidate([unclosed, "--out", `${dir}/c`]);
+  assert.equal(bad.code, 1);
+  assert.match(
+    bad.stderr,
+    /error: .*unclosed\.csv: line 3, expected every quoted field to be closed, got a quote that opens a field here and is never closed/,
+  );
+  const wrongLabel = await runValidate([csv, "--encoding", "klingon", "--out", `${dir}/d`]);
+  assert.equal(wrongLabel.code, 1);
+  assert.match(wrongLabel.stderr, /expected 'encoding' as an encoding label .*, got "klingon"/);
   await Deno.remove(dir, { recursive: true });
 });

@@ -8,9 +8,9 @@ Deno.test("written CSV reads back: headers label [unit], values as reported, fla
   );
   const text = writeTableCsv(t);
   const lines = text.trim().split("\n");
-  // the cautions come first, as comment lines
-  assert.ok(lines[0]!.startsWith("# "));
-  const data = lines.filter((l) => !l.startsWith("#"));
+  // the cautions come first, as comment lines (one quoted cell when they hold a comma)
+  assert.match(lines[0]!, /^"?# /);
+  const data = lines.filter((l) => !/^"?#/.test(l));
   assert.equal(data[0], "id,Height [cm],Weight [kg],Body surface area [m^2],flags");
   // Mosteller: √(180·80/3600) = 2 m² (hand computation), shown to the quantity's 0.01 m²
   assert.equal(data[1], "A,180,80,2.00,");
@@ -21,7 +21,7 @@ Deno.test("written CSV reads back: headers label [unit], values as reported, fla
   // full precision on request
   assert.equal(
     writeTableCsv(t, { precision: "full", flags: false }).split("\n").filter((l) =>
-      !l.startsWith("#")
+      !/^"?#/.test(l)
     )[1],
     "A,180,80,2",
   );
@@ -40,4 +40,42 @@ Deno.test("text cells are neutralised against spreadsheet formulas and quoted pe
   // and our reader takes the apostrophe off again: nothing lost on the round trip
   const back = readTable(written).columns.get("id")!;
   assert.ok(back.kind === "text" && back.values[0] === "+1+1");
+});
+
+Deno.test("every text the writer puts in a CSV is neutralised, and reads back exactly", () => {
+  // OWASP CSV Injection and ASVS 5.0 §1.2.10: =, +, -, @, tab, CR, LF, NUL lead a formula; an
+  // apostrophe before them is the common defence (a spreadsheet takes it as a text marker)
+  const hostile = [
+    "=1+1",
+    "+1",
+    "-2+3",
+    "@SUM(A1)",
+    "\t=x",
+    "\r=x",
+    "\n=x",
+    "\0x",
+    "'=already",
+    "''-twice",
+    "＝1+1", // full-width "=" (from memory: some spreadsheets convert it)
+    "Dr A-B",
+    "'plain'",
+  ];
+  const rows = hostile.map((h, i) => `${csvTextCell(h)},${170 + i}`).join("\n");
+  const csv = `${csvTextCell("=header")},height [cm]\n${rows}\n`;
+  for (const cell of [...hostile, "=header"].map(csvTextCell)) {
+    const first = cell.replace(/^"/, "");
+    assert.ok(!/^[=+\-@\t\r\n\0＝]/.test(first), `written cell starts a formula: ${cell}`);
+  }
+  const t = readTable(csv);
+  const back = t.columns.get("=header")!;
+  assert.ok(back.kind === "text");
+  assert.deepEqual(back.values, hostile); // nothing lost on the round trip
+  // the cautions (comment lines) and the flags are cells too
+  const evaluated = evaluateTable(
+    readTable("id,height [cm],weight [kg]\n=A,180,80\n"),
+    bsaMosteller,
+  );
+  const text = writeTableCsv({ ...evaluated, cautions: ['a, =HYPERLINK("x")'] });
+  assert.equal(text.split("\n")[0], '"# a, =HYPERLINK(""x"")"');
+  assert.match(text, /\n'=A,180,80,2\.00,/);
 });

@@ -6,6 +6,7 @@ import {
   createMonteCarloPool,
   defineCalculation,
   expressionModel,
+  type MonteCarloPool,
   normal,
   propagate,
   type PropagateOptions,
@@ -17,19 +18,47 @@ import {
 import { planPropagation } from "../../calc/uncertainty/propagate.ts";
 import { mergeTails, sortedTails } from "../../calc/uncertainty/intervals.ts";
 import { BLOCK_TRIALS, range, runBlocks } from "../../calc/uncertainty/sampling.ts";
+import process from "node:process";
+import type { Worker as Thread } from "node:worker_threads";
 import {
   crashesLater,
+  exitsAboveEight,
   inverseRoot,
   rounded,
   scaled,
   scaledByTwo,
   sumAndProduct,
+  waitsForeverAboveEight,
 } from "./fixtures/pool_models.ts";
 
 const fixtures = new URL("./fixtures/pool_models.ts", import.meta.url);
 
 // Reference for every check below: the single-thread propagation of this package, whose results
 // are checked against JCGM 101 in monte_carlo_test.ts. The pool must reproduce them bit for bit.
+
+/** A call on a model that never returns (x ~ N(9, 0.1) is above 8 at every trial), limited to
+ * `timeoutMs`. */
+function neverReturns(pool: MonteCarloPool, timeoutMs: number, trials = 1000) {
+  return pool.propagate(waitsForeverAboveEight, { x: normal(9, 0.1) }, {
+    method: "monteCarlo",
+    trials,
+    timeoutMs,
+  });
+}
+
+/** `promise`, or a failure naming `what` when it has not settled after `ms`: a pool that hangs
+ * fails its test instead of hanging the suite. */
+async function within<T>(ms: number, what: string, promise: Promise<T>): Promise<T> {
+  let timer: ReturnType<typeof setTimeout> | undefined;
+  const limit = new Promise<never>((_, reject) => {
+    timer = setTimeout(() => reject(new Error(`${what}: not settled after ${ms} ms`)), ms);
+  });
+  try {
+    return await Promise.race([promise, limit]);
+  } finally {
+    clearTimeout(timer);
+  }
+}
 
 const mixedInputs = {
   a: normal(1, 0.1),
@@ -44,6 +73,14 @@ const mixedOptions: PropagateOptions = {
   trials: 3 * BLOCK_TRIALS + 1234, // a last block shorter than the others
   seed: 77,
   correlations: [["a", "b", 0.6] as const],
+};
+/** A run long enough (a second or more) to still be pending on both workers of a two-worker pool
+ * when something happens to one of them. */
+const longRun: PropagateOptions = {
+  method: "monteCarlo",
+  trials: 4_000_000,
+  seed: 5,
+  keepSamples: false,
 };
 
 function assertSameResult(actual: Propagation, expected: Propagation): void {
@@ -130,25 +167,44 @@ Deno.test("pool: adaptive procedure identical to one thread (same sequences, sam
   );
 });
 
-Deno.test("pool: a non-finite model value is the same error as on one thread", async () => {
+Deno.test("pool: a non-finite model value is the same error as on one thread (refused), or the same exclusion", async () => {
   using pool = await createMonteCarloPool({ workers: 2, modules: [fixtures] });
   const inputs = { x: normal(0.01, 1) };
-  const options: PropagateOptions = { method: "monteCarlo", trials: 200_000, seed: 1 };
+  const excluded: PropagateOptions = { method: "monteCarlo", trials: 200_000, seed: 1 };
+  const refused: PropagateOptions = { ...excluded, inconsistentTrials: "refuse" };
   let expected = "";
   try {
-    propagate(inverseRoot, inputs, options);
+    propagate(inverseRoot, inputs, refused);
   } catch (e) {
     expected = (e as Error).message;
   }
   assert.match(expected, /output 'y' is not finite at Monte Carlo trial \d+/);
-  await assert.rejects(() => pool.propagate(inverseRoot, inputs, options), {
+  await assert.rejects(() => pool.propagate(inverseRoot, inputs, refused), {
     name: "RangeError",
     message: expected,
   });
   await assert.rejects(
-    () => pool.propagate(inverseRoot, inputs, { method: "monteCarlo", adaptive: true, seed: 1 }),
+    () =>
+      pool.propagate(inverseRoot, inputs, {
+        method: "monteCarlo",
+        adaptive: true,
+        seed: 1,
+        inconsistentTrials: "refuse",
+      }),
     { name: "RangeError", message: /output 'y' is not finite at Monte Carlo trial \d+/ },
   );
+  // excluded instead (the default): the same trials excluded, the same warning, bit for bit
+  const adaptive: PropagateOptions = {
+    method: "monteCarlo",
+    adaptive: { significantDigits: 1 },
+    seed: 1,
+  };
+  for (const options of [excluded, adaptive]) {
+    assertSameResult(
+      await pool.propagate(inverseRoot, inputs, options),
+      propagate(inverseRoot, inputs, options),
+    );
+  }
 });
 
 Deno.test("pool: ties and zeros of both signs: same intervals as one thread, −0 included", async () => {
@@ -190,9 +246,13 @@ Deno.test("pool: closing during a run refuses the run with that reason", async (
     trials: 2_000_000,
   });
   pool.close();
-  await assert.rejects(() => running, {
-    message: "Monte Carlo pool: the pool was closed during the run",
-  });
+  await within(
+    30_000,
+    "a call pending at close()",
+    assert.rejects(() => running, {
+      message: "Monte Carlo pool: the pool was closed during the run of 'Sum and product (test)'",
+    }),
+  );
 });
 
 Deno.test("pool: a calculation whose fingerprint differs from the workers' copy is refused", async () => {
@@ -347,13 +407,265 @@ Deno.test("pool: a worker that dies leaves the pool closed with the reason, neve
       refusal = e as Error;
     });
   }
-  assert.match(
-    String((refusal as Error | null)?.message),
-    /Monte Carlo pool: a worker failed.*uncaught in the test fixture/,
+  // the worker dies after its reply: between runs, or during the next call sent to it
+  const cause =
+    /worker [12] of 2 died of an uncaught error \(uncaught in the test fixture\) (between runs|while running 'Inverse root \(test\)')/;
+  const refused = new RegExp(
+    `^Monte Carlo pool: the pool failed \\(${cause.source}\\); create a new one$`,
   );
+  const stopped = new RegExp(
+    `^Monte Carlo pool: 'Inverse root \\(test\\)' stopped: ${cause.source}; the pool is closed: create a new one$`,
+  );
+  const message = String((refusal as Error | null)?.message);
+  assert.ok(refused.test(message) || stopped.test(message), message);
   await assert.rejects(() => pool.propagate(inverseRoot, { x: normal(5, 0.1) }, mc), {
-    message:
-      /Monte Carlo pool: a worker failed \(.*uncaught in the test fixture.*\); create a new pool/,
+    message: refused,
   });
   pool.close(); // closing again is harmless
+});
+
+Deno.test("pool: a worker that calls Deno.exit() fails every pending call, naming the worker, the exit and the calculation; later calls say why", async () => {
+  using pool = await createMonteCarloPool({ workers: 2, modules: [fixtures] });
+  // 1000 trials are one block, all sent to worker 1; the long run then waits on both workers
+  const exiting = pool.propagate(exitsAboveEight, { x: normal(9, 0.1) }, {
+    method: "monteCarlo",
+    trials: 1000,
+  });
+  const waiting = pool.propagate(sumAndProduct, mixedInputs, longRun);
+  const [exited, stoppedToo] = await within(
+    30_000,
+    "calls pending when a worker exits",
+    Promise.allSettled([exiting, waiting]),
+  );
+  const cause =
+    "worker 1 of 2 exited with code 3 (a model or a module it loads called Deno.exit(), process.exit() or close()) while running 'Exits above eight (test)'";
+  assert.equal(exited.status, "rejected");
+  assert.equal(
+    (exited as PromiseRejectedResult).reason.message,
+    `Monte Carlo pool: 'Exits above eight (test)' stopped: ${cause}; the pool is closed: create a new one`,
+  );
+  assert.equal(stoppedToo.status, "rejected");
+  assert.equal(
+    (stoppedToo as PromiseRejectedResult).reason.message,
+    `Monte Carlo pool: 'Sum and product (test)' stopped: ${cause}; the pool is closed: create a new one`,
+  );
+  await assert.rejects(
+    () => pool.propagate(inverseRoot, { x: normal(5, 0.1) }, { method: "monteCarlo" }),
+    { message: `Monte Carlo pool: the pool failed (${cause}); create a new one` },
+  );
+});
+
+Deno.test("pool: a reply that cannot be read (messageerror) fails the pending call and the pool", async () => {
+  // the threads the pool starts, as Node's process "worker" event reports them; no value a worker
+  // can send makes Deno 2.9 fail to read it, so the event is emitted on the real thread here
+  const threads: Thread[] = [];
+  const seen = (thread: Thread) => threads.push(thread);
+  process.on("worker", seen);
+  let pool;
+  try {
+    pool = await createMonteCarloPool({ workers: 2, modules: [fixtures] });
+  } finally {
+    process.off("worker", seen);
+  }
+  using _ = pool;
+  assert.equal(threads.length, 2);
+  const waiting = pool.propagate(sumAndProduct, mixedInputs, longRun);
+  threads[1]!.emit("messageerror", new Error("synthetic: data could not be deserialized"));
+  const cause =
+    "worker 2 of 2 sent a reply that could not be read (synthetic: data could not be deserialized) while running 'Sum and product (test)'";
+  await within(
+    30_000,
+    "a call pending at a messageerror",
+    assert.rejects(() => waiting, {
+      message:
+        `Monte Carlo pool: 'Sum and product (test)' stopped: ${cause}; the pool is closed: create a new one`,
+    }),
+  );
+  await assert.rejects(
+    () => pool.propagate(inverseRoot, { x: normal(5, 0.1) }, { method: "monteCarlo" }),
+    { message: `Monte Carlo pool: the pool failed (${cause}); create a new one` },
+  );
+});
+
+Deno.test("pool: timeoutMs refuses a call that never returns, naming the limit; the pool replaces the workers and loses no other call", async () => {
+  using pool = await createMonteCarloPool({ workers: 2, modules: [fixtures] });
+  const hanging = neverReturns(pool, 1000, 2 * BLOCK_TRIALS); // two blocks: one on each worker
+  // a call without a limit, queued behind it on both workers: replacing them must not lose it
+  const queued = pool.propagate(sumAndProduct, mixedInputs, mixedOptions);
+  await within(
+    30_000,
+    "a call past its time limit",
+    assert.rejects(() => hanging, {
+      name: "TimeoutError",
+      message:
+        "Monte Carlo pool: 'Waits forever above eight (test)' did not finish within timeoutMs = 1000 ms; workers 1 and 2 of 2 were stopped and replaced",
+    }),
+  );
+  assertSameResult(
+    await within(60_000, "the call queued behind it", queued),
+    propagate(sumAndProduct, mixedInputs, mixedOptions),
+  );
+  // later calls, with a limit they stay under, give the one-thread results bit for bit
+  const options: PropagateOptions = { method: "monteCarlo", trials: 1000, seed: 9 };
+  assertSameResult(
+    await within(
+      60_000,
+      "a call after the replacement",
+      pool.propagate(scaledByTwo, { x: normal(1, 0.1) }, { ...options, timeoutMs: 60_000 }),
+    ),
+    propagate(scaledByTwo, { x: normal(1, 0.1) }, options),
+  );
+});
+
+Deno.test("pool: time limits in quick succession: each call is refused, and the pool still answers", async () => {
+  using pool = await createMonteCarloPool({ workers: 1, modules: [fixtures] });
+  // the second waits behind the first, then on a replacement that may still be starting
+  const first = neverReturns(pool, 500), second = neverReturns(pool, 700);
+  const refusal = (ms: number) => ({
+    name: "TimeoutError",
+    message:
+      `Monte Carlo pool: 'Waits forever above eight (test)' did not finish within timeoutMs = ${ms} ms; worker 1 of 1 was stopped and replaced`,
+  });
+  await within(
+    30_000,
+    "two calls past their limits",
+    Promise.all([
+      assert.rejects(() => first, refusal(500)),
+      assert.rejects(() => second, refusal(700)),
+    ]),
+  );
+  const options: PropagateOptions = { method: "monteCarlo", trials: 1000, seed: 9 };
+  assertSameResult(
+    await within(
+      60_000,
+      "a call after two replacements",
+      pool.propagate(scaledByTwo, { x: normal(1, 0.1) }, options),
+    ),
+    propagate(scaledByTwo, { x: normal(1, 0.1) }, options),
+  );
+});
+
+Deno.test("pool: a replacement worker that cannot load its modules fails the pool with that reason", async () => {
+  // a module the first worker loads and its replacement cannot: deleted in between
+  const temp = await Deno.makeTempFile({ prefix: "pool_extra_", suffix: ".ts" });
+  await Deno.writeTextFile(temp, "export const unused = 0;\n");
+  const extra = new URL(`file://${temp}`);
+  using pool = await createMonteCarloPool({ workers: 1, modules: [fixtures, extra] });
+  await Deno.remove(temp);
+  const hanging = neverReturns(pool, 500);
+  // queued behind it, then sent to the replacement
+  const queued = pool.propagate(inverseRoot, { x: normal(5, 0.1) }, {
+    method: "monteCarlo",
+    trials: 1000,
+  });
+  await within(
+    30_000,
+    "a call past its limit",
+    assert.rejects(() => hanging, { name: "TimeoutError" }),
+  );
+  const cause =
+    `worker 1 of 1 could not be started again: module ${extra.href} failed to load in a worker: `;
+  const stopped = await within(
+    30_000,
+    "a call sent to the replacement",
+    queued.catch((e: Error) => e),
+  );
+  assert.ok(stopped instanceof Error);
+  assert.ok(
+    stopped.message.startsWith(`Monte Carlo pool: 'Inverse root (test)' stopped: ${cause}`),
+    stopped.message,
+  );
+  assert.ok(stopped.message.endsWith("; the pool is closed: create a new one"), stopped.message);
+  const refused = await pool.propagate(inverseRoot, { x: normal(5, 0.1) }, { method: "monteCarlo" })
+    .catch((e: Error) => e);
+  assert.ok(refused instanceof Error);
+  assert.ok(
+    refused.message.startsWith(`Monte Carlo pool: the pool failed (${cause}`),
+    refused.message,
+  );
+});
+
+Deno.test("pool: a module that ends its worker while loading: the pool is not made, and says why", async () => {
+  const exits = new URL("./fixtures/pool_exits_on_load.ts", import.meta.url);
+  await within(
+    30_000,
+    "a pool whose worker exits while loading",
+    assert.rejects(() => createMonteCarloPool({ workers: 1, modules: [exits] }), {
+      message:
+        "Monte Carlo pool: the pool failed (worker 1 of 1 exited with code 4 (a model or a module it loads called Deno.exit(), process.exit() or close()) while loading its modules); create a new one",
+    }),
+  );
+});
+
+Deno.test("pool: timeoutMs must be a number of milliseconds in (0, 2147483647]", async () => {
+  using pool = await createMonteCarloPool({ workers: 1, modules: [fixtures] });
+  const run = (timeoutMs: unknown) =>
+    pool.propagate(inverseRoot, { x: normal(5, 0.1) }, {
+      method: "monteCarlo",
+      trials: 1000,
+      timeoutMs: timeoutMs as number,
+    });
+  // 2147483647 ms = 2³¹ − 1, the longest delay setTimeout keeps (a longer one fires at once)
+  for (const bad of [0, -5, Number.NaN, Number.POSITIVE_INFINITY, 2 ** 31]) {
+    await assert.rejects(() => run(bad), {
+      name: "RangeError",
+      message: `Monte Carlo pool: expected timeoutMs in (0, 2147483647] ms, got ${bad}`,
+    });
+  }
+  await assert.rejects(() => run("1000"), {
+    name: "TypeError",
+    message: 'Monte Carlo pool: expected timeoutMs to be a number of milliseconds, got "1000"',
+  });
+  const options: PropagateOptions = { method: "monteCarlo", trials: 1000, seed: 4 };
+  assertSameResult(
+    await pool.propagate(inverseRoot, { x: normal(5, 0.1) }, {
+      ...options,
+      timeoutMs: 2 ** 31 - 1,
+    }),
+    propagate(inverseRoot, { x: normal(5, 0.1) }, options),
+  );
+  // the GUM law runs on the calling thread: a limit does not apply to it
+  const gum = await pool.propagate(inverseRoot, { x: normal(5, 0.1) }, { timeoutMs: 1 });
+  assert.equal(gum.outputs.y.value, propagate(inverseRoot, { x: normal(5, 0.1) }).outputs.y.value);
+});
+
+Deno.test("pool: a model that spins forever: a time limit leaves the pool usable, and close() lets the process end", async () => {
+  // in a subprocess: Deno 2.9 cannot stop a thread spinning in synchronous code, so the spinning
+  // threads this leaves behind end with that process, not with this one
+  const script = new URL("./fixtures/pool_runaway_script.ts", import.meta.url);
+  const child = new Deno.Command(Deno.execPath(), {
+    args: ["run", "--allow-read", "--no-prompt", "--quiet", script.pathname],
+    stdout: "piped",
+    stderr: "piped",
+  }).spawn();
+  const limit = 90_000;
+  const kill = setTimeout(() => child.kill("SIGKILL"), limit);
+  const output = await child.output();
+  const endedAt = Date.now();
+  clearTimeout(kill);
+  const stderr = new TextDecoder().decode(output.stderr);
+  assert.equal(output.signal, null, `killed after ${limit} ms: the process hangs; ${stderr}`);
+  assert.equal(output.code, 0, stderr);
+  const lines = new TextDecoder().decode(output.stdout).trim().split("\n").map((line) =>
+    JSON.parse(line)
+  );
+  assert.deepEqual(lines[0], {
+    timedOut:
+      "TimeoutError: Monte Carlo pool: 'Spins forever above eight (test)' did not finish within timeoutMs = 500 ms; worker 1 of 2 was stopped and replaced",
+  });
+  assert.deepEqual(lines[1], {
+    after: propagate(scaledByTwo, { x: normal(1, 0.1) }, {
+      method: "monteCarlo",
+      trials: 1000,
+      seed: 9,
+    }).outputs.y.value,
+  });
+  assert.equal(typeof lines[2].closedAt, "number");
+  assert.deepEqual(lines[3], {
+    closedRun:
+      "Error: Monte Carlo pool: the pool was closed during the run of 'Spins forever above eight (test)'",
+  });
+  // the process ends promptly after close(), although both workers still spin
+  const afterClose = endedAt - lines[2].closedAt;
+  assert.ok(afterClose < 10_000, `the process took ${afterClose} ms to end after close()`);
 });
