@@ -299,6 +299,7 @@ function gradeUncertain(table: SeverityTable, v: UncertainValue): SeverityDistri
     coverage: v.coverage,
     probabilities: ranges.map(mass),
     outsideValid,
+    excluded: 0,
   });
 }
 
@@ -308,15 +309,21 @@ function gradeSamples(
   factor: number,
   coverage: { interval: { lower: number; upper: number }; coverage: number } | null,
 ): SeverityDistribution {
-  const n = samples.length;
-  if (n === 0) throw typeProblem(table, "samples", "with at least one value", "an empty array");
+  if (samples.length === 0) {
+    throw typeProblem(table, "samples", "with at least one value", "an empty array");
+  }
   const ranges = openEnded(table);
   const counts = new Array<number>(ranges.length).fill(0);
-  const sorted = new Float64Array(n);
+  const kept = new Float64Array(samples.length);
   const valid = table.quantity.valid;
-  let outside = 0, sum = 0;
-  for (let i = 0; i < n; i++) {
+  let outside = 0, sum = 0, n = 0, excluded = 0;
+  for (let i = 0; i < samples.length; i++) {
     const raw = samples[i];
+    // NaN marks a Monte Carlo trial excluded as physically inconsistent: not a class member
+    if (typeof raw === "number" && raw !== raw) {
+      excluded++;
+      continue;
+    }
     if (typeof raw !== "number" || !Number.isFinite(raw)) {
       throw issueError([{
         kind: typeof raw === "number" ? "range" : "type",
@@ -330,9 +337,18 @@ function gradeSamples(
     const s = raw * factor;
     counts[bandIndex(ranges, s)]!++;
     if (!inRange(s, valid)) outside++;
-    sorted[i] = s;
+    kept[n++] = s;
     sum += s;
   }
+  if (n === 0) {
+    throw typeProblem(
+      table,
+      "samples",
+      "at least one sample that was not excluded",
+      `${excluded} excluded (NaN) samples only`,
+    );
+  }
+  const sorted = kept.subarray(0, n);
   sorted.sort();
   const mean = sum / n;
   let squares = 0;
@@ -340,17 +356,23 @@ function gradeSamples(
   const median = n % 2 === 1 ? sorted[(n - 1) / 2]! : (sorted[n / 2 - 1]! + sorted[n / 2]!) / 2;
   return distribution(table, {
     method: "samples",
-    basis: coverage === null
+    basis: (coverage === null
       ? "Share of the given samples in each class"
-      : "Share of the Monte Carlo samples in each class",
+      : "Share of the Monte Carlo samples in each class") +
+      (excluded > 0
+        ? ` (${excluded} trials excluded as physically inconsistent are not counted)`
+        : ""),
     value: mean,
     standardUncertainty: n > 1 ? Math.sqrt(squares / (n - 1)) : 0,
     median,
     count: n,
     interval: coverage?.interval ?? null,
     coverage: coverage?.coverage ?? null,
-    probabilities: counts.map((c) => c / n),
+    probabilities: counts.map((c) =>
+      c / n
+    ),
     outsideValid: outside / n,
+    excluded,
   });
 }
 

@@ -104,4 +104,6 @@ export interface SeverityDistribution extends SeverityResultBase {
   /** Probability that the quantity lies outside its valid range (a part of the distribution that
    * is physically impossible, counted in the lowest or highest class). */
   readonly outsideValid: number;
+  /** Samples not counted: Monte Carlo trials excluded as physically inconsistent (NaN). */
+  readonly excluded: number;
 }

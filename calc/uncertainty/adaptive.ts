@@ -13,7 +13,7 @@ import { numericalTolerance } from "./rounding.ts";
 import { emptyCounts, finishMonteCarlo, type MonteCarloRun, planInputs } from "./monte_carlo.ts";
 import type { PreparedInputs } from "./prepare.ts";
 import { checkSeed } from "./random.ts";
-import type { TrialPlan } from "./sampling.ts";
+import type { InconsistentTrials, TrialPlan } from "./sampling.ts";
 import type { Propagation } from "./types.ts";
 
 /** Options of the adaptive procedure. */
@@ -87,6 +87,7 @@ export function adaptiveRun<I extends string, O extends string>(
     readonly coverage: number;
     readonly seed?: number;
     readonly interval?: "symmetric" | "shortest";
+    readonly inconsistentTrials?: InconsistentTrials;
   },
 ): AdaptiveRun<O> {
   const { coverage } = options;
@@ -113,7 +114,8 @@ export function adaptiveRun<I extends string, O extends string>(
   }
   const seed = checkSeed(options.seed ?? 20080101);
   const interval = options.interval ?? "symmetric";
-  const plan = planInputs(calc, prepared);
+  const inconsistentTrials = options.inconsistentTrials ?? "exclude";
+  const plan: TrialPlan = { ...planInputs(calc, prepared), inconsistent: inconsistentTrials };
   const maxSequences = Math.floor(maxTrials / m);
   const outs = calc.outputNames;
   const batches: Float64Array[][] = [];
@@ -165,6 +167,7 @@ export function adaptiveRun<I extends string, O extends string>(
       seed,
       keepSamples: true,
       interval,
+      inconsistentTrials,
     };
     const result = finishMonteCarlo(
       calc,

@@ -75,6 +75,14 @@ export interface StudentTInput {
   /** Degrees of freedom, n − 1. */
   readonly dof: number;
 }
+/** The angle between a beam and a flow whose direction lies anywhere, with equal chance over
+ * solid angle, within a cone of half-angle θmax around the beam: density ∝ sin θ on [0, θmax]. */
+export interface ConeInput {
+  /** Distribution tag. */
+  readonly kind: "cone";
+  /** Half-angle θmax of the cone, in the input's canonical angle unit or as a quantity string. */
+  readonly maxAngle: Amount;
+}
 /** A value known exactly (zero uncertainty). */
 export interface ExactInput {
   /** Distribution tag. */
@@ -90,6 +98,7 @@ export type UncertainInput =
   | TriangularInput
   | ArcsineInput
   | StudentTInput
+  | ConeInput
   | ExactInput;
 
 /** What callers may give for one input: a distribution or an exact value. */
@@ -252,6 +261,31 @@ export function exact(value: Amount): ExactInput {
   return { kind: "exact", value };
 }
 
+/**
+ * The insonation angle when the flow direction is known only to lie within a cone of half-angle
+ * θmax around the beam, in three dimensions, with every direction in the cone equally likely
+ * (uniform over solid angle): θ has density sin θ / (1 − cos θmax) on [0, θmax], so
+ * E[θ] = (sin θmax − θmax·cos θmax)/(1 − cos θmax) and E[cos θ] = (1 + cos θmax)/2 (integrals
+ * of the density, elementary calculus). Drawn by inversion: θ = arccos(1 − U·(1 − cos θmax)).
+ * Unlike an angle uniform in the image plane, it puts little weight near 0° — the beam is
+ * rarely exactly parallel in 3-D — so the mean displayed velocity is lower.
+ *
+ * @param maxAngle Half-angle θmax of the cone (degrees for a degree input, or "15 deg").
+ * @returns The uncertain input.
+ *
+ * @example θmax = 20°: E[cos θ] = (1 + cos 20°)/2 = 0.96985
+ * ```ts
+ * import { insonationCone, resolveDistribution } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const d = resolveDistribution(insonationCone(20), "angleDeg", "deg", "Demo").distribution!;
+ * // E[θ] = (sin m − m·cos m)/(1 − cos m) = 0.23223 rad = 13.306° for m = 20°
+ * assert.ok(Math.abs(d.estimate - 13.306) < 1e-3);
+ * ```
+ */
+export function insonationCone(maxAngle: Amount): ConeInput {
+  return { kind: "cone", maxAngle };
+}
+
 /** True for a value made by one of the distribution constructors. *
  * @example
  * ```ts
@@ -265,7 +299,7 @@ export function isUncertainInput(value: unknown): value is UncertainInput {
   const k = (value as { kind?: unknown } | null)?.kind;
   return typeof value === "object" && value !== null &&
     (k === "normal" || k === "rectangular" || k === "triangular" || k === "arcsine" ||
-      k === "studentT" || k === "exact");
+      k === "studentT" || k === "cone" || k === "exact");
 }
 
 /**
@@ -382,6 +416,45 @@ export function resolveDistribution(
         issues,
       };
     }
+    case "cone": {
+      const m = amount(input.maxAngle, "half-angle of the cone");
+      const perUnit = readAmount(`1 ${unit}`, "rad");
+      if (typeof perUnit !== "number") {
+        issues.push({
+          kind: "unit",
+          severity: "error",
+          where,
+          field,
+          ...(label !== undefined ? { label } : {}),
+          part: "distribution",
+          received: `a cone of directions for an input in ${unit}`,
+          expected: "a cone distribution only for an angle",
+        });
+        return { issues };
+      }
+      const mr = m * perUnit;
+      if (Number.isFinite(mr) && !(mr > 0 && mr < Math.PI / 2)) {
+        const right = Math.PI / 2 / perUnit;
+        problem("half-angle of the cone", String(m), `in (0, ${right}) ${unit}`, "range");
+      }
+      if (issues.length > 0) return { issues };
+      const one = 1 - Math.cos(mr);
+      const mean = (Math.sin(mr) - mr * Math.cos(mr)) / one;
+      const second = (-mr * mr * Math.cos(mr) + 2 * mr * Math.sin(mr) + 2 * Math.cos(mr) - 2) / one;
+      return {
+        distribution: {
+          kind: "cone",
+          estimate: mean / perUnit,
+          standardUncertainty: Math.sqrt(Math.max(second - mean * mean, 0)) / perUnit,
+          dof: Infinity,
+          lower: 0,
+          upper: m,
+          mode: m,
+          radiansPerUnit: perUnit,
+        },
+        issues,
+      };
+    }
     case "rectangular":
     case "arcsine":
     case "triangular": {
@@ -477,6 +550,10 @@ export function distributionQuantile(d: ResolvedDistribution, q: number): number
       return x + u * tQuantile(q, d.dof);
     case "rectangular":
       return a + q * (b - a);
+    case "cone": {
+      const k = d.radiansPerUnit!;
+      return Math.acos(1 - q * (1 - Math.cos(b * k))) / k;
+    }
     case "arcsine":
       return (a + b) / 2 + ((b - a) / 2) * Math.sin(Math.PI * (q - 0.5));
     case "triangular": {

@@ -213,7 +213,7 @@ export function propagateGum<I extends string, O extends string>(
       firstOrderAdequate: inadequate.length === 0,
     });
     outputs[o] = value;
-    warnings.push(...inadequate);
+    for (const w of inadequate) warnings.push(w);
     if (dofNote) warnings.push(dofNote);
   });
   const covariance = linearParts.map((a) =>

@@ -21,6 +21,9 @@ export interface GumValidation {
   readonly validated: boolean;
   /** A plain-language verdict. */
   readonly verdict: string;
+  /** True when the Monte Carlo interval ends were stabilised by the adaptive procedure (JCGM
+   * 101 §7.9), so that the verdict does not depend on the seed; false for a fixed-size run. */
+  readonly stable: boolean;
 }
 
 /**
@@ -87,6 +90,20 @@ export function validateGumWithMonteCarlo(
       } and ${
         highDifference.toPrecision(2)
       } exceed δ = ${tolerance}; report the Monte Carlo interval`;
-    return { output: name, tolerance, lowDifference, highDifference, validated, verdict };
+    // a fixed-size run's interval ends carry their own Monte Carlo noise: near δ the verdict can
+    // change with the seed, unless the adaptive procedure stabilised them to δ (JCGM 101 §7.9)
+    const fixed = mcResult.monteCarlo?.adaptive == null;
+    const note = fixed
+      ? " (from a fixed-size Monte Carlo run: near δ this verdict can change with the seed; propagate with adaptive: true for a stable one, JCGM 101 §7.9)"
+      : "";
+    return {
+      output: name,
+      tolerance,
+      lowDifference,
+      highDifference,
+      validated,
+      verdict: verdict + note,
+      stable: !fixed,
+    };
   });
 }

@@ -85,8 +85,8 @@ export function histogramRange(v: UncertainValue, ...others: Interval[]): Interv
   const wide = coverageIntervals(v.samples, 0.999).symmetric;
   const all = [wide, v.interval, ...(v.shortestInterval ? [v.shortestInterval] : []), ...others];
   return {
-    lower: Math.min(...all.map((i) => i.lower)),
-    upper: Math.max(...all.map((i) => i.upper)),
+    lower: all.reduce((m, i) => Math.min(m, i.lower), Infinity),
+    upper: all.reduce((m, i) => Math.max(m, i.upper), -Infinity),
   };
 }
 

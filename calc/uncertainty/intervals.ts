@@ -9,33 +9,57 @@
 import { sortFloat64 } from "./sort.ts";
 import type { Interval } from "./types.ts";
 
-/** Mean and standard deviation (two-pass, JCGM 101 eq. (16)–(17)). */
-export function meanAndStandardDeviation(values: Float64Array): { mean: number; sd: number } {
-  const m = values.length;
-  let s = 0;
-  for (let r = 0; r < m; r++) s += values[r]!;
+/** Mean and standard deviation (two-pass, JCGM 101 eq. (16)–(17)) of the values that are not
+ * NaN (NaN marks a trial excluded as physically inconsistent), and how many those are. */
+export function meanAndStandardDeviation(
+  values: Float64Array,
+): { mean: number; sd: number; count: number } {
+  let s = 0, m = 0;
+  for (let r = 0; r < values.length; r++) {
+    const v = values[r]!;
+    if (v === v) {
+      s += v;
+      m++;
+    }
+  }
   const mean = s / m;
   let ss = 0, comp = 0;
-  for (let r = 0; r < m; r++) {
+  for (let r = 0; r < values.length; r++) {
     const d = values[r]! - mean;
+    if (d !== d) continue;
     ss += d * d;
     comp += d;
   }
-  return { mean, sd: Math.sqrt(Math.max((ss - (comp * comp) / m) / (m - 1), 0)) };
+  return { mean, sd: Math.sqrt(Math.max((ss - (comp * comp) / m) / (m - 1), 0)), count: m };
+}
+
+/** The values that are not NaN (the trials kept), in order; the array itself when all are. */
+export function keptValues(values: Float64Array): Float64Array {
+  let n = 0;
+  for (let r = 0; r < values.length; r++) if (values[r] === values[r]) n++;
+  if (n === values.length) return values;
+  const kept = new Float64Array(n);
+  let k = 0;
+  for (let r = 0; r < values.length; r++) {
+    const v = values[r]!;
+    if (v === v) kept[k++] = v;
+  }
+  return kept;
 }
 
 /**
  * The `count` smallest and the `count` largest values of `values`, each sorted ascending, without
  * sorting the whole array: one pass finds the range, one builds a value histogram that locates
- * both tails, one copies the tails, and only they are sorted. Exact for any data without NaN: ties
- * and heavy tails only enlarge the copied part; data the histogram cannot split (one value, zeros
- * of both signs only, a spread beyond the double range) is sorted whole. When `count` ≥ the number
- * of values, both are all of them.
+ * both tails, one copies the tails, and only they are sorted. NaN values (excluded trials) are left
+ * out. Exact otherwise: ties and heavy tails only enlarge the copied part; data the histogram
+ * cannot split (one value, zeros of both signs only, a spread beyond the double range) is sorted
+ * whole. When `count` ≥ the number of values, both are all of them.
  */
 export function sortedTails(
-  values: Float64Array,
+  all: Float64Array,
   count: number,
 ): { low: Float64Array; high: Float64Array } {
+  const values = keptValues(all);
   const m = values.length;
   let min = Infinity, max = -Infinity;
   if (2 * count < m) {
@@ -77,7 +101,8 @@ export function sortedTails(
 }
 
 /**
- * Coverage intervals from model values in any order (JCGM 101:2008 §7.7): q = pM (or
+ * Coverage intervals from model values in any order (NaN, an excluded trial, left out; M counts
+ * the values kept) (JCGM 101:2008 §7.7): q = pM (or
  * ⌊pM + ½⌋); probabilistically symmetric [y₍r₎, y₍r+q₎] with r = (M − q)/2 (or (M − q + 1)/2),
  * and the shortest interval minimising y₍r+q₎ − y₍r₎ over r = 1, …, M − q. Only the M − q
  * smallest and largest values are sorted: every order statistic needed lies there.
@@ -95,8 +120,9 @@ export function coverageIntervals(
   values: Float64Array,
   coverage: number,
 ): { symmetric: Interval; shortest: Interval } {
-  const tails = sortedTails(values, coverageTailSize(values.length, coverage));
-  return intervalsFromTails(tails.low, tails.high, values.length, coverage);
+  const kept = keptValues(values);
+  const tails = sortedTails(kept, coverageTailSize(kept.length, coverage));
+  return intervalsFromTails(tails.low, tails.high, kept.length, coverage);
 }
 
 /** q = pM (or ⌊pM + ½⌋), capped at M − 1 (JCGM 101:2008 §7.7). */
@@ -187,13 +213,20 @@ export type KnownTails = readonly { readonly low: Float64Array; readonly high: F
  * ```
  */
 export function sampleCovariance(columns: readonly Float64Array[]): number[][] {
-  const means = columns.map((c) => meanAndStandardDeviation(c).mean);
+  // the trials kept in every column (an excluded trial is NaN in all outputs of its run)
+  const kept = columns.map(keptValues);
+  const means = kept.map((c) => meanAndStandardDeviation(c).mean);
   return columns.map((a, i) =>
     columns.map((b, j) => {
       const ma = means[i]!, mb = means[j]!;
-      let s = 0;
-      for (let r = 0; r < a.length; r++) s += (a[r]! - ma) * (b[r]! - mb);
-      return s / (a.length - 1);
+      let s = 0, m = 0;
+      for (let r = 0; r < a.length; r++) {
+        const d = (a[r]! - ma) * (b[r]! - mb);
+        if (d !== d) continue;
+        s += d;
+        m++;
+      }
+      return s / (m - 1);
     })
   );
 }

@@ -9,6 +9,7 @@
  */
 import type { Calculation, InputDefinition, OutputDefinition } from "../core/types.ts";
 import { cautionsOf } from "../core/calculation.ts";
+import { formatRange } from "../core/range.ts";
 import { checkSeed } from "./random.ts";
 import { type KnownTails, sampleCovariance } from "./intervals.ts";
 import { coverageIntervals, intervalsFromTails, meanAndStandardDeviation } from "./intervals.ts";
@@ -18,6 +19,7 @@ import { keyWords, NO_SOURCES, sourceCorrelation } from "./sources.ts";
 import { distributionInterval, exactDistribution } from "./distributions.ts";
 import {
   blockCount,
+  type InconsistentTrials,
   planGroups,
   type PlanInput,
   range,
@@ -74,6 +76,9 @@ export interface MonteCarloRunOptions {
   readonly keepSamples?: boolean;
   /** Which coverage interval is `interval`. @default "symmetric" */
   readonly interval?: "symmetric" | "shortest";
+  /** Physically inconsistent trials: excluded (the conditional distribution) or refused.
+   * @default "exclude" */
+  readonly inconsistentTrials?: InconsistentTrials;
 }
 
 /** A checked run: everything that can fail before the first draw has been checked. */
@@ -85,6 +90,7 @@ export interface MonteCarloRun<I extends string = string> {
   readonly seed: number;
   readonly keepSamples: boolean;
   readonly interval: "symmetric" | "shortest";
+  readonly inconsistentTrials: InconsistentTrials;
 }
 
 /** Checks a number of trials for a coverage probability (M ≥ 1/(1 − p), JCGM 101 §7.2.2). */
@@ -171,9 +177,18 @@ export function monteCarloRun<I extends string>(
       `${where}: expected the seed ${fromInputs.seed} and ${fromInputs.trials} trials of the inputs' Monte Carlo run (a chain runs with one seed), got seed ${seed} and ${trials} trials`,
     );
   }
+  const inconsistentTrials = options.inconsistentTrials ?? "exclude";
+  if (inconsistentTrials !== "exclude" && inconsistentTrials !== "refuse") {
+    throw new TypeError(
+      `${where}: expected inconsistentTrials "exclude" or "refuse", got ${
+        JSON.stringify(inconsistentTrials)
+      }`,
+    );
+  }
   return {
     prepared,
-    plan: planInputs(calc, prepared),
+    plan: { ...planInputs(calc, prepared), inconsistent: inconsistentTrials },
+    inconsistentTrials,
     coverage: options.coverage,
     trials,
     seed,
@@ -211,11 +226,11 @@ export function sampledValue(parts: {
   readonly tails?: { readonly low: Float64Array; readonly high: Float64Array };
 }): UncertainValue {
   const { samples, coverage } = parts;
-  const { mean, sd } = meanAndStandardDeviation(samples);
+  const { mean, sd, count } = meanAndStandardDeviation(samples);
   let intervals: { symmetric: Interval; shortest: Interval } | undefined;
   const get = () =>
     intervals ??= parts.tails
-      ? intervalsFromTails(parts.tails.low, parts.tails.high, samples.length, coverage)
+      ? intervalsFromTails(parts.tails.low, parts.tails.high, count, coverage)
       : coverageIntervals(samples, coverage);
   const value = {
     kind: "sonorigor.uncertainValue" as const,
@@ -283,8 +298,11 @@ export function distributionValue(parts: {
     sensitivities: new Map<string, number>(),
     sources: parts.sources,
     samples: parts.samples,
-    // the shortest interval of an asymmetric triangle is not the symmetric one: not computed
-    shortestInterval: d.kind === "triangular" && d.mode !== d.estimate ? null : interval,
+    // the shortest interval of an asymmetric triangle or a cone is not the symmetric one: not
+    // computed
+    shortestInterval: (d.kind === "triangular" && d.mode !== d.estimate) || d.kind === "cone"
+      ? null
+      : interval,
     layout: parts.layout,
   });
 }
@@ -311,14 +329,40 @@ export function finishMonteCarlo<I extends string, O extends string>(
     samples: new Map([...prepared.sources.samples, ...drawn]),
   });
   const warnings = warningMessages(prepared.warnings);
-  prepared.inputs.forEach((p, i) => {
-    const n = counts.inputsOutside[i]!;
-    if (n > 0) warnings.push(outsideDrawsWarning(calc, p.name, n, trials));
-  });
-  calc.outputNames.forEach((o, k) => {
-    const n = counts.outputsOutside[k]!;
-    if (n > 0) warnings.push(outsideOutputsWarning(calc, o, n, trials));
-  });
+  for (const p of prepared.inputs) {
+    const d = p.fresh?.distribution;
+    if (d?.kind === "studentT" && d.dof <= 2) {
+      warnings.push(
+        `${calc.inputs[p.name as I].label} is drawn from a t distribution with ν = ${d.dof}${
+          Number.isInteger(d.dof) ? ` (${d.dof + 1} repeated readings)` : ""
+        }: its variance is infinite for ν ≤ 2 (JCGM 101:2008 §6.4.9.4), so a Monte Carlo standard uncertainty does not converge and is not meaningful; report the coverage interval only, or take more readings`,
+      );
+    }
+  }
+  const excluded = excludedTrials(targets.outputs);
+  if (run.inconsistentTrials === "refuse") {
+    const problems = [
+      ...prepared.inputs.flatMap((p, i) => {
+        const n = counts.inputsOutside[i]!;
+        return n > 0 ? [outsideDrawsWarning(calc, p.name, n, trials)] : [];
+      }),
+      ...calc.outputNames.flatMap((o, k) => {
+        const n = counts.outputsOutside[k]!;
+        return n > 0 ? [outsideOutputsWarning(calc, o, n, trials)] : [];
+      }),
+    ];
+    if (problems.length > 0) {
+      throw new RangeError(
+        `${calc.title}: Monte Carlo refused (inconsistentTrials: "refuse"): ${
+          problems.join("; ")
+        }; propagate with inconsistentTrials: "exclude" for the distribution conditional on consistent trials, or give the inputs distributions that respect the limits`,
+      );
+    }
+  } else if (excluded > 0) {
+    warnings.push(
+      excludedWarning(calc, prepared.inputs.map((p) => p.name), counts, excluded, trials),
+    );
+  }
   const outputs = {} as Record<O, UncertainValue>;
   calc.outputNames.forEach((o, k) => {
     outputs[o] = sampledValue({
@@ -381,7 +425,14 @@ export function finishMonteCarlo<I extends string, O extends string>(
     correlation: correlationFromCovariance(covariance),
     warnings,
     cautions: cautionsOf(calc),
-    monteCarlo: { trials, seed, interval: run.interval, adaptive: extra.adaptive ?? null },
+    monteCarlo: {
+      trials,
+      seed,
+      interval: run.interval,
+      adaptive: extra.adaptive ?? null,
+      excludedTrials: excluded,
+      inconsistentTrials: run.inconsistentTrials,
+    },
   };
 }
 
@@ -404,4 +455,48 @@ export function runMonteCarlo<I extends string, O extends string>(
     counts,
   );
   return finishMonteCarlo(calc, run, targets, counts);
+}
+
+/** Trials excluded as physically inconsistent: NaN in every output (0 without outputs). */
+export function excludedTrials(outputs: readonly Float64Array[]): number {
+  const first = outputs[0];
+  if (!first) return 0;
+  let n = 0;
+  for (let r = 0; r < first.length; r++) if (first[r] !== first[r]) n++;
+  return n;
+}
+
+/** The warning for excluded trials: how many, why, and what the result then describes. */
+export function excludedWarning(
+  calc: Calculation,
+  inputNames: readonly string[],
+  counts: RunCounts,
+  excluded: number,
+  trials: number,
+): string {
+  const reasons = [
+    ...inputNames.flatMap((name, i) => {
+      const n = counts.inputsOutside[i]!;
+      const def = calc.inputs[name]!;
+      return n > 0
+        ? [`${n} draws of ${def.label} outside ${formatRange(def.range, def.unit)}`]
+        : [];
+    }),
+    ...(calc.constraints.length > 0
+      ? [`draws breaking ${calc.constraints.map((c) => c.description).join(", ")}`]
+      : []),
+    ...calc.outputNames.flatMap((o, k) => {
+      const n = counts.outputsOutside[k]!;
+      const def = calc.outputs[o]!;
+      return n > 0
+        ? [`${n} values of ${def.label} outside ${formatRange(def.quantity.valid, def.unit)}`]
+        : [];
+    }),
+  ];
+  const share = (100 * excluded) / trials;
+  return `${excluded} of ${trials} trials (${
+    share < 0.1 ? share.toPrecision(1) : share.toFixed(1)
+  } %) were physically inconsistent and were excluded (${
+    reasons.length > 0 ? reasons.join("; ") : "excluded in an earlier step"
+  }): the results describe the distribution conditional on consistent trials (a truncation); propagate with inconsistentTrials: "refuse" to stop instead`;
 }

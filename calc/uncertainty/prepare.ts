@@ -164,7 +164,7 @@ export function prepareInputs<I extends string>(
       }
       const estimate = g.value * factor;
       const checked = checkValue(name, def, estimate, context);
-      issues.push(...checked.issues);
+      for (const issue of checked.issues) issues.push(issue);
       if (checked.value === undefined) continue;
       const linear = new Map<string, number>();
       for (const [k, c] of g.sensitivities) linear.set(k, c * factor);
@@ -183,7 +183,7 @@ export function prepareInputs<I extends string>(
     }
     if (g === undefined) {
       const checked = checkValue(name, def, undefined, context);
-      issues.push(...checked.issues);
+      for (const issue of checked.issues) issues.push(issue);
       if (checked.value === undefined) continue;
       estimates[name] = checked.value;
       prepared.push({
@@ -203,11 +203,11 @@ export function prepareInputs<I extends string>(
       ? checkValue(name, def, isUncertainInput(g) ? (g as { value?: unknown }).value : g, context)
         .issues
       : [];
-    issues.push(...resolved.issues, ...unreadable);
+    for (const issue of [...resolved.issues, ...unreadable]) issues.push(issue);
     const d = resolved.distribution;
     if (d === undefined) continue;
     const checked = checkValue(name, def, d.estimate, context);
-    issues.push(...checked.issues);
+    for (const issue of checked.issues) issues.push(issue);
     if (checked.value === undefined) continue;
     estimates[name] = d.estimate;
     const fresh: Source | null = d.standardUncertainty > 0
@@ -229,7 +229,9 @@ export function prepareInputs<I extends string>(
       linear: fresh ? new Map([[fresh.key, 1]]) : new Map(),
     });
   }
-  issues.push(...checkConstraints(calc, estimates as Partial<Record<I, number>>));
+  for (const issue of checkConstraints(calc, estimates as Partial<Record<I, number>>)) {
+    issues.push(issue);
+  }
   throwIfErrors(issues);
 
   // the sources created here, with their declared correlations

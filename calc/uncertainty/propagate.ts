@@ -50,6 +50,13 @@ export interface PropagateOptions {
   readonly interval?: "symmetric" | "shortest";
   /** Monte Carlo: the adaptive procedure of JCGM 101 §7.9 (true, or its options). */
   readonly adaptive?: boolean | AdaptiveOptions;
+  /** Monte Carlo: what to do with a physically inconsistent trial (an input drawn outside its
+   * valid range, a broken relation between inputs such as ESV > EDV, an output not finite or
+   * outside its valid range). "exclude": every output of that trial is NaN in the samples and the
+   * statistics describe the distribution conditional on consistent trials (a truncation), with a
+   * warning giving the share and the reasons and `monteCarlo.excludedTrials`; "refuse": the run
+   * is a RangeError naming the counts. @default "exclude" */
+  readonly inconsistentTrials?: "exclude" | "refuse";
 }
 
 /** Checks a coverage probability. */
@@ -182,6 +189,9 @@ export function planPropagation<I extends string, O extends string>(
     coverage,
     ...(options.seed !== undefined ? { seed: options.seed } : {}),
     ...(options.interval !== undefined ? { interval: options.interval } : {}),
+    ...(options.inconsistentTrials !== undefined
+      ? { inconsistentTrials: options.inconsistentTrials }
+      : {}),
   };
   if (options.adaptive) {
     const adaptive = options.adaptive === true ? {} : options.adaptive;

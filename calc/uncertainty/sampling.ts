@@ -24,6 +24,9 @@ import { inRange } from "../core/range.ts";
 import { columnLoop } from "../core/columns.ts";
 import { choleskySemidefinite } from "./correlation.ts";
 import { type RandomStream, randomStream } from "./random.ts";
+import { distributionQuantile } from "./distributions.ts";
+import { keyWords } from "./sources.ts";
+import { normalCdf } from "../stats/distributions.ts";
 import type { ResolvedDistribution } from "./types.ts";
 
 /** Trials per block: input columns of this length stay in cache; part of the stream layout. */
@@ -45,28 +48,52 @@ export type PlanInput =
   /** Samples of an earlier step, indexed from the run's first trial (0 on one thread). */
   | { readonly kind: "samples"; readonly samples: Float64Array };
 
-/** A group of correlated normal sources: their input indices (ascending) and the lower
- * Cholesky factor of their correlation matrix. */
+/**
+ * A group of correlated sources: their input indices (ascending), the lower Cholesky factor of
+ * the correlation matrix of their latent standard normals, and how those normals become draws:
+ * - "normal": every member normal, x = μ + u·z (JCGM 101:2008 §6.4.8);
+ * - "multivariateT": every member a Student t with one ν (repeated readings of the same
+ *   measurement procedure, JCGM 102:2011 §6.5.3): x = μ + s·z·√(ν/W), one W ~ χ²(ν) per trial
+ *   shared by the group, drawn from the group's own stream keyed `words`;
+ * - "copula": any other mix (a Gaussian copula): x = F⁻¹(Φ(z)) per member's own distribution,
+ *   with the latent correlation chosen so that the inputs' correlation is the one declared where
+ *   a closed form exists (normal and rectangular margins), else the declared value itself.
+ */
 export interface CorrelatedGroup {
   readonly members: readonly number[];
   readonly factor: readonly (readonly number[])[];
+  readonly method: "normal" | "multivariateT" | "copula";
+  /** ν of a multivariate t group. */
+  readonly dof?: number;
+  /** Stream words of a multivariate t group's χ² draws. */
+  readonly words?: readonly [number, number];
 }
+
+/** What to do with a trial that is physically inconsistent (an input outside its valid range, a
+ * broken relation between inputs, an output not finite or outside its valid range): exclude it
+ * (every output of that trial becomes NaN, so statistics describe the distribution conditional on
+ * consistency), or refuse the run. */
+export type InconsistentTrials = "exclude" | "refuse";
 
 /** What a run needs besides the calculation: plain data, so it can be sent to a worker. */
 export interface TrialPlan {
   /** One entry per calculation input, in input order. */
   readonly inputs: readonly PlanInput[];
-  /** Correlated normal groups. */
+  /** Correlated groups. */
   readonly groups: readonly CorrelatedGroup[];
+  /** Inconsistent trials. @default "exclude" */
+  readonly inconsistent?: InconsistentTrials;
 }
 
 /**
- * Groups the correlated sources of a plan and factors each group's correlation matrix.
+ * Groups the correlated sources of a plan, chooses how each group is drawn (joint normal,
+ * multivariate t, or Gaussian copula; see {@linkcode CorrelatedGroup}) and factors the correlation
+ * matrix of its latent normals.
  *
  * @param inputs The plan inputs (sources with `group` −1 are regrouped here).
  * @param correlation r(i, j) between two inputs' sources (0 when not declared).
  * @param where For messages.
- * @throws {TypeError} When a correlated source is not normal (JCGM 101 §6.4.8).
+ * @throws {TypeError} When a correlated input is exact or comes from an earlier step's samples.
  */
 export function planGroups(
   inputs: readonly PlanInput[],
@@ -96,24 +123,59 @@ export function planGroups(
   const out = [...inputs];
   for (const members of byRoot.values()) {
     if (members.length < 2) continue;
-    for (const i of members) {
+    const dists = members.map((i) => {
       const p = inputs[i]!;
-      if (p.kind !== "source" || p.distribution.kind !== "normal") {
+      if (p.kind !== "source" || p.distribution.kind === "exact") {
         throw new TypeError(
-          `${where}: Monte Carlo supports correlation only between normal inputs (JCGM 101 §6.4.8), got '${
-            names[i]
-          }' with a ${p.kind === "source" ? p.distribution.kind : p.kind} distribution`,
+          `${where}: expected '${names[i]}' to be drawn from a distribution to correlate it, got ${
+            p.kind === "source"
+              ? "an exact value"
+              : p.kind === "exact"
+              ? "an exact value"
+              : "the samples of an earlier step (their correlation is already in the draws)"
+          }`,
         );
       }
       out[i] = { ...p, group: groups.length };
-    }
-    const matrix = members.map((i) => members.map((j) => (i === j ? 1 : correlation(i, j))));
+      return p.distribution;
+    });
+    const declared = members.map((i) => members.map((j) => (i === j ? 1 : correlation(i, j))));
+    const allNormal = dists.every((d) => d.kind === "normal");
+    const dof = dists[0]!.kind === "studentT" ? dists[0]!.dof : NaN;
+    const sharedT = dists.every((d) => d.kind === "studentT" && d.dof === dof);
+    const method = allNormal ? "normal" : sharedT ? "multivariateT" : "copula";
+    const latent = method === "copula"
+      ? declared.map((row, a) =>
+        row.map((r, b) => (a === b ? 1 : latentCorrelation(r, dists[a]!, dists[b]!)))
+      )
+      : declared;
+    const keys = members.map((i) => (inputs[i] as Extract<PlanInput, { kind: "source" }>).key);
     groups.push({
       members,
-      factor: choleskySemidefinite(matrix, members.map((i) => names[i]!), where),
+      factor: choleskySemidefinite(latent, members.map((i) => names[i]!), where),
+      method,
+      ...(method === "multivariateT" ? { dof, words: keyWords(`χ²(${keys.join(" & ")})`) } : {}),
     });
   }
   return { inputs: out, groups };
+}
+
+/**
+ * The correlation of the latent normals of a Gaussian copula that gives two inputs the declared
+ * correlation r: r itself between normals; 2·sin(πr/6) between two rectangular inputs (the
+ * Pearson correlation of Φ(Z₁), Φ(Z₂) is (6/π)·arcsin(ρ/2), Pearson 1907 / Kruskal 1958);
+ * r·√(π/3) between a normal and a rectangular input (corr(Z₁, Φ(Z₂)) = ρ·√(3/π)); r for other
+ * margins, whose induced correlation then differs slightly from r (the propagation says so).
+ */
+export function latentCorrelation(
+  r: number,
+  a: ResolvedDistribution,
+  b: ResolvedDistribution,
+): number {
+  const kinds = [a.kind, b.kind].sort().join("+");
+  if (kinds === "rectangular+rectangular") return 2 * Math.sin((Math.PI * r) / 6);
+  if (kinds === "normal+rectangular") return Math.max(-1, Math.min(1, r * Math.sqrt(Math.PI / 3)));
+  return r;
 }
 
 /** Number of blocks of a run of `m` trials. */
@@ -144,6 +206,12 @@ function sampleColumn(d: ResolvedDistribution, out: Float64Array, rng: RandomStr
       rng.fillUniform(out);
       for (let r = 0; r < m; r++) out[r] = a + (b - a) * out[r]!;
       return;
+    case "cone": {
+      const k = d.radiansPerUnit!, one = 1 - Math.cos(b * k);
+      rng.fillUniform(out);
+      for (let r = 0; r < m; r++) out[r] = Math.acos(1 - out[r]! * one) / k;
+      return;
+    }
     case "arcsine": {
       const mid = (a + b) / 2, half = (b - a) / 2;
       rng.fillUniform(out);
@@ -163,17 +231,28 @@ function sampleColumn(d: ResolvedDistribution, out: Float64Array, rng: RandomStr
   }
 }
 
-/** Number of values outside a range (a min/max pass first: usually nothing to count). */
-function countOutside(col: Float64Array, r: ValueRange): number {
-  let min = Infinity, max = -Infinity;
+/** Number of values outside a range or not finite (a min/max pass first: usually nothing to
+ * count); marks their trials in `bad` when given. */
+function markOutside(
+  col: Float64Array,
+  r: ValueRange,
+  bad: Uint8Array | null,
+  skip: Uint8Array | null = null,
+): number {
+  let min = Infinity, max = -Infinity, nan = false;
   for (let i = 0; i < col.length; i++) {
     const v = col[i]!;
     if (v < min) min = v;
     if (v > max) max = v;
+    if (v !== v) nan = true;
   }
-  if (inRange(min, r) && inRange(max, r)) return 0;
+  if (!nan && inRange(min, r) && inRange(max, r)) return 0;
   let n = 0;
-  for (let i = 0; i < col.length; i++) if (!inRange(col[i]!, r)) n++;
+  for (let i = 0; i < col.length; i++) {
+    if (skip?.[i] || inRange(col[i]!, r)) continue;
+    n++;
+    if (bad) bad[i] = 1;
+  }
   return n;
 }
 
@@ -232,7 +311,8 @@ export function runBlocks(
   const size = Math.min(BLOCK_TRIALS, m);
   const scratch = plan.inputs.map(() => new Float64Array(size));
   const normals = plan.groups.length > 0 ? plan.inputs.map(() => new Float64Array(size)) : [];
-  const loop = columnLoop(calc);
+  const strict = columnLoop(calc, "strict");
+  const lenient = columnLoop(calc, "lenient");
   const { firstTrial } = targets;
   const outputRanges = calc.outputNames.map((o) => calc.outputs[o]!.quantity.valid);
   for (const b of blocks) {
@@ -253,30 +333,132 @@ export function runBlocks(
         else rng.fillNormal(normals[i]!.subarray(0, n));
       }
     });
-    for (const g of plan.groups) {
-      g.members.forEach((i, gi) => {
-        const p = plan.inputs[i]! as Extract<PlanInput, { kind: "source" }>;
-        const out = cols[i]!;
-        const row = g.factor[gi]!;
-        out.fill(0);
-        for (let k = 0; k <= gi; k++) {
-          const coef = row[k]!;
-          if (coef === 0) continue;
-          const zk = normals[g.members[k]!]!;
-          for (let r = 0; r < n; r++) out[r]! += coef * zk[r]!;
-        }
-        const x = p.distribution.estimate, u = p.distribution.standardUncertainty;
-        for (let r = 0; r < n; r++) out[r] = x + u * out[r]!;
-      });
-    }
+    for (const g of plan.groups) drawGroup(g, plan, cols, normals, runKey, b, n);
+    const exclude = (plan.inconsistent ?? "exclude") === "exclude";
+    const bad = exclude ? new Uint8Array(n) : null;
+    // trials an earlier step already excluded (NaN samples) stay excluded, and are not counted
+    // again here
+    const upstream = new Uint8Array(n);
     plan.inputs.forEach((p, i) => {
-      if (p.kind === "source") {
-        counts.inputsOutside[i]! += countOutside(cols[i]!, calc.inputs[calc.inputNames[i]!]!.range);
-      }
+      if (p.kind !== "samples") return;
+      const col = cols[i]!;
+      for (let r = 0; r < n; r++) if (col[r] !== col[r]) upstream[r] = 1;
     });
+    if (bad) bad.set(upstream);
+    plan.inputs.forEach((p, i) => {
+      if (p.kind === "exact") return;
+      const range = calc.inputs[calc.inputNames[i]!]!.range;
+      counts.inputsOutside[i]! += markOutside(cols[i]!, range, bad, upstream);
+    });
+    if (calc.constraints.length > 0) markBrokenRelations(calc, cols, n, bad);
     const outs = targets.outputs.map((o) => o.subarray(at, at + n));
-    const bad = loop(calc.formula, cols, outs, n);
-    if (bad >= 0) nonFiniteError(calc, cols, bad, start + bad);
-    outs.forEach((o, k) => (counts.outputsOutside[k]! += countOutside(o, outputRanges[k]!)));
+    const first = (exclude ? lenient : strict)(calc.formula, cols, outs, n);
+    if (first >= 0) nonFiniteError(calc, cols, first, start + first);
+    // outputs are counted on the trials still consistent after the inputs' checks
+    const before = bad ? bad.slice() : null;
+    outs.forEach((o, k) =>
+      counts.outputsOutside[k]! += markOutside(o, outputRanges[k]!, bad, before)
+    );
+    if (bad) {
+      for (let r = 0; r < n; r++) {
+        if (bad[r]) { for (const o of outs) o[r] = NaN; }
+      }
+    }
+  }
+}
+
+/** Draws one correlated group into its members' columns (see {@linkcode CorrelatedGroup}). */
+function drawGroup(
+  g: CorrelatedGroup,
+  plan: TrialPlan,
+  cols: readonly Float64Array[],
+  normals: readonly Float64Array[],
+  runKey: readonly number[],
+  block: number,
+  n: number,
+): void {
+  // correlated standard normals: the Cholesky factor times the members' independent normals
+  g.members.forEach((i, gi) => {
+    const out = cols[i]!;
+    const row = g.factor[gi]!;
+    out.fill(0, 0, n);
+    for (let k = 0; k <= gi; k++) {
+      const coef = row[k]!;
+      if (coef === 0) continue;
+      const zk = normals[g.members[k]!]!;
+      for (let r = 0; r < n; r++) out[r]! += coef * zk[r]!;
+    }
+  });
+  let scale: Float64Array | null = null;
+  if (g.method === "multivariateT") {
+    // one χ²(ν) per trial, shared by the group: √(ν/W) scales every member (JCGM 102 §6.5.3)
+    const rng = randomStream([...runKey, g.words![0], g.words![1], block]);
+    scale = new Float64Array(n);
+    for (let r = 0; r < n; r++) scale[r] = Math.sqrt(g.dof! / chiSquare(rng, g.dof!));
+  }
+  for (const i of g.members) {
+    const p = plan.inputs[i]! as Extract<PlanInput, { kind: "source" }>;
+    const d = p.distribution;
+    const out = cols[i]!;
+    const x = d.estimate, u = d.standardUncertainty;
+    if (g.method === "normal" || (g.method === "copula" && d.kind === "normal")) {
+      for (let r = 0; r < n; r++) out[r] = x + u * out[r]!;
+    } else if (scale) {
+      for (let r = 0; r < n; r++) out[r] = x + u * out[r]! * scale[r]!;
+    } else {
+      for (let r = 0; r < n; r++) out[r] = distributionQuantile(d, normalCdf(out[r]!));
+    }
+  }
+}
+
+/** One χ²(ν) draw: 2·Gamma(ν/2) by Marsaglia and Tsang (2000), with the shape boost
+ * Gamma(a) = Gamma(a + 1)·U^(1/a) for a < 1. */
+function chiSquare(rng: RandomStream, dof: number): number {
+  const a = dof / 2;
+  const shape = a < 1 ? a + 1 : a;
+  const d = shape - 1 / 3, c = 1 / Math.sqrt(9 * d);
+  const one = new Float64Array(1);
+  const uniform = () => {
+    rng.fillUniform(one);
+    return one[0]!;
+  };
+  let g: number;
+  for (;;) {
+    rng.fillNormal(one);
+    const z = one[0]!;
+    const v = (1 + c * z) ** 3;
+    if (v <= 0) continue;
+    const u = uniform();
+    if (Math.log(u) < 0.5 * z * z + d - d * v + d * Math.log(v)) {
+      g = d * v;
+      break;
+    }
+  }
+  if (a < 1) g *= uniform() ** (1 / a);
+  return 2 * g;
+}
+
+/** Marks the trials whose inputs break a relation the calculation declares (ESV ≤ EDV …); with
+ * no marks to keep (refusing inconsistent trials), the first broken relation is an error. */
+function markBrokenRelations(
+  calc: Calculation,
+  cols: readonly Float64Array[],
+  n: number,
+  bad: Uint8Array | null,
+): void {
+  const x: Record<string, number> = {};
+  for (let r = 0; r < n; r++) {
+    calc.inputNames.forEach((name, i) => (x[name] = cols[i]![r]!));
+    const broken = calc.constraints.find((c) => !c.holds(x));
+    if (broken === undefined) continue;
+    if (bad) {
+      bad[r] = 1;
+      continue;
+    }
+    throw new RangeError(
+      `${calc.title}: a Monte Carlo draw breaks the relation ${broken.description} (${
+        broken.inputs.map((name) => `${name} = ${x[name]}`).join(", ")
+      }); propagate with inconsistentTrials: "exclude" for the distribution conditional on consistent inputs, or give the inputs distributions that keep the relation`,
+    );
   }
 }

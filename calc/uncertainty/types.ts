@@ -23,6 +23,7 @@ export type DistributionKind =
   | "triangular"
   | "arcsine"
   | "studentT"
+  | "cone"
   | "exact";
 
 /** A distribution resolved to canonical numbers. */
@@ -41,6 +42,8 @@ export interface ResolvedDistribution {
   readonly upper: number;
   /** Mode of a triangular shape (the estimate otherwise). */
   readonly mode: number;
+  /** Radians per canonical unit of an angle drawn from a cone (the cone distribution only). */
+  readonly radiansPerUnit?: number;
 }
 
 /**
@@ -212,5 +215,9 @@ export interface Propagation<I extends string = string, O extends string = strin
     /** Which coverage interval the values report. */
     readonly interval: "symmetric" | "shortest";
     readonly adaptive: AdaptiveSummary | null;
+    /** Trials excluded as physically inconsistent (NaN in the samples of every output). */
+    readonly excludedTrials: number;
+    /** What was done with inconsistent trials. */
+    readonly inconsistentTrials: "exclude" | "refuse";
   } | null;
 }

@@ -9,13 +9,17 @@ import {
   defineSeverityTable,
   effectiveRegurgitantOrificeArea,
   gradeSeverity,
+  GUIDELINE_SEVERITY_TABLES,
   JUPYTER_DISPLAY,
   MITRAL_REGURGITATION_2017,
   MITRAL_STENOSIS_AREA_2009,
   MITRAL_STENOSIS_MEAN_GRADIENT_2009,
   MITRAL_STENOSIS_STAGES_2014,
+  MITRAL_STENOSIS_STAGES_2020,
   mitralStenosisAreaTable,
+  NISHIMURA_2014,
   normal,
+  OTTO_2020,
   propagate,
   PULMONARY_HYPERTENSION_2015,
   PULMONARY_HYPERTENSION_2022,
@@ -96,8 +100,41 @@ Deno.test("mitral stenosis: older grading and newer staging are both selectable"
   assert.throws(() => mitralStenosisAreaTable("ESC 2030" as never), {
     name: "RangeError",
     message:
-      `Mitral stenosis grading: expected 'scheme' one of "EAE/ASE 2009", "AHA/ACC 2014", got "ESC 2030"`,
+      `Mitral stenosis grading: expected 'scheme' one of "ACC/AHA 2020", "AHA/ACC 2014", "EAE/ASE 2009", got "ESC 2030"`,
   });
+});
+
+Deno.test("mitral stenosis: the 2020 ACC/AHA staging is the default and has no very severe class", () => {
+  const t = MITRAL_STENOSIS_STAGES_2020;
+  // Otto 2020, Table 16 (from memory; agrees with a secondary reproduction "adapted from Table
+  // 16" of the 2020 guideline): progressive MS MVA > 1.5 cm², severe MS MVA ≤ 1.5 cm²
+  assert.equal(grade(t, 1.5), "severe (stage C/D)");
+  assert.equal(grade(t, 1.51), "progressive (stage B)");
+  // the 2014 "very severe" class (MVA ≤ 1.0 cm²) is not in the 2020 table (same reproduction)
+  assert.equal(grade(t, 1.0), "severe (stage C/D)");
+  assert.equal(grade(t, 0.6), "severe (stage C/D)");
+  assert.deepEqual(t.bands.map((b) => b.printed), ["≤ 1.5", "> 1.5"]);
+  // the default scheme is the current guideline
+  assert.equal(mitralStenosisAreaTable(), t);
+  assert.equal(mitralStenosisAreaTable("ACC/AHA 2020"), t);
+  // cited as the full guideline and its table, not an executive summary (the JACC citation as
+  // printed on the first page of a public copy of the JACC edition; the Circulation pages and the
+  // DOI as given by a secondary reproduction of Table 16 that links the DOI)
+  assert.equal(OTTO_2020.doi, "10.1161/CIR.0000000000000923");
+  assert.match(OTTO_2020.publication, /Circulation 2021;143\(5\):e72–e227/);
+  assert.match(OTTO_2020.publication, /J Am Coll Cardiol 2021;77\(4\):e25–e197/);
+  for (const b of t.bands) {
+    assert.equal(b.citation.doi, OTTO_2020.doi);
+    assert.match(b.citation.locator!, /^Table 16, stages of MS/);
+  }
+  // the 2014 staging is cited as the full guideline (JACC 2014;63:e57–e185, as in the guideline
+  // clearinghouse record), not its executive summary whose pages hold no staging table
+  assert.doesNotMatch(NISHIMURA_2014.title, /executive summary/i);
+  assert.equal(NISHIMURA_2014.doi, "10.1161/CIR.0000000000000031");
+  assert.match(NISHIMURA_2014.publication, /J Am Coll Cardiol 2014;63\(22\):e57–e185/);
+  // why 2014 stays selectable: its very severe class (≤ 1.0 cm²) carried its own intervention
+  // recommendations, so reports made under it grade differently (from memory)
+  assert.ok(MITRAL_STENOSIS_STAGES_2014.notes.some((n) => /very severe/.test(n)));
 });
 
 Deno.test("mitral and aortic regurgitation by Zoghbi et al. 2017", () => {
@@ -156,21 +193,18 @@ Deno.test("pulmonary hypertension echo probability by TR velocity (ESC/ERS 2015 
   });
 });
 
-const TABLES: SeverityTable[] = [
-  ...Object.values(AORTIC_STENOSIS_2009),
-  ...Object.values(AORTIC_STENOSIS_2017),
-  MITRAL_STENOSIS_AREA_2009,
-  MITRAL_STENOSIS_MEAN_GRADIENT_2009,
-  MITRAL_STENOSIS_STAGES_2014,
-  ...Object.values(MITRAL_REGURGITATION_2017),
-  ...Object.values(AORTIC_REGURGITATION_2017),
-  ...Object.values(PULMONARY_HYPERTENSION_2015),
-  ...Object.values(PULMONARY_HYPERTENSION_2022),
-];
+const TABLES: readonly SeverityTable[] = GUIDELINE_SEVERITY_TABLES;
 
 Deno.test("every table row carries a citation and the tables are contiguous", () => {
   // Project rule (HELPER_RULES): each guideline row carries its source
-  assert.equal(TABLES.length, 23); // 5 + 5 AS, 3 MS, 3 + 3 regurgitation, 2 + 2 PH
+  assert.equal(TABLES.length, 24); // 5 + 5 AS, 4 MS, 3 + 3 regurgitation, 2 + 2 PH
+  // the list holds each exported table once
+  for (
+    const t of [MITRAL_STENOSIS_AREA_2009, MITRAL_STENOSIS_STAGES_2014, MITRAL_STENOSIS_STAGES_2020]
+  ) {
+    assert.equal(TABLES.filter((x) => x === t).length, 1, t.id);
+  }
+  assert.equal(new Set(TABLES.map((t) => t.id)).size, TABLES.length);
   for (const t of TABLES) {
     for (const b of t.bands) {
       assert.ok(b.citation.authors.length > 0 && b.citation.year >= 2009, `${t.id} ${b.grade}`);
@@ -356,11 +390,15 @@ Deno.test("bad values for grading", () => {
     name: "RangeError",
     message: /^Severity grading \(Aortic stenosis by valve area \(2017\)\): .* got NaN$/,
   });
-  assert.throws(() => gradeSeverity(AORTIC_STENOSIS_2017.valveArea, [1, Number.NaN]), {
+  // an infinite sample is refused; a NaN sample is a Monte Carlo trial excluded as physically
+  // inconsistent (the propagation's convention), so it is counted apart, never graded
+  assert.throws(() => gradeSeverity(AORTIC_STENOSIS_2017.valveArea, [1, Infinity]), {
     name: "RangeError",
     message:
-      "Severity grading (Aortic stenosis by valve area (2017)): expected 'samples[1]' finite, got NaN",
+      "Severity grading (Aortic stenosis by valve area (2017)): expected 'samples[1]' finite, got Infinity",
   });
+  const withExcluded = gradeSeverity(AORTIC_STENOSIS_2017.valveArea, [1, Number.NaN]);
+  assert.deepEqual([withExcluded.count, withExcluded.excluded], [1, 1]);
   assert.throws(() => gradeSeverity(AORTIC_STENOSIS_2017.valveArea, []), {
     name: "TypeError",
     message:

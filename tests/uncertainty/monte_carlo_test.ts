@@ -121,34 +121,59 @@ Deno.test("Adaptive Monte Carlo (JCGM 101 §7.9) stabilises and agrees with the 
   assert.ok(Math.abs(r.outputs.y.standardUncertainty - 2) < 0.05);
 });
 
-Deno.test("Monte Carlo: non-finite model values are an error naming the output and trial", () => {
+Deno.test("Monte Carlo: non-finite model values are excluded and counted, or an error naming the output and trial", () => {
   const inverse = expressionModel({
     expression: "1 / sqrt(x)",
     inputs: { x: { unit: "1", description: "x", range: { min: 0, max: 10 } } },
     output: { name: "y", unit: "1", description: "y" },
   });
+  const options = { method: "monteCarlo", trials: 10_000, seed: 1 } as const;
+  // x ~ N(0.01, 1) is below 0 about half the time: Φ(−0.01) = 0.496 (standard normal table)
+  const r = propagate(inverse, { x: normal(0.01, 1) }, options);
+  const share = r.monteCarlo!.excludedTrials / 10_000;
+  // binomial standard error √(0.25/10⁴) = 0.005: allow 4σ
+  assert.ok(Math.abs(share - 0.496) < 0.02, String(share));
+  assert.ok(r.warnings.some((w) => /were physically inconsistent and were excluded/.test(w)));
+  assert.ok(Number.isFinite(r.outputs.y.value) && Number.isFinite(r.outputs.y.interval.upper));
   assert.throws(
-    () =>
-      propagate(inverse, { x: normal(0.01, 1) }, { method: "monteCarlo", trials: 1000, seed: 1 }),
-    {
-      name: "RangeError",
-      message: /output 'y' is not finite at Monte Carlo trial \d+/,
-    },
+    () => propagate(inverse, { x: normal(0.01, 1) }, { ...options, inconsistentTrials: "refuse" }),
+    { name: "RangeError", message: /output 'y' is not finite at Monte Carlo trial \d+ \(x = -/ },
   );
 });
 
-Deno.test("Monte Carlo: draws outside an input's valid range are reported", () => {
+Deno.test("Monte Carlo: draws outside an input's valid range are reported, excluded or refused", () => {
   const sq = expressionModel({
     expression: "x^2",
     inputs: { x: { unit: "1", description: "x", range: { min: 0, max: 10 } } },
     output: { name: "y", unit: "1", description: "y" },
   });
-  const r = propagate(sq, { x: normal(0.1, 0.1) }, {
-    method: "monteCarlo",
-    trials: 10_000,
-    seed: 3,
-  });
-  assert.ok(r.warnings.some((w) => /draws of 'x' fell outside its valid range \[0, 10\]/.test(w)));
+  const options = { method: "monteCarlo", trials: 100_000, seed: 3 } as const;
+  const r = propagate(sq, { x: normal(0.1, 0.1) }, options);
+  // P(x < 0) = Φ(−1) = 0.1587 (standard normal table); binomial σ = 0.0012
+  assert.ok(Math.abs(r.monteCarlo!.excludedTrials / 100_000 - 0.1587) < 0.005);
+  assert.ok(r.warnings.some((w) => /draws of x outside \[0, 10\]/.test(w)));
+  // the kept trials are the normal truncated at 0: E[x² | x > 0] for x ~ N(0.1, 0.1²):
+  // E[x | x > 0] = μ + σφ(1)/Φ(1) = 0.1 + 0.1·0.24197/0.84134 = 0.128760, Var = σ²(1 − 1·φ(1)/Φ(1)
+  // − (φ(1)/Φ(1))²) = 0.01·(1 − 0.287600 − 0.082714) = 0.0062969 (truncated normal moments,
+  // Johnson, Kotz & Balakrishnan 1994, §10.1), so E[x²] = 0.0062969 + 0.128760² = 0.0228759
+  assert.ok(Math.abs(r.outputs.y.value - 0.0228759) < 3e-4);
+  assert.throws(
+    () => propagate(sq, { x: normal(0.1, 0.1) }, { ...options, inconsistentTrials: "refuse" }),
+    {
+      name: "RangeError",
+      message:
+        /Monte Carlo refused \(inconsistentTrials: "refuse"\): \d+ of 100000 draws of 'x' fell outside its valid range \[0, 10\]/,
+    },
+  );
+  assert.throws(
+    () =>
+      propagate(sq, { x: normal(0.1, 0.1) }, { ...options, inconsistentTrials: "drop" as never }),
+    {
+      name: "TypeError",
+      message:
+        'Expression model: x^2: expected inconsistentTrials "exclude" or "refuse", got "drop"',
+    },
+  );
 });
 
 Deno.test("adaptive Monte Carlo: a trial limit below two sequences is refused with the limit shown", () => {
