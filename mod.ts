@@ -23,3 +23,4 @@ export * from "./calc/agreement/mod.ts";
 export * from "./calc/quantities/mod.ts";
 export * from "./calc/table/mod.ts";
 export * from "./calc/catalog.ts";
+export * from "./calc/input_uncertainty/mod.ts";

@@ -14,6 +14,10 @@ import { CHAMBER_CALCULATIONS } from "./chamber/catalog.ts";
 import { BODY_CALCULATIONS } from "./body/catalog.ts";
 import { INDEXED_TO_BSA } from "./body/indexing.ts";
 import { Z_SCORE } from "./reference/zscore.ts";
+import {
+  INPUT_UNCERTAINTY_CALCULATIONS,
+  INPUT_UNCERTAINTY_FAMILIES,
+} from "./input_uncertainty/catalog.ts";
 
 /**
  * Every calculation, family and quantity of the package.
@@ -32,7 +36,8 @@ export const CATALOG: Catalog = defineCatalog({
     ...DOPPLER_CALCULATIONS,
     ...CHAMBER_CALCULATIONS,
     ...BODY_CALCULATIONS,
+    ...INPUT_UNCERTAINTY_CALCULATIONS,
   ],
-  families: [INDEXED_TO_BSA, Z_SCORE] as Family<never>[],
+  families: [INDEXED_TO_BSA, Z_SCORE, ...INPUT_UNCERTAINTY_FAMILIES] as Family<never>[],
   quantities: [...QUANTITIES.values()],
 });

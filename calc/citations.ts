@@ -45,11 +45,16 @@ export const QUINONES_2002: Citation = Object.freeze({
   doi: "10.1067/mje.2002.120202",
 });
 
-/** Hatle & Angelsen 1985, the textbook of Doppler physics and its cardiac applications. */
+/** Hatle & Angelsen 1985, the textbook of Doppler physics and its cardiac applications (cited
+ * as a whole: the chapter number once given here was recalled, not checked, so it is not
+ * claimed). */
 export const HATLE_ANGELSEN_1985: Citation = Object.freeze({
   authors: "Hatle L, Angelsen B",
   year: 1985,
   title: "Doppler Ultrasound in Cardiology: Physical Principles and Clinical Applications",
   publication: "2nd ed. Lea & Febiger, Philadelphia",
-  locator: "ch. 2 (from memory)",
 });
+
+/** Re-exported for modules that list recalled-source cautions themselves (defineCalculation
+ * already adds them to every calculation). */
+export { recalledSourceCautions } from "./core/calculation.ts";

@@ -15,7 +15,7 @@ import type {
 import type { RepeatabilityResult } from "../calc/agreement/types.ts";
 import type { IntraclassCorrelationResult } from "../calc/agreement/types.ts";
 import type { ConcordanceResult } from "../calc/agreement/types.ts";
-import type { DemingResult, PassingBablokResult } from "../calc/agreement/types.ts";
+import type { RegressionResult } from "../calc/agreement/types.ts";
 import type { CohenKappaResult, FleissKappaResult } from "../calc/agreement/types.ts";
 import { htmlTable, tableBundle } from "./mime.ts";
 import { formatCount, formatNumber, roundLike } from "./format.ts";
@@ -143,8 +143,22 @@ export function displayConcordance(r: ConcordanceResult): MimeBundle {
   );
 }
 
-/** The MIME bundle of a Deming or Passing–Bablok regression. */
-export function displayRegression<R extends DemingResult | PassingBablokResult>(r: R): MimeBundle {
+/**
+ * The MIME bundle of a regression (Deming, general Deming, York or Passing–Bablok): slope and
+ * intercept with their intervals and how they were obtained; for York's method the goodness of
+ * fit (MSWD, χ² probability).
+ *
+ * @example
+ * ```ts
+ * import { JUPYTER_DISPLAY, yorkRegression } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const r = yorkRegression([1, 2, 3, 4, 5], [2.1, 3.9, 6.2, 7.8, 10.1], { sdX: 0.1, sdY: 0.2 });
+ * const text = String(r[JUPYTER_DISPLAY]()["text/plain"]);
+ * assert.match(text, /^York regression \(Y on X, 5 pairs\)/);
+ * assert.match(text, /MSWD/);
+ * ```
+ */
+export function displayRegression<R extends RegressionResult>(r: R): MimeBundle {
   const [x, y] = r.methodNames;
   return tableBundle(
     `${titled(`${r.method} regression`, r.quantity)} (${y} on ${x}, ${formatCount(r.n)} pairs)`,

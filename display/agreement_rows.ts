@@ -11,7 +11,7 @@ import type { BlandAltmanRepeatedResult, BlandAltmanResult } from "../calc/agree
 import type { RepeatabilityResult } from "../calc/agreement/types.ts";
 import type { IntraclassCorrelationResult } from "../calc/agreement/types.ts";
 import type { ConcordanceResult } from "../calc/agreement/types.ts";
-import type { DemingResult, PassingBablokResult } from "../calc/agreement/types.ts";
+import type { RegressionResult } from "../calc/agreement/types.ts";
 import type { CohenKappaResult, FleissKappaResult } from "../calc/agreement/types.ts";
 import { formatCount, formatInterval, formatNumber, roundLike } from "./format.ts";
 import { labelWithUnit } from "./uncertainty.ts";
@@ -174,7 +174,7 @@ export function concordanceRows(r: ConcordanceResult): string[][] {
   ];
 }
 
-export function regressionRows(r: DemingResult | PassingBablokResult): string[][] {
+export function regressionRows(r: RegressionResult): string[][] {
   const us = halfWidth(r.slopeCi);
   const ui = halfWidth(r.interceptCi);
   const rows = [
@@ -186,21 +186,50 @@ export function regressionRows(r: DemingResult | PassingBablokResult): string[][
       "",
     ],
   ];
-  if (r.method === "Deming") {
-    rows[0]![3] = `jackknife SE ${formatNumber(r.slopeStandardError, 2)}; error variance ratio ${
-      formatNumber(r.errorVarianceRatio, 3)
-    }`;
-    rows[1]![3] = `jackknife SE ${formatNumber(r.interceptStandardError, 2)}`;
-  } else {
-    rows[0]![3] = `${formatCount(r.slopesUsed)} pairwise slopes`;
-    rows.push([
-      "Cusum linearity statistic",
-      formatNumber(r.linearity.statistic, 3),
-      "–",
-      `${
-        r.linearity.nonLinear ? "exceeds" : "does not exceed"
-      } the 5 % critical value ${r.linearity.criticalValue}`,
-    ]);
+  const se = (what: string, value: number) => `${what} SE ${formatNumber(value, 2)}`;
+  switch (r.method) {
+    case "Deming":
+      rows[0]![3] = `${se("jackknife", r.slopeStandardError)}; error variance ratio ${
+        formatNumber(r.errorVarianceRatio, 3)
+      }`;
+      rows[1]![3] = se("jackknife", r.interceptStandardError);
+      break;
+    case "General Deming":
+      rows[0]![3] = `${se("jackknife", r.slopeStandardError)}; weights from each reading's SD`;
+      rows[1]![3] = se("jackknife", r.interceptStandardError);
+      rows.push([
+        "MSWD: S/(n − 2), S = weighted sum of squares",
+        formatNumber(r.mswd, 3),
+        "–",
+        "about 1 when the stated SDs describe the scatter",
+      ]);
+      break;
+    case "York": {
+      const basis = r.intervalBasis === "stated uncertainties"
+        ? "interval from the stated SDs"
+        : "interval widened by √MSWD (t quantile)";
+      rows[0]![3] = `${se("York 2004", r.slopeStandardError)}; ${basis}`;
+      rows[1]![3] = se("York 2004", r.interceptStandardError);
+      rows.push([
+        "MSWD: S/(n − 2), S = weighted sum of squares",
+        formatNumber(r.mswd, 3),
+        "–",
+        `S = ${formatNumber(r.chiSquare, 4)} on ${formatCount(r.degreesOfFreedom)} df, p ${
+          r.fitPValue < 0.001 ? "" : "= "
+        }${pValue(r.fitPValue)}`,
+      ]);
+      break;
+    }
+    case "Passing–Bablok":
+      rows[0]![3] = `${formatCount(r.slopesUsed)} pairwise slopes`;
+      rows.push([
+        "Cusum linearity statistic",
+        formatNumber(r.linearity.statistic, 3),
+        "–",
+        `${
+          r.linearity.nonLinear ? "exceeds" : "does not exceed"
+        } the 5 % critical value ${r.linearity.criticalValue}`,
+      ]);
   }
   return rows;
 }

@@ -13,9 +13,15 @@ import type { Interval } from "../calc/uncertainty/types.ts";
 /** What a missing value shows in a display or report. */
 export const NOT_MEASURED = "not measured";
 
+/** `value` rounded to the decimal position 10^l, half away from zero on the decimal digits as
+ * written (2.05 → 2.1 at l = −1, although the double nearest 2.05 lies just below it). */
 function fixed(value: number, l: number): string {
   if (l >= 0) return String(Math.round(value / 10 ** l) * 10 ** l);
-  const text = value.toFixed(-l);
+  const k = 10 ** -l;
+  // the scaled value, corrected by a relative 1e-12 so that a decimal half (2.05·10 = 20.499…)
+  // rounds as written
+  const scaled = Math.abs(value) * k * (1 + 1e-12);
+  const text = (Math.sign(value) * (Math.round(scaled) / k)).toFixed(-l);
   return /^-0\.?0*$/.test(text) ? text.slice(1) : text;
 }
 
@@ -34,7 +40,7 @@ function fixed(value: number, l: number): string {
  * import assert from "node:assert/strict";
  * // JCGM 100:2008 §7.2.2: m_s = 100.021 47 g, u_c = 0.35 mg
  * assert.deepEqual(roundForReport(100.02147, 0.00035), { value: "100.02147", uncertainty: "0.00035" });
- * // JCGM 100:2008 §7.2.6 (from memory): u = 28.05 kHz is quoted as 28 kHz
+ * // JCGM 100:2008 §7.2.6: u = 28.05 kHz is quoted as 28 kHz
  * assert.deepEqual(roundForReport(1542.37, 28.05), { value: "1542", uncertainty: "28" });
  * ```
  */

@@ -232,10 +232,15 @@ function comparisonBlocks(r: MethodValidationReport, c: MethodComparison, i: num
       figureBlocks(r, "blandAltman", i),
     ),
   ];
+  const more: Block[][] = [];
   if (c.blandAltmanRepeated !== null) {
-    out.push(
-      { kind: "heading", level: 3, text: "Bland–Altman with all replicates (Bland & Altman 2007)" },
-      ...statistic(
+    more.push(
+      [{
+        kind: "heading",
+        level: 3,
+        text: "Bland–Altman with all replicates (Bland & Altman 2007)",
+      }],
+      statistic(
         c.blandAltmanRepeated,
         "Repeated-measures Bland–Altman analysis",
         repeatedRows,
@@ -244,8 +249,12 @@ function comparisonBlocks(r: MethodValidationReport, c: MethodComparison, i: num
     );
   }
   const rows: string[][] = [];
-  const failed = (name: string, o: Outcome<unknown>) =>
-    o.status === "not computed" ? [[name, "not computed", "–", o.reason]] : [];
+  const failed = (name: string, o: Outcome<unknown>) => [
+    name,
+    "not computed",
+    "–",
+    o.status === "not computed" ? o.reason : "",
+  ];
   if (c.concordance.status === "computed") {
     const cc = c.concordance.result;
     const first = concordanceRows(cc)[0]!;
@@ -255,7 +264,7 @@ function comparisonBlocks(r: MethodValidationReport, c: MethodComparison, i: num
       first[2]!,
       `Pearson r ${formatNumber(cc.pearson, 4)}, C_b ${formatNumber(cc.biasCorrectionFactor, 4)}`,
     ]);
-  } else rows.push(...failed("Lin's concordance correlation", c.concordance));
+  } else rows.push(failed("Lin's concordance correlation", c.concordance));
   const lambdaNote = c.errorVarianceRatio.from === "replicates"
     ? `error variance ratio ${
       formatNumber(c.errorVarianceRatio.value, 3)
@@ -265,15 +274,19 @@ function comparisonBlocks(r: MethodValidationReport, c: MethodComparison, i: num
     const d = regressionRows(c.deming.result);
     d[0]![3] = `jackknife; ${lambdaNote}`;
     d[1]![3] = "jackknife";
-    rows.push(...d);
-  } else rows.push(...failed("Deming regression", c.deming));
-  if (c.passingBablok.status === "computed") rows.push(...regressionRows(c.passingBablok.result));
-  else rows.push(...failed("Passing–Bablok regression", c.passingBablok));
-  out.push(
-    { kind: "heading", level: 3, text: "Concordance and regression (first readings)" },
-    { kind: "table", header: ["Statistic", "Estimate", conf, "Notes"], rows },
-    ...figureBlocks(r, "comparison", i),
+    for (const row of d) rows.push(row);
+  } else rows.push(failed("Deming regression", c.deming));
+  if (c.passingBablok.status === "computed") {
+    for (const row of regressionRows(c.passingBablok.result)) rows.push(row);
+  } else rows.push(failed("Passing–Bablok regression", c.passingBablok));
+  more.push(
+    [
+      { kind: "heading", level: 3, text: "Concordance and regression (first readings)" },
+      { kind: "table", header: ["Statistic", "Estimate", conf, "Notes"], rows },
+    ],
+    figureBlocks(r, "comparison", i),
   );
+  for (const blocks of more) for (const b of blocks) out.push(b);
   return out;
 }
 
@@ -334,9 +347,9 @@ function kappaBlocks(r: MethodValidationReport): Block[] {
     },
   ];
   if (k.fleiss) {
-    out.push(
-      { kind: "heading", level: 3, text: "Fleiss' kappa (all observers)" },
-      ...statistic(
+    return out.concat(
+      [{ kind: "heading", level: 3, text: "Fleiss' kappa (all observers)" }],
+      statistic(
         k.fleiss.outcome,
         "Fleiss' kappa",
         fleissRows,

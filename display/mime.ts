@@ -131,7 +131,7 @@ export function tableBundle(
   ];
   for (const [heading, list] of Object.entries(notes)) {
     const singular = heading.replace(/s$/, "");
-    text.push(...list.map((n) => `${singular}: ${n}`));
+    for (const n of list) text.push(`${singular}: ${n}`);
     html.push(htmlNotes(heading, list));
   }
   html.push("</div>");

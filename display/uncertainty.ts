@@ -96,6 +96,7 @@ const DISTRIBUTION_NAMES: Record<string, string> = {
   triangular: "triangular",
   arcsine: "arcsine (U-shaped)",
   studentT: "t (Type A)",
+  cone: "3-D cone (∝ sin θ)",
   exact: "exact",
 };
 
@@ -171,10 +172,8 @@ export function displayPropagation(result: Propagation): MimeBundle {
       rows.length ? htmlTable(BUDGET_HEADER, rows) : "",
     );
   }
-  text.push(
-    ...result.warnings.map((w) => `Warning: ${w}`),
-    ...result.cautions.map((c) => `Caution: ${c}`),
-  );
+  for (const w of result.warnings) text.push(`Warning: ${w}`);
+  for (const c of result.cautions) text.push(`Caution: ${c}`);
   html.push(
     htmlNotes("Warnings", result.warnings),
     htmlNotes("Cautions", result.cautions),

@@ -184,12 +184,13 @@ say(show(adultClasses));
 say(`   written to ${await save("adult_clinic_classes.csv", adultClasses)}`);
 say();
 
-// 6. Charts.
+// 6. Charts, each marked as drawing invented data (the mark stays in the exported SVG).
+const INVENTED = { inventedData: true } as const;
 const files: [string, { writeSVG(path: string): Promise<void> }][] = [
-  ["ava-histogram.svg", histogramChart(borderline.mc, { gum })],
-  ["ava-budget.svg", budgetChart(gum)],
-  ["ava-classes.svg", severityProbabilityChart(borderline.grade)],
-  ["ava-angle-histogram.svg", histogramChart(angleMc, { gum: angleGum })],
+  ["ava-histogram.svg", histogramChart(borderline.mc, { gum, ...INVENTED })],
+  ["ava-budget.svg", budgetChart(gum, INVENTED)],
+  ["ava-classes.svg", severityProbabilityChart(borderline.grade, INVENTED)],
+  ["ava-angle-histogram.svg", histogramChart(angleMc, { gum: angleGum, ...INVENTED })],
   [
     "ava-vs-lvot-diameter.svg",
     sensitivityChart(
@@ -202,10 +203,14 @@ const files: [string, { writeSVG(path: string): Promise<void> }][] = [
           to: 2.4,
         },
       )],
-      { relative: true, title: "Valve-area error vs LVOT diameter (reference 2.1 cm)" },
+      {
+        relative: true,
+        title: "Valve-area error vs LVOT diameter (reference 2.1 cm)",
+        ...INVENTED,
+      },
     ),
   ],
-  ["pediatric-aortic-root.svg", tableZScoreChart(zScores, PHN_2017_MODELS.aorticRootSinus)],
+  ["pediatric-aortic-root.svg", tableZScoreChart(zScores, PHN_2017_MODELS.aorticRootSinus, INVENTED)],
   [
     "adult-lvef.svg",
     adultLimitChart("lvEjectionFraction", {
@@ -216,6 +221,7 @@ const files: [string, { writeSVG(path: string): Promise<void> }][] = [
           | "male",
         value: adults.columns.get("ejectionFraction")!.values[i] as number,
       })),
+      ...INVENTED,
     }),
   ],
 ];

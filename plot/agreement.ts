@@ -7,14 +7,14 @@
  *
  * @module
  */
-import { Chart } from "./chart.ts";
+import { Chart, type ChartFootnotes, footnotesWith } from "./chart.ts";
 import type { Interval } from "../calc/agreement/checks.ts";
 import type { FigurePlan, MethodValidationReport } from "../calc/agreement/report_types.ts";
 import { labelWithUnit } from "../display/uncertainty.ts";
 import type { BlandAltmanResult, Measured } from "../calc/agreement/types.ts";
 
 /** Options of {@linkcode blandAltmanChart}. */
-export interface BlandAltmanChartOptions {
+export interface BlandAltmanChartOptions extends ChartFootnotes {
   /** Chart title. @default "Bland–Altman plot" */
   readonly title?: string;
   /** Which limit intervals to draw as bands: "exact" (Carkeet 2015) or "approximate".
@@ -37,7 +37,7 @@ function axisTitle(q: Measured | null | undefined, what: string, fallback: strin
  * doi:10.1016/S0140-6736(86)90837-8.
  *
  * @param result A {@linkcode BlandAltmanResult} from `blandAltman`.
- * @param options Title, band kind.
+ * @param options Title, band kind, footnotes (the clinical caution is on by default).
  * @returns The chart.
  *
  * @example
@@ -121,7 +121,7 @@ export function blandAltmanChart(
         },
       },
     ],
-  }, { title });
+  }, { title, ...footnotesWith(options) });
 }
 
 /** A fitted line to draw on {@linkcode methodComparisonChart}: a regression result, or any
@@ -136,7 +136,7 @@ export interface LineToDraw {
 }
 
 /** Options of {@linkcode methodComparisonChart}. */
-export interface MethodComparisonChartOptions {
+export interface MethodComparisonChartOptions extends ChartFootnotes {
   /** Chart title. @default "Method comparison" */
   readonly title?: string;
   /** What was measured (label and unit, e.g. a quantity). @default not stated */
@@ -168,7 +168,7 @@ function extent(x: readonly number[], y: readonly number[]): Interval {
  * @param x Readings by method X.
  * @param y Readings by method Y (same subjects).
  * @param lines Fitted lines to draw.
- * @param options Title, what was measured, method names.
+ * @param options Title, what was measured, method names, footnotes.
  * @returns The chart.
  * @throws {TypeError} When x and y differ in length.
  *
@@ -234,7 +234,7 @@ export function methodComparisonChart(
         },
       },
     ],
-  }, { title });
+  }, { title, ...footnotesWith(options) });
 }
 
 /** One reading for {@linkcode observerChart}. */
@@ -248,7 +248,7 @@ export interface ObserverReading {
 }
 
 /** Options of {@linkcode observerChart}. */
-export interface ObserverChartOptions {
+export interface ObserverChartOptions extends ChartFootnotes {
   /** Chart title. @default "Readings by subject and observer" */
   readonly title?: string;
   /** What was measured (label and unit, e.g. a quantity). @default not stated */
@@ -263,7 +263,7 @@ export interface ObserverChartOptions {
  * Bull 86:420–428 (the data layout of Table 2), doi:10.1037/0033-2909.86.2.420.
  *
  * @param readings Readings in long format.
- * @param options Title and what was measured.
+ * @param options Title, what was measured, footnotes.
  * @returns The chart.
  *
  * @example
@@ -302,7 +302,7 @@ export function observerChart(
       color: { field: "observer", type: "nominal", title: "Observer / method" },
       shape: { field: "observer", type: "nominal" },
     },
-  }, { title });
+  }, { title, ...footnotesWith(options) });
 }
 
 /**
@@ -311,6 +311,7 @@ export function observerChart(
  *
  * @param report A report of measurements from `methodValidation`.
  * @param figure One of `report.figures`.
+ * @param options Footnotes (the clinical caution is on by default; `inventedData` for demo data).
  * @returns The chart.
  * @throws {TypeError} For a figure whose statistic the report does not hold.
  *
@@ -327,7 +328,11 @@ export function observerChart(
  * assert.match(svg, /LV ejection fraction: B − A \(%\)/);
  * ```
  */
-export function methodValidationChart(report: MethodValidationReport, figure: FigurePlan): Chart {
+export function methodValidationChart(
+  report: MethodValidationReport,
+  figure: FigurePlan,
+  options: ChartFootnotes = {},
+): Chart {
   const quantity = report.study.measured;
   if (figure.kind === "observers") {
     if (report.study.design !== "continuous") {
@@ -336,6 +341,7 @@ export function methodValidationChart(report: MethodValidationReport, figure: Fi
       );
     }
     return observerChart(report.readings as readonly ObserverReading[], {
+      ...options,
       quantity,
       title: "All readings by subject and observer/method",
     });
@@ -353,6 +359,7 @@ export function methodValidationChart(report: MethodValidationReport, figure: Fi
       );
     }
     return blandAltmanChart(c.blandAltman.result, {
+      ...options,
       title: `Bland–Altman: ${c.test} − ${c.reference}`,
     });
   }
@@ -364,6 +371,7 @@ export function methodValidationChart(report: MethodValidationReport, figure: Fi
     }
   }
   return methodComparisonChart(c.x, c.y, lines, {
+    ...options,
     quantity,
     methodNames: [c.reference, c.test],
     title: `${c.test} against ${c.reference}`,

@@ -7,7 +7,7 @@
  *
  * @module
  */
-import { Chart } from "./chart.ts";
+import { Chart, type ChartFootnotes, footnotesWith } from "./chart.ts";
 import { discMethodData } from "../calc/chamber/disc_drawing.ts";
 import type { DiscVolume } from "../calc/chamber/volumes.ts";
 import {
@@ -23,7 +23,7 @@ import { formatCount, formatResolution } from "../display/format.ts";
 import { labelWithUnit } from "../display/uncertainty.ts";
 
 /** Options of {@linkcode discMethodChart}. */
-export interface DiscMethodChartOptions {
+export interface DiscMethodChartOptions extends ChartFootnotes {
   /** Chart title. @default "Method of discs: <volume> (<N> discs, L = <long axis>)" */
   readonly title?: string;
   /** Plot height per view in pixels, in [100, 2000]. @default 320 */
@@ -47,7 +47,7 @@ function defaultTitle(result: DiscVolume): string {
  * equal scale in both directions.
  *
  * @param result A result of `biplaneDiscVolume` or `singlePlaneDiscVolume`.
- * @param options Title and panel height.
+ * @param options Title, panel height, footnotes (the result's cautions are always among them).
  * @returns The chart (vega-lite spec plus SVG rendering).
  * @throws {TypeError} When `result` is not a method-of-discs result.
  * @throws {RangeError} When the height is outside [100, 2000] px.
@@ -115,5 +115,5 @@ export function discMethodChart(result: DiscVolume, options: DiscMethodChartOpti
         },
       ],
     },
-  }, { title });
+  }, { title, ...footnotesWith(options, result.cautions) });
 }

@@ -8,7 +8,7 @@
  *
  * @module
  */
-import { Chart } from "./chart.ts";
+import { Chart, type ChartFootnotes, footnotesWith } from "./chart.ts";
 import {
   angleUnderestimationData,
   type AngleUnderestimationOptions,
@@ -39,7 +39,8 @@ function axisTitle(q: Pick<Quantity, "label" | "unit">): string {
  *
  * Source of the relation: Hatle L, Angelsen B. Doppler Ultrasound in Cardiology, 1985, ch. 2.
  *
- * @param options Largest angle and step (as {@linkcode angleUnderestimationData}), and title.
+ * @param options Largest angle and step (as {@linkcode angleUnderestimationData}), title and
+ * footnotes (the clinical caution is on by default).
  * @returns The chart (vega-lite spec and static SVG).
  * @throws {RangeError} As {@linkcode angleUnderestimationData}.
  *
@@ -54,7 +55,7 @@ function axisTitle(q: Pick<Quantity, "label" | "unit">): string {
  * ```
  */
 export function angleUnderestimationChart(
-  options: AngleUnderestimationOptions & { readonly title?: string } = {},
+  options: AngleUnderestimationOptions & ChartFootnotes & { readonly title?: string } = {},
 ): Chart {
   const title = options.title ?? "Doppler underestimation vs insonation angle";
   const values = angleUnderestimationData(options);
@@ -82,7 +83,7 @@ export function angleUnderestimationChart(
         encoding: { x: { field: "angleDeg", type: "quantitative" } },
       },
     ],
-  }, { title });
+  }, { title, ...footnotesWith(options) });
 }
 
 /**
@@ -93,8 +94,8 @@ export function angleUnderestimationChart(
  * Source of the relation: Baumgartner H, et al. J Am Soc Echocardiogr 2009;22:1-23 (continuity
  * equation and its main error source).
  *
- * @param options Diameters, error range and step (as {@linkcode valveAreaDiameterErrorData}), and
- * title.
+ * @param options Diameters, error range and step (as {@linkcode valveAreaDiameterErrorData}),
+ * title and footnotes (the clinical caution is on by default).
  * @returns The chart (vega-lite spec and static SVG).
  * @throws {RangeError} | {TypeError} As {@linkcode valveAreaDiameterErrorData}.
  *
@@ -108,7 +109,7 @@ export function angleUnderestimationChart(
  * ```
  */
 export function valveAreaDiameterErrorChart(
-  options: ValveAreaDiameterErrorOptions & { readonly title?: string } = {},
+  options: ValveAreaDiameterErrorOptions & ChartFootnotes & { readonly title?: string } = {},
 ): Chart {
   const title = options.title ?? "Continuity valve-area error vs LVOT diameter error";
   const values = valveAreaDiameterErrorData(options);
@@ -123,15 +124,16 @@ export function valveAreaDiameterErrorChart(
       y: { field: "areaErrorPercent", type: "quantitative", title: axisTitle(VALVE_AREA_ERROR) },
       color: { field: "lvotDiameterCm", type: "nominal", title: axisTitle(LVOT_DIAMETER) },
     },
-  }, { title });
+  }, { title, ...footnotesWith(options) });
 }
 
 /**
  * Chart: the probability of each severity class of a graded distribution, in table order, with
- * the class of the median named in the title.
+ * the class of the median named in the title. The result's cautions (its "from memory" mark where
+ * the thresholds were recalled, and the clinical caution) are the chart's footnotes.
  *
  * @param distribution A result of `gradeSeverity(table, uncertainValue)` or of samples.
- * @param options Title.
+ * @param options Title and further footnotes.
  * @returns The chart (bar per class).
  * @throws {TypeError} When `distribution` has no class probabilities.
  *
@@ -141,13 +143,15 @@ export function valveAreaDiameterErrorChart(
  * import { severityProbabilityChart } from "@sonorigor/sonorigor/plot";
  * import assert from "node:assert/strict";
  * const d = gradeSeverity(AORTIC_STENOSIS_2017.valveArea, [0.9, 1.1, 1.2, 1.6]);
- * const svg = await severityProbabilityChart(d).toSVG();
- * assert.match(svg, /Class: Aortic valve area \(cm²\)/);
+ * const chart = severityProbabilityChart(d);
+ * assert.match(await chart.toSVG(), /Class: Aortic valve area \(cm²\)/);
+ * // the 2017 thresholds were recalled from memory: the mark travels with the chart
+ * assert.ok(chart.footnotes.some((f) => f.includes("from memory")));
  * ```
  */
 export function severityProbabilityChart(
   distribution: SeverityDistribution,
-  options: { readonly title?: string } = {},
+  options: ChartFootnotes & { readonly title?: string } = {},
 ): Chart {
   if (!distribution || !Array.isArray(distribution.probabilities)) {
     throw new TypeError(
@@ -187,5 +191,5 @@ export function severityProbabilityChart(
       },
       tooltip: [{ field: "threshold" }, { field: "share" }],
     },
-  }, { title });
+  }, { title, ...footnotesWith(options, distribution.cautions) });
 }

@@ -4,7 +4,16 @@
  *
  * @module
  */
-export { Chart, type ChartOptions, type VegaLiteSpec } from "./chart.ts";
+export {
+  Chart,
+  type ChartFootnotes,
+  type ChartOptions,
+  footnotesWith,
+  INVENTED_DATA_NOTE,
+  splitFootnotes,
+  type VegaLiteSpec,
+  wrapText,
+} from "./chart.ts";
 export * from "./uncertainty.ts";
 export * from "./agreement.ts";
 export * from "./doppler.ts";

@@ -21,7 +21,7 @@ import type { QuantityInput } from "../calc/core/units.ts";
 import { withUnit } from "../calc/core/text.ts";
 import { labelWithUnit } from "../display/uncertainty.ts";
 import { formatResolution } from "../display/format.ts";
-import { Chart, type VegaLiteSpec } from "./chart.ts";
+import { Chart, type ChartFootnotes, splitFootnotes, type VegaLiteSpec } from "./chart.ts";
 
 /** An axis or legend title from an input or output definition: "Sample-volume depth (cm)". */
 function titleOf(d: { readonly label: string; readonly unit: string }): string {
@@ -29,7 +29,7 @@ function titleOf(d: { readonly label: string; readonly unit: string }): string {
 }
 
 /** Options of {@linkcode nyquistDepthChart}: the data's options, and how to draw them. */
-export interface NyquistDepthChartOptions extends NyquistDepthOptions {
+export interface NyquistDepthChartOptions extends NyquistDepthOptions, ChartFootnotes {
   /** A velocity of interest drawn as a horizontal rule, m/s (e.g. a jet to be displayed). */
   readonly velocityOfInterest?: QuantityInput;
   /** Chart width in pixels. @default 480 */
@@ -44,7 +44,7 @@ export interface NyquistDepthChartOptions extends NyquistDepthOptions {
  * `nyquistDepthRows(options)`.
  *
  * @param options Frequencies, depth range, angle, speed of sound, an optional velocity of
- * interest, width.
+ * interest, width, footnotes (the clinical caution is on by default).
  * @returns The chart (vega-lite spec and static SVG).
  * @throws {TypeError} For an unknown option, an empty or non-numeric frequency list, or a value of
  * the wrong type or unit.
@@ -59,7 +59,8 @@ export interface NyquistDepthChartOptions extends NyquistDepthOptions {
  * ```
  */
 export function nyquistDepthChart(options: NyquistDepthChartOptions = {}): Chart {
-  const { velocityOfInterest, width = 480, ...sweep } = options;
+  const { footnotes, rest } = splitFootnotes(options);
+  const { velocityOfInterest, width = 480, ...sweep } = rest;
   const rows = nyquistDepthRows(sweep);
   const v = velocityOfInterest === undefined
     ? undefined
@@ -106,11 +107,12 @@ export function nyquistDepthChart(options: NyquistDepthChartOptions = {}): Chart
     });
   }
   const spec: VegaLiteSpec = { title, width, height: 300, layer: layers };
-  return new Chart(spec, { title });
+  return new Chart(spec, { title, ...footnotes });
 }
 
 /** Options of {@linkcode resolutionPenetrationChart}: the data's options, and how to draw them. */
-export interface ResolutionPenetrationChartOptions extends ResolutionPenetrationOptions {
+export interface ResolutionPenetrationChartOptions
+  extends ResolutionPenetrationOptions, ChartFootnotes {
   /** Chart width in pixels. @default 480 */
   readonly width?: number;
 }
@@ -123,7 +125,8 @@ export interface ResolutionPenetrationChartOptions extends ResolutionPenetration
  * Formulas: axial = n·λ/2 (`axialResolution`); lateral = 0.886·λ·F# (`lateralResolution`);
  * penetration = DR/(2·α·f) (`penetrationDepth`); the data are `resolutionPenetrationRows(options)`.
  *
- * @param options Frequency range, pulse, aperture, focus, dynamic range, attenuation, width.
+ * @param options Frequency range, pulse, aperture, focus, dynamic range, attenuation, width,
+ * footnotes (the clinical caution is on by default).
  * @returns The chart (vega-lite spec and static SVG).
  * @throws {TypeError} For an unknown option or a value of the wrong type or unit.
  * @throws {RangeError} For a value outside the calculations' valid ranges.
@@ -137,7 +140,8 @@ export interface ResolutionPenetrationChartOptions extends ResolutionPenetration
  * ```
  */
 export function resolutionPenetrationChart(options: ResolutionPenetrationChartOptions = {}): Chart {
-  const { width = 480, ...sweep } = options;
+  const { footnotes, rest } = splitFootnotes(options);
+  const { width = 480, ...sweep } = rest;
   const rows = resolutionPenetrationRows(sweep);
   const axial = axialResolution.outputs.axialResolutionMm;
   const lateral = lateralResolution.outputs.beamWidthMm;
@@ -191,5 +195,5 @@ export function resolutionPenetrationChart(options: ResolutionPenetrationChartOp
       },
     ],
   };
-  return new Chart(spec, { title });
+  return new Chart(spec, { title, ...footnotes });
 }

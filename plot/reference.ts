@@ -12,12 +12,19 @@ import {
   adultReferenceRow,
 } from "../calc/reference/adult.ts";
 import type { ZScoreModel } from "../calc/reference/zscore_models.ts";
-import { measuredQuantity, modelCitation, zScoreBands } from "../calc/reference/zscore.ts";
+import {
+  measuredQuantity,
+  modelCitation,
+  zScoreBands,
+  zScoreCalculation,
+} from "../calc/reference/zscore.ts";
+import { cautionsOf } from "../calc/core/calculation.ts";
 import type { Table } from "../calc/table/types.ts";
+import type { Citation } from "../calc/core/types.ts";
 import { BODY_SURFACE_AREA } from "../calc/quantities/body.ts";
 import { labelWithUnit } from "../display/uncertainty.ts";
 import { rowLabels } from "../calc/table/evaluate.ts";
-import { Chart } from "./chart.ts";
+import { Chart, type ChartFootnotes, footnotesWith } from "./chart.ts";
 
 /** One patient on a pediatric normal-range chart. */
 export interface ReferenceChartPoint {
@@ -34,7 +41,7 @@ export interface ReferenceChartPoint {
 }
 
 /** Options of {@linkcode zScoreChart}. */
-export interface ZScoreChartOptions {
+export interface ZScoreChartOptions extends ChartFootnotes {
   /** Patients to plot. */
   readonly points?: readonly ReferenceChartPoint[];
   /** BSA axis range, m². @default the model's BSA range, widened to include the points */
@@ -201,13 +208,14 @@ export function zScoreChart(model: ZScoreModel, options: ZScoreChartOptions = {}
   }
   const title = options.title ??
     `${measured.label}: mean and ±1/±2/±3 SD (${modelCitation(model)})`;
+  // the model's cautions travel with the chart: a synthetic model, coefficients not verified
+  const marks = cautionsOf(zScoreCalculation(model));
   return new Chart({
     title,
     width: options.width ?? 520,
     height: options.height ?? 360,
     layer: layers,
-    ...(model.synthetic ? { description: "SYNTHETIC model: not published coefficients" } : {}),
-  }, { title });
+  }, { title, ...footnotesWith(options, marks) });
 }
 
 /**
@@ -269,6 +277,22 @@ export function tableZScoreChart(
   return zScoreChart(model, { ...chartOptions, points });
 }
 
+/** A source as the chart names it: first author and year ("Lang RM 2015"). */
+function sourceName(c: Citation): string {
+  return `${c.authors.split(",")[0]} ${c.year}`;
+}
+
+/** The marks of the limits drawn: their table, "from memory" where they were entered from memory
+ * of the table, and the rows' own notes. */
+function limitMarks(rows: readonly AdultReferenceRow[]): string[] {
+  const marks = rows.map((r) =>
+    `Limits: ${sourceName(r.source)}, ${r.table} (${r.method})${
+      r.fromMemory ? ", entered from memory, not re-checked against the printed table" : ""
+    }`
+  );
+  return [...marks, ...rows.flatMap((r) => (r.note ? [r.note] : []))];
+}
+
 /** One patient on an adult limit chart. */
 export interface AdultChartPoint {
   /** Value in the row's unit. */
@@ -282,7 +306,7 @@ export interface AdultChartPoint {
 }
 
 /** Options of {@linkcode adultLimitChart}. */
-export interface AdultLimitChartOptions {
+export interface AdultLimitChartOptions extends ChartFootnotes {
   /** Patients to plot. */
   readonly points?: readonly AdultChartPoint[];
   /** Coverage factor of the error bars. @default 2 */
@@ -397,13 +421,11 @@ export function adultLimitChart(parameter: string, options: AdultLimitChartOptio
       ],
     });
   }
-  const title = `${r0.quantity.label}: ${
-    r0.source.authors.split(",")[0]
-  } ${r0.source.year} limits by sex`;
+  const title = `${r0.quantity.label}: ${sourceName(r0.source)} limits by sex`;
   return new Chart({
     title,
     width: options.width ?? 520,
     height: options.height ?? 320,
     layer: layers,
-  }, { title });
+  }, { title, ...footnotesWith(options, limitMarks(rows.map((r) => r.row))) });
 }

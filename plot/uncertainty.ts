@@ -8,10 +8,10 @@ import type { Propagation } from "../calc/uncertainty/types.ts";
 import { densityHistogram, gumDensity, histogramRange } from "../calc/uncertainty/histogram.ts";
 import type { SensitivityCurve } from "../calc/core/sensitivity.ts";
 import { labelWithUnit } from "../display/uncertainty.ts";
-import { Chart } from "./chart.ts";
+import { Chart, type ChartFootnotes, footnotesWith } from "./chart.ts";
 
 /** Options of {@linkcode histogramChart}. */
-export interface HistogramOptions {
+export interface HistogramOptions extends ChartFootnotes {
   /** Output to show. @default the first output */
   readonly output?: string;
   /** GUM result for the same calculation: its normal curve and interval are overlaid. */
@@ -24,10 +24,11 @@ export interface HistogramOptions {
 
 /**
  * Histogram of the Monte Carlo model values, as a probability density, with the GUM Gaussian
- * N(y, u_c²) overlaid and both coverage intervals marked.
+ * N(y, u_c²) overlaid and both coverage intervals marked. The result's cautions (the clinical
+ * caution of a clinical calculation, a model's "not verified" mark) are the chart's footnotes.
  *
  * @param mc A Monte Carlo result (with samples).
- * @param options Output, GUM overlay, bins.
+ * @param options Output, GUM overlay, bins, further footnotes.
  * @returns The chart.
  * @throws {TypeError} For an unknown output or a result without samples.
  *
@@ -118,11 +119,26 @@ export function histogramChart(mc: Propagation, options: HistogramOptions = {}):
   const title = `${mc.calculation.title}: ${o.label}, ${mc.monteCarlo!.trials} trials${
     g ? " with the GUM normal curve" : ""
   }`;
-  return new Chart({ title, width: options.width ?? 480, height: 260, layer: layers }, { title });
+  return new Chart(
+    { title, width: options.width ?? 480, height: 260, layer: layers },
+    { title, ...footnotesWith(options, mc.cautions) },
+  );
+}
+
+/** Options of {@linkcode budgetChart}. */
+export interface BudgetChartOptions extends ChartFootnotes {
+  /** Output to show. @default the first output */
+  readonly output?: string;
 }
 
 /**
- * Bar chart of an uncertainty budget: each input's share of the combined variance.
+ * Bar chart of an uncertainty budget: each input's share of the combined variance, with the
+ * result's cautions as footnotes.
+ *
+ * @param result A GUM result.
+ * @param options Output and further footnotes.
+ * @returns The chart.
+ * @throws {TypeError} For an unknown output or a Monte Carlo result.
  *
  * @example
  * ```ts
@@ -135,11 +151,11 @@ export function histogramChart(mc: Propagation, options: HistogramOptions = {}):
  *   output: { name: "y", unit: "1", description: "y" },
  * });
  * const chart = budgetChart(propagate(model, { a: normal(2, 0.1), b: normal(3, 0.3) }));
- * assert.equal((chart.spec.data as { values: unknown[] }).values.length, 2);
+ * assert.equal((chart.content.data as { values: unknown[] }).values.length, 2);
  * ```
  */
-export function budgetChart(result: Propagation, output?: string): Chart {
-  const name = output ?? result.outputNames[0]!;
+export function budgetChart(result: Propagation, options: BudgetChartOptions = {}): Chart {
+  const name = options.output ?? result.outputNames[0]!;
   const o = result.outputs[name];
   if (!o) {
     throw new TypeError(
@@ -169,12 +185,12 @@ export function budgetChart(result: Propagation, output?: string): Chart {
         title: `Share of the variance of ${o.label} (%)`,
       },
     },
-  }, { title });
+  }, { title, ...footnotesWith(options, result.cautions) });
 }
 
 /**
  * Line chart of one or more sensitivity curves (same swept input), as output values or as the
- * relative change in percent.
+ * relative change in percent, with the clinical caution as footnote (on by default).
  *
  * @example
  * ```ts
@@ -192,7 +208,7 @@ export function budgetChart(result: Propagation, output?: string): Chart {
  */
 export function sensitivityChart(
   curves: readonly SensitivityCurve[],
-  options: {
+  options: ChartFootnotes & {
     readonly relative?: boolean;
     readonly labels?: readonly string[];
     readonly title?: string;
@@ -237,5 +253,5 @@ export function sensitivityChart(
         legend: curves.length > 1 ? { orient: "bottom", labelLimit: 400 } : null,
       },
     },
-  }, { title });
+  }, { title, ...footnotesWith(options) });
 }

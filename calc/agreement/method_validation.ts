@@ -152,6 +152,9 @@ export function methodValidation(
     ? methodComparisons(study, reference!, repeatability, settings)
     : [];
   const kappa = study.design === "graded" ? kappaAnalysis(study, confidence) : null;
+  const plans = study.design === "continuous"
+    ? figurePlans(study.observers, comparisons, study.readings.length)
+    : { figures: [], notDrawn: [] };
   const report: Omit<MethodValidationReport, typeof JUPYTER_DISPLAY> = {
     kind: "sonorigor.methodValidation",
     title: options.title ?? `Method validation report: ${baseName(study.source)}`,
@@ -172,7 +175,7 @@ export function methodValidation(
     comparisons,
     icc: study.design === "continuous" ? iccAcrossObservers(study, settings) : null,
     kappa,
-    figures: study.design === "continuous" ? figurePlans(study.observers, comparisons) : [],
+    figures: plans.figures,
     interpretation: [NO_VERDICT, ...comparisons.flatMap(findings)],
     cautions: study.design === "continuous"
       ? [
@@ -180,6 +183,7 @@ export function methodValidation(
         LIMITS_OF_AGREEMENT_CAUTION,
         SUBJECT_SPREAD_CAUTION,
         AGREEMENT_NOT_A_DIAGNOSIS,
+        ...plans.notDrawn,
       ]
       : [SAMPLE_CAUTION, KAPPA_CAUTION, AGREEMENT_NOT_A_DIAGNOSIS],
     provenance: {

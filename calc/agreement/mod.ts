@@ -16,6 +16,7 @@ export type {
   DemingResult,
   FittedLine,
   FleissKappaResult,
+  GeneralDemingResult,
   IntraclassCorrelation,
   IntraclassCorrelationResult,
   KappaWeights,
@@ -24,7 +25,9 @@ export type {
   MissingReading,
   PassingBablokResult,
   ProportionalBias,
+  RegressionResult,
   RepeatabilityResult,
+  YorkResult,
 } from "./types.ts";
 export { nonCentralTCdf, nonCentralTQuantile } from "./noncentral_t.ts";
 export {
@@ -39,9 +42,14 @@ export { concordanceCorrelation, type ConcordanceOptions } from "./concordance.t
 export {
   type DemingOptions,
   demingRegression,
+  type GeneralDemingOptions,
+  generalDemingRegression,
   type PassingBablokOptions,
   passingBablokRegression,
+  PER_POINT_SD_CAUTION,
   type RegressionOptions,
+  type YorkOptions,
+  yorkRegression,
 } from "./regression.ts";
 export {
   cohenKappa,

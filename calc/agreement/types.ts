@@ -269,6 +269,50 @@ export interface DemingResult extends FittedLine {
   readonly interceptStandardError: number;
 }
 
+/** Result of {@linkcode generalDemingRegression}: Deming regression where each reading has its
+ * own standard deviation. */
+export interface GeneralDemingResult extends FittedLine {
+  /** Brand: which regression. */
+  readonly method: "General Deming";
+  /** Jackknife standard error of the slope. */
+  readonly slopeStandardError: number;
+  /** Jackknife standard error of the intercept. */
+  readonly interceptStandardError: number;
+  /** Weighted sum of squared distances to the line, S = Σ Wᵢ (yᵢ − a − b·xᵢ)². */
+  readonly chiSquare: number;
+  /** S / (n − 2): about 1 when the stated SDs describe the scatter. */
+  readonly mswd: number;
+}
+
+/** Result of {@linkcode yorkRegression}: the best straight line when each point has its own,
+ * possibly correlated, uncertainties in x and y. */
+export interface YorkResult extends FittedLine {
+  /** Brand: which regression. */
+  readonly method: "York";
+  /** Standard error of the slope from the stated uncertainties (York et al. 2004). */
+  readonly slopeStandardError: number;
+  /** Standard error of the intercept from the stated uncertainties (York et al. 2004). */
+  readonly interceptStandardError: number;
+  /** Covariance of slope and intercept from the stated uncertainties. */
+  readonly slopeInterceptCovariance: number;
+  /** Weighted sum of squared residuals S = Σ Wᵢ (yᵢ − a − b·xᵢ)², χ² with n − 2 degrees of
+   * freedom when the stated uncertainties are right. */
+  readonly chiSquare: number;
+  /** Degrees of freedom of S: n − 2. */
+  readonly degreesOfFreedom: number;
+  /** Mean square of weighted deviations, S / (n − 2). */
+  readonly mswd: number;
+  /** Probability of a χ² at least as large as S (small: the stated uncertainties understate the
+   * scatter). */
+  readonly fitPValue: number;
+  /** How the intervals were made: from the stated uncertainties (normal quantile) when MSWD ≤ 1,
+   * or with the standard errors multiplied by √MSWD and the t quantile on n − 2 degrees of freedom
+   * when the scatter exceeds them. */
+  readonly intervalBasis: "stated uncertainties" | "scaled by √MSWD";
+  /** Iterations of the slope until it converged. */
+  readonly iterations: number;
+}
+
 /** Result of {@linkcode passingBablokRegression}. */
 export interface PassingBablokResult extends FittedLine {
   /** Brand: which regression. */
@@ -285,6 +329,13 @@ export interface PassingBablokResult extends FittedLine {
     readonly nonLinear: boolean;
   };
 }
+
+/** Any of the method-comparison regressions (what their displays and charts accept). */
+export type RegressionResult =
+  | DemingResult
+  | GeneralDemingResult
+  | YorkResult
+  | PassingBablokResult;
 
 /** Agreement weights for ordered categories. */
 export type KappaWeights = "none" | "linear" | "quadratic";

@@ -17,6 +17,32 @@ import {
 } from "./validation_columns.ts";
 import type { MissingReading } from "./types.ts";
 
+/** The most subjects a validation study may have: the analysis indexes readings by subject in
+ * JavaScript Maps, which hold at most 2^24 entries (V8). */
+export const MAX_SUBJECTS = 2 ** 24 - 1;
+
+const NONE: readonly ValidationIssue[] = [];
+
+function emptyIdentifier(
+  where: string,
+  field: string,
+  label: "Subject" | "Observer",
+  row: number,
+  line: number,
+): ValidationIssue {
+  return {
+    kind: "missing",
+    severity: "error",
+    where,
+    field,
+    label,
+    received: "an empty cell",
+    expected: label === "Subject" ? "a subject identifier" : "an observer or method name",
+    row,
+    line,
+  };
+}
+
 /** One reading: a value (a number, or a category for graded findings) with where it came from. */
 export interface Reading<V extends number | string = number> {
   /** Subject identifier. */
@@ -164,7 +190,11 @@ export function validationReadings(
   const replicateField = quantityField(REPLICATE_NUMBER);
   const readings: Reading<number | string>[] = [];
   const missing: MissingReading[] = [];
-  const firstLine = new Map<string, number>();
+  // the line of each (subject, observer, replicate): one map per (observer, replicate) pair, keyed
+  // by the subject's index, so that millions of rows build no key strings
+  const firstLine: Map<number, number>[] = [];
+  const subjectIndex = new Map<string, number>();
+  const pairIndex = new Map<string, (number | undefined)[]>();
   const subjectSeen = new Set<string>();
   const observerSeen = new Set<string>();
   const subjectOrder: string[] = [];
@@ -172,8 +202,7 @@ export function validationReadings(
   let maxReplicate = 1;
   for (let row = 0; row < table.rowCount; row++) {
     const line = table.lines[row]!;
-    const context = { where: source, row, line };
-    const fromReader = rowFlags.get(row) ?? [];
+    const fromReader = rowFlags.get(row) ?? NONE;
     let failed = false;
     let valueMissing = false;
     for (const issue of fromReader) {
@@ -186,26 +215,13 @@ export function validationReadings(
     }
     const subject = subjects[row]!.trim();
     const observer = observers[row]!.trim();
-    for (
-      const [text, header, label, expected] of [
-        [subject, columns.subject, "Subject", "a subject identifier"],
-        [observer, columns.observer, "Observer", "an observer or method name"],
-      ] as const
-    ) {
-      if (text === "") {
-        failed = true;
-        issues.push({
-          kind: "missing",
-          severity: "error",
-          where: source,
-          field: header,
-          label,
-          received: "an empty cell",
-          expected,
-          row,
-          line,
-        });
-      }
+    if (subject === "") {
+      failed = true;
+      issues.push(emptyIdentifier(source, columns.subject, "Subject", row, line));
+    }
+    if (observer === "") {
+      failed = true;
+      issues.push(emptyIdentifier(source, columns.observer, "Observer", row, line));
     }
     let replicate = 1;
     if (replicateColumn !== null) {
@@ -214,10 +230,12 @@ export function validationReadings(
         : replicateColumn.values[row]!;
       const given = raw === "" || (typeof raw === "number" && raw !== raw) ? undefined : raw;
       // a numeric column's unreadable cell was reported by the reader already
-      const reported = fromReader.some((i) =>
-        i.field === columns.replicate && i.severity === "error"
-      );
-      if (!reported) {
+      const reported = fromReader.length > 0 &&
+        fromReader.some((i) => i.field === columns.replicate && i.severity === "error");
+      if (typeof given === "number" && given >= 1 && Number.isInteger(given)) replicate = given;
+      else if (!reported) {
+        // the validator's message for anything but a whole number ≥ 1
+        const context = { where: source, row, line };
         const checked = checkValue(columns.replicate!, replicateField, given, context);
         for (const issue of checked.issues) issues.push(issue);
         if (checked.value === undefined) failed = true;
@@ -243,8 +261,24 @@ export function validationReadings(
       }
     } else value = valueColumn.values[row]!;
     if (failed) continue;
-    const key = `${subject}\u0000${observer}\u0000${replicate}`;
-    const first = firstLine.get(key);
+    let si = subjectIndex.get(subject);
+    if (si === undefined) {
+      if (subjectIndex.size >= MAX_SUBJECTS) {
+        throw new RangeError(
+          `${source}: line ${line}, expected at most ${MAX_SUBJECTS} subjects (the most a JavaScript Map indexes), got more`,
+        );
+      }
+      subjectIndex.set(subject, si = subjectIndex.size);
+    }
+    let byReplicate = pairIndex.get(observer);
+    if (byReplicate === undefined) pairIndex.set(observer, byReplicate = []);
+    let pi = byReplicate[replicate];
+    if (pi === undefined) {
+      byReplicate[replicate] = pi = firstLine.length;
+      firstLine.push(new Map());
+    }
+    const lines = firstLine[pi]!;
+    const first = lines.get(si);
     if (first !== undefined) {
       issues.push({
         kind: "constraint",
@@ -259,7 +293,7 @@ export function validationReadings(
       });
       continue;
     }
-    firstLine.set(key, line);
+    lines.set(si, line);
     if (valueMissing) {
       missing.push({ subject, observer, replicate, line });
       continue;

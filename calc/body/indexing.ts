@@ -13,7 +13,9 @@ import {
   LA_VOLUME,
   LA_VOLUME_INDEX,
   LV_END_DIASTOLIC_VOLUME,
+  LV_END_DIASTOLIC_VOLUME_INDEX,
   LV_END_SYSTOLIC_VOLUME,
+  LV_END_SYSTOLIC_VOLUME_INDEX,
   LV_MASS,
   LV_MASS_INDEX,
 } from "../quantities/structure.ts";
@@ -31,6 +33,8 @@ import { LANG_2015 } from "../citations.ts";
 const NAMED_INDICES: ReadonlyMap<Quantity, Quantity> = new Map([
   [LV_MASS, LV_MASS_INDEX],
   [LA_VOLUME, LA_VOLUME_INDEX],
+  [LV_END_DIASTOLIC_VOLUME, LV_END_DIASTOLIC_VOLUME_INDEX],
+  [LV_END_SYSTOLIC_VOLUME, LV_END_SYSTOLIC_VOLUME_INDEX],
   [STROKE_VOLUME, STROKE_VOLUME_INDEX],
   [CARDIAC_OUTPUT, CARDIAC_INDEX],
   [AORTIC_VALVE_AREA, AORTIC_VALVE_AREA_INDEX],
@@ -48,10 +52,15 @@ const derived = new Map<string, Quantity>();
  *
  * @example
  * ```ts
- * import { indexedQuantity, LV_END_DIASTOLIC_VOLUME, LV_MASS } from "@sonorigor/sonorigor";
+ * import { defineQuantity, indexedQuantity, LV_END_DIASTOLIC_VOLUME, LV_MASS } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
  * assert.equal(indexedQuantity(LV_MASS).label, "LV mass index");
  * assert.equal(indexedQuantity(LV_END_DIASTOLIC_VOLUME).unit, "mL/m^2");
+ * // a quantity without a named index: any value over a positive BSA, never zero or infinite
+ * const area = defineQuantity({ id: "demoJetArea", label: "Jet area", unit: "cm^2",
+ *   description: "Colour jet area", valid: { min: 0, max: 50, minExclusive: true }, resolution: 0.1 });
+ * assert.deepEqual(indexedQuantity(area).valid,
+ *   { min: 0, max: Infinity, minExclusive: true, maxExclusive: true });
  * ```
  */
 export function indexedQuantity(q: Quantity): Quantity {
@@ -65,7 +74,15 @@ export function indexedQuantity(q: Quantity): Quantity {
       symbol: `${q.symbol}i`,
       unit: `${q.unit}/m^2`,
       description: `${q.label} per m² of body surface area`,
-      valid: { min: q.valid.min >= 0 ? 0 : -Infinity, max: Infinity },
+      // any value over a positive BSA: zero only where Q may be zero, no infinite value
+      valid: q.valid.min >= 0
+        ? {
+          min: 0,
+          max: Infinity,
+          minExclusive: q.valid.min > 0 || Boolean(q.valid.minExclusive),
+          maxExclusive: true,
+        }
+        : { min: -Infinity, max: Infinity, minExclusive: true, maxExclusive: true },
       resolution: q.resolution,
       rangeNote: `derived from ${q.label}: any value over a positive body surface area`,
     });

@@ -471,7 +471,7 @@ export function globalLongitudinalStrain(
   for (let i = 0; i < n; i++) {
     const raw: unknown = segmentPeakStrainsPercent[i];
     const checked = checkValue(`${SEGMENTS_FIELD}[${i}]`, field, raw, { where: GLS_WHERE });
-    issues.push(...checked.issues);
+    for (const issue of checked.issues) issues.push(issue);
     sum += checked.value ?? NaN;
   }
   throwIfErrors(issues);

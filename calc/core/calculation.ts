@@ -309,7 +309,9 @@ export function defineCalculation<I extends string, O extends string>(
     formula: spec.formula,
     formulaText: spec.formulaText,
     citations: Object.freeze([...citations]),
-    cautions: Object.freeze([...spec.cautions]),
+    cautions: Object.freeze([
+      ...new Set([...spec.cautions, ...recalledSourceCautions(citations)]),
+    ]),
     constraints: Object.freeze([...(spec.constraints ?? [])]),
     clinical: spec.clinical ?? false,
     // a spread calculation brings its own recipe: a catalog recipe always names this id
@@ -391,6 +393,38 @@ export function notAbove<I extends string>(smaller: I, larger: I): InputConstrai
     description: `'${smaller}' <= '${larger}'`,
     holds: (x) => x[smaller] <= x[larger],
   };
+}
+
+/** A citation whose locator says its details were recalled or not checked. */
+const RECALLED = /from memory|not verified/i;
+
+/**
+ * The cautions that carry a recalled or unchecked source to every result that cites it: one per
+ * citation whose locator says "from memory" or "not verified", naming its first author, year and
+ * locator. A calculation lists them among its cautions so that its evaluations, propagations,
+ * tables and displays show the mark with the number. {@linkcode defineCalculation} adds them to
+ * every calculation's cautions, so no definition lists them by hand.
+ *
+ * @param citations The calculation's citations.
+ * @returns One caution per recalled or unchecked citation, in order.
+ *
+ * @example
+ * ```ts
+ * import { recalledSourceCautions } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const [caution] = recalledSourceCautions([
+ *   { authors: "Doe J, Roe R", year: 1999, title: "T", publication: "P", locator: "Table 2 (from memory)" },
+ *   { authors: "Poe P", year: 2001, title: "T", publication: "P", locator: "Table 1" },
+ * ]);
+ * assert.equal(caution, "Doe 1999 (Table 2 (from memory)): cited without re-checking the publication; verify before relying on it");
+ * ```
+ */
+export function recalledSourceCautions(citations: readonly Citation[]): string[] {
+  return citations.filter((c) => RECALLED.test(c.locator ?? "")).map((c) =>
+    `${
+      c.authors.split(/[ ,]/)[0]
+    } ${c.year} (${c.locator}): cited without re-checking the publication; verify before relying on it`
+  );
 }
 
 /**

@@ -61,7 +61,8 @@ export function calculationMarkdown(calc: Calculation): string {
     ...calc.citations.map((s) => `- ${formatCitation(s)}`),
   ];
   const cautions = cautionsOf(calc);
-  if (cautions.length > 0) lines.push("", "Cautions:", ...cautions.map((c) => `- ${c}`));
+  if (cautions.length > 0) lines.push("", "Cautions:");
+  for (const c of cautions) lines.push(`- ${c}`);
   return lines.join("\n") + "\n";
 }
 

@@ -48,6 +48,7 @@ export {
   notAbove,
   type OutputRole,
   type OutputSpec,
+  recalledSourceCautions,
 } from "./calculation.ts";
 export {
   choiceError,

@@ -275,10 +275,10 @@ export function checkInputs<I extends string>(
   for (const name of schema.inputNames) {
     if (skip.includes(name)) continue;
     const r = checkValue(name, schema.inputs[name], given[name], context);
-    issues.push(...r.issues);
+    for (const issue of r.issues) issues.push(issue);
     if (r.value !== undefined) values[name] = r.value;
   }
-  issues.push(...checkConstraints(schema, values));
+  for (const issue of checkConstraints(schema, values)) issues.push(issue);
   return { values, issues };
 }
 

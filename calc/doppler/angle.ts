@@ -53,7 +53,7 @@ function signedAngle(label: string, description: string): InputRole {
  * velocity underestimation = 100·(1 − v_measured/v_true) % = 100·(1 − cos θ) %;
  * gradient underestimation = 100·(1 − ΔP_measured/ΔP_true) % = 100·(1 − cos²θ) %.
  *
- * Source: Hatle L, Angelsen B. Doppler Ultrasound in Cardiology, 1985, ch. 2 (angle dependence);
+ * Source: Hatle L, Angelsen B. Doppler Ultrasound in Cardiology, 1985 (angle dependence);
  * Baumgartner H, et al. J Am Soc Echocardiogr 2009;22:1-23 (alignment of the CW beam).
  *
  * @throws {RangeError} (through `evaluate`) for a velocity or angle outside its valid range, or an

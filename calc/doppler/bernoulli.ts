@@ -4,7 +4,7 @@
  * @module
  */
 import { defineCalculation, notAbove } from "../core/calculation.ts";
-import type { Calculation } from "../core/types.ts";
+import type { Calculation, Citation } from "../core/types.ts";
 import { PEAK_GRADIENT, PEAK_VELOCITY } from "../quantities/flow.ts";
 import { BAUMGARTNER_2009, HATLE_ANGELSEN_1985 } from "./citations.ts";
 
@@ -14,7 +14,7 @@ import { BAUMGARTNER_2009, HATLE_ANGELSEN_1985 } from "./citations.ts";
  * Formula: ΔP [mmHg] = 4 · v² [m/s]. The factor 4 is ½ρ for blood (ρ ≈ 1060 kg/m³) converted to
  * mmHg, with viscous and flow-acceleration terms neglected.
  *
- * Source: Hatle L, Angelsen B. Doppler Ultrasound in Cardiology, 2nd ed., 1985, ch. 2;
+ * Source: Hatle L, Angelsen B. Doppler Ultrasound in Cardiology, 2nd ed., 1985;
  * Baumgartner H, et al. J Am Soc Echocardiogr 2009;22:1-23 (EAE/ASE valve stenosis).
  *
  * @throws {RangeError} (through `evaluate`) for a negative or non-finite velocity.
@@ -41,6 +41,11 @@ export const simplifiedBernoulli: Calculation<"peakVelocity", "gradient"> = defi
   ],
   clinical: true,
 });
+
+const MODIFIED_BERNOULLI_CITATIONS: readonly Citation[] = [
+  { ...BAUMGARTNER_2009, locator: "pressure gradients, modified Bernoulli equation (from memory)" },
+  HATLE_ANGELSEN_1985,
+];
 
 /**
  * Modified (expanded) Bernoulli equation: gradient corrected for the proximal velocity.
@@ -95,7 +100,7 @@ export const modifiedBernoulli: Calculation<"jetVelocity" | "proximalVelocity", 
         simplifiedBernoulli.formula({ peakVelocity: proximalVelocity }).gradient,
     }),
     formulaText: "ΔP = 4·(v₂² − v₁²)",
-    citations: [BAUMGARTNER_2009, HATLE_ANGELSEN_1985],
+    citations: MODIFIED_BERNOULLI_CITATIONS,
     cautions: [
       "The proximal velocity must be sampled just below the restriction, on the same beat",
     ],

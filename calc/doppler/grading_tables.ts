@@ -5,9 +5,9 @@
  * bands here close those gaps at the next printed value so that every measurement falls in exactly
  * one class (e.g. mild AS is 2.5 < Vmax < 3.0). All thresholds were recalled by the authors and
  * checked against each other, not against a fresh copy of the printed tables: they are marked
- * "from memory" row by row. The aortic stenosis (2017), mitral regurgitation (2017) and pulmonary
- * hypertension (2015) bands were also compared with reproductions of those tables in secondary
- * literature and agree.
+ * "from memory" row by row, and every grade says so. The aortic stenosis (2017), mitral
+ * regurgitation (2017), pulmonary hypertension (2015) and mitral stenosis staging (2014, 2020)
+ * bands were also compared with reproductions of those tables in secondary literature and agree.
  *
  * @module
  */
@@ -35,6 +35,7 @@ import {
   GALIE_2015,
   HUMBERT_2022,
   NISHIMURA_2014,
+  OTTO_2020,
   ZOGHBI_2017,
 } from "./citations.ts";
 
@@ -260,11 +261,24 @@ export const MITRAL_STENOSIS_MEAN_GRADIENT_2009: SeverityTable = defineSeverityT
   notes: ["Supportive only: the gradient rises with heart rate and transvalvular flow"],
 });
 
-const MS_2014 = at(NISHIMURA_2014, "table of stages of mitral stenosis (from memory)");
+const MS_2014 = at(
+  NISHIMURA_2014,
+  "table of the stages of mitral stenosis (table number not checked; thresholds from memory, agreeing with secondary reproductions of the table)",
+);
+
+/** Why a valve area above 1.5 cm² is "progressive" only when mitral stenosis is present. */
+const MS_STAGE_B_NOTE =
+  "Graded by area alone for a valve with mitral stenosis: an area > 1.5 cm² is stage B (progressive) when the rheumatic changes are present; an at-risk (stage A) or normal valve also has an area > 1.5 cm²";
+const MS_SYMPTOMS_NOTE =
+  "Stages C (asymptomatic) and D (symptomatic) share the area threshold; symptoms are not graded here";
 
 /**
- * Mitral stenosis stages by valve area, AHA/ACC 2014 (Nishimura et al., Circulation 2014, from
- * memory): progressive (stage B) > 1.5 cm²; severe (stage C/D) ≤ 1.5 cm²; very severe ≤ 1.0 cm².
+ * Mitral stenosis stages by valve area, AHA/ACC 2014 (Nishimura et al., the full guideline's
+ * table of the stages of MS, from memory; secondary reproductions of the table agree):
+ * progressive (stage B) > 1.5 cm²; severe (stage C/D) ≤ 1.5 cm²; very severe ≤ 1.0 cm². Kept
+ * selectable beside the 2020 staging because its very severe class (≤ 1.0 cm², pressure
+ * half-time ≥ 220 ms) carried its own intervention recommendations, which reports made under the
+ * 2014 guideline used.
  *
  * @example
  * ```ts
@@ -284,19 +298,62 @@ export const MITRAL_STENOSIS_STAGES_2014: SeverityTable = defineSeverityTable({
     band("progressive (stage B)", "> 1.5", 1.5, false, null, false, MS_2014),
   ],
   notes: [
-    "Stages C (asymptomatic) and D (symptomatic) share the area threshold; symptoms are not graded here",
+    MS_SYMPTOMS_NOTE,
+    MS_STAGE_B_NOTE,
+    "The very severe class (≤ 1.0 cm²; pressure half-time ≥ 220 ms) is this edition's; the 2020 guideline dropped it",
     "Companion thresholds (PHT ≥ 150 ms severe, ≥ 220 ms very severe) are not graded here",
   ],
 });
 
-/** The selectable mitral stenosis schemes by valve area. */
-export type MitralStenosisScheme = "EAE/ASE 2009" | "AHA/ACC 2014";
+const MS_2020 = at(
+  OTTO_2020,
+  "Table 16, stages of MS (from memory; the table number and thresholds agree with a secondary reproduction of the table)",
+);
 
 /**
- * The mitral stenosis valve-area table of a scheme: the older three-class grading (EAE/ASE 2009) or
- * the newer staging (AHA/ACC 2014).
+ * Mitral stenosis stages by valve area, ACC/AHA 2020 (Otto et al., Circulation 2021;143:e72–e227,
+ * Table 16, from memory; a secondary reproduction of Table 16 agrees): progressive (stage B)
+ * > 1.5 cm²; severe (stage C/D) ≤ 1.5 cm² (diastolic pressure half-time ≥ 150 ms). There is no
+ * very severe class. The default of {@linkcode mitralStenosisAreaTable}.
  *
- * @param scheme "EAE/ASE 2009" or "AHA/ACC 2014".
+ * @example
+ * ```ts
+ * import { gradeSeverity, MITRAL_STENOSIS_STAGES_2020 } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * // 0.9 cm² was "very severe" in 2014; the 2020 table calls it severe
+ * assert.equal(gradeSeverity(MITRAL_STENOSIS_STAGES_2020, 0.9).grade, "severe (stage C/D)");
+ * ```
+ */
+export const MITRAL_STENOSIS_STAGES_2020: SeverityTable = defineSeverityTable({
+  id: "mitralStenosisStages2020",
+  title: "Mitral stenosis stages by valve area (ACC/AHA 2020)",
+  quantity: MITRAL_VALVE_AREA,
+  bands: [
+    band("severe (stage C/D)", "≤ 1.5", 0, false, 1.5, true, MS_2020),
+    band("progressive (stage B)", "> 1.5", 1.5, false, null, false, MS_2020),
+  ],
+  notes: [
+    MS_SYMPTOMS_NOTE,
+    MS_STAGE_B_NOTE,
+    "Companion thresholds (PHT ≥ 150 ms; PASP > 50 mmHg in stage C) are not graded here",
+  ],
+});
+
+/** The selectable mitral stenosis schemes by valve area, newest first. */
+export type MitralStenosisScheme = "ACC/AHA 2020" | "AHA/ACC 2014" | "EAE/ASE 2009";
+
+const MS_SCHEMES: Readonly<Record<MitralStenosisScheme, SeverityTable>> = {
+  "ACC/AHA 2020": MITRAL_STENOSIS_STAGES_2020,
+  "AHA/ACC 2014": MITRAL_STENOSIS_STAGES_2014,
+  "EAE/ASE 2009": MITRAL_STENOSIS_AREA_2009,
+};
+
+/**
+ * The mitral stenosis valve-area table of a scheme: the current staging (ACC/AHA 2020, the
+ * default), the 2014 staging with its very severe class (AHA/ACC 2014), or the older three-class
+ * grading (EAE/ASE 2009).
+ *
+ * @param scheme "ACC/AHA 2020" (default), "AHA/ACC 2014" or "EAE/ASE 2009".
  * @returns The severity table.
  * @throws {RangeError} For an unknown scheme.
  *
@@ -304,14 +361,16 @@ export type MitralStenosisScheme = "EAE/ASE 2009" | "AHA/ACC 2014";
  * ```ts
  * import { gradeSeverity, mitralStenosisAreaTable } from "@sonorigor/sonorigor";
  * import assert from "node:assert/strict";
+ * assert.equal(gradeSeverity(mitralStenosisAreaTable(), 1.0).grade, "severe (stage C/D)");
+ * assert.equal(gradeSeverity(mitralStenosisAreaTable("AHA/ACC 2014"), 1.0).grade, "very severe (stage C/D)");
  * assert.equal(gradeSeverity(mitralStenosisAreaTable("EAE/ASE 2009"), 1.2).grade, "moderate");
- * assert.equal(gradeSeverity(mitralStenosisAreaTable("AHA/ACC 2014"), 1.2).grade, "severe (stage C/D)");
  * ```
  */
-export function mitralStenosisAreaTable(scheme: MitralStenosisScheme): SeverityTable {
-  if (scheme === "EAE/ASE 2009") return MITRAL_STENOSIS_AREA_2009;
-  if (scheme === "AHA/ACC 2014") return MITRAL_STENOSIS_STAGES_2014;
-  throw choiceError("Mitral stenosis grading", "scheme", ["EAE/ASE 2009", "AHA/ACC 2014"], scheme);
+export function mitralStenosisAreaTable(
+  scheme: MitralStenosisScheme = "ACC/AHA 2020",
+): SeverityTable {
+  if (Object.hasOwn(MS_SCHEMES, scheme)) return MS_SCHEMES[scheme];
+  throw choiceError("Mitral stenosis grading", "scheme", Object.keys(MS_SCHEMES), scheme);
 }
 
 // ---------------------------------------------------------------- regurgitation
@@ -580,3 +639,31 @@ export function pulmonaryHypertensionTable(
   }
   return otherEchoSigns ? tables.withOtherSigns : tables.withoutOtherSigns;
 }
+
+/**
+ * Every guideline severity table of this module, in the order of the valves and editions: aortic
+ * stenosis (2009, 2017), mitral stenosis (2009 area and gradient, 2014 and 2020 stages),
+ * regurgitation (mitral, aortic 2017) and pulmonary hypertension (2015, 2022). The adult
+ * reference limits make their own tables (`adultSeverityTable`).
+ *
+ * @example
+ * ```ts
+ * import { GUIDELINE_SEVERITY_TABLES, MITRAL_STENOSIS_STAGES_2020 } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.ok(GUIDELINE_SEVERITY_TABLES.includes(MITRAL_STENOSIS_STAGES_2020));
+ * // 5 + 5 aortic stenosis, 4 mitral stenosis, 3 + 3 regurgitation, 2 + 2 pulmonary hypertension
+ * assert.equal(GUIDELINE_SEVERITY_TABLES.length, 24);
+ * ```
+ */
+export const GUIDELINE_SEVERITY_TABLES: readonly SeverityTable[] = Object.freeze([
+  ...Object.values(AORTIC_STENOSIS_2009),
+  ...Object.values(AORTIC_STENOSIS_2017),
+  MITRAL_STENOSIS_AREA_2009,
+  MITRAL_STENOSIS_MEAN_GRADIENT_2009,
+  MITRAL_STENOSIS_STAGES_2014,
+  MITRAL_STENOSIS_STAGES_2020,
+  ...Object.values(MITRAL_REGURGITATION_2017),
+  ...Object.values(AORTIC_REGURGITATION_2017),
+  ...Object.values(PULMONARY_HYPERTENSION_2015),
+  ...Object.values(PULMONARY_HYPERTENSION_2022),
+]);

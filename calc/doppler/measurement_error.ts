@@ -84,7 +84,7 @@ function tidy(x: number): number {
  * insonation angles from 0 to the largest angle: the velocity reads low by 100·(1 − cos θ) %, the
  * Bernoulli gradient by 100·(1 − cos²θ) % (whatever the velocity; 1 m/s is used).
  *
- * Source of the relation: Hatle L, Angelsen B. Doppler Ultrasound in Cardiology, 1985, ch. 2.
+ * Source of the relation: Hatle L, Angelsen B. Doppler Ultrasound in Cardiology, 1985.
  *
  * @param options Largest angle and step.
  * @returns Points for both outputs, angle ascending.
@@ -222,7 +222,7 @@ export function valveAreaDiameterErrorData(
     stepMm: options.stepMm,
   }).values;
   const diameters = checkedDiameters(options.lvotDiametersCm ?? [1.8, 2.0, 2.2]);
-  const smallest = Math.min(...diameters);
+  const smallest = diameters.reduce((m, d) => Math.min(m, d), Infinity);
   if (!(smallest - maxErrorMm / 10 > 0)) {
     throw issueError([{
       kind: "range",

@@ -25,6 +25,7 @@ export {
   continuityValveArea,
   continuityValveAreaPeakVelocity,
   dimensionlessIndex,
+  energyLossIndex,
   indexedValveArea,
   mitralValveAreaPressureHalfTime,
   pressureHalfTimeFromDecelerationTime,
@@ -32,7 +33,11 @@ export {
 } from "./valve_area.ts";
 export {
   effectiveRegurgitantOrificeArea,
+  type PisaCorrectedFlowInput,
   pisaFlowRate,
+  pisaFlowRateAliasingCorrected,
+  type PisaMitralAreaInput,
+  pisaMitralValveArea,
   pisaRegurgitation,
   regurgitantFraction,
   regurgitantFractionPisa,
@@ -58,10 +63,12 @@ export {
   AORTIC_STENOSIS_2009,
   AORTIC_STENOSIS_2017,
   type AorticStenosisTables,
+  GUIDELINE_SEVERITY_TABLES,
   MITRAL_REGURGITATION_2017,
   MITRAL_STENOSIS_AREA_2009,
   MITRAL_STENOSIS_MEAN_GRADIENT_2009,
   MITRAL_STENOSIS_STAGES_2014,
+  MITRAL_STENOSIS_STAGES_2020,
   mitralStenosisAreaTable,
   type MitralStenosisScheme,
   PULMONARY_HYPERTENSION_2015,
@@ -71,3 +78,4 @@ export {
   type RegurgitationTables,
 } from "./grading_tables.ts";
 export { DOPPLER_CALCULATIONS } from "./catalog.ts";
+export { NISHIMURA_2014, OTTO_2020 } from "./citations.ts";

@@ -1,15 +1,18 @@
 /**
- * Regurgitation quantification: PISA flow rate, effective regurgitant orifice area, regurgitant
- * volume, and regurgitant fraction by the PISA and volumetric methods.
+ * Regurgitation quantification: PISA flow rate (with the aliasing-velocity correction for
+ * low-velocity jets), effective regurgitant orifice area, regurgitant volume, and regurgitant
+ * fraction by the PISA and volumetric methods; the mitral valve area of stenosis by PISA.
  *
  * @module
  */
 import { defineCalculation, type InputRole, notAbove } from "../core/calculation.ts";
 import { chain } from "../core/chain.ts";
-import type { Calculation } from "../core/types.ts";
+import type { Calculation, Citation, InputConstraint } from "../core/types.ts";
 import {
   ALIASING_VELOCITY,
   EFFECTIVE_REGURGITANT_ORIFICE_AREA,
+  MITRAL_E_VELOCITY,
+  MITRAL_VALVE_AREA,
   PISA_RADIUS,
   PISA_WALL_ANGLE,
   REGURGITANT_FLOW_RATE,
@@ -19,7 +22,15 @@ import {
   REGURGITANT_VTI,
   STROKE_VOLUME,
 } from "../quantities/flow.ts";
-import { PU_1995, ZOGHBI_2017 } from "./citations.ts";
+import { BAUMGARTNER_2009, PU_1995, RODRIGUEZ_1993, ZOGHBI_2017 } from "./citations.ts";
+
+const PISA_FLOW_CITATIONS: readonly Citation[] = [ZOGHBI_2017, PU_1995];
+
+/** What limits every PISA flow: the squared radius and the shape of the shell. */
+const PISA_SHELL_CAUTIONS = [
+  "The radius is squared: a 1 mm error in a 1 cm radius is about a 20 % flow error",
+  "Assumes a hemispheric shell; eccentric or elongated orifices break the assumption",
+] as const;
 
 /** The stroke volume a fraction divides by: zero flow has no fraction. */
 function strokeVolumeDividedBy(label: string, description: string): InputRole {
@@ -83,13 +94,98 @@ export const pisaFlowRate: Calculation<
       180,
   }),
   formulaText: "Q = 2π·r²·Va·α/180",
-  citations: [ZOGHBI_2017, PU_1995],
-  cautions: [
-    "The radius is squared: a 1 mm error in a 1 cm radius is about a 20 % flow error",
-    "Assumes a hemispheric shell; eccentric or elongated orifices break the assumption",
-  ],
+  citations: PISA_FLOW_CITATIONS,
+  cautions: [...PISA_SHELL_CAUTIONS],
   clinical: true,
 });
+
+/** The aliasing velocity (cm/s) lies below the peak velocity (m/s) of the flow it converges to. */
+function aliasingBelow<V extends string>(
+  velocity: V,
+): InputConstraint<"aliasingVelocityCmPerS" | V> {
+  return {
+    inputs: ["aliasingVelocityCmPerS", velocity],
+    description:
+      `'aliasingVelocityCmPerS' < '${velocity}' (compared in the same unit: the flow accelerates toward the orifice)`,
+    holds: (x) => x.aliasingVelocityCmPerS < 100 * x[velocity],
+  };
+}
+
+/** The input names of {@linkcode pisaFlowRateAliasingCorrected}. */
+export type PisaCorrectedFlowInput =
+  | "radiusCm"
+  | "aliasingVelocityCmPerS"
+  | "wallAngleDeg"
+  | "regurgitantPeakVelocity";
+
+const ALIASING_CORRECTION_CITATIONS: readonly Citation[] = [
+  {
+    ...ZOGHBI_2017,
+    locator:
+      "PISA for tricuspid regurgitation: flow corrected by Vmax/(Vmax − Va) when the aliasing velocity is not small against the jet velocity (from memory)",
+  },
+  PU_1995,
+];
+
+/**
+ * PISA flow rate corrected for the aliasing velocity: the isovelocity shell lies where the flow
+ * has already reached Va, so when Va is not small against the jet's peak velocity (tricuspid
+ * regurgitation, other low-velocity jets, a high colour scale) the uncorrected flow
+ * ({@linkcode pisaFlowRate}) underestimates it.
+ *
+ * Formula: Q [mL/s] = 2π · r² · Va · α/180 · Vmax / (Vmax − Va), velocities in the same unit
+ * (Va in cm/s, Vmax in m/s here); the first factor is {@linkcode pisaFlowRate}'s formula.
+ *
+ * Source: Zoghbi WA, et al. J Am Soc Echocardiogr 2017;30:303-371 (PISA in tricuspid
+ * regurgitation, correction factor from memory); Pu M, et al. Circulation 1995;92:2169-2177 (α/180,
+ * from memory).
+ *
+ * @throws {RangeError} (through `evaluate`) for a radius, velocity or angle outside its valid
+ * range, or an aliasing velocity not below the jet velocity.
+ *
+ * @example r = 1 cm, Va = 40 cm/s, a 2 m/s tricuspid jet: 80π · 200/160 = 100π mL/s
+ * ```ts
+ * import { evaluate, pisaFlowRateAliasingCorrected } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const r = evaluate(pisaFlowRateAliasingCorrected, {
+ *   radiusCm: 1, aliasingVelocityCmPerS: 40, regurgitantPeakVelocity: 2,
+ * });
+ * assert.ok(Math.abs(r.outputs.flowRateMlPerS - 100 * Math.PI) < 1e-9);
+ * ```
+ */
+export const pisaFlowRateAliasingCorrected: Calculation<PisaCorrectedFlowInput, "flowRateMlPerS"> =
+  defineCalculation<PisaCorrectedFlowInput, "flowRateMlPerS">({
+    id: "pisaFlowRateAliasingCorrected",
+    title: "PISA flow rate corrected for the aliasing velocity",
+    description:
+      "Peak regurgitant flow rate by PISA with the correction Vmax/(Vmax − Va), for jets whose peak velocity is not much above the aliasing velocity (tricuspid regurgitation).",
+    inputs: {
+      ...pisaFlowRate.inputs,
+      regurgitantPeakVelocity: {
+        quantity: REGURGITANT_PEAK_VELOCITY,
+        valid: { min: 0, max: 10, minExclusive: true },
+        reason: "the correction divides by the difference of the jet and aliasing velocities",
+      },
+    },
+    outputs: { flowRateMlPerS: REGURGITANT_FLOW_RATE },
+    formula: ({ radiusCm, aliasingVelocityCmPerS, wallAngleDeg, regurgitantPeakVelocity }) => {
+      const vmax = 100 * regurgitantPeakVelocity; // cm/s, the unit of Va
+      const { flowRateMlPerS } = pisaFlowRate.formula({
+        radiusCm,
+        aliasingVelocityCmPerS,
+        wallAngleDeg,
+      });
+      return { flowRateMlPerS: flowRateMlPerS * vmax / (vmax - aliasingVelocityCmPerS) };
+    },
+    formulaText: "Q = 2π·r²·Va·α/180 · Vmax/(Vmax − Va)",
+    constraints: [aliasingBelow("regurgitantPeakVelocity")],
+    citations: ALIASING_CORRECTION_CITATIONS,
+    cautions: [
+      ...PISA_SHELL_CAUTIONS,
+      "The correction adds Va/(Vmax − Va) to the flow: 8.7 % for Va = 40 cm/s and a 5 m/s jet, 25 % for a 2 m/s jet",
+    ],
+    clinical: true,
+  });
 
 /**
  * Effective regurgitant orifice area from the PISA flow rate and the peak regurgitant velocity.
@@ -208,6 +304,11 @@ export const regurgitantFraction: Calculation<
   clinical: true,
 });
 
+const RF_PISA_CITATIONS: readonly Citation[] = [{
+  ...ZOGHBI_2017,
+  locator: "regurgitant fraction from the PISA volume and a forward stroke volume (from memory)",
+}];
+
 /**
  * Regurgitant fraction by the PISA method: PISA regurgitant volume over the sum of it and the
  * forward stroke volume measured at a competent valve.
@@ -248,8 +349,10 @@ export const regurgitantFractionPisa: Calculation<
       totalStrokeVolumeMl: regurgitantVolumeMl + forwardStrokeVolumeMl,
     }),
   formulaText: "RF = RVol / (RVol + SV_forward)",
-  citations: [ZOGHBI_2017],
-  cautions: ["Combines two independent methods: their errors add"],
+  citations: RF_PISA_CITATIONS,
+  cautions: [
+    "Combines two independent methods: their errors add",
+  ],
   clinical: true,
 });
 
@@ -352,3 +455,90 @@ export const pisaRegurgitation = chain(
   | "regurgitantVtiCm",
   "flowRateMlPerS" | "eroaCm2" | "regurgitantVolumeMl"
 >;
+
+/** The input names of {@linkcode pisaMitralValveArea}. */
+export type PisaMitralAreaInput =
+  | "radiusCm"
+  | "aliasingVelocityCmPerS"
+  | "wallAngleDeg"
+  | "mitralPeakVelocity";
+
+const PISA_MITRAL_AREA_CITATIONS: readonly Citation[] = [
+  RODRIGUEZ_1993,
+  { ...BAUMGARTNER_2009, locator: "PISA method for the mitral valve area (from memory)" },
+];
+
+/**
+ * Mitral valve area in stenosis by PISA: the flow converging on the atrial side of the funnel
+ * (measured at the aliasing velocity and corrected by the funnel angle α/180) divided by the peak
+ * transmitral velocity.
+ *
+ * Formula: MVA [cm²] = 2π · r² · Va / Vpeak · α/180, Va in cm/s and Vpeak in m/s (× 100); the
+ * flow is {@linkcode pisaFlowRate}'s formula and flow over velocity is
+ * {@linkcode effectiveRegurgitantOrificeArea}'s, each written once.
+ *
+ * Source: Rodriguez L, et al. Circulation 1993;88:1157-1165; Baumgartner H, et al. J Am Soc
+ * Echocardiogr 2009;22:1-23 (PISA method in mitral stenosis); both from memory.
+ *
+ * @throws {RangeError} (through `evaluate`) for a radius, velocity or angle outside its valid
+ * range, or an aliasing velocity not below the peak transmitral velocity.
+ * @throws {TypeError} (through `evaluate`) when the funnel angle is missing (it has no default:
+ * the mitral funnel is rarely flat).
+ *
+ * @example r = 1 cm, Va = 40 cm/s, Vpeak = 1.6 m/s, α = 120°: π/3 = 1.05 cm²
+ * ```ts
+ * import { evaluate, pisaMitralValveArea } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const r = evaluate(pisaMitralValveArea, {
+ *   radiusCm: 1, aliasingVelocityCmPerS: 40, wallAngleDeg: 120, mitralPeakVelocity: 1.6,
+ * });
+ * assert.ok(Math.abs(r.outputs.mvaCm2 - Math.PI / 3) < 1e-12); // 2π·40/160·(2/3)
+ * ```
+ */
+export const pisaMitralValveArea: Calculation<PisaMitralAreaInput, "mvaCm2"> = defineCalculation<
+  PisaMitralAreaInput,
+  "mvaCm2"
+>({
+  id: "pisaMitralValveArea",
+  title: "Mitral valve area by PISA",
+  description:
+    "Mitral stenosis orifice area from the proximal flow convergence on the atrial side and the peak transmitral velocity.",
+  inputs: {
+    radiusCm: PISA_RADIUS,
+    aliasingVelocityCmPerS: ALIASING_VELOCITY,
+    wallAngleDeg: {
+      quantity: PISA_WALL_ANGLE,
+      label: "Funnel angle of the mitral leaflets",
+      description:
+        "Angle between the mitral leaflets on the atrial side, measured on the colour image (no default)",
+    },
+    mitralPeakVelocity: {
+      quantity: MITRAL_E_VELOCITY,
+      label: "Peak transmitral velocity",
+      description: "Peak diastolic velocity through the stenotic mitral valve (continuous wave)",
+      valid: { min: 0, max: 5, minExclusive: true },
+      reason: "the area divides by the peak velocity",
+    },
+  },
+  outputs: { mvaCm2: MITRAL_VALVE_AREA },
+  formula: ({ radiusCm, aliasingVelocityCmPerS, wallAngleDeg, mitralPeakVelocity }) => {
+    const { flowRateMlPerS } = pisaFlowRate.formula({
+      radiusCm,
+      aliasingVelocityCmPerS,
+      wallAngleDeg,
+    });
+    const { eroaCm2 } = effectiveRegurgitantOrificeArea.formula({
+      flowRateMlPerS,
+      regurgitantPeakVelocity: mitralPeakVelocity,
+    });
+    return { mvaCm2: eroaCm2 };
+  },
+  formulaText: "MVA = 2π·r²·Va/Vpeak·α/180",
+  constraints: [aliasingBelow("mitralPeakVelocity")],
+  citations: PISA_MITRAL_AREA_CITATIONS,
+  cautions: [
+    ...PISA_SHELL_CAUTIONS,
+    "The funnel angle changes the area in proportion: measure it, do not assume 180°",
+  ],
+  clinical: true,
+});

@@ -1,11 +1,12 @@
 /**
  * Valve areas: continuity equation for the aortic valve (VTI and peak-velocity forms), indexed
- * area, dimensionless index, and mitral valve area by pressure half-time.
+ * area, dimensionless index, the energy loss index (aortic stenosis with pressure recovery), and
+ * mitral valve area by pressure half-time.
  *
  * @module
  */
 import { defineCalculation } from "../core/calculation.ts";
-import type { Calculation } from "../core/types.ts";
+import type { Calculation, Citation, InputConstraint } from "../core/types.ts";
 import {
   AORTIC_PEAK_VELOCITY,
   AORTIC_VALVE_AREA,
@@ -13,16 +14,20 @@ import {
   DECELERATION_SLOPE,
   DECELERATION_TIME,
   DIMENSIONLESS_INDEX,
+  ENERGY_LOSS_COEFFICIENT,
+  ENERGY_LOSS_INDEX,
   LVOT_PEAK_VELOCITY,
   LVOT_VTI,
   MITRAL_E_VELOCITY,
   MITRAL_VALVE_AREA,
   PRESSURE_HALF_TIME,
+  SINOTUBULAR_JUNCTION_AREA,
 } from "../quantities/flow.ts";
+import { BODY_SURFACE_AREA } from "../quantities/body.ts";
 import { LVOT_DIAMETER } from "../quantities/structure.ts";
 import { indexedToBsa } from "../body/indexing.ts";
 import { crossSectionalArea, strokeVolume } from "./flow.ts";
-import { BAUMGARTNER_2009, BAUMGARTNER_2017, HATLE_1979 } from "./citations.ts";
+import { BAUMGARTNER_2009, BAUMGARTNER_2017, GARCIA_2000, HATLE_1979 } from "./citations.ts";
 
 const CONTINUITY_CAUTIONS = [
   "LVOT diameter is squared: a 1 mm error in a 2 cm LVOT changes the area by about 10 %",
@@ -67,6 +72,11 @@ export const continuityValveArea: Calculation<
   cautions: [...CONTINUITY_CAUTIONS],
   clinical: true,
 });
+
+const PEAK_VELOCITY_CONTINUITY_CITATIONS: readonly Citation[] = [{
+  ...BAUMGARTNER_2009,
+  locator: "simplified continuity equation with peak velocities (from memory)",
+}];
 
 /**
  * Continuity-equation aortic valve area, peak-velocity form.
@@ -113,7 +123,7 @@ export const continuityValveAreaPeakVelocity: Calculation<
       lvotPeakVelocity / avPeakVelocity,
   }),
   formulaText: "AVA = π·d_LVOT²/4 · V_LVOT / V_AV",
-  citations: [BAUMGARTNER_2009],
+  citations: PEAK_VELOCITY_CONTINUITY_CITATIONS,
   cautions: [
     ...CONTINUITY_CAUTIONS,
     "Less accurate than the VTI form when the ejection profiles differ in shape",
@@ -178,6 +188,81 @@ export const dimensionlessIndex: Calculation<"lvotVtiCm" | "avVtiCm", "dvi"> = d
   clinical: true,
 });
 
+const ENERGY_LOSS_CITATIONS: readonly Citation[] = [
+  GARCIA_2000,
+  {
+    ...BAUMGARTNER_2009,
+    locator: "energy loss index, aortic area measured at the sinotubular junction (from memory)",
+  },
+];
+
+/** The orifice of a stenotic valve is smaller than the aorta it opens into (else AA − EOA ≤ 0). */
+const ORIFICE_SMALLER_THAN_AORTA: InputConstraint<"avaCm2" | "aorticAreaCm2" | "bsaM2"> = {
+  inputs: ["avaCm2", "aorticAreaCm2"],
+  description: "'avaCm2' < 'aorticAreaCm2' (the valve orifice is smaller than the aorta above it)",
+  holds: ({ avaCm2, aorticAreaCm2 }) => avaCm2 < aorticAreaCm2,
+};
+
+/**
+ * Energy loss index of aortic stenosis: the effective orifice area corrected for the pressure
+ * recovered in the ascending aorta, indexed to body surface area. Recovery matters when the aorta
+ * is small relative to the orifice; in a wide aorta the coefficient approaches the orifice area.
+ *
+ * Formula: ELCo [cm²] = EOA · AA / (AA − EOA); ELI [cm²/m²] = ELCo / BSA, with EOA the continuity
+ * valve area and AA the aortic cross-sectional area at the sinotubular junction.
+ *
+ * Source: Garcia D, Pibarot P, Dumesnil JG, Sakr F, Durand LG. Circulation 2000;101:765-771
+ * (formula, indexing to BSA, ELI ≤ 0.52 cm²/m² as the best predictor of death or valve
+ * replacement); Baumgartner H, et al. J Am Soc Echocardiogr 2009;22:1-23 (AA at the
+ * sinotubular junction, from memory).
+ *
+ * @throws {RangeError} (through `evaluate`) for an area or BSA outside its valid range, or an
+ * orifice area not smaller than the aortic area.
+ *
+ * @example EOA 0.8 cm², AA 4 cm², BSA 2 m²: ELCo 1.0 cm², ELI 0.5 cm²/m²
+ * ```ts
+ * import { energyLossIndex, evaluate } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const r = evaluate(energyLossIndex, { avaCm2: 0.8, aorticAreaCm2: 4, bsaM2: 2 });
+ * assert.ok(Math.abs(r.outputs.energyLossCoefficientCm2 - 1) < 1e-12); // 3.2 / 3.2
+ * assert.ok(Math.abs(r.outputs.energyLossIndex - 0.5) < 1e-12);
+ * ```
+ */
+export const energyLossIndex: Calculation<
+  "avaCm2" | "aorticAreaCm2" | "bsaM2",
+  "energyLossCoefficientCm2" | "energyLossIndex"
+> = defineCalculation({
+  id: "energyLossIndex",
+  title: "Energy loss index (aortic stenosis)",
+  description:
+    "Aortic valve effective orifice area corrected for pressure recovery in the ascending aorta, and indexed to body surface area.",
+  inputs: {
+    avaCm2: {
+      quantity: AORTIC_VALVE_AREA,
+      label: "Effective orifice area",
+      description: "Aortic valve effective orifice area by the continuity equation (Doppler)",
+    },
+    aorticAreaCm2: SINOTUBULAR_JUNCTION_AREA,
+    bsaM2: BODY_SURFACE_AREA,
+  },
+  outputs: {
+    energyLossCoefficientCm2: ENERGY_LOSS_COEFFICIENT,
+    energyLossIndex: ENERGY_LOSS_INDEX,
+  },
+  formula: ({ avaCm2, aorticAreaCm2, bsaM2 }) => {
+    const energyLossCoefficientCm2 = avaCm2 * aorticAreaCm2 / (aorticAreaCm2 - avaCm2);
+    return { energyLossCoefficientCm2, energyLossIndex: energyLossCoefficientCm2 / bsaM2 };
+  },
+  formulaText: "ELCo = EOA·AA/(AA − EOA); ELI = ELCo/BSA",
+  constraints: [ORIFICE_SMALLER_THAN_AORTA],
+  citations: ENERGY_LOSS_CITATIONS,
+  cautions: [
+    "Garcia 2000: ELI ≤ 0.52 cm²/m² was the best predictor of death or valve replacement (positive predictive value 67 %, 138 patients); an outcome cut-off, not a guideline severity class",
+    "Use the Doppler (continuity) orifice area, not a planimetered one, and the aortic area at the sinotubular junction",
+  ],
+  clinical: true,
+});
+
 /**
  * Mitral valve area by pressure half-time.
  *
@@ -218,6 +303,11 @@ export const mitralValveAreaPressureHalfTime: Calculation<"phtMs", "mvaCm2"> = d
   clinical: true,
 });
 
+const PHT_FROM_DT_CITATIONS: readonly Citation[] = [{
+  ...BAUMGARTNER_2009,
+  locator: "mitral stenosis, pressure half-time from the deceleration time (from memory)",
+}];
+
 /**
  * Pressure half-time from the deceleration time of the transmitral E wave.
  *
@@ -247,8 +337,10 @@ export const pressureHalfTimeFromDecelerationTime: Calculation<"decelerationTime
     outputs: { phtMs: PRESSURE_HALF_TIME },
     formula: ({ decelerationTimeMs }) => ({ phtMs: 0.29 * decelerationTimeMs }),
     formulaText: "PHT = 0.29·DT",
-    citations: [BAUMGARTNER_2009],
-    cautions: ["With a bimodal (non-linear) deceleration use the mid-diastolic slope"],
+    citations: PHT_FROM_DT_CITATIONS,
+    cautions: [
+      "With a bimodal (non-linear) deceleration use the mid-diastolic slope",
+    ],
     clinical: true,
   });
 

@@ -5,7 +5,7 @@
  * @module
  */
 import { defineCalculation } from "../core/calculation.ts";
-import type { Calculation } from "../core/types.ts";
+import type { Calculation, InputConstraint } from "../core/types.ts";
 import {
   APERTURE,
   BEAM_WIDTH,
@@ -87,6 +87,22 @@ export const lateralResolution: Calculation<
   ],
 });
 
+/** The Airy factor of the first zero of a uniform disc's far-field pattern (3.8317/π). */
+const AIRY_FIRST_ZERO = 1.22;
+
+/** sin θ = 1.22·λ/D needs D > 1.22·λ: a smaller disc has no far-field main lobe to measure. */
+const APERTURE_ABOVE_AIRY_LIMIT: InputConstraint<
+  "transmitFrequencyMHz" | "apertureMm" | "soundSpeedMps"
+> = {
+  inputs: ["transmitFrequencyMHz", "apertureMm", "soundSpeedMps"],
+  description:
+    "'apertureMm' > 1.22 wavelengths (1.22·'soundSpeedMps'/'transmitFrequencyMHz'), the smallest disc with a far-field main lobe",
+  holds: ({ transmitFrequencyMHz, apertureMm, soundSpeedMps }) =>
+    apertureMm >
+      AIRY_FIRST_ZERO *
+        wavelengthAndPeriod.formula({ transmitFrequencyMHz, soundSpeedMps }).wavelengthMm,
+};
+
 /**
  * Near-field (Fresnel zone) length and far-field divergence of an unfocused circular aperture.
  *
@@ -100,7 +116,8 @@ export const lateralResolution: Calculation<
  * 1540 m/s). Outputs: `nearFieldLengthCm`, `divergenceHalfAngleDeg`.
  *
  * @throws {RangeError} (through `evaluate`) for a frequency or aperture ≤ 0, or when the aperture
- * is smaller than 1.22 wavelengths (no far-field main lobe: the divergence is not finite).
+ * is not larger than 1.22 wavelengths (no far-field main lobe: no divergence angle exists), for
+ * instance a 10 mm disc at 0.049 MHz.
  *
  * @example A 10 mm disc at 5 MHz: near field about 8.1 cm
  * ```ts
@@ -133,9 +150,11 @@ export const nearFieldLength: Calculation<
     const { wavelengthMm } = wavelengthAndPeriod.formula({ transmitFrequencyMHz, soundSpeedMps });
     return {
       nearFieldLengthCm: apertureMm ** 2 / (4 * wavelengthMm) / 10,
-      divergenceHalfAngleDeg: (Math.asin((1.22 * wavelengthMm) / apertureMm) * 180) / Math.PI,
+      divergenceHalfAngleDeg: (Math.asin((AIRY_FIRST_ZERO * wavelengthMm) / apertureMm) * 180) /
+        Math.PI,
     };
   },
+  constraints: [APERTURE_ABOVE_AIRY_LIMIT],
   formulaText: "N = D² / (4λ); sin θ = 1.22·λ / D",
   citations: [{ ...KREMKAU, locator: "ch. 3 (near-zone length and far-zone divergence)" }, SZABO],
   cautions: [

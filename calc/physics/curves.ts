@@ -83,7 +83,7 @@ function checkSweep<I extends string>(
       list.forEach((f, i) => {
         const field = quantityField(TRANSMIT_FREQUENCY);
         const r = checkValue(`transmitFrequenciesMHz[${i}]`, field, f, { where });
-        issues.push(...r.issues);
+        for (const issue of r.issues) issues.push(issue);
         if (r.value !== undefined) frequencies.push(r.value);
       });
     }
@@ -91,9 +91,9 @@ function checkSweep<I extends string>(
     settings.transmitFrequenciesMHz = transmitFrequenciesMHz; // reported as unknown
   }
   const read = checkValue("steps", points, steps, { where });
-  issues.push(...read.issues);
+  for (const issue of read.issues) issues.push(issue);
   const checked = checkInputs(schema, settings);
-  issues.push(...checked.issues);
+  for (const issue of checked.issues) issues.push(issue);
   throwIfErrors(issues);
   return { values: checked.values as InputValues<I>, steps: read.value!, frequencies };
 }

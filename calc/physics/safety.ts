@@ -16,8 +16,10 @@ import { depthInput } from "./shared.ts";
 
 /**
  * Upper limit of the mechanical index in the FDA Track 3 output-display scheme (all uses except
- * ophthalmic), the usual regulatory ceiling for cardiac imaging (common practice, from memory):
- * the upper end of {@linkcode MECHANICAL_INDEX}'s typical range, where the number is written once.
+ * ophthalmic), the regulatory ceiling for cardiac imaging: FDA guidance "Marketing Clearance of
+ * Diagnostic Ultrasound Systems and Transducers", February 2023 revision (value as given by
+ * secondary summaries of the guidance; not verified against the guidance text). It is the upper
+ * end of {@linkcode MECHANICAL_INDEX}'s typical range, where the number is written once.
  *
  * @example An MI at the limit is 100 % of it
  * ```ts
@@ -42,9 +44,10 @@ export const MECHANICAL_INDEX_LIMIT: number = MECHANICAL_INDEX.typical!.max;
  */
 export const DERATING_DB_PER_CM_MHZ = 0.3;
 
-/** The caution every mechanical-index result carries: the ceiling, and that it was recalled. */
+/** The caution every mechanical-index result carries: the ceiling, where it comes from, and
+ * that it was not verified against the guidance text. */
 const MECHANICAL_INDEX_CEILING =
-  `Regulatory ceiling MI ${MECHANICAL_INDEX_LIMIT} (FDA Track 3, from memory); keep exposure as low as reasonably achievable (ALARA)`;
+  `Regulatory ceiling MI ${MECHANICAL_INDEX_LIMIT} (US FDA diagnostic ultrasound guidance, February 2023 revision, Track 3; value not verified against the guidance text); keep exposure as low as reasonably achievable (ALARA)`;
 
 const IEC_62359: Citation = {
   authors: "International Electrotechnical Commission",
@@ -73,13 +76,19 @@ const APFEL_HOLLAND: Citation = {
   doi: "10.1016/0301-5629(91)90125-G",
 };
 
-const FDA_2019: Citation = {
-  authors: "US Food and Drug Administration",
-  year: 2019,
+/** The current revision of the FDA guidance (checked: title, February 2023 date, final status
+ * and docket on the FDA guidance page; the June 27, 2019 issue had the same docket). The MI
+ * ceiling 1.9 of Track 3 agrees with secondary summaries of the guidance; its own table was not
+ * read here. */
+const FDA_2023: Citation = {
+  authors: "US Food and Drug Administration, Center for Devices and Radiological Health",
+  year: 2023,
   title:
-    "Marketing Clearance of Diagnostic Ultrasound Systems and Transducers: Guidance for Industry",
-  publication: "FDA, Silver Spring MD",
-  locator: "Track 3 acoustic output limits (mechanical index), from memory",
+    "Marketing Clearance of Diagnostic Ultrasound Systems and Transducers: Guidance for Industry and Food and Drug Administration Staff",
+  publication:
+    "FDA, Silver Spring MD, February 2023 (final guidance, docket FDA-2017-D-5372; revises the guidance of June 27, 2019)",
+  locator:
+    "Track 3 global maximum mechanical index 1.9 (value from secondary summaries; not verified against the guidance text)",
 };
 
 /**
@@ -147,7 +156,8 @@ export const deratedPressure: Calculation<
  * percent of the regulatory limit = 100 · MI / {@linkcode MECHANICAL_INDEX_LIMIT}.
  *
  * Source: Apfel RE, Holland CK. Ultrasound Med Biol 1991;17:179-185; AIUM/NEMA UD 3-2004; IEC
- * 62359:2017; FDA 2019 guidance (Track 3 limit, from memory).
+ * 62359:2017; FDA diagnostic ultrasound guidance, February 2023 revision (Track 3 limit 1.9, not
+ * verified against the guidance text).
  *
  * Inputs: `peakRarefactionalPressureMPa` (derated), `transmitFrequencyMHz` (acoustic working
  * frequency). Outputs: `mechanicalIndex`, `percentOfRegulatoryLimit`.
@@ -191,7 +201,7 @@ export const mechanicalIndex: Calculation<
     return { mechanicalIndex: mi, percentOfRegulatoryLimit: (100 * mi) / MECHANICAL_INDEX_LIMIT };
   },
   formulaText: `MI = p_r,derated / √f; share of the limit = 100·MI / ${MECHANICAL_INDEX_LIMIT} %`,
-  citations: [APFEL_HOLLAND, AIUM_NEMA_ODS, IEC_62359, FDA_2019],
+  citations: [APFEL_HOLLAND, AIUM_NEMA_ODS, IEC_62359, FDA_2023],
   cautions: [
     MECHANICAL_INDEX_CEILING,
     "The MI estimates the likelihood of inertial cavitation, not a threshold of harm; with contrast agents or gas bodies (lung, bowel) effects occur at lower values",

@@ -557,6 +557,83 @@ export const CROSS_SECTIONAL_AREA: Quantity = defineQuantity({
 });
 
 /**
+ * Cross-sectional area of the aorta at the sinotubular junction (a structural dimension that only
+ * the energy loss index uses, declared here with it): π·d²/4 of the STJ diameter.
+ *
+ * @example
+ * ```ts
+ * import { checkValue, quantityField, SINOTUBULAR_JUNCTION_AREA } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(checkValue("aa", quantityField(SINOTUBULAR_JUNCTION_AREA), "500 mm^2", { where: "Demo" }).value, 5);
+ * ```
+ */
+export const SINOTUBULAR_JUNCTION_AREA: Quantity = defineQuantity({
+  id: "sinotubularJunctionArea",
+  label: "Aortic area at the sinotubular junction",
+  symbol: "AA",
+  unit: "cm^2",
+  description:
+    "Cross-sectional area of the ascending aorta at the sinotubular junction, where the pressure recovered downstream of a stenotic aortic valve is complete",
+  valid: { min: 0, max: 20, minExclusive: true },
+  typical: { min: 3, max: 12 },
+  typicalPediatric: { min: 0.5, max: 8 },
+  resolution: 0.01,
+  headers: ["aa", "stj area"],
+  rangeNote:
+    "typical: STJ diameters of about 2.0 to 3.9 cm in adults (valid: the cross-sectional area's); common practice, no source",
+});
+
+/**
+ * Energy loss coefficient: the aortic valve effective orifice area adjusted for the pressure
+ * recovered in the ascending aorta.
+ *
+ * @example
+ * ```ts
+ * import { ENERGY_LOSS_COEFFICIENT } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(ENERGY_LOSS_COEFFICIENT.unit, "cm^2");
+ * ```
+ */
+export const ENERGY_LOSS_COEFFICIENT: Quantity = defineQuantity({
+  id: "energyLossCoefficient",
+  label: "Energy loss coefficient",
+  symbol: "ELCo",
+  unit: "cm^2",
+  description:
+    "Effective orifice area of a stenotic aortic valve adjusted for pressure recovery: EOA·AA/(AA − EOA)",
+  valid: { min: 0, max: Infinity, minExclusive: true, maxExclusive: true },
+  typical: { min: 0.3, max: 4 },
+  resolution: 0.01,
+  headers: ["elco"],
+  rangeNote:
+    "valid: any positive area (it exceeds the orifice area and grows without bound as the orifice nears the aortic area); typical: common practice, no source",
+});
+
+/**
+ * Energy loss index: the energy loss coefficient indexed to body surface area.
+ *
+ * @example
+ * ```ts
+ * import { ENERGY_LOSS_INDEX } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(ENERGY_LOSS_INDEX.unit, "cm^2/m^2");
+ * ```
+ */
+export const ENERGY_LOSS_INDEX: Quantity = defineQuantity({
+  id: "energyLossIndex",
+  label: "Energy loss index",
+  symbol: "ELI",
+  unit: "cm^2/m^2",
+  description: "Energy loss coefficient of a stenotic aortic valve per m² of body surface area",
+  valid: { min: 0, max: Infinity, minExclusive: true, maxExclusive: true },
+  typical: { min: 0.2, max: 2.5 },
+  resolution: 0.01,
+  headers: ["eli"],
+  rangeNote:
+    "valid: any positive value, as for the coefficient; typical: common practice, no source",
+});
+
+/**
  * Integral of the Doppler velocity over one ejection or filling period (stroke distance).
  *
  * @example
@@ -1041,7 +1118,7 @@ export const VALVE_AREA_ERROR: Quantity = defineQuantity({
   unit: "%",
   description:
     "Relative error of a computed valve area against the true area (positive: overestimated)",
-  valid: { min: -100, max: Infinity, minExclusive: true },
+  valid: { min: -100, max: Infinity, minExclusive: true, maxExclusive: true },
   typical: { min: -50, max: 50 },
   resolution: 0.1,
   rangeNote: "by definition (valid); common practice, no source (typical)",
@@ -1081,6 +1158,9 @@ export const FLOW_QUANTITIES: readonly Quantity[] = [
   IVC_COLLAPSE,
   LVOT_DIAMETER_ERROR,
   CROSS_SECTIONAL_AREA,
+  SINOTUBULAR_JUNCTION_AREA,
+  ENERGY_LOSS_COEFFICIENT,
+  ENERGY_LOSS_INDEX,
   VELOCITY_TIME_INTEGRAL,
   LVOT_VTI,
   RVOT_VTI,

@@ -10,12 +10,14 @@ import { STRUCTURE_QUANTITIES } from "./structure.ts";
 import { FLOW_QUANTITIES } from "./flow.ts";
 import { ULTRASOUND_QUANTITIES } from "./ultrasound.ts";
 import { SCORE_QUANTITIES } from "./scores.ts";
+import { UNCERTAINTY_QUANTITIES } from "./uncertainty.ts";
 
 export * from "./body.ts";
 export * from "./structure.ts";
 export * from "./flow.ts";
 export * from "./ultrasound.ts";
 export * from "./scores.ts";
+export * from "./uncertainty.ts";
 
 /**
  * Every quantity the package declares, by id (family members derive further quantities from
@@ -35,5 +37,6 @@ export const QUANTITIES: ReadonlyMap<string, Quantity> = new Map(
     ...FLOW_QUANTITIES,
     ...ULTRASOUND_QUANTITIES,
     ...SCORE_QUANTITIES,
+    ...UNCERTAINTY_QUANTITIES,
   ].map((q) => [q.id, q]),
 );

@@ -159,6 +159,57 @@ export const LV_END_SYSTOLIC_VOLUME: Quantity = defineQuantity({
   rangeNote: NOTE,
 });
 
+/** Where the valid ranges of the indexed LV volumes come from. */
+const LV_VOLUME_INDEX_NOTE =
+  "valid: up to 1000 mL/m², half the 2000 mL limit of the volume, as for the LV mass and LA volume indices (a large volume over a small body is not a heart that exists); common practice, no source";
+
+/**
+ * LV end-diastolic volume indexed to body surface area (the output of
+ * `indexedToBsa(LV_END_DIASTOLIC_VOLUME)`).
+ *
+ * @example
+ * ```ts
+ * import { formatRange, LV_END_DIASTOLIC_VOLUME_INDEX } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * // no index of a positive volume is 0 or unbounded
+ * assert.equal(formatRange(LV_END_DIASTOLIC_VOLUME_INDEX.valid, LV_END_DIASTOLIC_VOLUME_INDEX.unit), "(0, 1000] mL/m²");
+ * ```
+ */
+export const LV_END_DIASTOLIC_VOLUME_INDEX: Quantity = defineQuantity({
+  id: "lvEndDiastolicVolumeIndex",
+  label: "LV end-diastolic volume indexed to BSA",
+  symbol: "EDVi",
+  unit: "mL/m^2",
+  description: "LV end-diastolic volume per m² of body surface area",
+  valid: { min: 0, max: 1000, minExclusive: true },
+  resolution: 1,
+  headers: ["lvedvi", "edvi"],
+  rangeNote: LV_VOLUME_INDEX_NOTE,
+});
+
+/**
+ * LV end-systolic volume indexed to body surface area (the output of
+ * `indexedToBsa(LV_END_SYSTOLIC_VOLUME)`).
+ *
+ * @example
+ * ```ts
+ * import { formatRange, LV_END_SYSTOLIC_VOLUME_INDEX } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(formatRange(LV_END_SYSTOLIC_VOLUME_INDEX.valid, LV_END_SYSTOLIC_VOLUME_INDEX.unit), "[0, 1000] mL/m²");
+ * ```
+ */
+export const LV_END_SYSTOLIC_VOLUME_INDEX: Quantity = defineQuantity({
+  id: "lvEndSystolicVolumeIndex",
+  label: "LV end-systolic volume indexed to BSA",
+  symbol: "ESVi",
+  unit: "mL/m^2",
+  description: "LV end-systolic volume per m² of body surface area",
+  valid: { min: 0, max: 1000 },
+  resolution: 1,
+  headers: ["lvesvi", "esvi"],
+  rangeNote: LV_VOLUME_INDEX_NOTE,
+});
+
 /**
  * LV ejection fraction.
  *
@@ -1090,6 +1141,8 @@ export const STRUCTURE_QUANTITIES: readonly Quantity[] = [
   POSTERIOR_WALL_THICKNESS,
   LV_END_DIASTOLIC_VOLUME,
   LV_END_SYSTOLIC_VOLUME,
+  LV_END_DIASTOLIC_VOLUME_INDEX,
+  LV_END_SYSTOLIC_VOLUME_INDEX,
   EJECTION_FRACTION,
   LV_MASS,
   LV_MASS_INDEX,

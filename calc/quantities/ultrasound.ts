@@ -908,8 +908,9 @@ export const PEAK_RAREFACTIONAL_PRESSURE: Quantity = defineQuantity({
 
 /**
  * Mechanical index: the output-display index of the likelihood of inertial cavitation. The upper
- * end of its typical range is the regulatory ceiling (FDA Track 3, from memory), the one place
- * that number is written.
+ * end of its typical range is the regulatory ceiling of 1.9 (FDA guidance "Marketing Clearance of
+ * Diagnostic Ultrasound Systems and Transducers", February 2023; the value confirmed in secondary
+ * summaries, not verified against the guidance text), the one place that number is written.
  *
  * @example Above the regulatory ceiling is flagged as atypical
  * ```ts
@@ -928,7 +929,8 @@ export const MECHANICAL_INDEX: Quantity = defineQuantity({
   typical: { min: 0, max: 1.9, minExclusive: true },
   resolution: 0.01,
   headers: ["mi"],
-  rangeNote: "typical upper end: the FDA Track 3 ceiling of 1.9 (common practice, from memory)",
+  rangeNote:
+    "typical upper end: the FDA ceiling of 1.9 (2023 guidance on diagnostic ultrasound; value not verified against the guidance text)",
 });
 
 /**
@@ -946,7 +948,7 @@ export const MECHANICAL_INDEX_OF_LIMIT: Quantity = defineQuantity({
   label: "Mechanical index, share of the limit",
   symbol: "MI/MI_max",
   unit: "%",
-  description: "Mechanical index as a percentage of the regulatory ceiling (FDA Track 3)",
+  description: "Mechanical index as a percentage of the regulatory ceiling (FDA 2023 guidance)",
   valid: POSITIVE,
   typical: { min: 0, max: 100, minExclusive: true },
   resolution: 1,

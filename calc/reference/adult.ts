@@ -80,13 +80,22 @@ export interface AdultReferenceRow {
   readonly note?: string;
 }
 
+/** The RV tables, named by content: their numbers in the guideline (recalled as 8 and 9) could
+ * not be checked against a copy of it, so none is claimed. The values agree with secondary
+ * summaries of Lang 2015 (RV basal diameter 33 ± 4 mm, 25–41; TAPSE 24 ± 3.5 mm, < 17). */
+const RV_SIZE_TABLE =
+  "normal values for RV chamber size (table number not verified against the printed guideline)";
+const RV_FUNCTION_TABLE =
+  "normal values for RV function (table number not verified against the printed guideline)";
+
 const row = (r: Omit<AdultReferenceRow, "source" | "fromMemory">): AdultReferenceRow =>
   Object.freeze({ ...r, source: LANG_2015, fromMemory: true });
 
 /**
  * The 2015 ASE/EACVI adult reference rows (from memory of Lang et al. 2015, Tables 1, 2, 6 and
- * the RV tables): LV diameters, indexed volumes, EF with partitions, LV mass index, RWT, LA
- * volume index with partitions, RV basal diameter, TAPSE.
+ * the tables of normal RV size and function, whose numbers are not claimed): LV diameters, indexed
+ * volumes, EF with partitions, LV mass index, RWT, LA volume index with partitions, RV basal
+ * diameter, TAPSE.
  *
  * @example
  * ```ts
@@ -278,7 +287,8 @@ export const ADULT_REFERENCE_LANG_2015: readonly AdultReferenceRow[] = Object.fr
     note:
       "The lower limit for women (0.22) is from memory and less certain than the shared upper limit 0.42",
   }),
-  // RV size and function tables: one range for both sexes, upper or lower abnormality threshold
+  // RV size and function tables: one range for both sexes, upper or lower abnormality threshold.
+  // Rudski LG et al. 2010 is the earlier ASE right-heart guideline; its thresholds are noted.
   row({
     parameter: "rvBasalDiameter",
     quantity: RV_BASAL_DIAMETER,
@@ -288,7 +298,9 @@ export const ADULT_REFERENCE_LANG_2015: readonly AdultReferenceRow[] = Object.fr
     mean: 33,
     sd: 4,
     normal: { lower: 25, upper: 41 },
-    table: "Table 8 (RV chamber size; table number from memory)",
+    table: RV_SIZE_TABLE,
+    note:
+      "Rudski 2010 (the earlier ASE right-heart guideline) gave > 42 mm as dilated (from memory)",
   }),
   row({
     parameter: "tapse",
@@ -299,8 +311,9 @@ export const ADULT_REFERENCE_LANG_2015: readonly AdultReferenceRow[] = Object.fr
     mean: 24,
     sd: 3.5,
     normal: { lower: 17 },
-    table: "Table 9 (RV function; table number from memory)",
-    note: "The guideline gives TAPSE < 17 mm as the abnormality threshold; no upper limit",
+    table: RV_FUNCTION_TABLE,
+    note:
+      "The guideline gives TAPSE < 17 mm as the abnormality threshold; no upper limit. Rudski 2010 (the earlier ASE right-heart guideline) gave < 16 mm (from memory; also in a secondary summary of RV reference limits)",
   }),
 ]);
 
@@ -354,7 +367,8 @@ const tables = new Map<AdultReferenceRow, SeverityTable>();
 
 /**
  * The severity table of a reference row, in the quantity's unit: printed integer bands become
- * contiguous cut points. For a "high" partition (e.g. LA volume index normal 16–34, mild 35–41,
+ * contiguous cut points, and thresholds printed in another unit (LV and RV diameters in mm) are
+ * written in the quantity's unit (cm), the unit every display appends to them, with a note. For a "high" partition (e.g. LA volume index normal 16–34, mild 35–41,
  * moderate 42–48, severe > 48) a value above 34 and up to 41 is mild, above 41 up to 48
  * moderate, above 48 severe; for a "low" partition (e.g. LVEF in men: normal 52–72, mild 41–51,
  * moderate 30–40, severe < 30) a value below 52 and at least 41 is mild, below 41 and at least 30
@@ -379,6 +393,8 @@ export function adultSeverityTable(row: AdultReferenceRow): SeverityTable {
   const made = tables.get(row);
   if (made) return made;
   const at = toQuantityUnit(row);
+  // a threshold as the display shows it: in the quantity's unit, which the display appends
+  const shown = (printed: number) => String(Number(at(printed).toPrecision(12)));
   const citation: Citation = { ...row.source, locator: `${row.table}, ${row.method}` };
   const band = (grade: string, range: ValueRange, printed: string): SeverityBand => ({
     grade,
@@ -397,10 +413,10 @@ export function adultSeverityTable(row: AdultReferenceRow): SeverityTable {
     ...(upper === undefined ? { maxExclusive: true } : {}),
   };
   const normalPrinted = lower !== undefined && upper !== undefined
-    ? `${lower}–${upper}`
+    ? `${shown(lower)}–${shown(upper)}`
     : lower !== undefined
-    ? `≥ ${lower}`
-    : `≤ ${upper}`;
+    ? `≥ ${shown(lower)}`
+    : `≤ ${shown(upper!)}`;
   if (p?.direction === "low" && lower !== undefined) {
     bands.push(
       band("severely abnormal", {
@@ -408,16 +424,16 @@ export function adultSeverityTable(row: AdultReferenceRow): SeverityTable {
         max: at(p.severe),
         minExclusive: true,
         maxExclusive: true,
-      }, `< ${p.severe}`),
+      }, `< ${shown(p.severe)}`),
       band("moderately abnormal", {
         min: at(p.moderate[0]),
         max: at(p.mild[0]),
         maxExclusive: true,
-      }, `${p.moderate[0]}–${p.moderate[1]}`),
+      }, `${shown(p.moderate[0])}–${shown(p.moderate[1])}`),
       band(
         "mildly abnormal",
         { min: at(p.mild[0]), max: at(lower), maxExclusive: true },
-        `${p.mild[0]}–${p.mild[1]}`,
+        `${shown(p.mild[0])}–${shown(p.mild[1])}`,
       ),
     );
   } else if (lower !== undefined) {
@@ -426,7 +442,7 @@ export function adultSeverityTable(row: AdultReferenceRow): SeverityTable {
       band(
         grade,
         { min: -Infinity, max: at(lower), minExclusive: true, maxExclusive: true },
-        `< ${lower}`,
+        `< ${shown(lower)}`,
       ),
     );
   }
@@ -436,19 +452,19 @@ export function adultSeverityTable(row: AdultReferenceRow): SeverityTable {
       band(
         "mildly abnormal",
         { min: at(upper), max: at(p.mild[1]), minExclusive: true },
-        `${p.mild[0]}–${p.mild[1]}`,
+        `${shown(p.mild[0])}–${shown(p.mild[1])}`,
       ),
       band("moderately abnormal", {
         min: at(p.mild[1]),
         max: at(p.moderate[1]),
         minExclusive: true,
-      }, `${p.moderate[0]}–${p.moderate[1]}`),
+      }, `${shown(p.moderate[0])}–${shown(p.moderate[1])}`),
       band("severely abnormal", {
         min: at(p.severe),
         max: Infinity,
         minExclusive: true,
         maxExclusive: true,
-      }, `> ${p.severe}`),
+      }, `> ${shown(p.severe)}`),
     );
   } else if (upper !== undefined) {
     const grade = lower === undefined && !p ? "abnormal" : "above normal range";
@@ -456,7 +472,7 @@ export function adultSeverityTable(row: AdultReferenceRow): SeverityTable {
       band(
         grade,
         { min: at(upper), max: Infinity, minExclusive: true, maxExclusive: true },
-        `> ${upper}`,
+        `> ${shown(upper)}`,
       ),
     );
   }
@@ -469,7 +485,9 @@ export function adultSeverityTable(row: AdultReferenceRow): SeverityTable {
     bands,
     notes: [
       ...(row.printedUnit !== row.quantity.unit
-        ? [`Limits printed in ${row.printedUnit}, applied in ${row.quantity.unit}`]
+        ? [
+          `Limits printed in ${row.printedUnit} in the guideline, shown and applied in ${row.quantity.unit}`,
+        ]
         : []),
       ...(row.note ? [row.note] : []),
     ],

@@ -92,8 +92,8 @@ const zQuantities = new Map<string, Quantity>();
 
 /**
  * The Z-score of a model's measurement as a quantity: "Aortic root at the sinuses Z-score
- * (Lopez 2017)", dimensionless, with a " — coefficients not verified" mark where the model's
- * provenance says so.
+ * (Lopez 2017)", dimensionless (the "coefficients not verified" mark, where the model's provenance
+ * says so, travels as a caution of every result, table and chart that uses the model).
  *
  * @example
  * ```ts

@@ -355,10 +355,14 @@ export const LOPEZ_2017: Citation = Object.freeze({
   doi: "10.1161/CIRCIMAGING.117.006979",
 });
 
+/** What was checked: the Z form X/BSA^α and the population (healthy non-obese children ≤ 18
+ * years, BSA by Haycock) against the paper's abstract; all 14 (α, M, S) against a second,
+ * independent public listing of the PHN coefficients. Not checked: the paper's own table (no
+ * public copy of it was found), so every result says "not verified". */
 const PHN_PROVENANCE =
-  "Coefficients (α, M, S) transcribed from a secondary listing attributed to Lopez et al. 2017; not re-checked against the paper's table";
+  "Coefficients (α, M, S) transcribed from a secondary listing attributed to Lopez et al. 2017; all 14 agree with a second, independent secondary listing, but they are not verified against the paper's table";
 const PHN_BSA_RANGE_NOTE =
-  "Assumed span of the PHN reference population (healthy non-obese children 0–18 years, BSA by Haycock); the paper's exact BSA range was not available here: verify before relying on the out-of-range flag";
+  "Assumed span of the PHN reference population (healthy non-obese children ≤ 18 years, BSA by Haycock, per the paper's abstract); the paper's exact BSA range was not available here: verify before relying on the out-of-range flag";
 const PHN_BSA_RANGE: ValueRange = { min: 0.15, max: 2.4 };
 
 /** The quantity each PHN model measures. */
@@ -410,7 +414,8 @@ function phn(
  * The Pediatric Heart Network 2017 Z-score models (Lopez et al., Circ Cardiovasc Imaging
  * 2017;10:e006979): Z = (X / BSA^α − M) / S with BSA by Haycock; X in cm unless stated
  * (LV end-diastolic volume in mL, LV mass in g). Coefficients transcribed from a secondary
- * listing and not yet verified against the paper: every result says so.
+ * listing and cross-checked against a second, independent listing, but not verified against the
+ * paper's table: every result, table, CSV and doc page that uses them says so.
  *
  * @example
  * ```ts

@@ -9,7 +9,6 @@ import {
 } from "../../calc/agreement/mod.ts";
 import { readTable } from "../../calc/table/mod.ts";
 import { methodValidationHtml, methodValidationMarkdown } from "../../display/method_validation.ts";
-import { methodValidationChart } from "../../plot/agreement.ts";
 import { InputRangeError, InputTypeError, renderIssue } from "../../calc/core/mod.ts";
 import {
   fleissExampleCsv,
@@ -371,7 +370,15 @@ Deno.test("a table of 400 000 readings is analysed without a stack overflow", ()
     /\| Passing–Bablok regression \| not computed \| – \| Passing-Bablok regression: expected at most 10000 pairs/,
   );
   assert.match(methodValidationHtml(r), /^<!doctype html>/);
-  for (const figure of r.figures) assert.ok(methodValidationChart(r, figure).spec);
+  // a chart of more points than a report draws is not planned, and the report says so
+  assert.deepEqual(r.figures, []);
+  assert.ok(r.cautions.includes(
+    "The observer plot is not drawn: it would have 400,000 points, more than the 20,000 a chart of this report draws; every statistic uses every reading.",
+  ));
+  assert.match(
+    methodValidationMarkdown(r),
+    /The Bland–Altman plot of B − A is not drawn: it would have 200,000 points/,
+  );
   // Passing–Bablok would sort n(n − 1)/2 ≈ 2·10¹⁰ slopes: refused with the reason
   assert.deepEqual(c.passingBablok, {
     status: "not computed",
@@ -400,4 +407,55 @@ Deno.test("chart file names derived from observer names are unique and safe", ()
     "bland_altman_observer-6_vs_reader-a.svg",
     "bland_altman_etc_vs_reader-a.svg",
   ]);
+});
+
+/** An invented long table: `subjects` subjects read by each observer `replicates` times, values
+ * from a fixed linear congruential stream (structure only: no statistic is checked on it). */
+function inventedTable(subjects: number, observers: readonly string[], replicates = 1): string {
+  let state = 7;
+  const next = () => (state = (Math.imul(state, 1664525) + 1013904223) >>> 0) / 2 ** 32;
+  const lines = ["patient,observer,replicate,lvef percent"];
+  for (let s = 1; s <= subjects; s++) {
+    const truth = 30 + 40 * next();
+    for (const o of observers) {
+      for (let r = 1; r <= replicates; r++) {
+        lines.push(`P${s},${o},${r},${(truth + 4 * next() - 2).toFixed(1)}`);
+      }
+    }
+  }
+  return lines.join("\n") + "\n";
+}
+
+Deno.test("observer names that reduce to one file name get distinct chart files", () => {
+  // "Dr A-B" and "Dr A B" both reduce to "dr-a-b"; the reference is the first, "Ref"
+  const csv = inventedTable(5, ["Ref", "Dr A-B", "Dr A B", "dr a b 2"]);
+  const report = methodValidation(readTable(csv, { source: "names.csv" }));
+  const files = report.figures.map((f) => f.file);
+  assert.equal(new Set(files).size, files.length);
+  assert.deepEqual(files.filter((f) => f.startsWith("bland_altman_")), [
+    "bland_altman_dr-a-b_vs_ref.svg",
+    "bland_altman_dr-a-b-2_vs_ref.svg",
+    "bland_altman_dr-a-b-2-2_vs_ref.svg",
+  ]);
+  for (const f of files) assert.match(f, /^[a-z0-9_-]+\.svg$/);
+});
+
+Deno.test("Markdown and HTML reports carry no markup from subject or observer names", () => {
+  const hostile = ["<script>alert(1)</script>", "<img src=x onerror=alert(1)>"];
+  const csv = ["patient,observer,lvef percent"];
+  for (let s = 0; s < 4; s++) {
+    for (const [k, o] of ["A", hostile[0]!].entries()) {
+      csv.push(`"${s === 0 ? hostile[1] : `P${s}`}","${o}",${50 + s * 3 + k}`);
+    }
+  }
+  // a subject read by one observer only: listed as left out of the ICC, by name
+  csv.push(`"${hostile[1]}2",A,50`);
+  const report = methodValidation(readTable(csv.join("\n"), { source: "x.csv" }));
+  const md = methodValidationMarkdown(report);
+  assert.match(md, /left out as incomplete: \\<img src=x onerror=alert\(1\)>2/);
+  const html = methodValidationHtml(report);
+  // CommonMark: "\<" is a literal "<", so no tag opens; HTML: &lt; is text
+  for (const text of [md, html]) assert.doesNotMatch(text, /(^|[^\\])<(script|img)/m);
+  assert.match(md, /\\<script>alert\(1\)\\<\/script>/);
+  assert.match(html, /&lt;script&gt;alert\(1\)&lt;\/script&gt;/);
 });

@@ -27,7 +27,7 @@ Deno.test("the Bland–Altman chart draws the result's own bias, limits and inte
     methodNames: ["Wright", "mini"],
   });
   const chart = blandAltmanChart(r);
-  const [bands, lines, points] = chart.spec.layer as Layer[];
+  const [bands, lines, points] = chart.content.layer as Layer[];
   // charts compute nothing: every drawn statistic is the result's, unchanged
   assert.deepEqual(bands!.data.values.map((b) => [b.lower, b.upper]), [
     [r.biasCi.lower, r.biasCi.upper],
@@ -42,7 +42,7 @@ Deno.test("the Bland–Altman chart draws the result's own bias, limits and inte
   assert.equal(points!.data.values.length, 17);
   assert.equal(bands!.encoding.y!.title, "Peak expiratory flow: Wright − mini (L/min)");
   assert.equal(points!.encoding.x!.title, "Peak expiratory flow: mean of Wright and mini (L/min)");
-  const approximate = blandAltmanChart(r, { bands: "approximate" }).spec.layer as Layer[];
+  const approximate = blandAltmanChart(r, { bands: "approximate" }).content.layer as Layer[];
   assert.equal(approximate[0]!.data.values[1]!.lower, r.lowerLimit.approximateCi.lower);
   const svg = await chart.toSVG();
   assert.match(svg, /Peak expiratory flow: Wright − mini \(L\/min\)/);
@@ -64,12 +64,12 @@ Deno.test("axis titles come from the quantity's label and unit, never a code ide
   const scatter = methodComparisonChart([40, 50, 60], [41, 52, 59], [], {
     quantity: EJECTION_FRACTION,
     methodNames: ["manual", "auto"],
-  }).spec.layer as Layer[];
+  }).content.layer as Layer[];
   assert.equal(scatter[0]!.encoding.x!.title, "LV ejection fraction: manual (%)");
   assert.equal(scatter[0]!.encoding.y!.title, "LV ejection fraction: auto (%)");
   const dots = observerChart([{ subject: "P1", observer: "A", value: 50 }], {
     quantity: statedQuantity({ label: "Jet width", unit: "mm" }),
-  }).spec as { encoding: Record<string, { title?: string }> };
+  }).content as { encoding: Record<string, { title?: string }> };
   assert.equal(dots.encoding.y!.title, "Jet width (mm)");
   assert.throws(
     () => methodValidationChart(report, { kind: "comparison", comparison: 9, file: "x.svg" }),
@@ -95,7 +95,7 @@ Deno.test("the method-comparison chart finds its extent by a loop (200 000 point
   const x = Array.from({ length: n }, (_, i) => 20 + (i % 600) / 10);
   const y = x.map((v, i) => v + ((i % 7) - 3) / 10);
   const layers = methodComparisonChart(x, y, [{ name: "fit", slope: 1, intercept: 0 }])
-    .spec.layer as Layer[];
+    .content.layer as Layer[];
   // the identity line spans both series: min 20 − 0.3 = 19.7 and max 79.9 + 0.3 = 80.2 (y at
   // i ≡ 0 mod 4200 and i ≡ 599 mod 600, 6 mod 7), by construction
   const ends = layers[0]!.data.values.slice(0, 2).map((p) => p.x as number);

@@ -73,7 +73,8 @@ Deno.test("families: every documented member is listed, made once, and made agai
   assert.equal(rebuild(CATALOG, indexedToBsa(LV_MASS).recipe), indexedToBsa(LV_MASS));
   assert.throws(() => rebuild(CATALOG, { kind: "family", family: "nope", parameter: 1 }), {
     name: "TypeError",
-    message: /family 'nope' is not registered; expected one of indexedToBsa, zScore, got 'nope'/,
+    message:
+      /family 'nope' is not registered; expected one of indexedToBsa, zScore, atTrueSoundSpeed, got 'nope'/,
   });
   assert.throws(() => rebuild(CATALOG, { kind: "local", why: "made in a test" }), {
     name: "TypeError",

@@ -8,6 +8,8 @@ import {
   MITRAL_REGURGITATION_2017,
   normal,
   pisaFlowRate,
+  pisaFlowRateAliasingCorrected,
+  pisaMitralValveArea,
   pisaRegurgitation,
   propagate,
   regurgitantFraction,
@@ -119,6 +121,25 @@ Deno.test("inconsistent volumes are refused, naming both", () => {
       name: "RangeError",
       message:
         "Regurgitant volume and fraction (volumetric): expected 'forwardStrokeVolumeMl' <= 'totalStrokeVolumeMl', got forwardStrokeVolumeMl = 120 mL, totalStrokeVolumeMl = 70 mL",
+    },
+  );
+  // issue 13: a regurgitant volume of 150 mL with a stroke volume of 60 mL would be RF 250 %
+  assert.throws(
+    () => evaluate(regurgitantFraction, { regurgitantVolumeMl: 150, totalStrokeVolumeMl: 60 }),
+    {
+      name: "RangeError",
+      message:
+        "Regurgitant fraction: expected 'regurgitantVolumeMl' <= 'totalStrokeVolumeMl', got regurgitantVolumeMl = 150 mL, totalStrokeVolumeMl = 60 mL",
+    },
+  );
+  // issue 13: total 60 mL < forward 100 mL would be RVol −40 mL and RF −67 %
+  assert.throws(
+    () =>
+      evaluate(volumetricRegurgitation, { totalStrokeVolumeMl: 60, forwardStrokeVolumeMl: 100 }),
+    {
+      name: "RangeError",
+      message:
+        "Regurgitant volume and fraction (volumetric): expected 'forwardStrokeVolumeMl' <= 'totalStrokeVolumeMl', got forwardStrokeVolumeMl = 100 mL, totalStrokeVolumeMl = 60 mL",
     },
   );
   assert.throws(
@@ -300,4 +321,100 @@ Deno.test("PISA radius uncertainty is squared into EROA and graded", () => {
   ).probabilities.find((x) => x.grade === "severe")!.probability;
   const rStar = Math.sqrt((0.4 * 500) / (2 * Math.PI * 40));
   close(pSevere, 1 - normalCdf(rStar, 1.0, 0.05), 0.003, "P(severe MR)");
+});
+
+Deno.test("PISA flow rate with the aliasing-velocity correction Q·Vmax/(Vmax − Va)", () => {
+  // Hand computation of the published correction (Zoghbi 2017, PISA for tricuspid regurgitation,
+  // from memory): r = 1 cm, Va = 40 cm/s, α = 180° → 2π·1²·40 = 80π mL/s; a low-velocity jet
+  // of 2 m/s gives the factor 200/(200 − 40) = 1.25 → 100π = 314.16 mL/s
+  const tr = evaluate(pisaFlowRateAliasingCorrected, {
+    radiusCm: 1,
+    aliasingVelocityCmPerS: 40,
+    regurgitantPeakVelocity: 2,
+  });
+  close(tr.outputs.flowRateMlPerS, 100 * Math.PI, 1e-9, "TR flow");
+  // a 5 m/s mitral jet: factor 500/460 = 1.08696, so Va/Vmax = 8 % changes the flow by 8.7 %
+  const mr = evaluate(pisaFlowRateAliasingCorrected, {
+    radiusCm: 1,
+    aliasingVelocityCmPerS: 40,
+    regurgitantPeakVelocity: 5,
+  });
+  close(mr.outputs.flowRateMlPerS, 80 * Math.PI * 500 / 460, 1e-9, "MR flow");
+  // the uncorrected flow is the same formula without the factor (one formula, written once)
+  const plain = evaluate(pisaFlowRate, { radiusCm: 1, aliasingVelocityCmPerS: 40 });
+  close(mr.outputs.flowRateMlPerS / plain.outputs.flowRateMlPerS, 500 / 460, 1e-12, "factor");
+  // the wall angle applies as in the uncorrected method (α/180, Pu 1995): 120° → 2/3
+  const funnel = evaluate(pisaFlowRateAliasingCorrected, {
+    radiusCm: 1,
+    aliasingVelocityCmPerS: 40,
+    wallAngleDeg: 120,
+    regurgitantPeakVelocity: 2,
+  });
+  close(funnel.outputs.flowRateMlPerS, 100 * Math.PI * 2 / 3, 1e-9, "funnel");
+  // an aliasing velocity at or above the jet velocity has no meaning (flow accelerates toward
+  // the orifice, so Va < Vmax): refused, naming both
+  assert.throws(
+    () =>
+      evaluate(pisaFlowRateAliasingCorrected, {
+        radiusCm: 1,
+        aliasingVelocityCmPerS: 150,
+        regurgitantPeakVelocity: 1.5,
+      }),
+    {
+      name: "RangeError",
+      message:
+        "PISA flow rate corrected for the aliasing velocity: expected 'aliasingVelocityCmPerS' < 'regurgitantPeakVelocity' (compared in the same unit: the flow accelerates toward the orifice), got aliasingVelocityCmPerS = 150 cm/s, regurgitantPeakVelocity = 1.5 m/s",
+    },
+  );
+  // the source of the correction is cited from memory, and the result says so
+  assert.ok(tr.cautions.some((c) => /Zoghbi 2017.*from memory/.test(c)), tr.cautions.join("; "));
+});
+
+Deno.test("mitral valve area by PISA: 2πr²·Va/Vpeak·α/180", () => {
+  // Hand computation of the published formula (Rodriguez 1993; Baumgartner 2009, from memory):
+  // r = 1 cm, Va = 40 cm/s, Vpeak = 1.6 m/s, α = 120° → 2π·1·40/160·(120/180) = π/3 cm²
+  const r = evaluate(pisaMitralValveArea, {
+    radiusCm: 1,
+    aliasingVelocityCmPerS: 40,
+    wallAngleDeg: 120,
+    mitralPeakVelocity: 1.6,
+  });
+  close(r.outputs.mvaCm2, Math.PI / 3, 1e-12, "MVA");
+  // r = 0.8 cm, Va = 35 cm/s, Vpeak = 2.2 m/s, α = 100° → 2π·0.64·35/220·(100/180) = 0.35542 cm²
+  const small = evaluate(pisaMitralValveArea, {
+    radiusCm: 0.8,
+    aliasingVelocityCmPerS: 35,
+    wallAngleDeg: 100,
+    mitralPeakVelocity: 2.2,
+  });
+  close(small.outputs.mvaCm2, 0.35542, 1e-5, "small MVA");
+  // the funnel angle is measured, never assumed: no default
+  assert.throws(
+    () =>
+      evaluate(pisaMitralValveArea, {
+        radiusCm: 1,
+        aliasingVelocityCmPerS: 40,
+        mitralPeakVelocity: 1.6,
+      } as never),
+    {
+      name: "TypeError",
+      message:
+        "Mitral valve area by PISA: missing input 'wallAngleDeg' (Funnel angle of the mitral leaflets): expected a value in (0, 360]°, got nothing",
+    },
+  );
+  assert.throws(
+    () =>
+      evaluate(pisaMitralValveArea, {
+        radiusCm: 1,
+        aliasingVelocityCmPerS: 200,
+        wallAngleDeg: 120,
+        mitralPeakVelocity: 1.6,
+      }),
+    {
+      name: "RangeError",
+      message:
+        "Mitral valve area by PISA: expected 'aliasingVelocityCmPerS' < 'mitralPeakVelocity' (compared in the same unit: the flow accelerates toward the orifice), got aliasingVelocityCmPerS = 200 cm/s, mitralPeakVelocity = 1.6 m/s",
+    },
+  );
+  assert.ok(r.cautions.some((c) => /Rodriguez 1993.*from memory/.test(c)), r.cautions.join("; "));
 });

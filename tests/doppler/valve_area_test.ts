@@ -5,6 +5,7 @@ import {
   continuityValveAreaPeakVelocity,
   crossSectionalArea,
   dimensionlessIndex,
+  energyLossIndex,
   evaluate,
   indexedToBsa,
   indexedValveArea,
@@ -142,4 +143,36 @@ Deno.test("LVOT diameter error is squared into area and valve area (GUM relative
   // the diameter dominates the budget: share 0.01/0.016817 = 59 % (hand-checkable)
   const share = r.outputs.avaCm2.budget.find((b) => b.source === "lvotDiameterCm")!.share;
   close(share, 0.01 / expected ** 2, 1e-4, "diameter share");
+});
+
+Deno.test("energy loss index: (EOA·AA/(AA − EOA))/BSA", () => {
+  // Hand computation of the published formula (Garcia D et al., Circulation 2000;101:765,
+  // abstract: the coefficient (EOA×AA)/(AA−EOA), indexed to BSA): EOA 0.8 cm², AA 4 cm², BSA
+  // 2 m² → ELCo = 3.2/3.2 = 1.0 cm², ELI = 0.5 cm²/m²
+  const r = evaluate(energyLossIndex, { avaCm2: 0.8, aorticAreaCm2: 4, bsaM2: 2 });
+  close(r.outputs.energyLossCoefficientCm2, 1, 1e-12, "ELCo");
+  close(r.outputs.energyLossIndex, 0.5, 1e-12, "ELI");
+  // STJ diameter 2.5 cm → AA = π·2.5²/4 = 4.9087 cm²; EOA 1.0 cm², BSA 1.8 m² →
+  // ELCo = 4.9087/3.9087 = 1.25584 cm², ELI = 0.69769 cm²/m² (hand computation)
+  const aa = evaluate(crossSectionalArea, { diameterCm: 2.5 }).outputs.areaCm2;
+  const s = evaluate(energyLossIndex, { avaCm2: 1, aorticAreaCm2: aa, bsaM2: 1.8 });
+  close(s.outputs.energyLossCoefficientCm2, 1.25584, 1e-5, "ELCo small aorta");
+  close(s.outputs.energyLossIndex, 0.69769, 1e-5, "ELI small aorta");
+  // pressure recovery shrinks as the aorta widens: ELCo → EOA as AA → ∞ (limit of the formula)
+  const wide = evaluate(energyLossIndex, { avaCm2: 1, aorticAreaCm2: 20, bsaM2: 1.8 });
+  assert.ok(wide.outputs.energyLossCoefficientCm2 > 1);
+  assert.ok(wide.outputs.energyLossCoefficientCm2 < s.outputs.energyLossCoefficientCm2);
+  close(wide.outputs.energyLossCoefficientCm2, 20 / 19, 1e-12, "wide aorta");
+  // the published cut-off (Garcia 2000 abstract: ELI ≤ 0.52 cm²/m² best predicted death or valve
+  // replacement) travels with the result as a caution, not as a grade
+  assert.ok(r.cautions.some((c) => /0\.52 cm²\/m²/.test(c)));
+  // an orifice as large as the aorta has no stenosis and no finite coefficient: refused
+  assert.throws(
+    () => evaluate(energyLossIndex, { avaCm2: 4, aorticAreaCm2: 4, bsaM2: 2 }),
+    {
+      name: "RangeError",
+      message:
+        "Energy loss index (aortic stenosis): expected 'avaCm2' < 'aorticAreaCm2' (the valve orifice is smaller than the aorta above it), got avaCm2 = 4 cm², aorticAreaCm2 = 4 cm²",
+    },
+  );
 });

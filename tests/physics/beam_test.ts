@@ -79,15 +79,30 @@ Deno.test("near-field length D²/(4λ) and far-field divergence", () => {
 });
 
 Deno.test("an aperture smaller than 1.22 wavelengths has no far-field lobe: a clear error", () => {
-  // 1.22·λ > D → asin undefined (diffraction: no first zero), reported instead of NaN.
+  // 1.22·λ ≥ D → sin θ = 1.22·λ/D ≥ 1: the Airy pattern has no first zero (Kremkau 2015 ch. 3;
+  // Szabo 2014 ch. 6), so there is no divergence half-angle: refused, naming the inputs whose
+  // combination is impossible, instead of an asin of a number above 1.
+  const message = (f: number, d: number) =>
+    `Near-field length and far-field divergence: expected 'apertureMm' > 1.22 wavelengths ` +
+    `(1.22·'soundSpeedMps'/'transmitFrequencyMHz'), the smallest disc with a far-field main ` +
+    `lobe, got transmitFrequencyMHz = ${f} MHz, apertureMm = ${d} mm, soundSpeedMps = 1540 m/s`;
   assert.throws(
     () => evaluate(nearFieldLength, { transmitFrequencyMHz: 1, apertureMm: 1 }),
-    {
-      name: "RangeError",
-      message:
-        /^Near-field length and far-field divergence: output 'divergenceHalfAngleDeg' \(Divergence half-angle\) expected a finite number, got NaN from transmitFrequencyMHz = 1 MHz, apertureMm = 1 mm, soundSpeedMps = 1540 m\/s$/,
-    },
+    { name: "RangeError", message: message(1, 1) },
   );
+  // 0.049 MHz lies inside the frequency's valid range (0, 100] MHz, but λ = 1540/49 000 m =
+  // 31.4 mm, so a 10 mm disc is 0.32 wavelengths across (hand check): refused the same way
+  assert.throws(
+    () => evaluate(nearFieldLength, { transmitFrequencyMHz: 0.049, apertureMm: 10 }),
+    { name: "RangeError", message: message(0.049, 10) },
+  );
+  // just above the limit the divergence exists and is close to 90° (hand check: sin θ → 1)
+  const lambdaMm = 1540 / 1e3; // 1 MHz
+  const r = evaluate(nearFieldLength, {
+    transmitFrequencyMHz: 1,
+    apertureMm: 1.22 * lambdaMm * 1.001,
+  });
+  assert.ok(r.outputs.divergenceHalfAngleDeg > 85 && r.outputs.divergenceHalfAngleDeg < 90);
 });
 
 Deno.test("a zero aperture is a RangeError naming the field and range", () => {

@@ -11,7 +11,7 @@ Deno.test("Nyquist-vs-depth chart: spec carries the rows, titles are labels with
     velocityOfInterest: "150 cm/s",
     steps: 10,
   });
-  const layers = chart.spec.layer as Layer[];
+  const layers = chart.content.layer as Layer[];
   assert.equal(layers.length, 2);
   assert.deepEqual(
     layers[0]!.data.values,
@@ -56,7 +56,7 @@ Deno.test("Nyquist-vs-depth chart rejects bad options with the field and range",
 
 Deno.test("resolution/penetration chart: spec, labels and SVG", async () => {
   const chart = resolutionPenetrationChart({ steps: 15 });
-  const spec = chart.spec as {
+  const spec = chart.content as {
     data: { values: unknown[] };
     vconcat: { encoding: { x: Axis; y: Axis } }[];
   };

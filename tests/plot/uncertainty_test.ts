@@ -13,7 +13,7 @@ Deno.test("histogram chart: density integrates to 1 and the GUM curve is N(y, u�
   const mc = propagate(model, inputs, { method: "monteCarlo", trials: 50_000, seed: 8 });
   const g = propagate(model, inputs);
   const chart = histogramChart(mc, { gum: g, bins: 40 });
-  const layers = chart.spec.layer as { data: { values: Record<string, number>[] } }[];
+  const layers = chart.content.layer as { data: { values: Record<string, number>[] } }[];
   const bars = layers[0]!.data.values;
   const mass = bars.reduce((s, b) => s + b.density! * (b.end! - b.start!), 0);
   // the plotted range covers at least the 99.9 % interval, so the bars hold ≥ 0.998 of the mass
@@ -40,13 +40,13 @@ Deno.test("histogram chart is deterministic for a seed (snapshot of the spec)", 
 Deno.test("budget and sensitivity charts carry their data", async () => {
   const budget = budgetChart(propagate(model, inputs));
   // the budget's source is named by its label, with its unit
-  assert.deepEqual((budget.spec.data as { values: unknown[] }).values, [{
+  assert.deepEqual((budget.content.data as { values: unknown[] }).values, [{
     source: "Peak velocity (m/s)",
     sharePercent: 100,
   }]);
   const curve = sensitivityCurve(model, { v: 4 }, { vary: "v", from: 3, to: 5, steps: 3 });
   const chart = sensitivityChart([curve], { relative: true });
-  const values = (chart.spec.data as { values: { x: number; y: number }[] }).values;
+  const values = (chart.content.data as { values: { x: number; y: number }[] }).values;
   // (3/4)² − 1 = −43.75 %, 0 %, (5/4)² − 1 = 56.25 % (hand-checkable from ΔP = 4v²)
   assert.deepEqual(values.map((v) => v.y), [-43.75, 0, 56.25]);
   const svg = await chart.toSVG();

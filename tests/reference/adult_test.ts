@@ -6,6 +6,7 @@ import {
   adultSeverityTable,
   classifyAdult,
   gradeSeverity,
+  JUPYTER_DISPLAY,
 } from "../../mod.ts";
 
 // All limits below: Lang RM et al., J Am Soc Echocardiogr 2015;28:1–39, from memory (the rows
@@ -99,8 +100,57 @@ Deno.test("Lang 2015 Table 6 LV mass index and RWT; RV basal diameter and TAPSE 
   for (const r of ADULT_REFERENCE_LANG_2015) {
     assert.equal(r.fromMemory, true);
     assert.equal(r.source.year, 2015);
-    assert.match(r.table, /^Table \d/);
+    if (
+      r.parameter.startsWith("lv") || r.parameter.startsWith("la") ||
+      r.parameter === "relativeWallThickness"
+    ) {
+      assert.match(r.table, /^Table \d/);
+    }
   }
+});
+
+Deno.test("limits printed in another unit are shown in the unit they are graded in", () => {
+  // Lang 2015 prints RV basal diameter and LVIDd in mm (25–41 mm; men 42.0–58.4 mm, from memory);
+  // the quantities are in cm, and the display appends the quantity's unit to each threshold, so
+  // the thresholds are written in cm (25 mm = 2.5 cm): never "25–41 cm"
+  const rv = adultSeverityTable(adultReferenceRow("rvBasalDiameter", "male"));
+  assert.deepEqual(rv.bands.map((b) => b.printed), ["< 2.5", "2.5–4.1", "> 4.1"]);
+  const text = String(
+    classifyAdult("rvBasalDiameter", "male", 4.3)[JUPYTER_DISPLAY]()["text/plain"],
+  );
+  assert.match(text, /2\.5–4\.1 cm/);
+  assert.doesNotMatch(text, /25–41 cm/);
+  assert.match(text, /Limits printed in mm in the guideline, shown and applied in cm/);
+  const lv = adultSeverityTable(adultReferenceRow("lvInternalDiameterDiastole", "male"));
+  assert.deepEqual(lv.bands.map((b) => b.printed), ["< 4.2", "4.2–5.84", "> 5.84"]);
+  // same unit: printed as in the table (LA volume index, mL/m²)
+  const la = adultSeverityTable(adultReferenceRow("laVolumeIndex", "male"));
+  assert.deepEqual(la.bands.map((b) => b.printed), ["< 16", "16–34", "35–41", "42–48", "> 48"]);
+});
+
+Deno.test("RV rows do not claim an unchecked table number; the 2010 thresholds are noted", () => {
+  // The RV rows were attributed to "Table 8/9 (table number from memory)". No public copy of
+  // the guideline's RV tables was found to check the numbers; the values (RV basal diameter
+  // 33 ± 4 mm, 25–41; TAPSE 24 ± 3.5 mm, < 17 abnormal) agree with secondary summaries of Lang
+  // 2015. So the rows name their table by its content and say the number is not verified.
+  for (
+    const [parameter, value, kind] of [
+      ["rvBasalDiameter", "43 mm", "RV chamber size"],
+      ["tapse", 15, "RV function"],
+    ] as const
+  ) {
+    const row = adultReferenceRow(parameter, "male");
+    assert.doesNotMatch(row.table, /Table \d/);
+    assert.match(row.table, new RegExp(`normal values for ${kind}`));
+    assert.match(row.table, /table number not verified against the printed guideline/);
+    const g = classifyAdult(parameter, "female", value);
+    assert.ok(g.citations.some((c) => /table number not verified/.test(c.locator ?? "")));
+    assert.match(String(g[JUPYTER_DISPLAY]()["text/plain"]), /table number not verified/);
+  }
+  // Rudski LG et al. 2010 (ASE right heart, from memory; TAPSE < 1.6 cm also in a secondary
+  // summary of RV reference limits): RV basal diameter > 42 mm and TAPSE < 16 mm abnormal
+  assert.match(adultReferenceRow("rvBasalDiameter", "male").note!, /Rudski 2010.*> 42 mm/);
+  assert.match(adultReferenceRow("tapse", "male").note!, /Rudski 2010.*< 16 mm/);
 });
 
 Deno.test("adult classification: bad input names the field and value", () => {

@@ -30,7 +30,7 @@ Deno.test("pediatric chart bands are the model's measurements at Z = −3…3", 
   const chart = zScoreChart(model, {
     points: [{ bsaM2: 1, value: 2.4, valueUncertainty: 0.05, bsaUncertainty: 0.03, label: "P1" }],
   });
-  const layers = chart.spec.layer as Layer[];
+  const layers = chart.content.layer as Layer[];
   const grid = layers[0]!.data!.values;
   const row = grid[Math.floor(grid.length / 2)]!;
   // Lopez 2017 form: at BSA b the Z = +2 measurement is (M + 2S)·b^α (hand-checkable)
@@ -76,7 +76,7 @@ Deno.test("cohort chart plots every row with a value; adult chart draws sex-spec
   const t = evaluateTable(readTable(text, { population: "pediatric" }), bsaHaycock);
   const chart = tableZScoreChart(t, model);
   // 20 invented rows, 2 with LV mass not measured → 18 points
-  assert.equal((chart.spec.layer as Layer[])[2]!.data!.values.length, 18);
+  assert.equal((chart.content.layer as Layer[])[2]!.data!.values.length, 18);
   assert.match(await chart.toSVG(), /^<svg/);
 
   const adult = adultLimitChart("lvEjectionFraction", {
@@ -86,7 +86,7 @@ Deno.test("cohort chart plots every row with a value; adult chart draws sex-spec
       label: "A04",
     }],
   });
-  const limits = (adult.spec.layer as Layer[])[0]!.data!.values;
+  const limits = (adult.content.layer as Layer[])[0]!.data!.values;
   // Lang 2015 Table 2 (from memory): women 54–74 with cut points 41 and 30; men 52–72, 41, 30
   assert.deepEqual(
     limits.filter((l) => l.sex === "female").map((l) => l.value),
@@ -106,7 +106,7 @@ Deno.test("cohort chart plots every row with a value; adult chart draws sex-spec
 
 Deno.test("adult chart draws one set of limits when the guideline gives one range for both sexes", () => {
   const chart = adultLimitChart("laVolumeIndex");
-  const limits = (chart.spec.layer as Layer[])[0]!.data!.values;
+  const limits = (chart.content.layer as Layer[])[0]!.data!.values;
   // Lang 2015 Table 2 (from memory): LA volume index 16–34, cut points 41 and 48, both sexes
   assert.deepEqual(limits.map((l) => [l.sex, l.value]), [
     ["both sexes", 16],

@@ -2,9 +2,12 @@ import assert from "node:assert/strict";
 import fc from "fast-check";
 import {
   bsaHaycock,
+  calculationMarkdown,
   compareZScoreModels,
   defineZScoreModel,
   evaluate,
+  evaluateTable,
+  JUPYTER_DISPLAY,
   type LogPolynomialBsaModel,
   measurementAtZ,
   normal,
@@ -12,12 +15,15 @@ import {
   normalLimits,
   percentileFromZ,
   PHN_2017_MODELS,
+  readTable,
   tCdf,
   typeA,
+  writeTableCsv,
   zScore,
   zScoreCalculation,
   zScoreFormula,
 } from "../../mod.ts";
+import { zScoreChart } from "../../plot/mod.ts";
 
 const close = (actual: number, expected: number, tol: number, what: string) =>
   assert.ok(
@@ -25,9 +31,12 @@ const close = (actual: number, expected: number, tol: number, what: string) =>
     `${what}: expected ${expected} ± ${tol}, got ${actual}`,
   );
 
-// PHN coefficients (α, M, S) as listed in issue 4, attributed to Lopez L et al., Circ Cardiovasc
-// Imaging 2017;10:e006979; the Z definition Z = (X/BSA^α − M)/S is the paper's.
-const ISSUE_4_TABLE: [keyof typeof PHN_2017_MODELS, number, number, number, string][] = [
+// PHN coefficients (α, M, S) transcribed from a secondary listing attributed to Lopez L et al.,
+// Circ Cardiovasc Imaging 2017;10:e006979, NOT verified against the paper's table (no public copy
+// of the table was found); all 14 rows agree with a second, independent public listing of the PHN
+// coefficients (a code repository citing the same paper). The Z definition Z = (X/BSA^α − M)/S
+// is the paper's (its abstract: "indexed parameters (X/BSA^α)").
+const PHN_SECONDARY_LISTING: [keyof typeof PHN_2017_MODELS, number, number, number, string][] = [
   ["aorticAnnulus", 0.5, 1.48, 0.14, "cm"],
   ["aorticRootSinus", 0.5, 2.06, 0.18, "cm"],
   ["sinotubularJunction", 0.5, 1.69, 0.16, "cm"],
@@ -44,9 +53,9 @@ const ISSUE_4_TABLE: [keyof typeof PHN_2017_MODELS, number, number, number, stri
   ["lvMass", 1.25, 53.02, 9.06, "g"],
 ];
 
-Deno.test("PHN 2017 table holds the coefficients of issue 4 exactly, BSA by Haycock", () => {
-  assert.equal(Object.keys(PHN_2017_MODELS).length, ISSUE_4_TABLE.length);
-  for (const [key, alpha, mean, sd, unit] of ISSUE_4_TABLE) {
+Deno.test("PHN 2017 table holds the coefficients of the secondary listing exactly, BSA by Haycock", () => {
+  assert.equal(Object.keys(PHN_2017_MODELS).length, PHN_SECONDARY_LISTING.length);
+  for (const [key, alpha, mean, sd, unit] of PHN_SECONDARY_LISTING) {
     const m = PHN_2017_MODELS[key];
     assert.deepEqual([m.alpha, m.mean, m.sd, m.unit, m.bsaMethod], [
       alpha,
@@ -60,7 +69,7 @@ Deno.test("PHN 2017 table holds the coefficients of issue 4 exactly, BSA by Hayc
 });
 
 Deno.test("PHN: X = M·BSA^α gives Z = 0 and X = (M + 2S)·BSA^α gives Z = 2 (Lopez 2017 definition)", () => {
-  for (const [key, alpha, mean, sd] of ISSUE_4_TABLE) {
+  for (const [key, alpha, mean, sd] of PHN_SECONDARY_LISTING) {
     const model = PHN_2017_MODELS[key];
     for (const bsa of [0.3, 0.8, 1.5, 2.1]) {
       // Lopez 2017: Z = (X/BSA^α − M)/S → exact by construction of X (hand-checkable)
@@ -305,4 +314,37 @@ Deno.test("a Z-score displays itself: labels, units, the caution, the coefficien
   assert.match(text, /Not a diagnosis/);
   assert.match(text, /Coefficients not verified against the publication/);
   assert.doesNotMatch(text, /\{|lvMass\b/);
+});
+
+// Project rule: a coefficient that was not checked against its publication says so wherever the
+// number goes (result, notebook display, table, CSV, docs).
+const NOT_VERIFIED = /coefficients not verified against the publication/i;
+
+/** The plain-text notebook display of a result. */
+const display = (r: unknown) =>
+  String((r as Record<symbol, () => Record<string, unknown>>)[JUPYTER_DISPLAY]!()["text/plain"]);
+
+Deno.test("unverified PHN coefficients: the result, its display, a table, the CSV, the chart and the docs say so", async () => {
+  for (const model of Object.values(PHN_2017_MODELS)) {
+    // the provenance states what was and was not checked (see PHN_SECONDARY_LISTING above)
+    assert.match(model.provenance, /not verified against the paper's table/, model.id);
+    assert.match(model.provenance, /independent/, model.id);
+    const r = zScore(model, { measurement: measurementAtZ(model, 1, 1), bsaM2: 1 });
+    assert.ok(r.cautions.some((c) => NOT_VERIFIED.test(c)), model.id);
+    assert.match(display(r), NOT_VERIFIED, model.id);
+    assert.match(calculationMarkdown(zScoreCalculation(model)), NOT_VERIFIED, model.id);
+  }
+  const table = evaluateTable(
+    readTable("id,height [cm],weight [kg],aortic root [cm]\nA,120,22,2.0\n"),
+    [bsaHaycock, zScoreCalculation(PHN_2017_MODELS.aorticRootSinus)],
+    { population: "pediatric" },
+  );
+  assert.ok(table.cautions.some((c) => NOT_VERIFIED.test(c)));
+  assert.match(display(table), NOT_VERIFIED);
+  // the cautions are the CSV's leading comment lines (quoted when they hold a delimiter)
+  const comments = writeTableCsv(table).split("\n").filter((l) => /^"?# /.test(l));
+  assert.ok(comments.some((l) => NOT_VERIFIED.test(l)), comments.join("\n"));
+  // the normal-range chart (its SVG, as written to a file or pasted into a slide)
+  const svg = await zScoreChart(PHN_2017_MODELS.lvEndDiastolicDimension).toSVG();
+  assert.match(svg, /Coefficients not verified against the publication/);
 });
