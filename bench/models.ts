@@ -10,8 +10,12 @@ import {
   continuityValveArea,
   defineCalculation,
   normal,
+  randomStream,
+  readTable,
   rectangular,
+  type Table,
   type UncertainInputs,
+  type UncertaintyModel,
 } from "../mod.ts";
 
 /** Continuity valve area (VTI form) with the aortic-jet VTI corrected for an uncertain CW beam
@@ -77,3 +81,28 @@ export const tenInputModel: Calculation<Ten, "y"> = defineCalculation({
 export const tenUncertain: UncertainInputs<Ten> = Object.fromEntries(
   names.map((n, i) => [n, normal(1 + i, 0.01 * (1 + i))]),
 ) as UncertainInputs<Ten>;
+
+/** The 3-input calculation of the per-row GUM benchmark: the catalog's continuity valve area. */
+export const threeInputCalculation: typeof continuityValveArea = continuityValveArea;
+
+/** Uncertainty of the three input columns of {@linkcode gumRowsTable}. */
+export const gumRowsUncertainty: Readonly<Record<string, UncertaintyModel>> = {
+  lvotDiameter: { standardUncertainty: "0.8 mm" },
+  lvotVti: { relative: 0.06 },
+  avVti: { relative: 0.05 },
+};
+
+/** A table of `rows` invented rows (LVOT diameter, LVOT VTI, aortic VTI), the same for the same
+ * number of rows: the input of the per-row GUM benchmark. */
+export function gumRowsTable(rows: number): Table {
+  const rng = randomStream(2718);
+  const lines = ["lvot diameter [mm],lvot vti [cm],av vti [cm]"];
+  for (let i = 0; i < rows; i++) {
+    lines.push(
+      `${(17 + 8 * rng.uniform()).toFixed(1)},${(15 + 10 * rng.uniform()).toFixed(1)},${
+        (40 + 80 * rng.uniform()).toFixed(1)
+      }`,
+    );
+  }
+  return readTable(lines.join("\n") + "\n");
+}

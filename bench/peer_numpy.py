@@ -1,7 +1,7 @@
 """Vectorised numpy peer of the sonorigor benchmark models (bench/compare_numpy.ts runs it).
 
 Not part of the product: a side-by-side reference implementation for speed comparisons only.
-Prints one JSON object with the timings (seconds) of each repeated run.
+Answers timed requests one per line on stdin (see main), so that runs can be alternated.
 """
 import json
 import math
@@ -77,27 +77,50 @@ def model_c(height, weight, lvedd):
     return bsa, z, outside
 
 
+def summary(mean, sd, sym, short):
+    return {"mean": float(mean), "sd": float(sd), "symmetric": [float(sym[0]), float(sym[1])],
+            "shortest": [float(short[0]), float(short[1])]}
+
+
 def main():
-    args = dict(zip(sys.argv[1::2], sys.argv[2::2]))
-    runs = int(args.get("--runs", "5"))
-    data = args.get("--data")
-    out = {"numpy": np.__version__, "a": [], "b": [], "c": [], "b_trials": 0}
-    for k in range(runs):
-        t = time.perf_counter()
-        model_a(1 + k)
-        out["a"].append(time.perf_counter() - t)
-        t = time.perf_counter()
-        out["b_trials"] = model_b(1 + k)[0]
-        out["b"].append(time.perf_counter() - t)
-    if data:
-        h = np.fromfile(f"{data}/height.f64", dtype="<f8")
-        w = np.fromfile(f"{data}/weight.f64", dtype="<f8")
-        x = np.fromfile(f"{data}/lvedd.f64", dtype="<f8")
-        for _ in range(runs):
+    """Serves one timed run per request line, so the caller can alternate its own runs with numpy's:
+
+    "a SEED" -> model (a); "b SEED" -> model (b); "load DIR" reads the cohort columns;
+    "c" -> model (c); "sort SEED" -> np.sort of model (a)'s 10^6 values alone. Each answer is one
+    JSON line with the time in seconds and the results (for the caller's agreement check).
+    """
+    cohort = None
+    print(json.dumps({"numpy": np.__version__}), flush=True)
+    for line in sys.stdin:
+        words = line.split()
+        if not words:
+            continue
+        what, arg = words[0], (words[1] if len(words) > 1 else "")
+        if what == "load":
+            cohort = [np.fromfile(f"{arg}/{n}.f64", dtype="<f8") for n in ("height", "weight", "lvedd")]
+            out = {"rows": int(cohort[0].size)}
+        elif what == "a":
             t = time.perf_counter()
-            model_c(h, w, x)
-            out["c"].append(time.perf_counter() - t)
-    print(json.dumps(out))
+            r = model_a(int(arg))
+            out = {"t": time.perf_counter() - t, **summary(*r)}
+        elif what == "b":
+            t = time.perf_counter()
+            r = model_b(int(arg))
+            out = {"t": time.perf_counter() - t, "trials": int(r[0]), **summary(*r[1:])}
+        elif what == "c":
+            t = time.perf_counter()
+            bsa, z, outside = model_c(*cohort)
+            out = {"t": time.perf_counter() - t, "bsaSum": float(np.sum(bsa)),
+                   "zSum": float(np.nansum(z)), "zMissing": int(np.isnan(z).sum()),
+                   "outside": int(outside.sum()), "z0": float(z[0])}
+        elif what == "sort":
+            y = continuity(np.random.default_rng(int(arg)), 1_000_000)
+            t = time.perf_counter()
+            np.sort(y)
+            out = {"t": time.perf_counter() - t}
+        else:
+            out = {"error": f"unknown request {what!r}"}
+        print(json.dumps(out), flush=True)
 
 
 if __name__ == "__main__":

@@ -15,7 +15,7 @@ import { validateInputs, type ValidateOptions } from "../core/validate.ts";
 import { BLOOD_VELOCITY } from "../quantities/flow.ts";
 import { DEPTH, INSONATION_ANGLE, SOUND_SPEED } from "../quantities/ultrasound.ts";
 import type { CheckedArguments } from "./types.ts";
-import cosine from "@stdlib/math-base-special-cos";
+import { cos as cosine } from "../../vendor/stdlib_math.js"; // @stdlib/math-base-special-cos
 
 /**
  * Speed of sound assumed by scanners for soft tissue, in m/s (common practice).

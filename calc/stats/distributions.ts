@@ -7,11 +7,15 @@
  *
  * @module
  */
-import tCdfImpl from "@stdlib/stats-base-dists-t-cdf";
-import normalQuantileImpl from "@stdlib/stats-base-dists-normal-quantile";
-import normalCdfImpl from "@stdlib/stats-base-dists-normal-cdf";
-import fCdfImpl from "@stdlib/stats-base-dists-f-cdf";
-import chiSquareCdfImpl from "@stdlib/stats-base-dists-chisquare-cdf";
+// the @stdlib packages, bundled into one file (vendor/build.ts): ≈ 20 ms to import instead of
+// ≈ 250–700 ms for their hundreds of small modules
+import {
+  chiSquareCdf as chiSquareCdfImpl,
+  fCdf as fCdfImpl,
+  normalCdf as normalCdfImpl,
+  normalQuantile as normalQuantileImpl,
+  tCdf as tCdfImpl,
+} from "../../vendor/stdlib_math.js";
 import { quantileByInversion } from "./invert.ts";
 
 function checkProbability(p: number, where: string): void {

@@ -7,7 +7,7 @@
  *
  * @module
  */
-import type { Calculation, ValidationIssue } from "../core/types.ts";
+import type { Calculation, ValidationIssue, ValueRange } from "../core/types.ts";
 import type { Population } from "../core/types.ts";
 import { cautionsOf } from "../core/calculation.ts";
 import { evaluateColumns } from "../core/columns.ts";
@@ -89,11 +89,25 @@ function wire(
   });
 }
 
+/** Quantity strings already read ("0.8 mm" in cm …): a table applies one model to every row,
+ * and reading a quantity string parses it. Keyed by unit and text; at most 256 kept. */
+const readStrings = new Map<string, ReturnType<typeof readAmount>>();
+function readUncertainty(value: number | string, unit: string): ReturnType<typeof readAmount> {
+  if (typeof value !== "string") return readAmount(value, unit);
+  const key = `${unit}\u0000${value}`;
+  let read = readStrings.get(key);
+  if (read === undefined) {
+    if (readStrings.size >= 256) readStrings.clear();
+    readStrings.set(key, read = readAmount(value, unit));
+  }
+  return read;
+}
+
 /** The distribution of one cell under a column's uncertainty model. */
 function distributionOf(model: UncertaintyModel, value: number, unit: string): UncertainInput {
   if (typeof model === "function") return model(value);
   if ("relative" in model) return normal(value, Math.abs(model.relative * value));
-  const u = readAmount(model.standardUncertainty, unit);
+  const u = readUncertainty(model.standardUncertainty, unit);
   if (typeof u !== "number") {
     throw new TypeError(
       `Uncertainty model: expected a standard uncertainty convertible to ${unit}, got ${
@@ -249,6 +263,31 @@ export function evaluateTable(
   return current;
 }
 
+/** True when every value of `col` (outside the rows marked in `skip`) is finite and in `range`:
+ * one min/max pass. */
+function columnWithin(col: Float64Array, range: ValueRange, skip?: Uint8Array): boolean {
+  let min = Infinity, max = -Infinity, nan = false;
+  if (skip) {
+    for (let i = 0; i < col.length; i++) {
+      if (skip[i]) continue;
+      const v = col[i]!;
+      if (v < min) min = v;
+      if (v > max) max = v;
+      if (v !== v) nan = true;
+    }
+  } else {
+    for (let i = 0; i < col.length; i++) {
+      const v = col[i]!;
+      if (v < min) min = v;
+      if (v > max) max = v;
+      if (v !== v) nan = true;
+    }
+  }
+  if (nan) return false;
+  if (min > max) return true; // nothing to check
+  return Number.isFinite(min) && Number.isFinite(max) && inRange(min, range) && inRange(max, range);
+}
+
 function evaluateOne(
   table: Table,
   calc: Calculation,
@@ -265,88 +304,103 @@ function evaluateOne(
     return col ? col.values : new Float64Array(n).fill(calc.inputs[name]!.default!);
   });
   // rows that cannot be computed: a missing or invalid input, a value outside the calculation's
-  // own (narrower) range, a broken relation between inputs
+  // own (narrower) range, a broken relation between inputs. Checked column by column: a min/max
+  // pass finds the columns with nothing to report (usually all), and only the rows of the others
+  // are looked at one by one. Issues come out in phases (missing or out of range, then typical
+  // ranges input by input, then relations); the stable sort by row at the end gives each row's
+  // issues in the order of a row-by-row check.
   const skip = new Uint8Array(n);
-  for (let i = 0; i < n; i++) {
+  const population = options.population ?? "adult";
+  const defs = calc.inputNames.map((name) => calc.inputs[name]!);
+  const doubtful = inputs.map((col, k) => !columnWithin(col, defs[k]!.range));
+  if (doubtful.some(Boolean)) {
+    for (let i = 0; i < n; i++) {
+      for (let k = 0; k < inputs.length; k++) {
+        if (!doubtful[k]) continue;
+        const def = defs[k]!;
+        const v = inputs[k]![i]!;
+        if (v !== v) {
+          skip[i] = 1;
+          issues.push({
+            kind: "notMeasured",
+            severity: "warning",
+            where,
+            field: wired[k]?.header ?? calc.inputNames[k]!,
+            label: def.label,
+            received: "an empty cell",
+            expected: "a value",
+            note: `${
+              calc.outputNames.map((o) => calc.outputs[o]!.label).join(", ")
+            } not computed for this row`,
+            ...at(i),
+          });
+          break;
+        }
+        if (!inRange(v, def.range)) {
+          skip[i] = 1;
+          issues.push({
+            kind: "range",
+            severity: "error",
+            where,
+            field: calc.inputNames[k]!,
+            label: def.label,
+            received: withUnit(String(v), def.unit),
+            value: v,
+            expected: `in ${formatRange(def.range, def.unit)}`,
+            ...at(i),
+          });
+          break;
+        }
+      }
+    }
+  }
+  for (let k = 0; k < inputs.length; k++) {
+    const name = calc.inputNames[k]!;
+    const def = defs[k]!;
+    const typical = typicalRange(def, population);
+    // the table checked each column against its quantity; a calculation may narrow the range
+    if (!typical || !wired[k] || typical === wired[k]!.quantity.typical) continue;
+    const col = inputs[k]!;
+    if (columnWithin(col, typical, skip)) continue;
+    for (let i = 0; i < n; i++) {
+      if (skip[i] || inRange(col[i]!, typical)) continue;
+      const flagged = checkValue(name, def, col[i]!, { where, population, ...at(i) });
+      for (const issue of flagged.issues) issues.push(issue);
+    }
+  }
+  if (calc.constraints.length > 0) {
     const x: Record<string, number> = {};
-    for (let k = 0; k < inputs.length; k++) {
-      const name = calc.inputNames[k]!;
-      const def = calc.inputs[name]!;
-      const v = inputs[k]![i]!;
-      x[name] = v;
-      if (v !== v) {
-        skip[i] = 1;
-        issues.push({
-          kind: "notMeasured",
-          severity: "warning",
-          where,
-          field: wired[k]?.header ?? name,
-          label: def.label,
-          received: "an empty cell",
-          expected: "a value",
-          note: `${
-            calc.outputNames.map((o) => calc.outputs[o]!.label).join(", ")
-          } not computed for this row`,
-          ...at(i),
-        });
-        break;
-      }
-      if (!inRange(v, def.range)) {
-        skip[i] = 1;
-        issues.push({
-          kind: "range",
-          severity: "error",
-          where,
-          field: name,
-          label: def.label,
-          received: withUnit(String(v), def.unit),
-          value: v,
-          expected: `in ${formatRange(def.range, def.unit)}`,
-          ...at(i),
-        });
-        break;
-      }
-    }
-    if (skip[i]) continue;
-    for (let k = 0; k < inputs.length; k++) {
-      const name = calc.inputNames[k]!;
-      const def = calc.inputs[name]!;
-      const typical = typicalRange(def, options.population ?? "adult");
-      // the table checked each column against its quantity; a calculation may narrow the range
-      if (
-        typical && wired[k] && !inRange(x[name]!, typical) && typical !== wired[k]!.quantity.typical
-      ) {
-        const flagged = checkValue(name, def, x[name], {
-          where,
-          population: options.population ?? "adult",
-          ...at(i),
-        });
-        for (const issue of flagged.issues) issues.push(issue);
-      }
-    }
-    for (const c of calc.constraints) {
-      if (!c.holds(x)) {
-        skip[i] = 1;
-        issues.push({
-          kind: "constraint",
-          severity: "error",
-          where,
-          field: c.inputs.join(", "),
-          received: c.inputs.map((name) =>
-            `${name} = ${withUnit(String(x[name]), calc.inputs[name]!.unit)}`
-          ).join(", "),
-          expected: c.description,
-          ...at(i),
-        });
-        break;
+    for (let i = 0; i < n; i++) {
+      if (skip[i]) continue;
+      for (let k = 0; k < inputs.length; k++) x[calc.inputNames[k]!] = inputs[k]![i]!;
+      for (const c of calc.constraints) {
+        if (!c.holds(x)) {
+          skip[i] = 1;
+          issues.push({
+            kind: "constraint",
+            severity: "error",
+            where,
+            field: c.inputs.join(", "),
+            received: c.inputs.map((name) =>
+              `${name} = ${withUnit(String(x[name]), calc.inputs[name]!.unit)}`
+            ).join(", "),
+            expected: c.description,
+            ...at(i),
+          });
+          break;
+        }
       }
     }
   }
   const outs = calc.outputNames;
-  const value = outs.map(() => new Float64Array(n).fill(NaN));
-  const u = outs.map(() => new Float64Array(n).fill(NaN));
-  const lower = outs.map(() => new Float64Array(n).fill(NaN));
-  const upper = outs.map(() => new Float64Array(n).fill(NaN));
+  const anySkipped = skip.includes(1);
+  // value columns: filled with NaN here, unless an exact evaluation's own column is taken whole
+  const value = outs.map((): Float64Array =>
+    method === "exact" && !anySkipped ? new Float64Array(0) : new Float64Array(n).fill(NaN)
+  );
+  // uncertainty columns only when propagating
+  const spare = () => outs.map(() => new Float64Array(method === "exact" ? 0 : n).fill(NaN));
+  const u = spare(), lower = spare(), upper = spare();
   if (method === "exact") {
     const results = evaluateColumns(
       calc,
@@ -355,10 +409,21 @@ function evaluateOne(
     outs.forEach((o, k) => {
       const col = results[o]!;
       const range = calc.outputs[o]!.quantity.valid;
+      if (!anySkipped && columnWithin(col, range)) {
+        value[k] = col; // every row computed, every value finite and valid: the column itself
+        return;
+      }
+      if (value[k]!.length !== n) value[k] = new Float64Array(n).fill(NaN);
+      const out = value[k]!;
+      if (columnWithin(col, range, skip)) {
+        // every computed value finite and valid: copy, leaving NaN in the skipped rows
+        for (let i = 0; i < n; i++) if (!skip[i]) out[i] = col[i]!;
+        return;
+      }
       for (let i = 0; i < n; i++) {
         if (skip[i]) continue;
         const v = col[i]!;
-        if (Number.isFinite(v) && inRange(v, range)) value[k]![i] = v;
+        if (Number.isFinite(v) && inRange(v, range)) out[i] = v;
         else {
           issues.push({
             kind: "output",

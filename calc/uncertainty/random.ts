@@ -1,12 +1,30 @@
 /**
  * Seeded random streams for Monte Carlo.
  *
- * The generator is the Mersenne Twister MT19937 (Matsumoto & Nishimura 1998) from the well-kept
- * `pure-rand` package. On top of it:
+ * The generator is xoshiro128** 1.1 (Blackman & Vigna 2021, "Scrambled linear pseudorandom number
+ * generators", ACM TOMS 47(4):36, citation from memory; reference code
+ * prng.di.unimi.it/xoshiro128starstar.c): 128 bits of state, period 2¹²⁸ − 1, 32-bit words; the
+ * authors report that it passes BigCrush (from memory). Its four state words are the first
+ * four outputs of the Mersenne Twister MT19937 (Matsumoto & Nishimura 1998; pure-rand's
+ * implementation) started from the stream's seed (the MT reference `init_genrand`) or key (the MT
+ * reference `init_by_array`, which numpy's legacy MT19937 seeding also uses), so that every seed
+ * and every key of several words gives its own, well-mixed state.
+ *
+ * Why this generator: random bits were the largest single cost of a Monte Carlo run (8 words per
+ * trial of the 4-input benchmark model). MT19937 through pure-rand cost ≈ 3.5–4.5 ns per word, and
+ * a bulk MT19937 refill written here no less; xoshiro128** with its state held in local variables
+ * across a whole column costs a fraction of that. Philox4x32-10 (counter-based, Salmon et al. 2011)
+ * was measured too: it needs 64-bit products, which JavaScript builds from 16-bit halves, and ran
+ * 6–12 times slower per word than MT19937 here. Streams keyed by run, source and block (see
+ * calc/uncertainty/sampling.ts) keep pool results bit-identical to one thread: each block draws
+ * from its own stream whatever thread runs it. Checked in tests/uncertainty/random_test.ts against
+ * the reference code's outputs, and by moments, Kolmogorov–Smirnov and χ² tests of the samplers.
+ *
+ * On top of it:
  *
  * - uniform: (k + ½)/2⁵² with k a 52-bit integer from two 32-bit draws, strictly inside (0, 1):
- *   from 2⁻⁵³ to 1 − 2⁻⁵³. (The reference `genrand_res53` gives [0, 1); adding ½ to its 53 bits
- *   would avoid 0 but can round up to exactly 1, so one bit fewer keeps the interval open.)
+ *   from 2⁻⁵³ to 1 − 2⁻⁵³. (Adding ½ to 53 bits would avoid 0 but can round up to exactly 1, so
+ *   one bit fewer keeps the interval open.)
  * - normal: the ziggurat method of Marsaglia & Tsang (2000, J Stat Softw 5(8)) in the improved form
  *   of Doornik (2005, "An Improved Ziggurat Method to Generate Normal Random Samples"): 128 layers,
  *   a 53-bit uniform for the abscissa and separate bits for the layer, exact tail sampling. It is
@@ -15,11 +33,9 @@
  *   reference moments, a Kolmogorov–Smirnov test and a χ² goodness-of-fit test;
  * - Student t: Bailey's polar method (Bailey 1994, Math Comp 62:779–781), exact for any ν > 0.
  *
- * A stream starts from one seed (the MT reference `init_genrand`, as pure-rand does) or from a key
- * of several 32-bit words (the MT reference `init_by_array`, which numpy's legacy MT19937 seeding
- * also uses): Monte Carlo gives every block of trials its own stream keyed by the run seed and the
- * block index, so that blocks can run in any order, on any number of workers, with the same
- * result. The same seed or key gives the same numbers, bit for bit.
+ * Monte Carlo gives every block of trials its own stream keyed by the run seed and the block
+ * index, so that blocks can run in any order, on any number of workers, with the same result. The
+ * same seed or key gives the same numbers, bit for bit.
  *
  * @module
  */
@@ -59,12 +75,74 @@ const ZIG_RATIO = new Float64Array(LAYERS);
   }
   for (let i = 0; i < LAYERS; i++) ZIG_RATIO[i] = ZIG_X[i + 1]! / ZIG_X[i]!;
 }
+/**
+ * No standard normal draw of a stream exceeds this in magnitude: the ziggurat's layers give
+ * |z| < R (R = 3.442619855899, the start of the tail), and its exact tail gives
+ * z = R − ln(U)/R with U ≥ 2⁻⁵³ (the smallest uniform), so |z| ≤ R + 53·ln 2/R ≈ 14.1138;
+ * rounded up here. A draw of N(μ, σ) therefore lies in μ ± 14.12·σ (up to rounding).
+ *
+ * @example
+ * ```ts
+ * import { NORMAL_DRAW_LIMIT } from "./random.ts";
+ * import assert from "node:assert/strict";
+ * // R + 53·ln 2 / R with R = 3.442619855899 (Marsaglia & Tsang 2000)
+ * const R = 3.442619855899;
+ * assert.ok(NORMAL_DRAW_LIMIT >= R + (53 * Math.LN2) / R);
+ * assert.ok(NORMAL_DRAW_LIMIT - (R + (53 * Math.LN2) / R) < 0.01);
+ * ```
+ */
+export const NORMAL_DRAW_LIMIT = 14.12;
 const TWO_POW_26 = 67108864;
 const TWO_POW_52 = 4503599627370496;
 const TWO_POW_53 = 9007199254740992;
 
-/** The 32-bit generator behind a stream (pure-rand's MT19937). */
-type Generator32 = ReturnType<typeof mersenne>;
+/** The 32-bit generator behind a stream: xoshiro128** over a state of four 32-bit words. */
+class Generator32 {
+  /** The state s₀ … s₃ (Int32Array: the words stay unboxed). */
+  readonly s: Int32Array;
+  constructor(state: Int32Array) {
+    this.s = state;
+  }
+  /** The next word (as a signed 32-bit integer): xoshiro128** 1.1, the reference `next`. */
+  next(): number {
+    const s = this.s;
+    const s0 = s[0]!, s1 = s[1]!, s2 = s[2]! ^ s0, s3 = s[3]! ^ s1;
+    const x = Math.imul(s1, 5);
+    const result = Math.imul((x << 7) | (x >>> 25), 9);
+    s[0] = s0 ^ s3;
+    s[1] = s1 ^ s2;
+    s[2] = s2 ^ (s1 << 9);
+    s[3] = (s3 << 11) | (s3 >>> 21);
+    return result;
+  }
+}
+
+/**
+ * A xoshiro128** generator started from four state words (not all zero).
+ *
+ * @param state s₀ … s₃ as 32-bit integers (signed or not).
+ * @returns A function giving the next word in [0, 2³² − 1].
+ * @throws {RangeError} For an all-zero state (the generator's one forbidden state).
+ *
+ * @example The first word, by hand from the reference steps (the reference code's outputs are in
+ * tests/uncertainty/random_test.ts)
+ * ```ts
+ * import { xoshiro128StarStar } from "./random.ts";
+ * import assert from "node:assert/strict";
+ * const next = xoshiro128StarStar([1, 2, 3, 4]);
+ * // rotl(2·5, 7)·9 = 1280·9 = 11520 for the first word: the output depends on s₁ only
+ * assert.equal(next(), 11520);
+ * ```
+ */
+export function xoshiro128StarStar(state: readonly number[]): () => number {
+  if (state.length !== 4 || state.every((w) => (w | 0) === 0)) {
+    throw new RangeError(
+      `xoshiro128**: expected four state words, not all zero, got [${state.join(", ")}]`,
+    );
+  }
+  const g = new Generator32(Int32Array.from(state, (w) => w | 0));
+  return () => g.next() >>> 0;
+}
 
 /** (k + ½)/2⁵² for the 52-bit integer k made of the high 26 bits of two 32-bit words: strictly
  * inside (0, 1), from 2⁻⁵³ to 1 − 2⁻⁵³ (every value exact in double precision).
@@ -110,18 +188,52 @@ function normal(mt: Generator32): number {
   return Math.abs(u) < ZIG_RATIO[i]! ? u * ZIG_X[i]! : slowNormal(mt, u, i);
 }
 
-/** Fills `out` with mean + sd·Z; the fast path of {@linkcode normal} written inline. */
-function fillNormal(mt: Generator32, out: Float64Array, mean: number, sd: number): void {
+/**
+ * Fills `out` with mean + sd·Z: the fast path of {@linkcode normal} (the same words) and the
+ * generator written inline (the same steps as `Generator32.next`, two per draw), with its state in
+ * local variables across the whole column, stored back around the ziggurat's rare slow path.
+ * Normals and uniforms have a function each, and the two steps are written out: one function for
+ * both, or a two-pass loop, measured 5–35 % slower for the whole fill.
+ */
+function fillNormal(g: Generator32, out: Float64Array, mean: number, sd: number): void {
+  const st = g.s;
+  let s0 = st[0]!, s1 = st[1]!, s2 = st[2]!, s3 = st[3]!;
   for (let r = 0; r < out.length; r++) {
-    const a = mt.next();
-    const b = mt.next();
+    let x = Math.imul(s1, 5), t = s1 << 9;
+    const a = Math.imul((x << 7) | (x >>> 25), 9);
+    s2 ^= s0, s3 ^= s1, s1 ^= s2, s0 ^= s3, s2 ^= t, s3 = (s3 << 11) | (s3 >>> 21);
+    x = Math.imul(s1, 5), t = s1 << 9;
+    const b = Math.imul((x << 7) | (x >>> 25), 9);
+    s2 ^= s0, s3 ^= s1, s1 ^= s2, s0 ^= s3, s2 ^= t, s3 = (s3 << 11) | (s3 >>> 21);
     const u = 2 * (((a >>> 5) * TWO_POW_26 + (b >>> 6) + 0.5) / TWO_POW_53) - 1;
     const i = (b & 63) | ((a & 1) << 6);
     // two stores rather than one merged value: merging the fast path's unboxed number with the
     // slow path's call result would box every draw (a heap allocation per normal)
     if (Math.abs(u) < ZIG_RATIO[i]!) out[r] = mean + sd * (u * ZIG_X[i]!);
-    else out[r] = mean + sd * slowNormal(mt, u, i);
+    else {
+      st[0] = s0, st[1] = s1, st[2] = s2, st[3] = s3;
+      out[r] = mean + sd * slowNormal(g, u, i);
+      s0 = st[0]!, s1 = st[1]!, s2 = st[2]!, s3 = st[3]!;
+    }
   }
+  st[0] = s0, st[1] = s1, st[2] = s2, st[3] = s3;
+}
+
+/** Fills `out` with uniforms on (0, 1) ({@linkcode uniformFromWords} of two words each), the
+ * generator written inline as in {@linkcode fillNormal}. */
+function fillUniform(g: Generator32, out: Float64Array): void {
+  const st = g.s;
+  let s0 = st[0]!, s1 = st[1]!, s2 = st[2]!, s3 = st[3]!;
+  for (let r = 0; r < out.length; r++) {
+    let x = Math.imul(s1, 5), t = s1 << 9;
+    const a = Math.imul((x << 7) | (x >>> 25), 9);
+    s2 ^= s0, s3 ^= s1, s1 ^= s2, s0 ^= s3, s2 ^= t, s3 = (s3 << 11) | (s3 >>> 21);
+    x = Math.imul(s1, 5), t = s1 << 9;
+    const b = Math.imul((x << 7) | (x >>> 25), 9);
+    s2 ^= s0, s3 ^= s1, s1 ^= s2, s0 ^= s3, s2 ^= t, s3 = (s3 << 11) | (s3 >>> 21);
+    out[r] = ((a >>> 6) * TWO_POW_26 + (b >>> 6) + 0.5) / TWO_POW_52;
+  }
+  st[0] = s0, st[1] = s1, st[2] = s2, st[3] = s3;
 }
 
 /** Standard Student t by Bailey's polar method (Bailey 1994). */
@@ -151,7 +263,7 @@ function twist(mt: Int32Array): void {
 
 /** MT19937 initialised by an array of 32-bit words: the reference `init_by_array`
  * (mt19937ar.c, Matsumoto & Nishimura 2002), handed to pure-rand as a twisted state. */
-function mersenneFromKey(key: readonly number[]): Generator32 {
+function mersenneFromKey(key: readonly number[]): ReturnType<typeof mersenne> {
   const mt = new Int32Array(N);
   mt[0] = 19650218;
   for (let i = 1; i < N; i++) {
@@ -181,6 +293,34 @@ function mersenneFromKey(key: readonly number[]): Generator32 {
   return mersenneFromState([0, ...mt]);
 }
 
+/**
+ * The xoshiro128** state of a stream: the first four MT19937 words of the seed (reference
+ * `init_genrand`) or key (reference `init_by_array`); should all four be zero (probability
+ * 2⁻¹²⁸), the state [1, 0, 0, 0] instead.
+ *
+ * @param seed A seed or key, already checked.
+ * @returns The four state words in [0, 2³² − 1].
+ *
+ * @example
+ * ```ts
+ * import { streamState } from "./random.ts";
+ * import assert from "node:assert/strict";
+ * // init_genrand(5489), the MT19937 reference default seed: first word 3499211612 (the same from
+ * // numpy 2.4.6 MT19937._legacy_seeding(5489), see tests/uncertainty/random_test.ts)
+ * assert.equal(streamState(5489)[0], 3499211612);
+ * ```
+ */
+export function streamState(seed: number | readonly number[]): number[] {
+  const mt = typeof seed === "number" ? mersenne(seed | 0) : mersenneFromKey(seed);
+  const state = [mt.next() >>> 0, mt.next() >>> 0, mt.next() >>> 0, mt.next() >>> 0];
+  return state.every((w) => w === 0) ? [1, 0, 0, 0] : state;
+}
+
+/** The xoshiro128** generator of a seed or key. */
+function streamGenerator(seed: number | readonly number[]): Generator32 {
+  return new Generator32(Int32Array.from(streamState(seed), (w) => w | 0));
+}
+
 /** Checks a seed: an integer in [1, 2³² − 1].
  * @throws {RangeError} Naming the seed and the valid range. */
 export function checkSeed(seed: number): number {
@@ -195,8 +335,9 @@ export function checkSeed(seed: number): number {
 const isWord = (v: number) => Number.isInteger(v) && v >= 0 && v < 2 ** 32;
 
 /**
- * Creates a seeded random stream: MT19937 started from one seed (reference `init_genrand`) or
- * from a key of several 32-bit words (reference `init_by_array`).
+ * Creates a seeded random stream: xoshiro128** whose state is the first four words of MT19937
+ * started from one seed (reference `init_genrand`) or from a key of several 32-bit words
+ * (reference `init_by_array`).
  *
  * @param seed A positive integer below 2³², or a non-empty array of integers in [0, 2³² − 1].
  * @returns The stream.
@@ -221,16 +362,14 @@ export function randomStream(seed: number | readonly number[]): RandomStream {
       );
     }
   } else checkSeed(seed);
-  const mt = typeof seed === "number" ? mersenne(seed | 0) : mersenneFromKey(seed);
+  const g = streamGenerator(seed);
   return {
     seed,
-    uint32: () => mt.next() >>> 0,
-    uniform: () => uniformOpen(mt),
-    normal: () => normal(mt),
-    studentT: (dof: number) => studentT(mt, dof),
-    fillNormal: (out: Float64Array, mean = 0, sd = 1) => fillNormal(mt, out, mean, sd),
-    fillUniform(out: Float64Array): void {
-      for (let r = 0; r < out.length; r++) out[r] = uniformOpen(mt);
-    },
+    uint32: () => g.next() >>> 0,
+    uniform: () => uniformOpen(g),
+    normal: () => normal(g),
+    studentT: (dof: number) => studentT(g, dof),
+    fillNormal: (out: Float64Array, mean = 0, sd = 1) => fillNormal(g, out, mean, sd),
+    fillUniform: (out: Float64Array) => fillUniform(g, out),
   };
 }

@@ -8,7 +8,11 @@ import {
   randomStream,
   tCdf,
 } from "../../mod.ts";
-import { uniformFromWords } from "../../calc/uncertainty/random.ts";
+import {
+  streamState,
+  uniformFromWords,
+  xoshiro128StarStar,
+} from "../../calc/uncertainty/random.ts";
 
 const N = 200_000;
 
@@ -170,34 +174,75 @@ Deno.test("coverage intervals leave their input untouched (frozen copy compared)
   assert.deepEqual(a, before);
 });
 
-Deno.test("MT19937 raw words: reference outputs for a single seed and for a key (init_by_array)", () => {
-  const words = (seed: number | number[], n: number) => {
-    const r = randomStream(seed);
-    return Array.from({ length: n }, () => r.uint32());
+Deno.test("xoshiro128** raw words: the reference code's outputs", () => {
+  const words = (state: number[], n: number) => {
+    const next = xoshiro128StarStar(state);
+    return Array.from({ length: n }, () => next());
   };
-  // mt19937ar.out (Matsumoto & Nishimura 2002 reference code), key {0x123, 0x234, 0x345, 0x456}:
-  // first five outputs; the same values from numpy 2.4.6 MT19937._legacy_seeding (init_by_array)
+  // edorfaus/xoshiro-6502, test-rom/testdata.asm (values from the C reference implementation
+  // xoshiro128starstar.c): state bytes 0C 4A 4D 96 95 B8 0A D4 CB DE 7F AD F0 F0 06 30, i.e. the
+  // little-endian words below; outputs F1391922, 6FE53806, A5BE2840, F510EE70
   assert.deepEqual(
-    words([0x123, 0x234, 0x345, 0x456], 5),
-    [1067595299, 955945823, 477289528, 4107218783, 4228976476],
+    words([0x964d4a0c, 0xd40ab895, 0xad7fdecb, 0x3006f0f0], 4),
+    [0xf1391922, 0x6fe53806, 0xa5be2840, 0xf510ee70],
   );
-  // numpy 2.4.6, MT19937()._legacy_seeding(key).random_raw(1005): words 1004 and 1005 (past the
-  // first refill of the 624-word state)
-  assert.deepEqual(words([0x123, 0x234, 0x345, 0x456], 1005).slice(-2), [435643333, 1199718579]);
-  // the same numpy 2.4.6 construction, MT19937()._legacy_seeding(key).random_raw(1005), for a run
-  // seed with a block index and for a three-word key
-  assert.deepEqual(words([20080101, 3], 5), [
-    3318652550,
-    1599953118,
-    1737149465,
-    2376876779,
-    744887581,
+  // state {0, 1, 2, 3}: the reference code's first ten outputs as quoted by public xoshiro128**
+  // test suites (TypeScript ports tested against the C reference; found by code search)
+  assert.deepEqual(words([0, 1, 2, 3], 10), [
+    5760,
+    17280,
+    2966400,
+    32451840,
+    2604340873,
+    3891234569,
+    1254043636,
+    216095511,
+    3291724652,
+    2070429911,
   ]);
-  assert.deepEqual(words([20080101, 3], 1005).slice(-2), [1287629184, 1559558500]);
-  assert.deepEqual(words([7, 0, 1], 5), [4134331577, 364536972, 1405532956, 207176672, 3322737464]);
+  assert.throws(() => xoshiro128StarStar([0, 0, 0, 0]), /not all zero, got \[0, 0, 0, 0\]/);
+});
+
+Deno.test("stream state: the first four MT19937 words of the seed or key", () => {
+  // mt19937ar.out (Matsumoto & Nishimura 2002 reference code), key {0x123, 0x234, 0x345, 0x456}:
+  // first outputs; the same values from numpy 2.4.6 MT19937._legacy_seeding (init_by_array)
+  assert.deepEqual(
+    streamState([0x123, 0x234, 0x345, 0x456]),
+    [1067595299, 955945823, 477289528, 4107218783],
+  );
+  // numpy 2.4.6, MT19937()._legacy_seeding(key).random_raw(4), for a run seed with a block index
+  // and for a three-word key
+  assert.deepEqual(streamState([20080101, 3]), [3318652550, 1599953118, 1737149465, 2376876779]);
+  assert.deepEqual(streamState([7, 0, 1]), [4134331577, 364536972, 1405532956, 207176672]);
   // init_genrand(5489), the reference default seed: 3499211612, 581869302, 3890346734 (numpy 2.4.6
   // MT19937._legacy_seeding(5489); from memory, the first value of C++11 std::mt19937 by default)
-  assert.deepEqual(words(5489, 3), [3499211612, 581869302, 3890346734]);
+  assert.deepEqual(streamState(5489).slice(0, 3), [3499211612, 581869302, 3890346734]);
+  // a stream's words are xoshiro128** from that state (the same construction, step by step)
+  const next = xoshiro128StarStar(streamState([7, 0, 1]));
+  const stream = randomStream([7, 0, 1]);
+  for (let i = 0; i < 1000; i++) assert.equal(stream.uint32(), next());
+});
+
+Deno.test("seeded reproducibility: the same seed or key gives the same draws, bit for bit", () => {
+  for (const seed of [1, 20080101, [5, 0, 9], [2 ** 32 - 1, 123456789, 42, 7]]) {
+    const a = randomStream(seed), b = randomStream(seed);
+    const x = new Float64Array(5000), y = new Float64Array(5000);
+    a.fillNormal(x, 3, 2);
+    b.fillNormal(y, 3, 2);
+    assert.deepEqual(x, y);
+    a.fillUniform(x);
+    b.fillUniform(y);
+    assert.deepEqual(x, y);
+    for (let i = 0; i < 100; i++) assert.equal(a.studentT(4), b.studentT(4));
+  }
+  // bulk fills give the same numbers as one draw at a time from the same stream
+  const bulk = randomStream(77), single = randomStream(77);
+  const z = new Float64Array(20_000);
+  bulk.fillNormal(z);
+  for (let i = 0; i < z.length; i++) assert.equal(z[i], single.normal());
+  const u = new Float64Array(20_000);
+  bulk.fillUniform(u);
+  for (let i = 0; i < u.length; i++) assert.equal(u[i], single.uniform());
 });
 
 Deno.test("random stream keys: bad keys are refused with the key shown", () => {
