@@ -6,7 +6,7 @@
  * parses arguments, reads and writes files.
  *
  * Usage: `deno task validate <table.csv> [--subject col] [--rater col] [--replicate col]
- * [--value col] [--unit u] [--label text] [--encoding label] [--out dir] [--seed n] [--graded]
+ * [--value col] [--unit u] [--label text] [--encoding label] [--out dir] [--graded]
  * [--categories a,b,c] [--reference name] [--multiplier 1.96|2] [--confidence 0.95]
  * [--title text]`
  *
@@ -38,7 +38,7 @@ import {
   type ReadTableOptions,
   readTableStream,
   renderIssue,
-  statedQuantity,
+  statedColumnQuantity,
   type Table,
   validationColumns,
   type ValidationDesignOptions,
@@ -55,16 +55,19 @@ const HELP = `Usage: deno task validate <table.csv> [options]
   --replicate col    replicate column (default "replicate"; falls back to "repeat", "reading", "round";
                      optional: absent means one reading each)
   --value col        value column (default "value"; falls back to the single remaining column)
-  --unit u           unit of the values in the file (e.g. "mm"; a known quantity is converted from it);
-                     required, with --label, when the value column is not a quantity the package knows
-  --label text       what was measured, for a value column the package does not know (default: its header)
+  --unit u           unit of the values in the file (e.g. "mm"), when the value column's header does not
+                     state it as "value [mm]"; a known quantity is converted from it. A value column of no
+                     quantity the package knows needs a unit, in its header or here. The unit is shown in
+                     every table header and chart axis of the report
+  --label text       what was measured, for a value column the package does not know (default: its header,
+                     e.g. "jet_width [mm]" gives "Jet width")
   --encoding label   text encoding of the file, e.g. windows-1252 or iso-8859-1 (default utf-8; decoding is
                      strict: a byte the encoding cannot hold stops the command with its offset and line)
   --out dir          output folder (default "out/validation")
-  --seed n           recorded in provenance (all statistics here are deterministic)
   --graded           values are ordered categories: kappa statistics
   --categories a,b   order of the categories for weighted kappa (default: order of first appearance)
-  --reference name   reference observer/method for method comparison (default: first in the table)
+  --reference name   reference observer/method (default: first in the table): each other one is compared
+                     with it, then every pair of the others with each other
   --multiplier m     limits-of-agreement multiplier, 1.96 (default) or 2
   --confidence c     confidence level of intervals (default 0.95)
   --title text       study title`;
@@ -218,13 +221,14 @@ function remapping(
     if (column.kind === "text") return null;
     columns[header] = "text";
   } else if (column.kind === "text") {
-    if (stated.unit === undefined) {
-      fail([
-        `error: column '${header}' holds values of no quantity the package knows: state their unit with --unit (and what was measured with --label), or pass --graded for graded findings`,
-      ]);
-    }
-    columns[header] = statedQuantity({ label: stated.label ?? header, unit: stated.unit });
-    units[header] = stated.unit;
+    // a column of no known quantity: its unit from the header ("value [mm]") or --unit
+    const quantity = orFail(() => statedColumnQuantity(header, stated));
+    columns[header] = quantity;
+    units[header] = quantity.unit;
+  } else if (stated.label !== undefined) {
+    return fail([
+      `error: column '${header}' holds ${column.quantity.label}, a quantity the package knows; expected no --label, got --label ${stated.label}`,
+    ]);
   } else if (stated.unit !== undefined && column.sourceUnit !== stated.unit) {
     if (/\[[^\]]+\]\s*$/.test(header)) {
       fail([
@@ -266,7 +270,6 @@ async function main(): Promise<void> {
       unit: { type: "string" },
       label: { type: "string" },
       out: { type: "string", default: "out/validation" },
-      seed: { type: "string", default: "1" },
       graded: { type: "boolean", default: false },
       categories: { type: "string" },
       reference: { type: "string" },
@@ -287,16 +290,11 @@ async function main(): Promise<void> {
   const path = positionals[0]!;
   const multiplier = Number(opt.multiplier);
   const confidence = Number(opt.confidence);
-  const seed = Number(opt.seed);
   if (!(multiplier > 0 && multiplier <= 5)) {
     fail([`error: expected --multiplier in (0, 5], got ${opt.multiplier}`]);
   }
   if (!(confidence > 0 && confidence < 1)) {
     fail([`error: expected --confidence in (0, 1), got ${opt.confidence}`]);
-  }
-  if (!Number.isInteger(seed)) fail([`error: expected an integer --seed, got ${opt.seed}`]);
-  if (opt.label !== undefined && opt.unit === undefined) {
-    fail([`error: expected --label together with --unit, got --label ${opt.label} alone`]);
   }
 
   progress(`reading ${path}`);
@@ -333,7 +331,6 @@ async function main(): Promise<void> {
         runtime: `Deno ${Deno.version.deno}`,
         dependencies,
         date: new Date().toISOString(),
-        seed,
       },
     });
   } catch (e) {

@@ -54,8 +54,9 @@ export { JUPYTER_DISPLAY } from "./mime.ts";
  *   quantity: EJECTION_FRACTION, methodNames: ["auto", "manual"],
  * });
  * // bias (2 + 0 − 3 + 3 − 1)/5 = 0.2 %
+ * // a difference of two percentages is in percentage points
  * assert.match(String(r[JUPYTER_DISPLAY]()["text/plain"]),
- *   /Bias \(mean of auto − manual\) \(%\) +0\.2 /);
+ *   /Bias \(mean of auto − manual\) \(percentage points\) +0\.2 /);
  * ```
  */
 export function displayBlandAltman(r: BlandAltmanResult): MimeBundle {

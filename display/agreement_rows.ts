@@ -13,7 +13,13 @@ import type { IntraclassCorrelationResult } from "../calc/agreement/types.ts";
 import type { ConcordanceResult } from "../calc/agreement/types.ts";
 import type { RegressionResult } from "../calc/agreement/types.ts";
 import type { CohenKappaResult, FleissKappaResult } from "../calc/agreement/types.ts";
-import { formatCount, formatInterval, formatNumber, roundLike } from "./format.ts";
+import {
+  formatCount,
+  formatInterval,
+  formatNumber,
+  formatResolution,
+  roundLike,
+} from "./format.ts";
 import { labelWithUnit } from "./uncertainty.ts";
 
 // ---------------------------------------------------------------------------------------------
@@ -30,9 +36,17 @@ export function pValue(p: number): string {
 }
 /** A label with the unit of what was measured (none when it was not stated). */
 export const inUnit = (label: string, q: Measured | null) => labelWithUnit(label, q?.unit ?? "1");
-/** A label with the square of the unit (variances). */
+/** The unit of a difference or a spread of readings: "percentage points" for readings in %
+ * (the difference of two percentages is not a percentage of anything), else the unit itself. */
+export function differenceUnit(unit: string): string {
+  return unit === "%" ? "percentage points" : unit;
+}
+/** A label with the unit of a difference or spread of what was measured. */
+export const inDifferenceUnit = (label: string, q: Measured | null) =>
+  labelWithUnit(label, differenceUnit(q?.unit ?? "1"));
+/** A label with the square of the unit of a difference (variances of differences). */
 export function inUnitSquared(label: string, q: Measured | null): string {
-  const u = q?.unit ?? "1";
+  const u = differenceUnit(q?.unit ?? "1");
   if (u === "1") return label;
   return labelWithUnit(label, /[ /*]/.test(u) ? `(${u})^2` : `${u}^2`);
 }
@@ -48,23 +62,42 @@ export interface Rows {
   readonly rows: readonly (readonly string[])[];
 }
 
+/** The bias and limits of agreement of a Bland–Altman result as its table shows them (rounded to
+ * the decimal place the bias interval allows), also written on the lines of its chart. */
+export function blandAltmanLevels(
+  r: BlandAltmanResult,
+): { bias: string; lower: string; upper: string } {
+  const u = halfWidth(r.biasCi);
+  return {
+    bias: roundLike(r.bias, u),
+    lower: roundLike(r.lowerLimit.value, u),
+    upper: roundLike(r.upperLimit.value, u),
+  };
+}
+
+/** The name of a limit of agreement: "Upper limit of agreement (bias + 1.96 SD)". */
+export function limitName(which: "Lower" | "Upper", multiplier: number): string {
+  return `${which} limit of agreement (bias ${which === "Lower" ? "−" : "+"} ${
+    formatNumber(multiplier, 3)
+  } SD)`;
+}
+
 export function blandAltmanRows(r: BlandAltmanResult): Rows {
   const q = r.quantity;
   const [a, b] = r.methodNames;
   const u = halfWidth(r.biasCi);
-  const m = formatNumber(r.multiplier, 3);
+  const shown = blandAltmanLevels(r);
   const rows: string[][] = [
     ["Pairs", formatCount(r.n), "", ""],
-    [inUnit(`Bias (mean of ${a} − ${b})`, q), roundLike(r.bias, u), ci(r.biasCi, u), "–"],
-    [inUnit("SD of differences", q), roundLike(r.sdDifferences, u), "–", "–"],
-    ...([["Lower", r.lowerLimit, "−"], ["Upper", r.upperLimit, "+"]] as const).map((
-      [name, l, sign],
-    ) => [
-      inUnit(`${name} limit of agreement (bias ${sign} ${m} SD)`, q),
-      roundLike(l.value, u),
-      ci(l.approximateCi, u),
-      ci(l.exactCi, u),
-    ]),
+    [inDifferenceUnit(`Bias (mean of ${a} − ${b})`, q), shown.bias, ci(r.biasCi, u), "–"],
+    [inDifferenceUnit("SD of differences", q), roundLike(r.sdDifferences, u), "–", "–"],
+    ...([["Lower", r.lowerLimit, shown.lower], ["Upper", r.upperLimit, shown.upper]] as const)
+      .map(([name, l, value]) => [
+        inDifferenceUnit(limitName(name, r.multiplier), q),
+        value,
+        ci(l.approximateCi, u),
+        ci(l.exactCi, u),
+      ]),
   ];
   const p = r.proportionalBias;
   if (p) {
@@ -87,51 +120,69 @@ export function blandAltmanRows(r: BlandAltmanResult): Rows {
   };
 }
 
+/** The repeated-measures analysis: no confidence intervals, so bias, SD and limits are rounded
+ * to the decimal place of the SD of a single difference at two significant digits, and each
+ * variance to two significant digits of itself (JCGM 100:2008 §7.2.6 applied to the spread). */
 export function repeatedRows(r: BlandAltmanRepeatedResult): Rows {
   const q = r.quantity;
   const [a, b] = r.methodNames;
-  const n = (v: number) => formatNumber(v, 4);
+  const sd = (v: number) => roundLike(v, r.sdDifferences);
   const m = formatNumber(r.multiplier, 3);
   return {
     header: ["Statistic", "Estimate"],
     rows: [
       ["Pairs (subjects)", `${formatCount(r.pairs)} (${formatCount(r.subjects)})`],
-      [inUnit(`Bias (mean of ${a} − ${b})`, q), n(r.bias)],
-      [inUnitSquared("Between-subject variance of differences", q), n(r.betweenSubjectVariance)],
-      [inUnitSquared("Within-subject variance of differences", q), n(r.withinSubjectVariance)],
-      [inUnit("SD of a single difference", q), n(r.sdDifferences)],
+      [inDifferenceUnit(`Bias (mean of ${a} − ${b})`, q), sd(r.bias)],
       [
-        inUnit(`Limits of agreement (bias ∓ ${m} SD)`, q),
-        `${n(r.lowerLimit)} to ${n(r.upperLimit)}`,
+        inUnitSquared("Between-subject variance of differences", q),
+        roundLike(r.betweenSubjectVariance, r.betweenSubjectVariance),
+      ],
+      [
+        inUnitSquared("Within-subject variance of differences", q),
+        roundLike(r.withinSubjectVariance, r.withinSubjectVariance),
+      ],
+      [inDifferenceUnit("SD of a single difference", q), sd(r.sdDifferences)],
+      [
+        inDifferenceUnit(`Limits of agreement (bias ∓ ${m} SD)`, q),
+        `${sd(r.lowerLimit)} to ${sd(r.upperLimit)}`,
       ],
     ],
   };
 }
 
+/** The cells of a repeatability result: s_w and the coefficient with their intervals, and the
+ * CV in % of the mean to two significant digits (no interval is computed for it; its relative
+ * uncertainty is about that of s_w, tens of percent in a usual study). */
 export function repeatabilityCells(r: RepeatabilityResult): string[] {
   const u = halfWidth(r.withinSubjectSdCi);
   const uc = halfWidth(r.repeatabilityCoefficientCi);
+  const cv = r.withinSubjectCv === null ? null : 100 * r.withinSubjectCv;
   return [
     `${roundLike(r.withinSubjectSd, u)} ${ci(r.withinSubjectSdCi, u)}`,
     `${roundLike(r.repeatabilityCoefficient, uc)} ${ci(r.repeatabilityCoefficientCi, uc)}`,
-    r.withinSubjectCv === null
-      ? "undefined (a subject mean ≤ 0)"
-      : `${formatNumber(100 * r.withinSubjectCv, 3)} %`,
+    cv === null ? "undefined (a subject mean ≤ 0)" : roundLike(cv, cv),
   ];
 }
 
+/** The header of the coefficient of variation: a percentage of the mean (never percentage
+ * points). */
+export const CV_HEADER = "Within-subject CV, root mean square (% of the subject mean)";
+
 export function repeatabilityHeader(q: Measured | null, multiplier: number, confidence: number) {
   return [
-    inUnit(`Within-subject SD s_w [${level(confidence)}]`, q),
-    inUnit(
+    inDifferenceUnit(`Within-subject SD s_w [${level(confidence)}]`, q),
+    inDifferenceUnit(
       `Repeatability coefficient ${formatNumber(multiplier * Math.SQRT2, 3)}·s_w [${
         level(confidence)
       }]`,
       q,
     ),
-    "Within-subject CV (RMS)",
+    CV_HEADER,
   ];
 }
+
+/** Degrees of freedom: a count when whole, else three significant digits (Satterthwaite). */
+const degrees = (df: number) => Number.isInteger(df) ? formatCount(df) : formatNumber(df, 3);
 
 export function iccRows(r: IntraclassCorrelationResult): Rows {
   return {
@@ -156,7 +207,7 @@ export function iccRows(r: IntraclassCorrelationResult): Rows {
         f.unit,
         roundLike(f.value, u),
         ci(f.ci, u),
-        `${formatNumber(f.f, 4)} (${formatNumber(f.df1, 4)}, ${formatNumber(f.df2, 4)})`,
+        `${formatNumber(f.f, 3)} (${degrees(f.df1)}, ${degrees(f.df2)})`,
         pValue(f.pValue),
       ];
     }),
@@ -190,7 +241,7 @@ export function regressionRows(r: RegressionResult): string[][] {
   switch (r.method) {
     case "Deming":
       rows[0]![3] = `${se("jackknife", r.slopeStandardError)}; error variance ratio ${
-        formatNumber(r.errorVarianceRatio, 3)
+        formatNumber(r.errorVarianceRatio, 2)
       }`;
       rows[1]![3] = se("jackknife", r.interceptStandardError);
       break;
@@ -224,7 +275,8 @@ export function regressionRows(r: RegressionResult): string[][] {
       rows[0]![3] = `${formatCount(r.slopesUsed)} pairwise slopes`;
       rows.push([
         "Cusum linearity statistic",
-        formatNumber(r.linearity.statistic, 3),
+        // two decimals, as the critical values of Passing & Bablok (1983) are tabulated
+        formatResolution(r.linearity.statistic, 0.01),
         "–",
         `${
           r.linearity.nonLinear ? "exceeds" : "does not exceed"
@@ -234,6 +286,10 @@ export function regressionRows(r: RegressionResult): string[][] {
   return rows;
 }
 
+/** A proportion of agreement (or a kappa without an interval) to three decimals, trailing zeros
+ * kept so that a column reads at one precision ("0.900" beside "0.725"). */
+const proportion = (p: number) => formatResolution(p, 0.001);
+
 export function kappaStatistic(weights: CohenKappaResult["weights"]): string {
   return weights === "none" ? "Cohen's kappa" : `weighted kappa (${weights})`;
 }
@@ -242,8 +298,8 @@ export function kappaCells(r: CohenKappaResult): string[] {
   const u = halfWidth(r.ci);
   return [
     formatCount(r.n),
-    formatNumber(r.observedAgreement, 3),
-    formatNumber(r.expectedAgreement, 3),
+    proportion(r.observedAgreement),
+    proportion(r.expectedAgreement),
     roundLike(r.kappa, u),
     formatNumber(r.standardError, 2),
     ci(r.ci, u),
@@ -260,9 +316,9 @@ export function fleissRows(r: FleissKappaResult): Rows {
     rows: [[
       formatCount(r.subjects),
       formatCount(r.ratersPerSubject),
-      formatNumber(r.observedAgreement, 3),
-      formatNumber(r.expectedAgreement, 3),
-      formatNumber(r.kappa, 3),
+      proportion(r.observedAgreement),
+      proportion(r.expectedAgreement),
+      proportion(r.kappa),
       formatNumber(r.standardErrorNull, 3),
       formatNumber(r.z, 3),
       pValue(r.pValue),

@@ -17,12 +17,14 @@ import type {
 import { renderIssue } from "../calc/core/issues.ts";
 import { formatUnit } from "../calc/core/text.ts";
 import { escapeHtml } from "./mime.ts";
-import { formatCount, formatNumber } from "./format.ts";
+import { formatCount, formatNumber, roundLike } from "./format.ts";
 import { labelWithUnit } from "./uncertainty.ts";
 import {
   blandAltmanRows,
   concordanceRows,
+  differenceUnit,
   fleissRows,
+  halfWidth,
   iccRows,
   kappaCells,
   kappaHeader,
@@ -75,7 +77,7 @@ export function missingReadingText(m: MissingReading): string {
  * const csv = "patient,observer,lvef percent\nP1,A,55\nP1,B,54\nP2,A,40\nP2,B,43\nP3,A,62\nP3,B,61\n";
  * const report = methodValidation(readTable(csv));
  * assert.equal(figureCaption(report, report.figures[1]!),
- *   "B against A with the line of identity and the fitted lines.");
+ *   "B against A: the line of identity (grey, dashed) and the fitted Deming (solid) and Passing–Bablok (dash-dotted) lines.");
  * ```
  */
 export function figureCaption(report: MethodValidationReport, figure: FigurePlan): string {
@@ -83,10 +85,12 @@ export function figureCaption(report: MethodValidationReport, figure: FigurePlan
   if (figure.kind === "blandAltman") {
     return `Bland–Altman plot, ${c!.test} − ${
       c!.reference
-    }: bias and limits (dashed) with exact confidence bands (shaded).`;
+    }: bias (solid line) and limits of agreement (dashed lines), each with its value written on it, and their exact confidence intervals (shaded bands).`;
   }
   if (figure.kind === "comparison") {
-    return `${c!.test} against ${c!.reference} with the line of identity and the fitted lines.`;
+    return `${c!.test} against ${
+      c!.reference
+    }: the line of identity (grey, dashed) and the fitted Deming (solid) and Passing–Bablok (dash-dotted) lines.`;
   }
   return "Every reading by subject, coloured by observer or method (all replicates).";
 }
@@ -128,7 +132,9 @@ function studyBlocks(r: MethodValidationReport): Block[] {
             ? `'${c.replicate}' the replicate, `
             : "no replicate column (one reading each), "
         }'${c.value}' ${what}.${
-          s.reference !== null ? ` Reference for the method comparisons: ${s.reference}.` : ""
+          s.reference !== null
+            ? ` Reference for the method comparisons: ${s.reference}; every other pair of observers or methods is compared as well.`
+            : ""
         } Intervals are ${formatNumber(100 * s.confidence, 3)} % confidence intervals${
           s.design === "continuous"
             ? `; limits of agreement are bias ± ${formatNumber(s.multiplier, 3)} SD`
@@ -151,7 +157,7 @@ function dataBlocks(r: MethodValidationReport): Block[] {
         formatCount(o.subjects),
         o.fewestReplicates === o.mostReplicates
           ? formatCount(o.mostReplicates)
-          : `${formatCount(o.fewestReplicates)}–${formatCount(o.mostReplicates)}`,
+          : `${formatCount(o.fewestReplicates)} to ${formatCount(o.mostReplicates)}`,
       ]),
     },
     {
@@ -212,7 +218,13 @@ function repeatabilityBlocks(r: MethodValidationReport): Block[] {
 function comparisonBlocks(r: MethodValidationReport, c: MethodComparison, i: number): Block[] {
   const conf = level(r.study.confidence);
   const out: Block[] = [
-    { kind: "heading", level: 2, text: `Method comparison: ${c.test} against ${c.reference}` },
+    {
+      kind: "heading",
+      level: 2,
+      text: c.against === "reference"
+        ? `Method comparison: ${c.test} against the reference ${c.reference}`
+        : `Observer comparison: ${c.test} against ${c.reference}`,
+    },
     {
       kind: "paragraph",
       text: `${
@@ -227,7 +239,9 @@ function comparisonBlocks(r: MethodValidationReport, c: MethodComparison, i: num
       "Bland–Altman analysis",
       blandAltmanRows,
       `Differences are ${c.test} − ${c.reference}${
-        formatUnit(r.study.measured.unit) ? ` in ${formatUnit(r.study.measured.unit)}` : ""
+        formatUnit(r.study.measured.unit)
+          ? ` in ${formatUnit(differenceUnit(r.study.measured.unit))}`
+          : ""
       }.`,
       figureBlocks(r, "blandAltman", i),
     ),
@@ -258,16 +272,17 @@ function comparisonBlocks(r: MethodValidationReport, c: MethodComparison, i: num
   if (c.concordance.status === "computed") {
     const cc = c.concordance.result;
     const first = concordanceRows(cc)[0]!;
+    const u = halfWidth(cc.ci);
     rows.push([
       first[0]!,
       first[1]!,
       first[2]!,
-      `Pearson r ${formatNumber(cc.pearson, 4)}, C_b ${formatNumber(cc.biasCorrectionFactor, 4)}`,
+      `Pearson r ${roundLike(cc.pearson, u)}, C_b ${roundLike(cc.biasCorrectionFactor, u)}`,
     ]);
   } else rows.push(failed("Lin's concordance correlation", c.concordance));
   const lambdaNote = c.errorVarianceRatio.from === "replicates"
     ? `error variance ratio ${
-      formatNumber(c.errorVarianceRatio.value, 3)
+      formatNumber(c.errorVarianceRatio.value, 2)
     } = (s_w ${c.test} / s_w ${c.reference})² from the replicates`
     : "error variance ratio 1 (no replicates to estimate it)";
   if (c.deming.status === "computed") {
@@ -370,11 +385,8 @@ function provenanceItems(r: MethodValidationReport): string[] {
     ...(p.tool ? [`Tool: ${p.tool}${p.runtime ? `; ${p.runtime}` : ""}`] : []),
     ...(p.dependencies?.length ? [`Dependencies: ${p.dependencies.join("; ")}`] : []),
     ...(p.date ? [`Date: ${p.date}`] : []),
-    ...(p.seed !== undefined
-      ? [
-        `Seed: ${p.seed} (recorded for reproducibility; every statistic in this report is deterministic, none draws random numbers)`,
-      ]
-      : ["Every statistic in this report is deterministic; none draws random numbers."]),
+    // a seed is stated only where something random is drawn; nothing in this report is
+    "Every statistic in this report is deterministic: nothing random is drawn, so no seed is needed.",
     `Options: multiplier ${formatNumber(r.study.multiplier, 3)}, confidence ${
       formatNumber(r.study.confidence, 3)
     }${r.study.design === "graded" ? ", graded" : ""}`,
@@ -495,7 +507,8 @@ function htmlBlock(b: Block, svgs: Readonly<Record<string, string>>): string {
  * const csv = "patient,observer,lvef percent\nP1,A,55\nP1,B,54\nP2,A,40\nP2,B,43\nP3,A,62\nP3,B,61\n";
  * const md = methodValidationMarkdown(methodValidation(readTable(csv, { source: "demo.csv" })));
  * assert.match(md, /^# Method validation report: demo\.csv/);
- * assert.match(md, /\| Bias \(mean of B − A\) \(%\) \| 0\.3 \|/); // (−1 + 3 − 1)/3 = 1/3
+ * // (−1 + 3 − 1)/3 = 1/3, a difference of percentages: percentage points
+ * assert.match(md, /\| Bias \(mean of B − A\) \(percentage points\) \| 0\.3 \|/);
  * ```
  */
 export function methodValidationMarkdown(report: MethodValidationReport): string {
@@ -525,7 +538,7 @@ export interface ReportHtmlOptions {
  * const html = methodValidationHtml(methodValidation(readTable(csv, { source: "demo.csv" })));
  * assert.match(html, /^<!doctype html>/);
  * assert.doesNotMatch(html, /<b>A/); // the observer name is escaped
- * assert.match(html, /B against &lt;b&gt;A&lt;\/b&gt;/);
+ * assert.match(html, /B against the reference &lt;b&gt;A&lt;\/b&gt;/);
  * ```
  */
 export function methodValidationHtml(

@@ -5,6 +5,7 @@
  * @module
  */
 import type { MimeBundle } from "../calc/core/types.ts";
+import { NOT_MEASURED } from "./format.ts";
 
 export type { MimeBundle };
 
@@ -44,7 +45,7 @@ export function escapeHtml(text: string): string {
 
 /**
  * An HTML table from a header row and body rows (cells are escaped; numeric-looking cells are
- * right-aligned).
+ * right-aligned, as is "not measured").
  *
  * @example
  * ```ts
@@ -58,7 +59,9 @@ export function htmlTable(header: readonly string[], rows: readonly (readonly st
     .join("");
   const td = (c: string) =>
     `<td style="padding:2px 8px${
-      /^[−\-+]?[\d.]+( |$)/.test(c) ? ";text-align:right;font-variant-numeric:tabular-nums" : ""
+      /^[−\-+]?[\d.]+( |$)/.test(c) || c === NOT_MEASURED
+        ? ";text-align:right;font-variant-numeric:tabular-nums;white-space:nowrap"
+        : ""
     }">${escapeHtml(c)}</td>`;
   const body = rows.map((r) => `<tr>${r.map(td).join("")}</tr>`).join("");
   return `<table style="border-collapse:collapse"><thead><tr>${th}</tr></thead><tbody>${body}</tbody></table>`;

@@ -26,15 +26,38 @@ export {
   roundLike,
 } from "./format.ts";
 export {
+  BUDGET_HEADER,
   budgetRows,
   displayPropagation,
   displayValue,
+  formatDof,
   formatUncertainValue,
   labelWithUnit,
 } from "./uncertainty.ts";
+export {
+  type BudgetExport,
+  budgetExport,
+  type BudgetExportOptions,
+  budgetLatex,
+  budgetMarkdown,
+  latexText,
+} from "./budget_export.ts";
 export { displayEvaluation, type TableDisplay, tableDisplay } from "./results.ts";
 export { columnHeader, displayTable, reportedCell } from "./table.ts";
-export { displayZScore } from "./reference.ts";
+export {
+  displayNormalLimits,
+  displayZScore,
+  displayZScoreComparison,
+  formatZScore,
+} from "./reference.ts";
+export { displayGumValidation, displaySensitivityCurve } from "./sensitivity.ts";
+export {
+  formatMonteCarloProgress,
+  type NotebookMessage,
+  notebookProgress,
+  type ProgressOptions,
+  terminalProgress,
+} from "./progress.ts";
 export * from "./physics.ts";
 export * from "./grading.ts";
 export * from "./chamber.ts";

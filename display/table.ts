@@ -24,8 +24,9 @@ function uncertaintyOf(table: Table, c: NumericColumn): Float64Array | null {
 
 /**
  * A numeric cell as reported: by the metrology rule when the column (or the value it belongs to)
- * has a standard uncertainty in that row, otherwise to the quantity's display resolution; empty
- * text for a missing value.
+ * has a standard uncertainty in that row, otherwise a computed value to the quantity's display
+ * resolution and a value as read as it was written (without the noise of its unit conversion);
+ * empty text for a missing value.
  *
  * @param table The table.
  * @param c A numeric column of it.
@@ -37,7 +38,10 @@ export function reportedCell(table: Table, c: NumericColumn, row: number): strin
   if (v !== v) return "";
   const u = uncertaintyOf(table, c)?.[row];
   if (u !== undefined && u === u && u > 0) return roundLike(v, u);
-  return c.computed ? formatResolution(v, c.quantity.resolution) : String(v);
+  if (c.computed) return formatResolution(v, c.quantity.resolution);
+  // a value as read, without the binary noise of its unit conversion (19.3 mm → 1.93 cm, never
+  // 1.9300000000000002): 12 significant digits keep every digit a person writes
+  return String(Number(v.toPrecision(12)));
 }
 
 /** The header of a column as a person reads it: the quantity's label with the unit. */

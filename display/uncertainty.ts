@@ -9,7 +9,14 @@ import type { MimeBundle } from "../calc/core/types.ts";
 import type { BudgetRow, Propagation, UncertainValue } from "../calc/uncertainty/types.ts";
 import { formatUnit } from "../calc/core/text.ts";
 import { escapeHtml, htmlNotes, htmlTable, textTable } from "./mime.ts";
-import { formatInterval, formatNumber, formatPlusMinus, formatShare, roundLike } from "./format.ts";
+import {
+  formatInterval,
+  formatNumber,
+  formatPlusMinus,
+  formatResolution,
+  formatShare,
+  roundLike,
+} from "./format.ts";
 
 import { JUPYTER_DISPLAY } from "./mime.ts";
 
@@ -75,11 +82,34 @@ function unitSuffix(unit: string): string {
   return u === "" ? "" : u === "°" ? "°" : ` ${u}`;
 }
 
+/** An exact value (no uncertainty) to its quantity's display resolution, like any value shown
+ * without an uncertainty ("0.9989", never "0.998889"). */
 function exactText(v: UncertainValue): string {
-  return `${formatNumber(v.value, 6)}${unitSuffix(v.unit)} (exact)`;
+  return `${formatResolution(v.value, v.quantity.resolution)}${unitSuffix(v.unit)} (exact)`;
 }
 
-const BUDGET_HEADER = [
+/**
+ * Effective degrees of freedom as shown: one decimal below 100, whole above (ν_eff only sets the
+ * coverage factor, which no longer changes in the reported digits there), "∞" for an infinite
+ * and "not defined" for an undefined one.
+ *
+ * @example
+ * ```ts
+ * import { formatDof } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(formatDof(3.41), "3.4");
+ * assert.equal(formatDof(20993.14), "20993");
+ * assert.equal(formatDof(null), "not defined");
+ * ```
+ */
+export function formatDof(dof: number | null): string {
+  if (dof === null || Number.isNaN(dof)) return "not defined";
+  if (!Number.isFinite(dof)) return "∞";
+  return dof < 100 ? dof.toFixed(1) : String(Math.round(dof));
+}
+
+/** The header of a budget table (the columns of {@linkcode budgetRows}). */
+export const BUDGET_HEADER: readonly string[] = [
   "Source",
   "Distribution",
   "Estimate xᵢ",
@@ -106,10 +136,11 @@ export function budgetRows(v: UncertainValue): string[][] {
     labelWithUnit(b.label, b.unit),
     DISTRIBUTION_NAMES[b.distribution] ?? b.distribution,
     roundLike(b.estimate, b.standardUncertainty),
-    formatNumber(b.standardUncertainty, 2),
+    // u to two significant digits and the estimate to its decimal place (JCGM 100:2008 §7.2.6)
+    roundLike(b.standardUncertainty, b.standardUncertainty),
     Number.isFinite(b.dof) ? formatNumber(b.dof, 3) : "∞",
     `${formatNumber(b.sensitivity, 3)}${sensitivityUnit(v.unit, b.unit)}`,
-    `${formatNumber(b.contribution, 2)}${unitSuffix(v.unit)}`,
+    `${roundLike(b.contribution, Math.abs(b.contribution))}${unitSuffix(v.unit)}`,
     formatShare(b.share),
   ]);
 }
@@ -118,7 +149,8 @@ function sensitivityUnit(output: string, input: string): string {
   const o = formatUnit(output), i = formatUnit(input);
   if (o === "" && i === "") return "";
   if (i === "") return ` ${o}`;
-  return ` ${o === "" ? "1" : o}/${i}`;
+  // a compound input unit is a denominator in parentheses: mmHg/(m/s), never mmHg/m/s
+  return ` ${o === "" ? "1" : o}/${/[/·]/.test(i) ? `(${i})` : i}`;
 }
 
 /** The MIME bundle of one uncertain value (its line, and its budget for the GUM law). */
@@ -152,11 +184,7 @@ export function displayPropagation(result: Propagation): MimeBundle {
     const line = formatUncertainValue(v) + adequate;
     const extra = v.method === "gum" && v.standardUncertainty > 0
       ? `u = ${formatNumber(v.standardUncertainty, 2)}${unitSuffix(v.unit)}, ν_eff = ${
-        v.effectiveDof === null
-          ? "not defined"
-          : Number.isFinite(v.effectiveDof)
-          ? v.effectiveDof.toFixed(1)
-          : "∞"
+        formatDof(v.effectiveDof)
       }`
       : "";
     const rows = budgetRows(v);

@@ -210,7 +210,10 @@ const files: [string, { writeSVG(path: string): Promise<void> }][] = [
       },
     ),
   ],
-  ["pediatric-aortic-root.svg", tableZScoreChart(zScores, PHN_2017_MODELS.aorticRootSinus, INVENTED)],
+  [
+    "pediatric-aortic-root.svg",
+    tableZScoreChart(zScores, PHN_2017_MODELS.aorticRootSinus, INVENTED),
+  ],
   [
     "adult-lvef.svg",
     adultLimitChart("lvEjectionFraction", {

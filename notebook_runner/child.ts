@@ -12,7 +12,7 @@
  *
  * @module
  */
-import { runNotebookInProcess, type RunOptions } from "./runner.ts";
+import { type CodeCellPosition, runNotebookInProcess, type RunOptions } from "./runner.ts";
 
 /** What the parent passes: the notebook path and the serializable options. */
 export interface ChildRequest {
@@ -26,7 +26,7 @@ export interface ChildRequest {
 export type ChildEvent =
   | { type: "log"; line: string }
   | { type: "kernel"; pid: number; connectionFolder: string }
-  | { type: "cell"; number: number; state: "started" | "ended" }
+  | { type: "cell"; number: number; state: "started" | "ended"; position: CodeCellPosition }
   | { type: "result"; result: unknown };
 
 const encoder = new TextEncoder();
@@ -66,7 +66,7 @@ if (import.meta.main) {
     signal: controller.signal,
     log: (line) => emit({ type: "log", line }),
     onKernelStarted: (pid, connectionFolder) => emit({ type: "kernel", pid, connectionFolder }),
-    onCell: (number, state) => emit({ type: "cell", number, state }),
+    onCell: (number, state, position) => emit({ type: "cell", number, state, position }),
   }, false);
   emit({ type: "result", result });
   Deno.exit(0);

@@ -7,6 +7,10 @@
  * the defaults (notebooks/, examples/, out/notebooks) from the current folder of the process,
  * which `deno task` sets to the folder of the deno.json defining the task.
  *
+ * On a terminal, a progress bar under the log lines shows the code cells done, the notebook's
+ * place in the run and the time so far; when stderr is not a terminal only the log lines are
+ * written (no bar, no control characters).
+ *
  * Exit status ({@linkcode EXIT_CODES}, {@linkcode SIGNAL_EXIT_CODES}): 0 when every notebook ran;
  * 1 when a cell failed, timed out (`--timeout`) or the kernel died; 2 for bad input (usage, a
  * missing notebook, invalid JSON, a non-Deno kernelspec); 3 when the kernel could not be started
@@ -21,6 +25,7 @@ import { parseArgs } from "node:util";
 import { isAbsolute, relative, resolve } from "node:path";
 import { findNotebooks } from "./find_notebooks.ts";
 import { runNotebook } from "./isolation.ts";
+import { createProgress, type ProgressState } from "./progress.ts";
 import type { RunResult } from "./runner.ts";
 
 const USAGE = `Usage: deno task notebooks [paths...] [options]
@@ -145,12 +150,14 @@ export async function main(args: string[]): Promise<number> {
     return 0;
   }
 
+  // a bar on a terminal, redrawn each second and at each cell; nothing of it otherwise
+  const progress = createProgress();
   const controller = new AbortController();
   const signals = ["SIGINT", "SIGTERM"] as const;
   const listeners = signals.map((name) => {
     const listener = () => {
       if (!controller.signal.aborted) {
-        console.error(`\nInterrupted by ${name}: stopping the kernel…`);
+        progress.line(`\nInterrupted by ${name}: stopping the kernel…`);
         controller.abort(name); // forwarded to the notebook client and named in the partial
       }
     };
@@ -159,23 +166,41 @@ export async function main(args: string[]): Promise<number> {
   });
 
   const results: RunResult[] = [];
+  let state: ProgressState | undefined;
+  let started = 0;
+  const redraw = () => {
+    if (state !== undefined) progress.update({ ...state, elapsedMs: Date.now() - started });
+  };
+  const ticker = progress.drawn ? setInterval(redraw, 1000) : undefined;
   try {
-    for (const path of paths) {
+    for (const [index, path] of paths.entries()) {
       if (controller.signal.aborted) break;
+      started = Date.now();
+      state = undefined;
+      const notebook = { index: index + 1, count: paths.length };
       const result = await runNotebook(path, {
         timeoutSeconds,
         inPlace: values["in-place"],
         html: values.html,
         signal: controller.signal,
+        log: (line) => progress.line(line),
+        onCell: (_number, cellState, position) => {
+          const done = cellState === "ended" ? position.codeCell : position.codeCell - 1;
+          state = { label: path, done, total: position.codeCells, elapsedMs: 0, notebook };
+          redraw();
+        },
         ...(values.out === undefined ? {} : { outDir: pathFromCaller(values.out, caller) }),
         ...(values.deno === undefined ? {} : { denoPath: denoFromCaller(values.deno, caller) }),
       });
+      progress.finish();
       results.push(result);
       if (result.status === "invalid" || result.status === "kernel") {
         console.error(result.message);
       }
     }
   } finally {
+    clearInterval(ticker);
+    progress.finish();
     for (const [name, listener] of listeners) Deno.removeSignalListener(name, listener);
   }
 

@@ -191,7 +191,7 @@ export async function runNotebook(path: string, options: RunOptions = {}): Promi
     } else if (event.type === "cell") {
       cellNumber = event.number;
       if (event.state === "started") cellsStarted++;
-      onCell?.(event.number, event.state);
+      onCell?.(event.number, event.state, event.position);
       if (!signal?.aborted) {
         // the client enforces the limit itself; this is the bound should it fail to
         if (event.state === "started") armWatchdog(timeoutSeconds + graceSeconds, "timeout");

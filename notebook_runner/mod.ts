@@ -12,6 +12,8 @@
  * - {@linkcode findNotebooks} lists the notebooks of a project's folders.
  * - {@linkcode parseNotebook}, {@linkcode notebookProblems} and {@linkcode assertValidNotebook}
  *   read and check nbformat 4 documents; {@linkcode notebookToHtml} renders one offline.
+ * - {@linkcode createProgress} and {@linkcode formatProgress} draw a run's progress bar on a
+ *   terminal and stay quiet otherwise.
  * - {@linkcode DenoKernel} is the kernel client itself (connection file, signed messages).
  *
  * The command line is the `./cli` entry (`deno task notebooks` in this repository; `--help` lists
@@ -95,4 +97,16 @@ export {
   timeoutText,
   writeNotebook,
 } from "./notebook_files.ts";
-export { runNotebookInProcess, type RunOptions, type RunResult } from "./runner.ts";
+export {
+  type CodeCellPosition,
+  runNotebookInProcess,
+  type RunOptions,
+  type RunResult,
+} from "./runner.ts";
+export {
+  createProgress,
+  formatProgress,
+  type Progress,
+  type ProgressOptions,
+  type ProgressState,
+} from "./progress.ts";

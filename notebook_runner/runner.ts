@@ -75,8 +75,19 @@ export interface RunOptions {
    * connection file (which holds the signing key; removed when the kernel is stopped).
    */
   onKernelStarted?: (pid: number, connectionFolder: string) => void;
-  /** Called when a code cell starts ("started") and when it ends ("ended"), with its number. */
-  onCell?: (cellNumber: number, state: "started" | "ended") => void;
+  /**
+   * Called when a code cell starts ("started") and when it ends ("ended"), with its number among
+   * all cells and its place among the code cells (for a progress display).
+   */
+  onCell?: (cellNumber: number, state: "started" | "ended", position: CodeCellPosition) => void;
+}
+
+/** A code cell's place among the notebook's code cells (1-based), as `onCell` receives it. */
+export interface CodeCellPosition {
+  /** The cell's number among the code cells (1-based). */
+  codeCell: number;
+  /** Code cells in the notebook. */
+  codeCells: number;
 }
 
 /** The result of {@linkcode runNotebook}; never thrown, always returned. */
@@ -274,7 +285,10 @@ export async function runNotebookInProcess(
         collectors.push(collector);
         cell.outputs = collector.outputs;
         const stderrBefore = kernel.stderrTail;
-        options.onCell?.(index + 1, "started");
+        options.onCell?.(index + 1, "started", {
+          codeCell: codeIndex,
+          codeCells: codeCells.length,
+        });
         const outcome: ExecuteOutcome = await kernel.execute(source, {
           timeoutMs: timeoutSeconds * 1000,
           onIopub: (m) => collector.handle(m.header.msg_type, m.content),
@@ -285,7 +299,7 @@ export async function runNotebookInProcess(
           await kernel.kill();
           stopped = true;
         }
-        options.onCell?.(index + 1, "ended");
+        options.onCell?.(index + 1, "ended", { codeCell: codeIndex, codeCells: codeCells.length });
         result.cellsExecuted++;
         cell.execution_count = outcome.executionCount;
         const seconds = (outcome.elapsedMs / 1000).toFixed(2);

@@ -7,10 +7,12 @@
  *
  * @module
  */
-import { Chart, type ChartFootnotes, footnotesWith } from "./chart.ts";
+import { Chart, type ChartFootnotes, footnotesWith, wrapText } from "./chart.ts";
 import type { Interval } from "../calc/agreement/checks.ts";
 import type { FigurePlan, MethodValidationReport } from "../calc/agreement/report_types.ts";
 import { labelWithUnit } from "../display/uncertainty.ts";
+import { withUnit } from "../calc/core/text.ts";
+import { blandAltmanLevels, differenceUnit, limitName } from "../display/agreement_rows.ts";
 import type { BlandAltmanResult, Measured } from "../calc/agreement/types.ts";
 
 /** Options of {@linkcode blandAltmanChart}. */
@@ -24,14 +26,61 @@ export interface BlandAltmanChartOptions extends ChartFootnotes {
 
 /** An axis title: "<label>: <what>" with the unit, or the bare description when nothing was
  * stated. */
-function axisTitle(q: Measured | null | undefined, what: string, fallback: string): string {
-  return q ? labelWithUnit(`${q.label}: ${what}`, q.unit) : fallback;
+function axisTitle(
+  q: Measured | null | undefined,
+  what: string,
+  fallback: string,
+  unit: (u: string) => string = (u) => u,
+): string {
+  return q ? labelWithUnit(`${q.label}: ${what}`, unit(q.unit)) : fallback;
 }
 
+/** Glyph width of an axis title (11 px bold sans-serif), in pixels, on the wide side so that a
+ * line never runs past the axis (layout). */
+const AXIS_GLYPH_PX = 7.5;
+
+/** A vertical axis title broken into lines that fit the axis length (a longer title would push
+ * the plot down; layout only). */
+function fitted(title: string, length: number): string[] {
+  return wrapText(title, Math.floor(length / AXIS_GLYPH_PX));
+}
+
+/** Colour-blind-safe colours (Okabe M, Ito K (2008) Color Universal Design, the eight-colour
+ * palette) and dash patterns, so that lines differ in both colour and style. */
+const BLUE = "#0072B2";
+const VERMILLION = "#D55E00";
+const ORANGE = "#E69F00";
+const GREEN = "#009E73";
+const GREY = "#595959";
+const SOLID: number[] = [1, 0];
+const DASHED = [7, 4];
+const DASH_DOT = [9, 3, 2, 3];
+const DOTTED = [2, 3];
+/** The eight colours of Okabe & Ito in the order used for observers (shapes differ as well). */
+const OBSERVER_COLOURS = [
+  BLUE,
+  ORANGE,
+  GREEN,
+  VERMILLION,
+  "#CC79A7",
+  "#56B4E9",
+  "#000000",
+  "#F0E442",
+];
+/** Styles of fitted lines, in order: solid blue, dash-dotted orange, dotted green. */
+const FIT_STYLES = [
+  { color: BLUE, dash: SOLID },
+  { color: ORANGE, dash: DASH_DOT },
+  { color: GREEN, dash: DOTTED },
+] as const;
+
 /**
- * Bland–Altman plot: differences against means, with the bias and the limits of agreement as
- * lines and their confidence intervals as shaded bands. Labels come from the result (what was
- * measured, its unit, the method names given to `blandAltman`).
+ * Bland–Altman plot: differences against means, with the bias (solid line) and the limits of
+ * agreement (dashed lines), each with its value written on it and in the legend (rounded as the
+ * result's table shows them), and their confidence intervals as shaded bands in the line's
+ * colour; colour-blind-safe colours (Okabe & Ito). Labels come from the result (what was
+ * measured, its unit, the method names given to `blandAltman`); differences of a quantity in %
+ * are in percentage points.
  *
  * Source: Bland JM, Altman DG (1986) Lancet 327:307–310, Fig. 2 layout;
  * doi:10.1016/S0140-6736(86)90837-8.
@@ -50,7 +99,10 @@ function axisTitle(q: Measured | null | undefined, what: string, fallback: strin
  *   quantity: EJECTION_FRACTION, methodNames: ["auto", "manual"],
  * });
  * const chart = blandAltmanChart(r);
- * assert.match(await chart.toSVG(), /LV ejection fraction: auto − manual \(%\)/);
+ * // differences of percentages in percentage points, the bias written on its line
+ * const svg = await chart.toSVG();
+ * assert.match(svg, /LV ejection fraction: auto − manual \(percentage points\)/);
+ * assert.match(svg, />bias 0\.2</); // (2 + 0 − 3 + 3 − 1)/5
  * ```
  */
 export function blandAltmanChart(
@@ -63,53 +115,102 @@ export function blandAltmanChart(
   const kind = options.bands ?? "exact";
   const ci = (l: BlandAltmanResult["lowerLimit"]) => kind === "exact" ? l.exactCi : l.approximateCi;
   const points = result.means.map((m, i) => ({ mean: m, difference: result.differences[i]! }));
-  const bands = [
-    { what: "bias CI", lower: result.biasCi.lower, upper: result.biasCi.upper },
-    {
-      what: "lower limit CI",
-      lower: ci(result.lowerLimit).lower,
-      upper: ci(result.lowerLimit).upper,
-    },
-    {
-      what: "upper limit CI",
-      lower: ci(result.upperLimit).lower,
-      upper: ci(result.upperLimit).upper,
-    },
-  ];
+  // the values as the report's table shows them, written on the lines and in the legend
+  const shown = blandAltmanLevels(result);
+  const named = (name: string, value: string) =>
+    `${name}: ${q ? withUnit(value, differenceUnit(q.unit)) : value}`;
+  const biasName = named("Bias", shown.bias);
+  const upperName = named(limitName("Upper", result.multiplier), shown.upper);
+  const lowerName = named(limitName("Lower", result.multiplier), shown.lower);
   const lines = [
-    { what: "bias", y: result.bias },
-    { what: `bias − ${result.multiplier} SD`, y: result.lowerLimit.value },
-    { what: `bias + ${result.multiplier} SD`, y: result.upperLimit.value },
+    { line: biasName, y: result.bias, text: `bias ${shown.bias}` },
+    { line: upperName, y: result.upperLimit.value, text: `upper limit ${shown.upper}` },
+    { line: lowerName, y: result.lowerLimit.value, text: `lower limit ${shown.lower}` },
   ];
+  const bands = [
+    { line: biasName, lower: result.biasCi.lower, upper: result.biasCi.upper },
+    { line: upperName, lower: ci(result.upperLimit).lower, upper: ci(result.upperLimit).upper },
+    { line: lowerName, lower: ci(result.lowerLimit).lower, upper: ci(result.lowerLimit).upper },
+  ];
+  const domain = [biasName, upperName, lowerName];
+  const color = {
+    field: "line",
+    type: "nominal",
+    scale: { domain, range: [BLUE, VERMILLION, VERMILLION] },
+    legend: {
+      title: "Bias and limits of agreement (shaded: their confidence intervals)",
+      titleLimit: 0,
+      orient: "bottom",
+      direction: "vertical",
+      labelLimit: 0,
+      symbolStrokeWidth: 2.5,
+      symbolSize: 400,
+      symbolType: "stroke",
+      symbolOpacity: 1,
+    },
+  };
+  const width = 520;
+  const height = 320;
   return new Chart({
     title,
-    width: 520,
-    height: 320,
+    width,
+    height,
     layer: [
       {
         data: { values: bands },
-        mark: { type: "rect", opacity: 0.15, color: "#4c78a8" },
+        mark: { type: "rect", opacity: 0.13 },
         encoding: {
           y: {
             field: "lower",
             type: "quantitative",
-            title: axisTitle(q, `${a} − ${b}`, `Difference ${a} − ${b}`),
+            title: fitted(
+              axisTitle(q, `${a} − ${b}`, `Difference ${a} − ${b}`, differenceUnit),
+              height,
+            ),
           },
           y2: { field: "upper" },
-          tooltip: [{ field: "what" }, { field: "lower" }, { field: "upper" }],
+          color,
+          tooltip: [
+            { field: "line", title: "Confidence interval of" },
+            { field: "lower", title: "lower end" },
+            { field: "upper", title: "upper end" },
+          ],
         },
       },
       {
         data: { values: lines },
-        mark: { type: "rule", strokeDash: [6, 3] },
+        mark: { type: "rule", strokeWidth: 2 },
         encoding: {
           y: { field: "y", type: "quantitative" },
-          color: { field: "what", type: "nominal", title: "Line" },
+          color,
+          strokeDash: {
+            field: "line",
+            type: "nominal",
+            scale: { domain, range: [SOLID, DASHED, DASHED] },
+            legend: color.legend,
+          },
+        },
+      },
+      {
+        data: { values: lines },
+        mark: {
+          type: "text",
+          align: "right",
+          baseline: "bottom",
+          dy: -3,
+          fontSize: 11,
+          fontWeight: "bold",
+        },
+        encoding: {
+          x: { value: width - 4 },
+          y: { field: "y", type: "quantitative" },
+          text: { field: "text" },
+          color,
         },
       },
       {
         data: { values: points },
-        mark: { type: "point", filled: true, color: "#222" },
+        mark: { type: "point", filled: true, color: "#222", opacity: 0.8 },
         encoding: {
           x: {
             field: "mean",
@@ -159,8 +260,9 @@ function extent(x: readonly number[], y: readonly number[]): Interval {
 }
 
 /**
- * Method-comparison scatter: method Y against method X with the line of identity and fitted
- * lines (e.g. Deming, Passing–Bablok), each drawn across the plotted extent.
+ * Method-comparison scatter: method Y against method X with the line of identity (grey, dashed)
+ * and fitted lines (e.g. Deming, Passing–Bablok: solid blue, dash-dotted orange, dotted green in
+ * turn), each drawn across the plotted extent and named in the legend.
  *
  * Source: layout as in Passing H, Bablok W (1983) J Clin Chem Clin Biochem 21:709–720,
  * doi:10.1515/cclm.1983.21.11.709.
@@ -202,14 +304,29 @@ export function methodComparisonChart(
   const q = options.quantity;
   const { lower: lo, upper: hi } = extent(x, y);
   // where each line meets the plotted extent (layout)
+  const identity = `Line of identity (${nameY} = ${nameX})`;
   const segs = [
-    { line: "identity (y = x)", x: lo, y: lo },
-    { line: "identity (y = x)", x: hi, y: hi },
+    { line: identity, x: lo, y: lo },
+    { line: identity, x: hi, y: hi },
     ...lines.flatMap((l) => [
       { line: l.name, x: lo, y: l.intercept + l.slope * lo },
       { line: l.name, x: hi, y: l.intercept + l.slope * hi },
     ]),
   ];
+  // identity grey and dashed; fitted lines each in their own colour and dash (colour-blind safe)
+  const domain = [identity, ...lines.map((l) => l.name)];
+  const styles = lines.map((_, i) => FIT_STYLES[i % FIT_STYLES.length]!);
+  const color = [GREY, ...styles.map((st) => st.color)];
+  const dash = [DASHED, ...styles.map((st) => st.dash)];
+  const legend = {
+    title: "Lines",
+    orient: "bottom",
+    direction: "vertical",
+    labelLimit: 0,
+    symbolType: "stroke",
+    symbolStrokeWidth: 2.5,
+    symbolSize: 400,
+  };
   const scale = { domain: [lo - 0.05 * (hi - lo), hi + 0.05 * (hi - lo)] };
   return new Chart({
     title,
@@ -218,11 +335,22 @@ export function methodComparisonChart(
     layer: [
       {
         data: { values: segs },
-        mark: { type: "line", clip: true },
+        mark: { type: "line", clip: true, strokeWidth: 2 },
         encoding: {
           x: { field: "x", type: "quantitative", scale, title: axisTitle(q, nameX, nameX) },
-          y: { field: "y", type: "quantitative", scale, title: axisTitle(q, nameY, nameY) },
-          color: { field: "line", type: "nominal", title: "Line" },
+          y: {
+            field: "y",
+            type: "quantitative",
+            scale,
+            title: fitted(axisTitle(q, nameY, nameY), 420),
+          },
+          color: {
+            field: "line",
+            type: "nominal",
+            scale: { domain, range: color },
+            legend,
+          },
+          strokeDash: { field: "line", type: "nominal", scale: { domain, range: dash }, legend },
         },
       },
       {
@@ -299,7 +427,12 @@ export function observerChart(
         title: q ? labelWithUnit(q.label, q.unit) : "Reading",
         scale: { zero: false },
       },
-      color: { field: "observer", type: "nominal", title: "Observer / method" },
+      color: {
+        field: "observer",
+        type: "nominal",
+        title: "Observer / method",
+        scale: { range: OBSERVER_COLOURS },
+      },
       shape: { field: "observer", type: "nominal" },
     },
   }, { title, ...footnotesWith(options) });
@@ -325,7 +458,7 @@ export function observerChart(
  * assert.deepEqual(report.figures.map((f) => f.file),
  *   ["bland_altman_b_vs_a.svg", "method_comparison_b_vs_a.svg", "observers.svg"]);
  * const svg = await methodValidationChart(report, report.figures[0]!).toSVG();
- * assert.match(svg, /LV ejection fraction: B − A \(%\)/);
+ * assert.match(svg, /LV ejection fraction: B − A \(percentage points\)/);
  * ```
  */
 export function methodValidationChart(
@@ -367,7 +500,7 @@ export function methodValidationChart(
   for (const fit of [c.deming, c.passingBablok]) {
     if (fit.status === "computed") {
       const { method, slope, intercept } = fit.result;
-      lines.push({ name: method, slope, intercept });
+      lines.push({ name: `${method} regression`, slope, intercept });
     }
   }
   return methodComparisonChart(c.x, c.y, lines, {

@@ -4,8 +4,8 @@
  * chart carries its footnotes in the spec it exports, so that the SVG written to a file, pasted
  * into a slide or shown in a notebook keeps them: the clinical caution (on unless turned off), an
  * "invented data" mark where a demo draws invented data, and the marks of what it draws ("from
- * memory", "coefficients not verified"). Long titles and footnotes wrap instead of running off
- * the chart.
+ * memory", "coefficients not verified"). Long titles, axis titles and footnotes wrap instead of
+ * running off the chart; legends show their titles and labels in full.
  *
  * @module
  */
@@ -42,6 +42,14 @@ export interface ChartFootnotes {
   readonly inventedData?: boolean;
   /** Further footnote lines, each shown once. @default none */
   readonly notes?: readonly string[];
+}
+
+/** Options of {@linkcode Chart.toPNG} and {@linkcode Chart.writePNG}. */
+export interface PngOptions {
+  /** Device pixels per SVG pixel. @default 2 */
+  readonly scale?: number;
+  /** Path of the Chromium executable. @default `SONORIGOR_CHROMIUM`, else "/usr/bin/chromium" */
+  readonly chromium?: string;
 }
 
 /** Options of {@linkcode Chart}. */
@@ -211,14 +219,62 @@ export function splitFootnotes<T extends ChartFootnotes>(
   };
 }
 
+/** Axis titles: average glyph width of the 11 px bold axis title, in pixels (layout). */
+const AXIS_GLYPH_PX = 6.2;
+/** Legends: the longest title and label shown before an ellipsis, in pixels as vega estimates
+ * them headlessly (0.8 × font size per character, wider than drawn), so that a label of a
+ * quantity and its reference (about 60 characters at 10 px) is shown in full (layout). */
+const LEGEND_LIMIT_PX = 640;
+
+/**
+ * A copy of a view whose long axis titles are broken into lines that fit along their axis (a
+ * y title longer than the plot is tall would otherwise stretch the chart and run off it).
+ */
+function wrapAxisTitles(view: unknown, width = 400, height = 300): unknown {
+  if (Array.isArray(view)) return view.map((v) => wrapAxisTitles(v, width, height));
+  if (view === null || typeof view !== "object") return view;
+  const spec = view as Record<string, unknown>;
+  const w = typeof spec.width === "number" ? spec.width : width;
+  const h = typeof spec.height === "number" ? spec.height : height;
+  const out: Record<string, unknown> = {};
+  for (const [key, value] of Object.entries(spec)) {
+    if (key === "encoding" && value !== null && typeof value === "object") {
+      const encoding: Record<string, unknown> = {};
+      for (const [channel, def] of Object.entries(value as Record<string, unknown>)) {
+        const along = channel === "y" ? h : channel === "x" ? w : 0;
+        const title = (def as { title?: unknown } | null)?.title;
+        encoding[channel] = along > 0 && typeof title === "string" &&
+            title.length * AXIS_GLYPH_PX > along
+          ? { ...(def as object), title: wrapText(title, Math.floor(along / AXIS_GLYPH_PX)) }
+          : def;
+      }
+      out[key] = encoding;
+    } else if (["layer", "vconcat", "hconcat", "concat", "spec"].includes(key)) {
+      out[key] = wrapAxisTitles(value, w, h);
+    } else out[key] = value;
+  }
+  return out;
+}
+
 /** The exported spec: the drawn view under its wrapped title, with the footnote view below. */
 function frame(content: VegaLiteSpec, footnotes: readonly string[]): VegaLiteSpec {
   const top: Record<string, unknown> = {};
+  const wrapped = wrapAxisTitles(content) as Record<string, unknown>;
   const view: Record<string, unknown> = {};
-  for (const [key, value] of Object.entries(content)) {
+  for (const [key, value] of Object.entries(wrapped)) {
     if (TOP_LEVEL.includes(key)) top[key] = value;
     else if (key !== "title" && key !== "description") view[key] = value;
   }
+  // legends show their titles and labels in full (the default cuts them at 160 px)
+  const config = (top.config ?? {}) as Record<string, unknown>;
+  top.config = {
+    ...config,
+    legend: {
+      titleLimit: LEGEND_LIMIT_PX,
+      labelLimit: LEGEND_LIMIT_PX,
+      ...(config.legend as Record<string, unknown> | undefined),
+    },
+  };
   top.$schema = SCHEMA;
   const width = Math.max(widthOf(content), NARROWEST_PX);
   const title = content.title;
@@ -348,6 +404,60 @@ export class Chart {
   /** Writes the SVG (footnotes included) to `path`. */
   async writeSVG(path: string): Promise<void> {
     await Deno.writeTextFile(path, await this.toSVG());
+  }
+
+  /**
+   * Renders the chart as a PNG image (footnotes included) by drawing its SVG in headless
+   * Chromium through playwright-core (already a dependency of the package); vega itself renders
+   * PNG only through node-canvas, which is not available. Needs a Chromium executable and the
+   * `--allow-run`, `--allow-env`, `--allow-read` and `--allow-write` (temporary profile)
+   * permissions.
+   *
+   * @param options `scale`: device pixels per SVG pixel (2 gives a sharp image on paper and
+   * slides), default 2; `chromium`: path of the Chromium executable, default the
+   * `SONORIGOR_CHROMIUM` environment variable, else `/usr/bin/chromium`.
+   * @returns The PNG bytes.
+   * @throws {Error} When Chromium is not found at the path, naming it and the variable to set.
+   * @throws {RangeError} For a scale outside (0, 8].
+   */
+  async toPNG(options: PngOptions = {}): Promise<Uint8Array> {
+    const scale = options.scale ?? 2;
+    if (!(scale > 0 && scale <= 8)) {
+      throw new RangeError(`Chart PNG: expected 'scale' in (0, 8], got ${scale}`);
+    }
+    const executablePath = options.chromium ?? Deno.env.get("SONORIGOR_CHROMIUM") ??
+      "/usr/bin/chromium";
+    const found = await Deno.stat(executablePath).then((f) => f.isFile).catch(() => false);
+    if (!found) {
+      throw new Error(
+        `Chart PNG: Chromium not found at '${executablePath}'; install Chromium or set SONORIGOR_CHROMIUM (or the 'chromium' option) to its path, or write the SVG with writeSVG`,
+      );
+    }
+    const svg = await this.toSVG();
+    const { chromium } = await import("playwright-core");
+    const browser = await chromium.launch({
+      executablePath,
+      args: ["--headless", "--no-sandbox", "--disable-gpu", "--no-first-run"],
+    });
+    try {
+      const page = await browser.newPage({ deviceScaleFactor: scale });
+      await page.setContent(
+        `<!doctype html><html><body style="margin:0;background:#fff">${svg}</body></html>`,
+      );
+      return new Uint8Array(await page.locator("svg").first().screenshot({ type: "png" }));
+    } finally {
+      await browser.close();
+    }
+  }
+
+  /**
+   * Writes the chart as a PNG image to `path` (see {@linkcode Chart.toPNG} for what it needs).
+   *
+   * @param path File to write.
+   * @param options Scale and Chromium path.
+   */
+  async writePNG(path: string, options: PngOptions = {}): Promise<void> {
+    await Deno.writeFile(path, await this.toPNG(options));
   }
 
   /** Writes the self-contained HTML page to `path`. */

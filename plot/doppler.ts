@@ -182,6 +182,7 @@ export function severityProbabilityChart(
         type: "nominal",
         sort: order,
         title: `Class: ${axisTitle(q)}`,
+        axis: { labelAngle: 0 },
       },
       y: {
         field: "probability",
@@ -189,7 +190,11 @@ export function severityProbabilityChart(
         title: "Probability",
         scale: { domain: [0, 1] },
       },
-      tooltip: [{ field: "threshold" }, { field: "share" }],
+      tooltip: [
+        { field: "grade", title: "Class" },
+        { field: "threshold", title: "Threshold (as printed)" },
+        { field: "share", title: "Probability" },
+      ],
     },
   }, { title, ...footnotesWith(options, distribution.cautions) });
 }

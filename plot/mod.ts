@@ -10,6 +10,7 @@ export {
   type ChartOptions,
   footnotesWith,
   INVENTED_DATA_NOTE,
+  type PngOptions,
   splitFootnotes,
   type VegaLiteSpec,
   wrapText,

@@ -18,6 +18,9 @@ import {
   zScoreBands,
   zScoreCalculation,
 } from "../calc/reference/zscore.ts";
+import { zScoreFormula } from "../calc/reference/zscore_models.ts";
+import { formatResolution, NOT_MEASURED } from "../display/format.ts";
+import { withUnit } from "../calc/core/text.ts";
 import { cautionsOf } from "../calc/core/calculation.ts";
 import type { Table } from "../calc/table/types.ts";
 import type { Citation } from "../calc/core/types.ts";
@@ -25,6 +28,10 @@ import { BODY_SURFACE_AREA } from "../calc/quantities/body.ts";
 import { labelWithUnit } from "../display/uncertainty.ts";
 import { rowLabels } from "../calc/table/evaluate.ts";
 import { Chart, type ChartFootnotes, footnotesWith } from "./chart.ts";
+
+/** The legend names of the shaded bands, widest first, and of the mean line. */
+const BAND_NAMES = ["Z between −3 and +3", "Z between −2 and +2", "Z between −1 and +1"] as const;
+const MEAN_NAME = "Mean (Z = 0)";
 
 /** One patient on a pediatric normal-range chart. */
 export interface ReferenceChartPoint {
@@ -78,8 +85,10 @@ function checkPoints(where: string, points: readonly ReferenceChartPoint[]): voi
 
 /**
  * Pediatric normal-range chart: the model's mean (Z = 0) against BSA with shaded ±1, ±2 and ±3
- * SD bands (the measurements at those Z-scores, from the model's one Z formula), dashed lines at
- * the model's BSA range, and patients as points with ±k·u error bars in both directions.
+ * SD bands (the measurements at those Z-scores, from the model's one Z formula) named in a
+ * legend, dashed lines at the model's BSA range, and patients as points with ±k·u error bars in
+ * both directions; a point outside ±2 is named on the chart with its Z (each point's Z from
+ * `zScoreFormula`), and every point shows its name, BSA, measurement and Z on hover.
  *
  * @param model The Z-score model.
  * @param options Points, axis range, coverage factor, size.
@@ -124,30 +133,43 @@ export function zScoreChart(model: ZScoreModel, options: ZScoreChartOptions = {}
     title: labelWithUnit(BODY_SURFACE_AREA.label, BODY_SURFACE_AREA.unit),
     scale: { domain: [lo, hi], nice: false },
   };
-  const band = (z: number, opacity: number) => ({
-    mark: { type: "area", color: "#4c78a8", opacity },
+  const yTitle = labelWithUnit(measured.label, unit);
+  // the bands and the mean in one legend (colour-blind-safe sequential blues, darkest inside)
+  const legend = {
+    domain: [...BAND_NAMES, MEAN_NAME],
+    range: ["#deebf7", "#9ecae1", "#4292c6", "#08306b"],
+  };
+  const colour = (name: string) => ({
+    datum: name,
+    type: "nominal",
+    scale: legend,
+    title: "Normal range",
+    legend: { orient: "bottom", labelLimit: 320 },
+  });
+  const band = (z: number, name: string) => ({
+    mark: { type: "area", opacity: 1 },
     encoding: {
       x,
-      y: { field: `z${-z}`, type: "quantitative", title: labelWithUnit(measured.label, unit) },
+      y: { field: `z${-z}`, type: "quantitative", title: yTitle },
       y2: { field: `z${z}` },
+      color: colour(name),
     },
   });
   const line = (z: number, dash: number[]) => ({
-    mark: {
-      type: "line",
-      color: z === 0 ? "#1f3b5a" : "#4c78a8",
-      strokeDash: dash,
-      strokeWidth: z === 0 ? 2 : 1,
+    mark: { type: "line", strokeDash: dash, strokeWidth: z === 0 ? 2 : 1 },
+    encoding: {
+      x,
+      y: { field: `z${z}`, type: "quantitative" },
+      ...(z === 0 ? { color: colour(MEAN_NAME) } : { color: { value: "#08306b" } }),
     },
-    encoding: { x, y: { field: `z${z}`, type: "quantitative" } },
   });
   const layers: Record<string, unknown>[] = [
     {
       data: { values: grid },
       layer: [
-        band(3, 0.12),
-        band(2, 0.18),
-        band(1, 0.25),
+        band(3, BAND_NAMES[0]),
+        band(2, BAND_NAMES[1]),
+        band(1, BAND_NAMES[2]),
         line(0, []),
         line(2, [4, 3]),
         line(-2, [4, 3]),
@@ -164,15 +186,27 @@ export function zScoreChart(model: ZScoreModel, options: ZScoreChartOptions = {}
     },
   ];
   if (points.length > 0) {
-    const values = points.map((p, i) => ({
-      label: p.label ?? `#${i + 1}`,
-      bsa: p.bsaM2,
-      value: p.value,
-      valueLow: p.value - k * (p.valueUncertainty ?? 0),
-      valueHigh: p.value + k * (p.valueUncertainty ?? 0),
-      bsaLow: p.bsaM2 - k * (p.bsaUncertainty ?? 0),
-      bsaHigh: p.bsaM2 + k * (p.bsaUncertainty ?? 0),
-    }));
+    const bsaTitle = labelWithUnit(BODY_SURFACE_AREA.label, BODY_SURFACE_AREA.unit);
+    const values = points.map((p, i) => {
+      // each point's Z by the model's one formula (calc/reference), for its label and tooltip
+      const z = zScoreFormula(model, p.value, p.bsaM2);
+      const label = p.label ?? `#${i + 1}`;
+      const zText = Number.isFinite(z) ? z.toFixed(2).replace("-", "−") : NOT_MEASURED;
+      return {
+        label,
+        bsa: p.bsaM2,
+        value: p.value,
+        valueLow: p.value - k * (p.valueUncertainty ?? 0),
+        valueHigh: p.value + k * (p.valueUncertainty ?? 0),
+        bsaLow: p.bsaM2 - k * (p.bsaUncertainty ?? 0),
+        bsaHigh: p.bsaM2 + k * (p.bsaUncertainty ?? 0),
+        outside: Math.abs(z) > 2,
+        bsaText: formatResolution(p.bsaM2, BODY_SURFACE_AREA.resolution),
+        valueText: withUnit(formatResolution(p.value, measured.resolution), unit),
+        zText,
+        outsideText: `${label} (Z ${zText})`,
+      };
+    });
     layers.push({
       data: { values },
       layer: [
@@ -197,10 +231,22 @@ export function zScoreChart(model: ZScoreModel, options: ZScoreChartOptions = {}
           encoding: {
             x: { field: "bsa", type: "quantitative" },
             y: { field: "value", type: "quantitative" },
-            tooltip: [{ field: "label" }, { field: "bsa", format: ".3f" }, {
-              field: "value",
-              format: ".3g",
-            }],
+            tooltip: [
+              { field: "label", title: "Patient" },
+              { field: "bsaText", title: bsaTitle },
+              { field: "valueText", title: measured.label },
+              { field: "zText", title: "Z-score" },
+            ],
+          },
+        },
+        {
+          // every point outside ±2 is named on the chart, with its Z
+          transform: [{ filter: "datum.outside" }],
+          mark: { type: "text", align: "left", dx: 6, dy: -6, fontSize: 11, color: "#a50f15" },
+          encoding: {
+            x: { field: "bsa", type: "quantitative" },
+            y: { field: "value", type: "quantitative" },
+            text: { field: "outsideText" },
           },
         },
       ],

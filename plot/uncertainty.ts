@@ -8,6 +8,8 @@ import type { Propagation } from "../calc/uncertainty/types.ts";
 import { densityHistogram, gumDensity, histogramRange } from "../calc/uncertainty/histogram.ts";
 import type { SensitivityCurve } from "../calc/core/sensitivity.ts";
 import { labelWithUnit } from "../display/uncertainty.ts";
+import { formatNumber, formatShare } from "../display/format.ts";
+import { withUnit } from "../calc/core/text.ts";
 import { Chart, type ChartFootnotes, footnotesWith } from "./chart.ts";
 
 /** Options of {@linkcode histogramChart}. */
@@ -170,6 +172,7 @@ export function budgetChart(result: Propagation, options: BudgetChartOptions = {
   const values = o.budget.map((b) => ({
     source: labelWithUnit(b.label, b.unit),
     sharePercent: 100 * b.share,
+    shareText: formatShare(b.share),
   }));
   const title = `${result.calculation.title}: variance shares of ${o.label}`;
   return new Chart({
@@ -178,19 +181,55 @@ export function budgetChart(result: Propagation, options: BudgetChartOptions = {
     data: { values },
     mark: "bar",
     encoding: {
-      y: { field: "source", type: "nominal", sort: "-x", title: null },
+      y: {
+        field: "source",
+        type: "nominal",
+        sort: "-x",
+        title: null,
+        // a long source label (a model with its provenance) is cut at 300 px; the tooltip has it all
+        axis: { labelLimit: 300 },
+      },
       x: {
         field: "sharePercent",
         type: "quantitative",
         title: `Share of the variance of ${o.label} (%)`,
       },
+      tooltip: [
+        { field: "source", title: "Source" },
+        { field: "shareText", title: `Share of the variance of ${o.label}` },
+      ],
     },
   }, { title, ...footnotesWith(options, result.cautions) });
 }
 
+/** Options of {@linkcode sensitivityChart}. */
+export interface SensitivityChartOptions extends ChartFootnotes {
+  /** Plot the change relative to each curve's value at its reference inputs, in percent
+   * (`relativeChangePercent`, the package's one definition); false plots the output values.
+   * @default true */
+  readonly relative?: boolean;
+  /** Start the y axis at zero (a small change then looks flat); by default the axis spans the
+   * curves' values. @default false */
+  readonly zeroBased?: boolean;
+  /** Legend label of each curve. @default "<calculation title>: <output label>" */
+  readonly labels?: readonly string[];
+  /** Chart title. @default "Sensitivity of <output> to <input>" */
+  readonly title?: string;
+}
+
 /**
- * Line chart of one or more sensitivity curves (same swept input), as output values or as the
- * relative change in percent, with the clinical caution as footnote (on by default).
+ * Line chart of one or more sensitivity curves (same swept input): by default the change of the
+ * output relative to its value at the reference inputs, in percent, on an axis that spans the
+ * change (zero-based only on request), the reference point named in the axis title; or the
+ * output values. The clinical caution is the footnote (on by default).
+ *
+ * Formula: change = 100·(y − y_ref)/|y_ref| % (`relativeChangePercent`), y_ref the output at the
+ * reference inputs (`curve.reference`).
+ *
+ * @param curves Curves from `sensitivityCurve` (the first names the axes).
+ * @param options Relative or absolute, zero-based axis, legend labels, title, footnotes.
+ * @returns The chart.
+ * @throws {RangeError} For an empty list of curves.
  *
  * @example
  * ```ts
@@ -202,49 +241,51 @@ export function budgetChart(result: Propagation, options: BudgetChartOptions = {
  *   inputs: { v: { unit: "m/s", description: "Peak velocity", range: { min: 0, max: 10 } } },
  *   output: { name: "gradient", unit: "mmHg", description: "Peak gradient" },
  * });
- * const chart = sensitivityChart([sensitivityCurve(model, { v: 4 }, { vary: "v", from: 3, to: 5 })]);
- * assert.match(await chart.toSVG(), /<svg/);
+ * const chart = sensitivityChart([sensitivityCurve(model, { v: 4 }, { vary: "v", from: 3, to: 5, steps: 3 })]);
+ * // (5/4)² − 1 = +56.25 % (hand computation)
+ * const values = (chart.content.data as { values: { y: number }[] }).values;
+ * assert.equal(values.at(-1)!.y, 56.25);
+ * assert.match(await chart.toSVG(), /relative to its value at Peak velocity = 4 m\/s/);
  * ```
  */
 export function sensitivityChart(
   curves: readonly SensitivityCurve[],
-  options: ChartFootnotes & {
-    readonly relative?: boolean;
-    readonly labels?: readonly string[];
-    readonly title?: string;
-  } = {},
+  options: SensitivityChartOptions = {},
 ): Chart {
   if (curves.length === 0) {
     throw new RangeError(`Sensitivity chart: expected at least one curve, got 0`);
   }
   const first = curves[0]!;
-  const relative = options.relative ?? false;
+  const relative = options.relative ?? true;
+  const output = labelWithUnit(first.outputLabel, first.outputUnit);
+  const input = labelWithUnit(first.inputLabel, first.inputUnit);
   const values = curves.flatMap((c, i) =>
     c.points.map((p) => ({
       x: p.x,
       y: relative ? p.relativeChangePercent : p.y,
       curve: options.labels?.[i] ?? `${c.title}: ${c.outputLabel}`,
+      xText: formatNumber(p.x),
+      yText: formatNumber(p.y),
+      changeText: `${formatNumber(p.relativeChangePercent, 3)} %`,
     }))
   );
+  const at = `${first.inputLabel} = ${withUnit(formatNumber(first.reference.x), first.inputUnit)}`;
   const title = options.title ?? `Sensitivity of ${first.outputLabel} to ${first.inputLabel}`;
   return new Chart({
     title,
     width: 480,
     height: 280,
     data: { values },
-    mark: { type: "line" },
+    mark: { type: "line", point: { size: 12 } },
     encoding: {
-      x: {
-        field: "x",
-        type: "quantitative",
-        title: labelWithUnit(first.inputLabel, first.inputUnit),
-      },
+      x: { field: "x", type: "quantitative", title: input, scale: { zero: false } },
       y: {
         field: "y",
         type: "quantitative",
         title: relative
-          ? `Change of ${first.outputLabel} from its reference value (%)`
-          : labelWithUnit(first.outputLabel, first.outputUnit),
+          ? `Change of ${first.outputLabel} relative to its value at ${at} (%)`
+          : output,
+        scale: { zero: options.zeroBased ?? false },
       },
       color: {
         field: "curve",
@@ -252,6 +293,12 @@ export function sensitivityChart(
         title: null,
         legend: curves.length > 1 ? { orient: "bottom", labelLimit: 400 } : null,
       },
+      tooltip: [
+        { field: "curve", title: "Curve" },
+        { field: "xText", title: input },
+        { field: "yText", title: output },
+        { field: "changeText", title: `Change relative to its value at ${at}` },
+      ],
     },
   }, { title, ...footnotesWith(options) });
 }

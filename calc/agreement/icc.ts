@@ -23,6 +23,53 @@ import type { IntraclassCorrelation, IntraclassCorrelationResult } from "./types
 export interface IntraclassCorrelationOptions extends LabelOptions {
   /** Confidence level of the intervals. @default 0.95 */
   readonly confidence?: number;
+  /** How `ratings` is laid out: "subjectsByRaters" (one row per subject, one column per rater)
+   * or "ratersBySubjects" (one row per rater, transposed before the analysis). Required when
+   * the rows would have more raters than there are subjects: that shape is far more often a
+   * table given raters as rows by mistake than a real design, and silently gives a wrong ICC.
+   * @default "subjectsByRaters" when the rows hold no more readings than there are rows */
+  readonly orientation?: "subjectsByRaters" | "ratersBySubjects";
+}
+
+/** The ratings as subjects × raters: transposed when given raters × subjects; refused when the
+ * orientation is not stated and the rows hold more readings (raters) than there are rows
+ * (subjects). Checks the shape only; the numbers are checked by the caller. */
+function subjectsByRaters(
+  where: string,
+  ratings: readonly (readonly number[])[],
+  orientation: unknown,
+): readonly (readonly number[])[] {
+  const rows = ratings.length;
+  const width = Array.isArray(ratings[0]) ? ratings[0].length : 0;
+  if (orientation === "ratersBySubjects") {
+    ratings.forEach((r, i) => {
+      if (!Array.isArray(r) || r.length !== width) {
+        throw new TypeError(
+          `${where}: expected 'ratings' as ${rows} rows (raters) of ${width} readings (subjects), 'ratings[${i}]' has ${
+            Array.isArray(r) ? r.length : shown(r)
+          }`,
+        );
+      }
+      checkNumbers(where, `ratings[${i}]`, r, 1);
+    });
+    return Array.from({ length: width }, (_, j) => ratings.map((r) => r[j]!));
+  }
+  if (orientation !== undefined && orientation !== "subjectsByRaters") {
+    throw new TypeError(
+      `${where}: expected 'orientation' "subjectsByRaters" or "ratersBySubjects", got ${
+        shown(orientation)
+      }`,
+    );
+  }
+  if (
+    orientation === undefined && width > rows && rows >= 2 &&
+    ratings.every((r) => Array.isArray(r) && r.length === width)
+  ) {
+    throw new TypeError(
+      `${where}: expected 'ratings' as subjects × raters (one row per subject, one column per rater), got ${rows} rows × ${width} columns, more raters than subjects; if each row is one rater, pass { orientation: "ratersBySubjects" } (or transpose), and if the design truly has more raters than subjects, pass { orientation: "subjectsByRaters" }`,
+    );
+  }
+  return ratings;
 }
 
 /**
@@ -45,11 +92,14 @@ export interface IntraclassCorrelationOptions extends LabelOptions {
  * Methods 1:30–46, doi:10.1037/1082-989X.1.1.30 (Table 7).
  *
  * @param ratings n rows (subjects) of k readings (one per rater or method, same rater order in
- * every row). The design must be complete and balanced.
- * @param options Confidence level (default 0.95).
+ * every row), or k rows (raters) of n readings with `orientation: "ratersBySubjects"`. The design
+ * must be complete and balanced.
+ * @param options Confidence level (default 0.95), orientation of `ratings`.
  * @returns The six forms with intervals and F tests.
  * @throws {TypeError} When the table is not an array of equal-length arrays of numbers
- * (unbalanced or incomplete designs are rejected: drop or impute beforehand, stating how).
+ * (unbalanced or incomplete designs are rejected: drop or impute beforehand, stating how), or
+ * when its rows hold more readings than there are rows and no `orientation` says which way it
+ * is laid out (raters given as rows is the usual mistake).
  * @throws {RangeError} For fewer than 2 subjects or 2 raters, non-finite readings, or no
  * residual variation (every reading explained exactly by subject and rater).
  *
@@ -62,6 +112,17 @@ export interface IntraclassCorrelationOptions extends LabelOptions {
  *   [10, 5, 6, 9], [6, 2, 4, 7]]);
  * assert.equal(r.forms[2]!.value.toFixed(2), "0.71"); // ICC(3,1), as printed in Table 4
  * ```
+ *
+ * @example Raters as rows must be said so
+ * ```ts
+ * import { intraclassCorrelations } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * // Shrout & Fleiss (1979) Table 2 with the 4 judges as rows and the 6 targets as columns
+ * const judges = [[9, 6, 8, 7, 10, 6], [2, 1, 4, 1, 5, 2], [5, 3, 6, 2, 6, 4], [8, 2, 8, 6, 9, 7]];
+ * assert.throws(() => intraclassCorrelations(judges), TypeError); // 4 rows × 6 columns
+ * const r = intraclassCorrelations(judges, { orientation: "ratersBySubjects" });
+ * assert.equal(r.forms[1]!.value.toFixed(2), "0.29"); // ICC(2,1), as printed in Table 4
+ * ```
  */
 export function intraclassCorrelations(
   ratings: readonly (readonly number[])[],
@@ -73,9 +134,10 @@ export function intraclassCorrelations(
       `${where}: expected 'ratings' as an array of rows (subjects), got ${shown(ratings)}`,
     );
   }
-  const n = ratings.length;
+  const table = subjectsByRaters(where, ratings, options.orientation);
+  const n = table.length;
   if (n < 2) throw new RangeError(`${where}: expected at least 2 subjects, got ${n}`);
-  const rows = ratings.map((r, i) => checkNumbers(where, `ratings[${i}]`, r, 1));
+  const rows = table.map((r, i) => checkNumbers(where, `ratings[${i}]`, r, 1));
   const k = rows[0]!.length;
   if (k < 2) throw new RangeError(`${where}: expected at least 2 raters per subject, got ${k}`);
   rows.forEach((r, i) => {

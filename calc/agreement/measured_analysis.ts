@@ -90,9 +90,10 @@ export function repeatabilityByObserver(
 const notComputed = (reason: string) => ({ status: "not computed", reason }) as const;
 
 /**
- * Each observer other than the reference against the reference, on first readings; the
- * repeated-measures Bland–Altman on all replicates paired by number; Deming's error variance
- * ratio from the two observers' repeatability when both are known, else 1.
+ * Every pair of observers, on first readings: first each observer other than the reference
+ * against the reference, then each pair of the other observers (the later in the table against
+ * the earlier); the repeated-measures Bland–Altman on all replicates paired by number; Deming's
+ * error variance ratio from the two observers' repeatability when both are known, else 1.
  */
 export function methodComparisons(
   study: MeasuredReadings,
@@ -107,7 +108,14 @@ export function methodComparisons(
     return r?.status === "computed" ? r.result.withinSubjectSd : null;
   };
   const firstOf = (observer: string) => index.get(observer)?.get(1) ?? new Map<string, number>();
-  return study.observers.filter((o) => o !== reference).map((test) => {
+  const others = study.observers.filter((o) => o !== reference);
+  const pairs: [string, string, MethodComparison["against"]][] = others.map((
+    o,
+  ) => [o, reference, "reference"]);
+  others.forEach((earlier, i) => {
+    for (const later of others.slice(i + 1)) pairs.push([later, earlier, "observer"]);
+  });
+  return pairs.map(([test, reference, against]) => {
     const xs = firstOf(reference);
     const ys = firstOf(test);
     const subjects: string[] = [];
@@ -129,6 +137,7 @@ export function methodComparisons(
     const common = {
       test,
       reference,
+      against,
       subjects,
       subjectsLeftOut: study.subjects.length - subjects.length,
       x,

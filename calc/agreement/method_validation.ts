@@ -52,7 +52,7 @@ export interface MethodValidationOptions extends ValidationDesignOptions {
   readonly confidence?: number;
   /** Title of the report. @default "Method validation report: <source>" */
   readonly title?: string;
-  /** What the caller knows about the run (input hash, tool, date, seed), for provenance. */
+  /** What the caller knows about the run (input hash, tool, date), for provenance. */
   readonly provenance?: ProvenanceDetails;
 }
 
@@ -73,10 +73,10 @@ export const NO_VERDICT =
   "This report states no pass or fail. Whether the agreement is good enough is a clinical decision that must be made, and written down, before the data are seen: the largest acceptable difference between methods (compare it with the limits of agreement and their confidence intervals, the upper confidence limit of the upper limit in particular), the smallest acceptable ICC or kappa (compare it with the lower confidence limit), and the largest acceptable repeatability coefficient. Published rules of thumb for ICC or kappa categories are conventions, not properties of the data; if you use one, cite it and apply it to the confidence limits.";
 
 /**
- * Analyses a method-validation study: repeatability of each observer (with replicates), each
- * method against the reference on first readings (Bland–Altman with exact limits, repeated-
- * measures Bland–Altman, Lin's concordance, Deming and Passing–Bablok regression), the
- * intraclass correlation across observers; for graded findings, Cohen's kappa (unweighted,
+ * Analyses a method-validation study: repeatability of each observer (with replicates); on first
+ * readings each method against the reference, then every pair of the other observers (Bland–
+ * Altman with exact limits, repeated-measures Bland–Altman, Lin's concordance, Deming and
+ * Passing–Bablok regression); the intraclass correlation across observers; for graded findings, Cohen's kappa (unweighted,
  * linear, quadratic) for each pair of raters and Fleiss' kappa across three or more.
  *
  * Missing-cell policy: a reading whose value cell is empty is listed (with its line) and left

@@ -68,6 +68,7 @@ export {
   SUBJECT_SPREAD_CAUTION,
 } from "./cautions.ts";
 export {
+  statedColumnQuantity,
   statedQuantity,
   type StatedQuantityOptions,
   type ValidationColumns,

@@ -93,12 +93,15 @@ export interface ObserverRepeatability {
   readonly outcome: Outcome<RepeatabilityResult>;
 }
 
-/** One method compared with the reference on first readings (replicate 1). */
+/** One observer or method compared with another on first readings (replicate 1). */
 export interface MethodComparison {
   /** The method compared (y; differences are test − reference). */
   readonly test: string;
-  /** The reference method (x). */
+  /** The method it is compared with (x): the study's reference, or another observer. */
   readonly reference: string;
+  /** "reference" when `reference` is the study's reference; "observer" for a comparison
+   * between two observers or methods other than the reference. */
+  readonly against: "reference" | "observer";
   /** Subjects with a first reading by both. */
   readonly subjects: readonly string[];
   /** Subjects of the study lacking a first reading by either (left out). */
@@ -188,8 +191,6 @@ export interface ProvenanceDetails {
   readonly dependencies?: readonly string[];
   /** Date and time of the run (ISO 8601). */
   readonly date?: string;
-  /** Seed recorded for reproducibility (every statistic here is deterministic). */
-  readonly seed?: number;
 }
 
 /** Where the numbers come from. */
@@ -219,7 +220,8 @@ export interface MethodValidationReport {
   readonly data: DataSummary;
   /** Repeatability per observer (null without replicates or for graded findings). */
   readonly repeatability: readonly ObserverRepeatability[] | null;
-  /** Each method against the reference (empty for graded findings or a single observer). */
+  /** Every pair of observers or methods: each against the reference, then each pair of the
+   * others (empty for graded findings or a single observer). */
   readonly comparisons: readonly MethodComparison[];
   /** ICC across observers (null for graded findings or a single observer). */
   readonly icc: IccAnalysis | null;

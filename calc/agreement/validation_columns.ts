@@ -10,7 +10,8 @@ import type { Quantity, ValidationIssue } from "../core/types.ts";
 import type { Column, Table } from "../table/types.ts";
 import type { ReadTableOptions } from "../table/read.ts";
 import { defineQuantity, normalizeHeader } from "../core/quantity.ts";
-import { issueError } from "../core/issues.ts";
+import { splitHeader } from "../table/header.ts";
+import { InputTypeError, renderIssue } from "../core/issues.ts";
 
 /** The replicate number of a reading: a design variable (1, 2, …), not a measurand, so it is
  * kept here rather than in the package's vocabulary of quantities. */
@@ -64,12 +65,8 @@ const FALLBACKS = {
   replicate: ["replicate", "repeat", "reading", "round"],
 } as const;
 
-const ROLE_LABELS = {
-  subject: "Subject column",
-  observer: "Observer column",
-  replicate: "Replicate column",
-  value: "Value column",
-} as const;
+/** The roles of a study's columns (also the names of their options). */
+type Role = "subject" | "observer" | "replicate" | "value";
 
 /** The column of a table named `wanted` (its name in the table, or its header). */
 export function findColumn(table: Table, wanted: string): Column | undefined {
@@ -86,22 +83,120 @@ function headersOf(table: Table): string {
   return [...table.columns.values()].map((c) => c.header).join(", ");
 }
 
-function columnIssue(
-  table: Table,
-  role: keyof typeof ROLE_LABELS,
-  received: string,
-  expected: string,
-  kind: "unknown" | "missing",
-): ValidationIssue {
+/** A problem with one role's column: the sentence that names it. */
+interface ColumnProblem {
+  readonly role: Role;
+  readonly text: string;
+}
+
+/** The most distinct values an observer column, or the largest number a replicate column, is
+ * taken to hold when guessing candidates (a guess for the message only, never a rule). */
+const FEW = 20;
+
+const NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i;
+
+/** What a column holds, for guessing its role: numbers or not, whole or not, how many distinct
+ * values, how many filled cells. */
+function profile(c: Column) {
+  const distinct = new Set<string | number>();
+  let filled = 0;
+  let numeric = true;
+  let whole = true;
+  let min = Infinity;
+  let max = -Infinity;
+  const see = (v: number) => {
+    if (!Number.isInteger(v)) whole = false;
+    if (v < min) min = v;
+    if (v > max) max = v;
+  };
+  if (c.kind === "numeric") {
+    for (const v of c.values) {
+      if (v !== v) continue;
+      filled++;
+      distinct.add(v);
+      see(v);
+    }
+  } else {
+    for (const raw of c.values) {
+      const t = raw.trim();
+      if (t === "") continue;
+      filled++;
+      distinct.add(t);
+      if (numeric && NUMBER.test(t)) see(Number(t));
+      else numeric = false;
+    }
+  }
   return {
-    kind,
+    header: c.header,
+    quantity: c.kind === "numeric" && c.quantity.id !== REPLICATE_NUMBER.id,
+    numeric: numeric && filled > 0,
+    whole,
+    min,
+    max,
+    distinct: distinct.size,
+    filled,
+  };
+}
+
+/**
+ * The columns that could hold each role, judged by their contents (a guess for the message):
+ * value = numbers with a decimal part, more than 20 distinct numbers, or a column of a package
+ * quantity; replicate = whole numbers from 1 up to at most 20 that repeat; identifiers (text or
+ * whole numbers that repeat, at least 2 distinct) with the most distinct values = subject, the
+ * others with at most 20 distinct values = observer.
+ */
+function candidates(table: Table, taken: ReadonlySet<string>): Record<string, string[]> {
+  const profiles = [...table.columns.values()].filter((c) => !taken.has(c.header)).map(profile);
+  const value = profiles.filter((p) => p.quantity || (p.numeric && (!p.whole || p.distinct > FEW)));
+  const replicate = profiles.filter((p) =>
+    !p.quantity && p.numeric && p.whole && p.min === 1 && p.max <= FEW && p.distinct < p.filled
+  );
+  const ids = profiles.filter((p) =>
+    !value.includes(p) && !replicate.includes(p) && p.distinct >= 2 && p.distinct < p.filled
+  ).sort((a, b) => b.distinct - a.distinct);
+  const most = ids[0]?.distinct;
+  const subject = ids.filter((p) => p.distinct === most);
+  const rest = ids.filter((p) => p.distinct !== most && p.distinct <= FEW);
+  const observer = rest.length > 0 ? rest : subject.length === 1 ? [] : subject;
+  const name = (ps: typeof profiles, what: (p: (typeof profiles)[number]) => string) =>
+    ps.map((p) => `'${p.header}' (${what(p)})`);
+  return {
+    subject: name(subject, (p) => `${p.distinct} distinct values`),
+    observer: name(observer, (p) => `${p.distinct} distinct values`),
+    replicate: name(replicate, (p) => `whole numbers ${p.min} to ${p.max}`),
+    value: name(value, (p) => p.quantity ? "numbers of a known quantity" : "numbers"),
+  };
+}
+
+/** The one error for every problem with the columns of a study: each problem, then the columns
+ * that could hold the roles not found, judged by their contents. */
+function columnsError(
+  table: Table,
+  problems: readonly ColumnProblem[],
+  taken: ReadonlySet<string>,
+  noReplicate: boolean,
+): InputTypeError {
+  const found = candidates(table, taken);
+  const roles = [...new Set(problems.map((p) => p.role))];
+  if (noReplicate && !roles.includes("replicate")) roles.push("replicate");
+  const guesses = roles.map((role) => {
+    const list = found[role] ?? [];
+    return `${role}: ${list.length ? list.join(" or ") : "none"}`;
+  });
+  const issue: ValidationIssue = {
+    kind: "format",
     severity: "error",
     where: table.source,
-    field: role,
-    label: ROLE_LABELS[role],
-    received,
-    expected,
+    field: "",
+    expected:
+      "a subject, an observer (or method) and a value column, found by their usual names or named with the options 'subject', 'observer', 'replicate' and 'value' (--subject, --rater, --replicate, --value on the command line)",
+    received: `columns ${headersOf(table)}, with ${problems.length} problem${
+      problems.length === 1 ? "" : "s"
+    }: ${problems.map((p) => p.text).join("; ")}; candidate columns by their contents: ${
+      guesses.join("; ")
+    }`,
   };
+  return new InputTypeError(renderIssue(issue), [issue]);
 }
 
 /**
@@ -111,8 +206,10 @@ function columnIssue(
  * @param table A table from `readTable`.
  * @param options Column names.
  * @returns The headers of the subject, observer, replicate and value columns.
- * @throws {TypeError} Naming the option, the value given and the table's headers, for a column
- * that is not in the table, a role without a column, or one column in two roles.
+ * @throws {TypeError} One error for every problem with the columns (a column named in the
+ * options that is not in the table, a role without a column), naming the table's headers and
+ * the columns that could hold each missing role (and the replicate, when none was found), judged
+ * by their contents; or for one column in two roles.
  *
  * @example
  * ```ts
@@ -122,9 +219,11 @@ function columnIssue(
  * assert.deepEqual(validationColumns(t), {
  *   subject: "patient", observer: "observer", replicate: null, value: "lvef percent",
  * });
- * assert.throws(() => validationColumns(t, { value: "ef2" }), {
+ * const odd = readTable("pt,who,ef\nP1,A,55.5\nP1,B,57.1\nP2,A,60.2\nP2,B,61.0\nP3,A,48.3\nP3,B,47.6\n",
+ *   { source: "odd.csv" });
+ * assert.throws(() => validationColumns(odd), {
  *   name: "TypeError",
- *   message: `demo.csv: unknown input 'value' (Value column): expected a column of the table: patient, observer, lvef percent, got "ef2"`,
+ *   message: /3 problems: .*; candidate columns by their contents: subject: 'pt' \(3 distinct values\); observer: 'who' \(2 distinct values\); value: 'ef' \(numbers of a known quantity\); replicate: none$/,
  * });
  * ```
  */
@@ -132,19 +231,16 @@ export function validationColumns(
   table: Table,
   options: ValidationDesignOptions = {},
 ): ValidationColumns {
-  const issues: ValidationIssue[] = [];
+  const problems: ColumnProblem[] = [];
   const pick = (role: "subject" | "observer" | "replicate", wanted: string | null | undefined) => {
     if (wanted === null) return null;
     if (wanted !== undefined) {
       const c = findColumn(table, wanted);
       if (c === undefined) {
-        issues.push(columnIssue(
-          table,
+        problems.push({
           role,
-          JSON.stringify(wanted),
-          `a column of the table: ${headersOf(table)}`,
-          "unknown",
-        ));
+          text: `no column ${JSON.stringify(wanted)} for the ${role} (option '${role}')`,
+        });
       }
       return c?.header ?? null;
     }
@@ -153,13 +249,10 @@ export function validationColumns(
       if (c) return c.header;
     }
     if (role !== "replicate") {
-      issues.push(columnIssue(
-        table,
+      problems.push({
         role,
-        `columns ${headersOf(table)}`,
-        `a column named ${FALLBACKS[role].join(", ")} (or name it with the option '${role}')`,
-        "missing",
-      ));
+        text: `no ${role} column (none named ${FALLBACKS[role].join(", ")})`,
+      });
     }
     return null;
   };
@@ -170,13 +263,10 @@ export function validationColumns(
   if (options.value !== undefined) {
     const c = findColumn(table, options.value);
     if (c === undefined) {
-      issues.push(columnIssue(
-        table,
-        "value",
-        JSON.stringify(options.value),
-        `a column of the table: ${headersOf(table)}`,
-        "unknown",
-      ));
+      problems.push({
+        role: "value",
+        text: `no column ${JSON.stringify(options.value)} for the value (option 'value')`,
+      });
     }
     value = c?.header ?? null;
   } else {
@@ -186,16 +276,19 @@ export function validationColumns(
     );
     value = named?.header ?? (rest.length === 1 ? rest[0]!.header : null);
     if (value === null) {
-      issues.push(columnIssue(
-        table,
-        "value",
-        `columns ${rest.map((c) => c.header).join(", ") || "none"} besides the others`,
-        "a column named 'value' or a single column left over (or name it with the option 'value')",
-        "missing",
-      ));
+      problems.push({
+        role: "value",
+        text: `no value column (none named 'value', and ${
+          rest.length === 0 ? "no column" : `${rest.length} columns`
+        } left over instead of one)`,
+      });
     }
   }
-  if (issues.length > 0) throw issueError(issues);
+  if (problems.length > 0) {
+    const taken = new Set([subject, observer, replicate, value].filter((h) => h !== null));
+    const noReplicate = replicate === null && options.replicate !== null;
+    throw columnsError(table, problems, taken as Set<string>, noReplicate);
+  }
   const roles = [subject!, observer!, ...(replicate ? [replicate] : []), value!];
   if (new Set(roles).size !== roles.length) {
     throw new TypeError(
@@ -289,4 +382,46 @@ export function statedQuantity(options: StatedQuantityOptions): Quantity {
     resolution: options.resolution ?? 0.01,
     rangeNote: "stated by the user",
   });
+}
+
+/**
+ * The quantity of a value column the package does not know, from its header and what the user
+ * states: the unit from the header ("value [mm]") or the one stated, the label stated or made
+ * from the header ("jet_width [mm]" → "Jet width"). Map the column to it when reading, with the
+ * unit: `readTable(csv, { columns: { [header]: q }, units: { [header]: q.unit } })`.
+ *
+ * @param header The value column's header as written.
+ * @param stated What the user states: a unit, a label (both optional).
+ * @returns The quantity (id "statedQuantity").
+ * @throws {TypeError} When neither the header nor the user states a unit, or both do and
+ * differ.
+ *
+ * @example
+ * ```ts
+ * import { statedColumnQuantity } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const q = statedColumnQuantity("jet_width [mm]");
+ * assert.deepEqual([q.label, q.unit], ["Jet width", "mm"]);
+ * assert.equal(statedColumnQuantity("value", { unit: "L/min", label: "Peak flow" }).unit, "L/min");
+ * assert.throws(() => statedColumnQuantity("value"), TypeError);
+ * ```
+ */
+export function statedColumnQuantity(
+  header: string,
+  stated: { readonly unit?: string | undefined; readonly label?: string | undefined } = {},
+): Quantity {
+  const inHeader = splitHeader(header).unit;
+  if (inHeader === undefined && stated.unit === undefined) {
+    throw new TypeError(
+      `expected the unit of column '${header}' in its header (e.g. '${header} [mm]') or stated (--unit on the command line): it holds values of no quantity the package knows, got no unit; pass --graded for graded findings`,
+    );
+  }
+  if (inHeader !== undefined && stated.unit !== undefined && inHeader !== stated.unit.trim()) {
+    throw new TypeError(
+      `expected one unit for column '${header}': its header states ${inHeader}, got also ${stated.unit}`,
+    );
+  }
+  const words = normalizeHeader(header);
+  const label = stated.label ?? (words.charAt(0).toUpperCase() + words.slice(1));
+  return statedQuantity({ label, unit: (inHeader ?? stated.unit)! });
 }

@@ -66,6 +66,7 @@ export {
   checkInputs,
   checkValue,
   quantityField,
+  relationText,
   validateInputs,
   type ValidateOptions,
 } from "./validate.ts";
@@ -94,5 +95,6 @@ export {
   type SensitivityOptions,
   type SensitivityPoint,
 } from "./sensitivity.ts";
+export { relativeChangePercent } from "./relative_change.ts";
 export { calculationMarkdown, catalogMarkdown } from "./docs.ts";
 export { evaluateColumns } from "./columns.ts";

@@ -6,7 +6,13 @@
  */
 import { evaluate, type InputArguments } from "./evaluate.ts";
 import { formatRange, inRange } from "./range.ts";
-import type { Calculation } from "./types.ts";
+import type { Calculation, MimeBundle, SensitivityCurve, SensitivityPoint } from "./types.ts";
+
+export type { SensitivityCurve, SensitivityPoint } from "./types.ts";
+import { cautionsOf } from "./calculation.ts";
+import { displaySensitivityCurve } from "../../display/sensitivity.ts";
+import { JUPYTER_DISPLAY } from "../../display/mime.ts";
+import { relativeChangePercent } from "./relative_change.ts";
 
 /** Options of {@linkcode sensitivityCurve}. */
 export interface SensitivityOptions<I extends string, O extends string> {
@@ -22,38 +28,6 @@ export interface SensitivityOptions<I extends string, O extends string> {
   readonly output?: O;
 }
 
-/** One point of a sensitivity curve. */
-export interface SensitivityPoint {
-  /** Value of the swept input. */
-  readonly x: number;
-  /** Value of the output. */
-  readonly y: number;
-  /** Change of the output relative to its value at the reference inputs, in percent. */
-  readonly relativeChangePercent: number;
-}
-
-/** A sensitivity curve with its labels. */
-export interface SensitivityCurve {
-  /** Calculation title. */
-  readonly title: string;
-  /** Swept input name. */
-  readonly input: string;
-  /** Label of the swept input (its quantity's). */
-  readonly inputLabel: string;
-  /** Unit of the swept input. */
-  readonly inputUnit: string;
-  /** Followed output name. */
-  readonly output: string;
-  /** Label of the followed output (its quantity's). */
-  readonly outputLabel: string;
-  /** Unit of the followed output. */
-  readonly outputUnit: string;
-  /** Reference value of the swept input and of the output. */
-  readonly reference: { readonly x: number; readonly y: number };
-  /** The points, in sweep order. */
-  readonly points: readonly SensitivityPoint[];
-}
-
 /**
  * Sweeps one input of a calculation and records an output, with its change relative to the
  * reference inputs.
@@ -62,7 +36,8 @@ export interface SensitivityCurve {
  * @param reference Reference inputs (numbers or quantity strings); the swept input's reference
  * value is taken from here.
  * @param options Swept input, range, number of points, output.
- * @returns The curve.
+ * @returns The curve (it displays itself in a notebook: the points with the change relative to the
+ * reference, and the calculation's cautions).
  * @throws {RangeError} When the sweep leaves the swept input's valid range or steps < 2.
  * @throws {TypeError} For an unknown input or output name.
  *
@@ -83,7 +58,7 @@ export function sensitivityCurve<I extends string, O extends string>(
   calc: Calculation<I, O>,
   reference: InputArguments<I>,
   options: SensitivityOptions<I, O>,
-): SensitivityCurve {
+): SensitivityCurve & { [JUPYTER_DISPLAY](): MimeBundle } {
   const { vary } = options;
   if (!calc.inputNames.includes(vary)) {
     throw new TypeError(
@@ -118,9 +93,9 @@ export function sensitivityCurve<I extends string, O extends string>(
   for (let s = 0; s < steps; s++) {
     const x = options.from + ((options.to - options.from) * s) / (steps - 1);
     const y = evaluate(calc, { ...reference, [vary]: x }).outputs[output];
-    points.push({ x, y, relativeChangePercent: y0 !== 0 ? (100 * (y - y0)) / Math.abs(y0) : NaN });
+    points.push({ x, y, relativeChangePercent: relativeChangePercent(y, y0) });
   }
-  return {
+  const curve: SensitivityCurve = {
     title: calc.title,
     input: vary,
     inputLabel: def.label,
@@ -131,4 +106,8 @@ export function sensitivityCurve<I extends string, O extends string>(
     reference: { x: base.inputs[vary], y: y0 },
     points,
   };
+  const cautions = cautionsOf(calc);
+  return Object.assign(curve, {
+    [JUPYTER_DISPLAY]: () => displaySensitivityCurve(curve, cautions),
+  });
 }

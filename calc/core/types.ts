@@ -263,3 +263,36 @@ export interface Evaluation<I extends string = string, O extends string = string
 
 /** A Jupyter MIME bundle: MIME type → content. */
 export type MimeBundle = Record<string, unknown>;
+
+/** One point of a sensitivity curve. */
+export interface SensitivityPoint {
+  /** Value of the swept input. */
+  readonly x: number;
+  /** Value of the output. */
+  readonly y: number;
+  /** Change of the output relative to its value at the reference inputs (`reference.y`), in
+   * percent: `relativeChangePercent(y, reference.y)`, the package's one definition. */
+  readonly relativeChangePercent: number;
+}
+
+/** A sensitivity curve with its labels. */
+export interface SensitivityCurve {
+  /** Calculation title. */
+  readonly title: string;
+  /** Swept input name. */
+  readonly input: string;
+  /** Label of the swept input (its quantity's). */
+  readonly inputLabel: string;
+  /** Unit of the swept input. */
+  readonly inputUnit: string;
+  /** Followed output name. */
+  readonly output: string;
+  /** Label of the followed output (its quantity's). */
+  readonly outputLabel: string;
+  /** Unit of the followed output. */
+  readonly outputUnit: string;
+  /** Reference value of the swept input and of the output. */
+  readonly reference: { readonly x: number; readonly y: number };
+  /** The points, in sweep order. */
+  readonly points: readonly SensitivityPoint[];
+}

@@ -7,6 +7,7 @@
  * @module
  */
 import type {
+  InputConstraint,
   InputDefinition,
   InputSchema,
   InputValues,
@@ -283,6 +284,38 @@ export function checkInputs<I extends string>(
 }
 
 /**
+ * The text of a relation between inputs as a reader sees it: each quoted input name followed by
+ * its label, `<=` and `>=` written as ≤ and ≥ — the format of every validator message
+ * ("'field' (Label)").
+ *
+ * @param schema The calculation (or argument schema) the relation belongs to.
+ * @param constraint The relation.
+ * @returns The relation with labels.
+ *
+ * @example
+ * ```ts
+ * import { ejectionFraction, relationText } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.equal(
+ *   relationText(ejectionFraction, ejectionFraction.constraints[0]!),
+ *   "'endSystolicVolumeMl' (LV end-systolic volume) ≤ 'endDiastolicVolumeMl' (LV end-diastolic volume)",
+ * );
+ * ```
+ */
+export function relationText<I extends string>(
+  schema: InputSchema<I>,
+  constraint: InputConstraint<I>,
+): string {
+  return constraint.description
+    .replace(/'(\w+)'/g, (whole, name: string) => {
+      const input = Object.hasOwn(schema.inputs, name) ? schema.inputs[name as I] : undefined;
+      return input ? `${whole} (${input.label})` : whole;
+    })
+    .replace(/ <= /g, " ≤ ")
+    .replace(/ >= /g, " ≥ ");
+}
+
+/**
  * Checks the relations between inputs (e.g. end-systolic ≤ end-diastolic volume) whose values
  * are all known.
  *
@@ -312,7 +345,7 @@ export function checkConstraints<I extends string>(
       field: c.inputs.join(", "),
       received: c.inputs.map((n) => `${n} = ${withUnit(String(values[n]), schema.inputs[n].unit)}`)
         .join(", "),
-      expected: c.description,
+      expected: relationText(schema, c),
     });
   }
   return issues;

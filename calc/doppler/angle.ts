@@ -23,6 +23,7 @@ import { angleCorrectedVelocity } from "../physics/doppler.ts";
 import { simplifiedBernoulli } from "./bernoulli.ts";
 import { continuityValveAreaPeakVelocity } from "./valve_area.ts";
 import { BAUMGARTNER_2009, HATLE_ANGELSEN_1985 } from "./citations.ts";
+import { relativeChangePercent } from "../core/relative_change.ts";
 
 // Why these two are compositions, not chains (`chain`):
 // - both need the angle signed, with a default of 0°, so that an angle uncertain around 0°
@@ -50,8 +51,10 @@ function signedAngle(label: string, description: string): InputRole {
  *
  * Formula: v_true = v_measured / cos θ (from {@linkcode angleCorrectedVelocity});
  * ΔP = 4·v² for both velocities (from {@linkcode simplifiedBernoulli});
- * velocity underestimation = 100·(1 − v_measured/v_true) % = 100·(1 − cos θ) %;
- * gradient underestimation = 100·(1 − ΔP_measured/ΔP_true) % = 100·(1 − cos²θ) %.
+ * velocity underestimation = −100·(v_measured − v_true)/v_true % = 100·(1 − cos θ) %;
+ * gradient underestimation = −100·(ΔP_measured − ΔP_true)/ΔP_true % = 100·(1 − cos²θ) %
+ * (the package's one relative change, {@linkcode relativeChangePercent}, relative to the true
+ * value: 3.02 % for the gradient at 10°).
  *
  * Source: Hatle L, Angelsen B. Doppler Ultrasound in Cardiology, 1985 (angle dependence);
  * Baumgartner H, et al. J Am Soc Echocardiogr 2009;22:1-23 (alignment of the CW beam).
@@ -105,7 +108,7 @@ export const insonationAngleEffect: Calculation<
     },
     velocityUnderestimationPercent: {
       quantity: DOPPLER_UNDERESTIMATION,
-      label: "Velocity underestimation",
+      label: "Velocity underestimation relative to the true velocity",
       description: "Shortfall of the displayed velocity relative to the true velocity",
     },
     measuredGradient: {
@@ -119,7 +122,7 @@ export const insonationAngleEffect: Calculation<
     },
     gradientUnderestimationPercent: {
       quantity: DOPPLER_UNDERESTIMATION,
-      label: "Gradient underestimation",
+      label: "Gradient underestimation relative to the true gradient",
       description: "Shortfall of the displayed gradient relative to the true gradient",
     },
   },
@@ -130,10 +133,11 @@ export const insonationAngleEffect: Calculation<
     const trueGradient = simplifiedBernoulli.formula({ peakVelocity: trueVelocity }).gradient;
     return {
       trueVelocity,
-      velocityUnderestimationPercent: 100 * (1 - measuredVelocity / trueVelocity),
+      // 0 − x: a reading at 0° shows 0, never −0
+      velocityUnderestimationPercent: 0 - relativeChangePercent(measuredVelocity, trueVelocity),
       measuredGradient,
       trueGradient,
-      gradientUnderestimationPercent: 100 * (1 - measuredGradient / trueGradient),
+      gradientUnderestimationPercent: 0 - relativeChangePercent(measuredGradient, trueGradient),
     };
   },
   formulaText:
@@ -150,7 +154,8 @@ export const insonationAngleEffect: Calculation<
  * Formula: AVA = π·d²/4 · (V_LVOT/cos θ_LVOT) / (V_AV/cos θ_AV) (angle correction from
  * {@linkcode angleCorrectedVelocity}, area from {@linkcode continuityValveAreaPeakVelocity});
  * `avaAssumingAlignmentCm2` is the same with both angles 0, and `areaOverestimationPercent` =
- * 100·(AVA_aligned/AVA − 1).
+ * 100·(AVA_aligned − AVA)/AVA (relative to the angle-corrected area,
+ * {@linkcode relativeChangePercent}).
  *
  * Source: Baumgartner H, et al. J Am Soc Echocardiogr 2009;22:1-23 (continuity equation; a
  * misaligned jet underestimates velocity and overestimates the area).
@@ -203,7 +208,7 @@ export const continuityValveAreaWithAngles: Calculation<
     },
     areaOverestimationPercent: {
       quantity: VALVE_AREA_ERROR,
-      label: "Valve-area overestimation",
+      label: "Valve-area overestimation relative to the angle-corrected area",
       description: "Excess of the aligned-assumption area over the angle-corrected area",
     },
   },
@@ -221,7 +226,7 @@ export const continuityValveAreaWithAngles: Calculation<
     return {
       avaCm2,
       avaAssumingAlignmentCm2,
-      areaOverestimationPercent: 100 * (avaAssumingAlignmentCm2 / avaCm2 - 1),
+      areaOverestimationPercent: relativeChangePercent(avaAssumingAlignmentCm2, avaCm2),
     };
   },
   formulaText: "AVA = π·d²/4 · (V_LVOT/cos θ_LVOT)/(V_AV/cos θ_AV)",

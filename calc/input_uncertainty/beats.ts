@@ -13,7 +13,7 @@ import { type StudentTInput, typeA } from "../uncertainty/distributions.ts";
 import { tQuantile } from "../stats/distributions.ts";
 import { labelWithUnit } from "../../display/uncertainty.ts";
 import { JCGM_100, JCGM_101 } from "./citations.ts";
-import { type ModelProvenance, withModelDisplay } from "./shared.ts";
+import { type ModelProvenance, notAnObject, withModelDisplay } from "./shared.ts";
 
 /** The result of {@linkcode repeatedBeats}. */
 export interface RepeatedBeats extends ModelProvenance {
@@ -70,6 +70,12 @@ const WHERE = "Repeated beats";
  * ```
  */
 export function repeatedBeats(quantity: Quantity, readings: readonly unknown[]): RepeatedBeats {
+  if (
+    typeof quantity !== "object" || quantity === null || Array.isArray(quantity) ||
+    typeof (quantity as { label?: unknown }).label !== "string"
+  ) {
+    throw notAnObject(WHERE, "quantity", quantity, "as a quantity (e.g. PEAK_VELOCITY)");
+  }
   if (!Array.isArray(readings)) {
     throw issueError([{
       kind: "type",
@@ -140,6 +146,13 @@ export function repeatedBeats(quantity: Quantity, readings: readonly unknown[]):
       labelWithUnit("u = s/√n", quantity.unit),
       "k (95 %)",
     ],
-    [[String(n), String(dof), result.mean, result.standardDeviation, u, k95]],
+    [[
+      String(n),
+      String(dof),
+      { value: result.mean, u },
+      { u: result.standardDeviation },
+      { u },
+      k95,
+    ]],
   );
 }

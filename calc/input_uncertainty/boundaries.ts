@@ -175,8 +175,8 @@ export function sharedBoundaryInputs(dimensions: SharedBoundaryArguments): Share
   return withModelDisplay(
     result,
     `${WHERE}: covariance of the linear dimensions (cm²)`,
-    ["", ...labels, "u (cm)"],
-    covariance.map((row, i) => [labels[i]!, ...row, sd[i]!]),
+    ["", ...labels.map((l) => `${l} (cm²)`), "u (cm)"],
+    covariance.map((row, i) => [labels[i]!, ...row.map((c) => ({ u: c })), { u: sd[i]! }]),
   );
 }
 
@@ -334,6 +334,6 @@ export function sharedTracingInputs(
     result,
     `${TRACING_WHERE}: measurements from one envelope, common u_c = ${uc} %`,
     ["Input", "Value", "Power k", "Own u_i (%)", "Total u_r (%)"],
-    rows.map((r) => [r.name, r.value, String(r.power), r.own!, r.relative]),
+    rows.map((r) => [r.name, r.value, String(r.power), { u: r.own! }, { u: r.relative }]),
   );
 }

@@ -272,8 +272,8 @@ export function caliperPlacement(settings: CaliperSettings): CaliperPlacement {
     } the beam at ${x.measurementDepthCm} cm`,
     ["Component", "Cell width R (mm)", "u = R/√12 (mm)", "Source"],
     [
-      ...components.map((c) => [c.label, c.cellWidthMm, c.standardUncertaintyMm, c.source]),
-      ["One boundary, combined", "", boundaryUncertaintyMm, "√Σu²"],
+      ...components.map((c) => [c.label, c.cellWidthMm, { u: c.standardUncertaintyMm }, c.source]),
+      ["One boundary, combined", "", { u: boundaryUncertaintyMm }, "√Σu²"],
     ],
   );
 }

@@ -20,6 +20,7 @@ import {
   type RectangularInput,
 } from "../uncertainty/distributions.ts";
 import { type ModelProvenance, notAnObject, withModelDisplay } from "./shared.ts";
+import { formatNumber } from "../../display/format.ts";
 
 /** How the flow direction may vary around the beam: "cone", any direction within a cone of
  * half-angle θmax in three dimensions, equally likely over solid angle; "inPlane", any angle in
@@ -250,7 +251,9 @@ export function insonationAngleComparison(options: {
   };
   return withModelDisplay(
     result,
-    `Insonation angle within ${x.maxDeg}°: velocity ${x.displayedVelocity} m/s displayed`,
+    `Insonation angle within ${x.maxDeg}°: velocity ${
+      formatNumber(x.displayedVelocity)
+    } m/s displayed`,
     [
       "Model",
       "E[cos θ]",

@@ -149,7 +149,7 @@ export function rightAtrialPressureRange(ivc: {
       `${range.lowerMmHg}–${range.upperMmHg}`,
       point,
       midpoint,
-      result.standardUncertaintyMmHg,
+      { u: result.standardUncertaintyMmHg },
     ]],
   );
 }

@@ -8,7 +8,7 @@
  */
 import type { Citation, MimeBundle } from "../core/types.ts";
 import { JUPYTER_DISPLAY, tableBundle } from "../../display/mime.ts";
-import { formatNumber } from "../../display/format.ts";
+import { formatNumber, roundLike } from "../../display/format.ts";
 import { issueError } from "../core/issues.ts";
 import { describeValue } from "../core/text.ts";
 
@@ -25,9 +25,17 @@ export interface ModelProvenance {
   readonly citations: readonly Citation[];
 }
 
-/** A table cell: numbers with four significant digits, text as it is. */
-function cell(value: number | string): string {
-  return typeof value === "number" ? formatNumber(value) : value;
+/** A table cell of a model's display: a plain number (four significant digits), an uncertainty
+ * `{ u }` (two significant digits, GUM 7.2.6), a value rounded like its uncertainty
+ * `{ value, u }` (GUM 7.2.6), or text as it is. */
+export type ModelCell = number | string | { readonly u: number; readonly value?: number };
+
+/** The text of a cell (see {@linkcode ModelCell}). */
+function cell(value: ModelCell): string {
+  if (typeof value === "number") return formatNumber(value);
+  if (typeof value === "string") return value;
+  if (value.value !== undefined) return roundLike(value.value, value.u);
+  return formatNumber(value.u, 2);
 }
 
 /**
@@ -38,7 +46,7 @@ export function withModelDisplay<T extends ModelProvenance>(
   result: T,
   title: string,
   header: readonly string[],
-  rows: readonly (readonly (number | string)[])[],
+  rows: readonly (readonly ModelCell[])[],
 ): T {
   const bundle = (): MimeBundle =>
     tableBundle(title, header, rows.map((r) => r.map(cell)), {

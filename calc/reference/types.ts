@@ -6,7 +6,7 @@
  */
 import type { Quantity } from "../core/types.ts";
 import type { Interval, UncertainValue } from "../uncertainty/types.ts";
-import type { ZScoreModel } from "./zscore_models.ts";
+import type { ZScoreFormName, ZScoreModel } from "./zscore_models.ts";
 
 /** A Z-score with its context and, when an input was uncertain, its uncertainty. */
 export interface ZScoreResult {
@@ -43,4 +43,38 @@ export interface ZScoreResult {
   readonly flags: readonly string[];
   /** Cautions (with the clinical caution and the coefficients' provenance). */
   readonly cautions: readonly string[];
+}
+
+/** Normal limits of a model at one BSA. */
+export interface NormalLimits {
+  /** BSA, m². */
+  readonly bsaM2: number;
+  /** Measurement at Z = 0. */
+  readonly mean: number;
+  /** Measurement at Z = −2. */
+  readonly lower: number;
+  /** Measurement at Z = +2. */
+  readonly upper: number;
+  /** True when the BSA lies outside the model's BSA range. */
+  readonly bsaOutsideModelRange: boolean;
+}
+
+/** One row of `compareZScoreModels`. */
+export interface ZScoreComparisonRow {
+  /** Model identifier. */
+  readonly modelId: string;
+  /** Model form. */
+  readonly form: ZScoreFormName;
+  /** Source, "Authors year". */
+  readonly source: string;
+  /** Z, or null when the model could not be applied (see `error`). */
+  readonly zScore: number | null;
+  /** Percentile, or null. */
+  readonly percentile: number | null;
+  /** BSA used by this model (its own BSA formula), m², or null. */
+  readonly bsaM2: number | null;
+  /** Flags of this model (BSA outside range, ...). */
+  readonly flags: readonly string[];
+  /** Why the model could not be applied (unit mismatch, value out of domain), if so. */
+  readonly error?: string;
 }

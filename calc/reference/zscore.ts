@@ -6,8 +6,9 @@
  *
  * @module
  */
-import type { Calculation, Population, Quantity } from "../core/types.ts";
+import type { Calculation, MimeBundle, Population, Quantity } from "../core/types.ts";
 import { defineQuantity } from "../core/quantity.ts";
+import { cautionsOf } from "../core/calculation.ts";
 import { formatRange, inRange } from "../core/range.ts";
 import { defineFamily, type Family } from "../core/family.ts";
 import { chain } from "../core/chain.ts";
@@ -30,12 +31,18 @@ import {
   PHN_2017_MODELS,
   ZSCORE_FORMS,
   type ZScoreForm,
-  type ZScoreFormName,
   zScoreFormula,
   type ZScoreModel,
 } from "./zscore_models.ts";
-import { displayZScore, JUPYTER_DISPLAY } from "../../display/reference.ts";
-import type { ZScoreResult } from "./types.ts";
+import {
+  displayNormalLimits,
+  displayZScore,
+  displayZScoreComparison,
+  JUPYTER_DISPLAY,
+} from "../../display/reference.ts";
+import type { NormalLimits, ZScoreComparisonRow, ZScoreResult } from "./types.ts";
+
+export type { NormalLimits, ZScoreComparisonRow } from "./types.ts";
 export type { ZScoreResult } from "./types.ts";
 
 const Z_CAUTIONS = [
@@ -458,20 +465,6 @@ export function measurementAtZ(model: ZScoreModel, zScore: number, bsaM2: number
   return x;
 }
 
-/** Normal limits of a model at one BSA. */
-export interface NormalLimits {
-  /** BSA, m². */
-  readonly bsaM2: number;
-  /** Measurement at Z = 0. */
-  readonly mean: number;
-  /** Measurement at Z = −2. */
-  readonly lower: number;
-  /** Measurement at Z = +2. */
-  readonly upper: number;
-  /** True when the BSA lies outside the model's BSA range. */
-  readonly bsaOutsideModelRange: boolean;
-}
-
 /**
  * The mean and the Z = ±2 measurements of a model at a BSA.
  *
@@ -489,35 +482,27 @@ export interface NormalLimits {
  * assert.ok(Math.abs(l.lower - 1.53) < 1e-12 && Math.abs(l.upper - 2.178) < 1e-12);
  * ```
  */
-export function normalLimits(model: ZScoreModel, bsaM2: number | string): NormalLimits {
+export function normalLimits(
+  model: ZScoreModel,
+  bsaM2: number | string,
+): NormalLimits & { [JUPYTER_DISPLAY](): MimeBundle } {
   const bsa = checkBsa(`Normal limits (${model.id})`, bsaM2);
-  return {
+  const limits: NormalLimits = {
     bsaM2: bsa,
     mean: measurementFormula(model, 0, bsa),
     lower: measurementFormula(model, -2, bsa),
     upper: measurementFormula(model, 2, bsa),
     bsaOutsideModelRange: !inRange(bsa, model.bsaRange),
   };
-}
-
-/** One row of {@linkcode compareZScoreModels}. */
-export interface ZScoreComparisonRow {
-  /** Model identifier. */
-  readonly modelId: string;
-  /** Model form. */
-  readonly form: ZScoreFormName;
-  /** Source, "Authors year". */
-  readonly source: string;
-  /** Z, or null when the model could not be applied (see `error`). */
-  readonly zScore: number | null;
-  /** Percentile, or null. */
-  readonly percentile: number | null;
-  /** BSA used by this model (its own BSA formula), m², or null. */
-  readonly bsaM2: number | null;
-  /** Flags of this model (BSA outside range, ...). */
-  readonly flags: readonly string[];
-  /** Why the model could not be applied (unit mismatch, value out of domain), if so. */
-  readonly error?: string;
+  const quantity = measuredQuantity(model);
+  return Object.assign(limits, {
+    [JUPYTER_DISPLAY]: () =>
+      displayNormalLimits(limits, {
+        quantity,
+        title: `Normal limits: ${quantity.label} (${modelCitation(model)})`,
+        cautions: cautionsOf(zScoreCalculation(model)),
+      }),
+  });
 }
 
 /**
@@ -547,7 +532,7 @@ export interface ZScoreComparisonRow {
 export function compareZScoreModels(
   models: readonly ZScoreModel[],
   args: ZScoreArguments,
-): ZScoreComparisonRow[] {
+): ZScoreComparisonRow[] & { [JUPYTER_DISPLAY](): MimeBundle } {
   if (!Array.isArray(models) || models.length === 0) {
     throw new TypeError(
       `Z-score comparison: expected a non-empty array of models, got ${
@@ -556,7 +541,7 @@ export function compareZScoreModels(
     );
   }
   const first = models[0]!;
-  return models.map((model) => {
+  const rows = models.map((model) => {
     const source = `${model.source.authors.split(",")[0]} ${model.source.year}`;
     const failed = (error: string): ZScoreComparisonRow => ({
       modelId: model.id,
@@ -590,6 +575,15 @@ export function compareZScoreModels(
       if (!(error instanceof TypeError || error instanceof RangeError)) throw error;
       return failed(error.message);
     }
+  });
+  const label = measuredQuantity(first).label;
+  return Object.assign(rows, {
+    [JUPYTER_DISPLAY]: () =>
+      displayZScoreComparison(rows, {
+        names: models.map((m) => measuredQuantity(m).label),
+        title: `Z-scores of ${label} under ${models.length} model${models.length > 1 ? "s" : ""}`,
+        cautions: [...new Set(models.flatMap((m) => cautionsOf(zScoreCalculation(m))))],
+      }),
   });
 }
 

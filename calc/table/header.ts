@@ -58,7 +58,21 @@ const UNIT_WORDS: Readonly<Record<string, string>> = {
 };
 
 /** Splits "weight [kg]" into name and unit. */
-function splitHeader(header: string): { name: string; unit: string | undefined } {
+/**
+ * Splits a header into its name and the unit written in brackets at its end.
+ *
+ * @param header A column header.
+ * @returns The name and the unit (undefined when the header names none).
+ *
+ * @example
+ * ```ts
+ * import { splitHeader } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * assert.deepEqual(splitHeader("LVOT diameter [mm]"), { name: "LVOT diameter", unit: "mm" });
+ * assert.deepEqual(splitHeader("patient"), { name: "patient", unit: undefined });
+ * ```
+ */
+export function splitHeader(header: string): { name: string; unit: string | undefined } {
   const m = /^(.*?)\s*\[([^\]]+)\]\s*$/.exec(header);
   return m ? { name: m[1]!.trim(), unit: m[2]!.trim() } : { name: header.trim(), unit: undefined };
 }

@@ -22,7 +22,7 @@ export {
   readTableStream,
 } from "./read.ts";
 export { decodeUtf8, TableDecoder } from "./decode.ts";
-export { type ColumnPlan, planColumns } from "./header.ts";
+export { type ColumnPlan, planColumns, splitHeader } from "./header.ts";
 export { neutraliseFormula, restoreFormula } from "./formula_guard.ts";
 export {
   evaluateTable,
@@ -35,5 +35,5 @@ export {
   type TableRow,
   tableRow,
 } from "./evaluate.ts";
-export { csvTextCell, writeTableCsv, type WriteTableOptions } from "./write.ts";
+export { csvTextCell, writeBudgetCsv, writeTableCsv, type WriteTableOptions } from "./write.ts";
 export { adultSeverityBySex, gradeTable, type SeverityChoice } from "./grade.ts";

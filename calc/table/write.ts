@@ -9,8 +9,11 @@
  */
 import type { Table } from "./types.ts";
 import { renderIssue } from "../core/issues.ts";
+import { formatUnit } from "../core/text.ts";
 import { neutraliseFormula } from "./formula_guard.ts";
 import { reportedCell } from "../../display/table.ts";
+import { budgetExport, type BudgetExportOptions } from "../../display/budget_export.ts";
+import type { Propagation } from "../uncertainty/types.ts";
 
 /** A number as written: optional minus, digits, optional fraction and exponent (or nothing). */
 const PLAIN_NUMBER = /^(-?\d+(\.\d+)?([eE][-+]?\d+)?)?$/;
@@ -78,7 +81,14 @@ export function writeTableCsv(table: Table, options: WriteTableOptions = {}): st
   const columns = [...table.columns.values()];
   const header = columns.map((c) => {
     if (c.kind === "text") return csvTextCell(c.header);
-    const label = c.computed ? c.header.replace(/ \([^)]*\)$/, "") : c.quantity.label;
+    // a computed column's header without its display unit ("… (cm²)"), keeping any other
+    // parenthesis ("Z-score (Lopez 2017)")
+    const shownUnit = formatUnit(c.quantity.unit);
+    const label = !c.computed
+      ? c.quantity.label
+      : shownUnit !== "" && c.header.endsWith(` (${shownUnit})`)
+      ? c.header.slice(0, -(shownUnit.length + 3))
+      : c.header;
     return csvTextCell(c.quantity.unit === "1" ? label : `${label} [${c.quantity.unit}]`);
   });
   const withFlags = options.flags ?? true;
@@ -110,4 +120,44 @@ export function writeTableCsv(table: Table, options: WriteTableOptions = {}): st
   // a comment line is one quoted cell when it holds a delimiter, so no part of it starts a cell
   const comments = table.cautions.map((c) => csvTextCell(`# ${c.replace(/[\r\n]+/g, " ")}`));
   return (comments.length > 0 ? comments.join("\n") + "\n" : "") + out.join("\n") + "\n";
+}
+
+/**
+ * Writes the uncertainty budget of one output of a GUM propagation as CSV for a lab report: the
+ * title, the warnings and the cautions first as "# " comment lines (as {@linkcode writeTableCsv} writes a
+ * table's), then a header line and a row per source with its label and unit, its distribution,
+ * estimate, u(xᵢ), νᵢ, sensitivity cᵢ (with its unit), contribution and share of the variance,
+ * rounded as the notebook display rounds them (JCGM 100:2008 §7.2.6), then the result line and
+ * the combined uncertainty as comment lines. Every cell is neutralised against spreadsheet
+ * formula injection ({@linkcode csvTextCell}).
+ *
+ * @param result A GUM propagation.
+ * @param options The output.
+ * @returns CSV text.
+ * @throws {TypeError} For a Monte Carlo result (it has no budget) or an unknown output.
+ *
+ * @example
+ * ```ts
+ * import { normal, propagate, simplifiedBernoulli, writeBudgetCsv } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const csv = writeBudgetCsv(propagate(simplifiedBernoulli, { peakVelocity: normal(4, 0.1) }));
+ * const rows = csv.split("\n").filter((l) => l !== "" && !/^"?#/.test(l));
+ * assert.equal(rows[0], "Source,Distribution,Estimate xᵢ,u(xᵢ),νᵢ,Sensitivity cᵢ,cᵢ·u(xᵢ),Share of u²");
+ * // c = 8v = 32 mmHg/(m/s), c·u = 3.2 mmHg (hand computation)
+ * assert.equal(rows[1], "Peak velocity (m/s),normal,4.00,0.10,∞,32 mmHg/(m/s),3.2 mmHg,100.0 %");
+ * assert.match(csv, /^# Uncertainty budget of Peak gradient/);
+ * assert.match(csv, /# Caution: Not a diagnosis/);
+ * ```
+ */
+export function writeBudgetCsv(result: Propagation, options: BudgetExportOptions = {}): string {
+  const b = budgetExport(result, options);
+  const comment = (text: string) => csvTextCell(`# ${text.replace(/[\r\n]+/g, " ")}`);
+  return [
+    comment(b.title),
+    ...b.notes.map(comment),
+    b.header.map(csvTextCell).join(","),
+    ...b.rows.map((r) => r.map(csvTextCell).join(",")),
+    ...b.summary.map(comment),
+    "",
+  ].join("\n");
 }

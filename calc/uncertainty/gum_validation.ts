@@ -5,26 +5,13 @@
  * @module
  */
 import { numericalTolerance } from "./rounding.ts";
-import type { Propagation } from "./types.ts";
+import type { MimeBundle } from "../core/types.ts";
+import type { GumValidation, Propagation } from "./types.ts";
 
-/** The verdict of {@linkcode validateGumWithMonteCarlo} for one output. */
-export interface GumValidation {
-  /** Output name. */
-  readonly output: string;
-  /** Numerical tolerance δ from u(y) at n_dig digits. */
-  readonly tolerance: number;
-  /** |y − U − y_low| */
-  readonly lowDifference: number;
-  /** |y + U − y_high| */
-  readonly highDifference: number;
-  /** True when both differences are at most δ (JCGM 101 §8.2). */
-  readonly validated: boolean;
-  /** A plain-language verdict. */
-  readonly verdict: string;
-  /** True when the Monte Carlo interval ends were stabilised by the adaptive procedure (JCGM
-   * 101 §7.9), so that the verdict does not depend on the seed; false for a fixed-size run. */
-  readonly stable: boolean;
-}
+export type { GumValidation } from "./types.ts";
+import { displayGumValidation } from "../../display/sensitivity.ts";
+import { JUPYTER_DISPLAY } from "../../display/mime.ts";
+import { labelWithUnit } from "../../display/uncertainty.ts";
 
 /**
  * Validates a GUM result against a Monte Carlo result (JCGM 101:2008 §8.2): δ = ½·10^l from
@@ -51,7 +38,7 @@ export function validateGumWithMonteCarlo(
   gumResult: Propagation,
   mcResult: Propagation,
   significantDigits = 2,
-): GumValidation[] {
+): GumValidation[] & { [JUPYTER_DISPLAY](): MimeBundle } {
   if (gumResult.method !== "gum" || mcResult.method !== "monteCarlo") {
     throw new TypeError(
       `GUM validation: expected a GUM result and a Monte Carlo result, got ${gumResult.method} and ${mcResult.method}`,
@@ -67,7 +54,7 @@ export function validateGumWithMonteCarlo(
       `GUM validation: expected equal coverage probabilities, got ${gumResult.coverage} and ${mcResult.coverage}`,
     );
   }
-  return gumResult.outputNames.map((name) => {
+  const checks = gumResult.outputNames.map((name): GumValidation => {
     const g = gumResult.outputs[name]!;
     const m = mcResult.outputs[name];
     if (!m) {
@@ -105,5 +92,14 @@ export function validateGumWithMonteCarlo(
       verdict: verdict + note,
       stable: !fixed,
     };
+  });
+  const labels = Object.fromEntries(
+    gumResult.outputNames.map((n) => {
+      const o = gumResult.outputs[n]!;
+      return [n, labelWithUnit(o.label, o.unit)];
+    }),
+  );
+  return Object.assign(checks, {
+    [JUPYTER_DISPLAY]: () => displayGumValidation(checks, { labels }),
   });
 }

@@ -59,15 +59,28 @@ export function sortedTails(
   all: Float64Array,
   count: number,
 ): { low: Float64Array; high: Float64Array } {
-  const values = keptValues(all);
+  return tailsOf(all, () => count);
+}
+
+/** {@linkcode sortedTails} with the tail size a function of the number of values kept (known
+ * after the first pass). */
+function tailsOf(
+  all: Float64Array,
+  tailSize: (kept: number) => number,
+): { low: Float64Array; high: Float64Array } {
+  // one pass: the values kept (not NaN), their minimum and maximum (NaN compares false)
+  let min = Infinity, max = -Infinity, kept = 0;
+  for (let r = 0; r < all.length; r++) {
+    const v = all[r]!;
+    if (v !== v) continue;
+    kept++;
+    if (v < min) min = v;
+    if (v > max) max = v;
+  }
+  const count = tailSize(kept);
+  const values = kept === all.length ? all : keptValues(all);
   const m = values.length;
-  let min = Infinity, max = -Infinity;
   if (2 * count < m) {
-    for (let r = 0; r < m; r++) {
-      const v = values[r]!;
-      if (v < min) min = v;
-      if (v > max) max = v;
-    }
     // one repeated value (signed zeros aside: −0 === +0 but they sort apart)
     if (min === max && min !== 0) {
       return { low: new Float64Array(count).fill(min), high: new Float64Array(count).fill(min) };
@@ -120,9 +133,9 @@ export function coverageIntervals(
   values: Float64Array,
   coverage: number,
 ): { symmetric: Interval; shortest: Interval } {
-  const kept = keptValues(values);
-  const tails = sortedTails(kept, coverageTailSize(kept.length, coverage));
-  return intervalsFromTails(tails.low, tails.high, kept.length, coverage);
+  let m = 0;
+  const tails = tailsOf(values, (kept) => coverageTailSize(m = kept, coverage));
+  return intervalsFromTails(tails.low, tails.high, m, coverage);
 }
 
 /** q = pM (or ⌊pM + ½⌋), capped at M − 1 (JCGM 101:2008 §7.7). */

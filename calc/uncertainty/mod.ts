@@ -52,7 +52,12 @@ export {
   welchSatterthwaite,
 } from "./sources.ts";
 export { correlation, covariance, isUncertainValue } from "./uncertain_value.ts";
-export { propagate, type PropagateOptions } from "./propagate.ts";
+export {
+  type MonteCarloProgress,
+  propagate,
+  propagateInSteps,
+  type PropagateOptions,
+} from "./propagate.ts";
 export { type AdaptiveOptions } from "./adaptive.ts";
 export { DEFAULT_SEED, DEFAULT_TRIALS } from "./monte_carlo.ts";
 export { coverageIntervals, sampleCovariance } from "./intervals.ts";

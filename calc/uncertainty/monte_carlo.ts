@@ -10,6 +10,7 @@
 import type { Calculation, InputDefinition, OutputDefinition } from "../core/types.ts";
 import { cautionsOf } from "../core/calculation.ts";
 import { formatRange } from "../core/range.ts";
+import { relationText } from "../core/validate.ts";
 import { checkSeed } from "./random.ts";
 import { type KnownTails, sampleCovariance } from "./intervals.ts";
 import { coverageIntervals, intervalsFromTails, meanAndStandardDeviation } from "./intervals.ts";
@@ -18,6 +19,7 @@ import type { PreparedInputs } from "./prepare.ts";
 import { keyWords, NO_SOURCES, sourceCorrelation } from "./sources.ts";
 import { distributionInterval, exactDistribution } from "./distributions.ts";
 import {
+  BLOCK_TRIALS,
   blockCount,
   type InconsistentTrials,
   planGroups,
@@ -443,18 +445,53 @@ export function runMonteCarlo<I extends string, O extends string>(
   calc: Calculation<I, O>,
   run: MonteCarloRun<I>,
 ): Propagation<I, O> {
+  const parts = monteCarloInBlocks(calc, run);
+  parts.run(0, parts.blocks);
+  return parts.finish();
+}
+
+/** A Monte Carlo run taken a few blocks at a time (to report progress between them). */
+export interface MonteCarloInBlocks<I extends string, O extends string> {
+  /** Number of blocks of trials. */
+  readonly blocks: number;
+  /** Trials done once the first `blocks` blocks are done. */
+  trialsAfter(blocks: number): number;
+  /** Runs blocks [from, to). Each block has its own streams, so the result does not depend on
+   * how the blocks are grouped. */
+  run(from: number, to: number): void;
+  /** The result, once every block has run. */
+  finish(): Propagation<I, O>;
+}
+
+/**
+ * A checked Monte Carlo run on this thread, taken block by block: the same result as
+ * {@linkcode runMonteCarlo} whatever the grouping of the blocks.
+ */
+export function monteCarloInBlocks<I extends string, O extends string>(
+  calc: Calculation<I, O>,
+  run: MonteCarloRun<I>,
+): MonteCarloInBlocks<I, O> {
   const targets = runTargets(run, calc.outputNames.length);
   const counts = emptyCounts(calc.inputNames.length, calc.outputNames.length);
-  runBlocks(
-    calc as unknown as Calculation,
-    run.plan,
-    [run.seed],
-    run.trials,
-    range(blockCount(run.trials)),
-    targets,
-    counts,
-  );
-  return finishMonteCarlo(calc, run, targets, counts);
+  const blocks = blockCount(run.trials);
+  return {
+    blocks,
+    trialsAfter: (done) => Math.min(run.trials, done * BLOCK_TRIALS),
+    run(from, to) {
+      const which: number[] = [];
+      for (let b = from; b < to; b++) which.push(b);
+      runBlocks(
+        calc as unknown as Calculation,
+        run.plan,
+        [run.seed],
+        run.trials,
+        which,
+        targets,
+        counts,
+      );
+    },
+    finish: () => finishMonteCarlo(calc, run, targets, counts),
+  };
 }
 
 /** Trials excluded as physically inconsistent: NaN in every output (0 without outputs). */
@@ -483,7 +520,7 @@ export function excludedWarning(
         : [];
     }),
     ...(calc.constraints.length > 0
-      ? [`draws breaking ${calc.constraints.map((c) => c.description).join(", ")}`]
+      ? [`draws breaking ${calc.constraints.map((c) => relationText(calc, c)).join(", ")}`]
       : []),
     ...calc.outputNames.flatMap((o, k) => {
       const n = counts.outputsOutside[k]!;

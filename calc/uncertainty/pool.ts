@@ -385,6 +385,12 @@ function sharePlan(plan: TrialPlan, first: number, n: number): TrialPlan {
  * another pool), and calculations the workers cannot load (defined in a notebook cell, expression
  * models).
  *
+ * Measured (bench/analysis.md): on the 2-core machine the pool of two was slower than one thread
+ * for 10⁶ trials of the continuity model with an uncertain angle and used about 265 MB instead of
+ * about 137 MB; it pays only with free cores beyond the main thread (4 or more, otherwise idle)
+ * and runs long enough to repay starting the workers (about 0.3–0.5 s per pool). `propagate`
+ * therefore stays single-thread; the pool is opt-in.
+ *
  * Failures: a worker that ends or fails instead of answering (a model or module calling
  * `Deno.exit()` or `close()`, an uncaught error, a reply that cannot be read) refuses every call
  * in progress, naming the worker, what happened and the calculation it was running, and fails the

@@ -9,7 +9,12 @@ import type { Calculation, Population } from "../core/types.ts";
 import type { Correlations } from "./correlation.ts";
 import { type PreparedInputs, prepareInputs, type UncertainInputs } from "./prepare.ts";
 import { type GumOptions, propagateGum } from "./gum.ts";
-import { type MonteCarloRun, monteCarloRun, runMonteCarlo } from "./monte_carlo.ts";
+import {
+  monteCarloInBlocks,
+  type MonteCarloRun,
+  monteCarloRun,
+  runMonteCarlo,
+} from "./monte_carlo.ts";
 import {
   type AdaptiveOptions,
   type AdaptiveRun,
@@ -57,6 +62,19 @@ export interface PropagateOptions {
    * warning giving the share and the reasons and `monteCarlo.excludedTrials`; "refuse": the run
    * is a RangeError naming the counts. @default "exclude" */
   readonly inconsistentTrials?: "exclude" | "refuse";
+  /** Monte Carlo: called after each block of trials (fixed size) or each sequence (adaptive)
+   * with the trials done so far, e.g. {@linkcode terminalProgress}'s callback. Without it the run
+   * reports nothing. @default none */
+  readonly onProgress?: (progress: MonteCarloProgress) => void;
+}
+
+/** How far a Monte Carlo run has come. */
+export interface MonteCarloProgress {
+  /** Trials done so far. */
+  readonly trialsDone: number;
+  /** Trials the run will make at most (the trial limit of an adaptive run, which may stop
+   * earlier). */
+  readonly trialsPlanned: number;
 }
 
 /** Checks a coverage probability. */
@@ -112,16 +130,81 @@ export function propagate<I extends string, O extends string>(
   options: PropagateOptions = {},
 ): Propagation<I, O> {
   const planned = planPropagation(calc, inputs, options);
+  const onProgress = options.onProgress;
+  if (planned.kind === "fixed" && onProgress === undefined) {
+    return displayable(runMonteCarlo(calc, planned.run)); // all blocks in one pass
+  }
+  const steps = propagationSteps(calc, planned);
+  for (;;) {
+    const step = steps.next();
+    if (step.done) return step.value;
+    onProgress?.(step.value);
+  }
+}
+
+/**
+ * {@linkcode propagate}, giving the event loop a turn after each block of trials (fixed size) or
+ * each sequence (adaptive) so that progress reports reach the screen while the run goes on: in a
+ * notebook, pass {@linkcode notebookProgress}'s callback as `onProgress`. Same result as
+ * `propagate`, bit for bit.
+ *
+ * @param calc The calculation.
+ * @param inputs Inputs by name.
+ * @param options As {@linkcode propagate}.
+ * @returns The propagation.
+ * @throws {TypeError | RangeError} As {@linkcode propagate}.
+ *
+ * @example Progress reports of a Monte Carlo run of 200,000 trials (blocks of 65,536)
+ * ```ts
+ * import { normal, propagate, propagateInSteps, simplifiedBernoulli } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const seen: number[] = [];
+ * const options = { method: "monteCarlo", trials: 200_000, seed: 3 } as const;
+ * const r = await propagateInSteps(simplifiedBernoulli, { peakVelocity: normal(4, 0.1) }, {
+ *   ...options,
+ *   onProgress: (p) => seen.push(p.trialsDone),
+ * });
+ * assert.deepEqual(seen, [65_536, 131_072, 196_608, 200_000]);
+ * const once = propagate(simplifiedBernoulli, { peakVelocity: normal(4, 0.1) }, options);
+ * assert.equal(r.outputs.gradient.value, once.outputs.gradient.value);
+ * ```
+ */
+export async function propagateInSteps<I extends string, O extends string>(
+  calc: Calculation<I, O>,
+  inputs: UncertainInputs<I>,
+  options: PropagateOptions = {},
+): Promise<Propagation<I, O>> {
+  const steps = propagationSteps(calc, planPropagation(calc, inputs, options));
+  for (;;) {
+    const step = steps.next();
+    if (step.done) return step.value;
+    options.onProgress?.(step.value);
+    await new Promise((resolve) => setTimeout(resolve, 0));
+  }
+}
+
+/** A planned propagation run step by step: yields the progress after each block of trials (fixed
+ * size) or sequence (adaptive), returns the result. */
+function* propagationSteps<I extends string, O extends string>(
+  calc: Calculation<I, O>,
+  planned: PlannedPropagation<I, O>,
+): Generator<MonteCarloProgress, Propagation<I, O>, void> {
   switch (planned.kind) {
     case "gum":
       return displayable(propagateGum(calc, planned.prepared, planned.options));
-    case "fixed":
-      return displayable(runMonteCarlo(calc, planned.run));
+    case "fixed": {
+      const parts = monteCarloInBlocks(calc, planned.run);
+      for (let b = 0; b < parts.blocks; b++) {
+        parts.run(b, b + 1);
+        yield { trialsDone: parts.trialsAfter(b + 1), trialsPlanned: planned.run.trials };
+      }
+      return displayable(parts.finish());
+    }
     case "adaptive": {
       const state = planned.state;
       const c = calc as unknown as Calculation;
+      const m = state.trialsPerSequence;
       while (state.wantsMore()) {
-        const m = state.trialsPerSequence;
         const results = calc.outputNames.map(() => new Float64Array(m));
         const counts = {
           inputsOutside: calc.inputNames.map(() => 0),
@@ -137,6 +220,7 @@ export function propagate<I extends string, O extends string>(
           ...counts,
           stats: sequenceStatistics(results, state.coverage, state.interval),
         });
+        yield { trialsDone: state.sequences * m, trialsPlanned: state.maxSequences * m };
       }
       return displayable(state.finish() as unknown as Propagation<I, O>);
     }

@@ -3,10 +3,11 @@
  * into typed arrays and evaluates the calculation's own formula over them, block by block.
  *
  * Stream layout. The trials of a run are cut into blocks of {@linkcode BLOCK_TRIALS}. In block b,
- * the source with key k draws from its own MT19937 stream keyed [...runKey, w₀(k), w₁(k), b]
- * (reference `init_by_array`), where w₀, w₁ are the two words of the source key's 64-bit FNV-1a
- * hash and `runKey` names the run ([seed] for a fixed number of trials, [seed, h] for sequence h
- * of the adaptive procedure). A source's draws therefore depend only on the seed, its key and the
+ * the source with key k draws from its own stream keyed [...runKey, w₀(k), w₁(k), b]
+ * (xoshiro128** started from the first four MT19937 words of the reference `init_by_array` of
+ * that key; calc/uncertainty/random.ts gives the reason for the choice), where w₀, w₁ are the two
+ * words of the source key's 64-bit FNV-1a hash and `runKey` names the run ([seed] for a fixed
+ * number of trials, [seed, h] for sequence h of the adaptive procedure). A source's draws therefore depend only on the seed, its key and the
  * block: adding a source never shifts another's, blocks can run in any order on any number of
  * workers with the same result bit for bit, and a source drawn in one step of a chain is drawn
  * identically when the chain is evaluated in one step. Correlated normal sources draw standard
@@ -22,8 +23,9 @@
 import type { Calculation, InputValues, ValueRange } from "../core/types.ts";
 import { inRange } from "../core/range.ts";
 import { columnLoop } from "../core/columns.ts";
+import { relationText } from "../core/validate.ts";
 import { choleskySemidefinite } from "./correlation.ts";
-import { type RandomStream, randomStream } from "./random.ts";
+import { NORMAL_DRAW_LIMIT, type RandomStream, randomStream } from "./random.ts";
 import { distributionQuantile } from "./distributions.ts";
 import { keyWords } from "./sources.ts";
 import { normalCdf } from "../stats/distributions.ts";
@@ -231,6 +233,9 @@ function sampleColumn(d: ResolvedDistribution, out: Float64Array, rng: RandomStr
   }
 }
 
+/** Distributions whose draws (sampleColumn) lie between their lower and upper bounds. */
+const BOUNDED_DRAWS: ReadonlySet<string> = new Set(["rectangular", "triangular", "arcsine"]);
+
 /** Number of values outside a range or not finite (a min/max pass first: usually nothing to
  * count); marks their trials in `bad` when given. */
 function markOutside(
@@ -315,6 +320,23 @@ export function runBlocks(
   const lenient = columnLoop(calc, "lenient");
   const { firstTrial } = targets;
   const outputRanges = calc.outputNames.map((o) => calc.outputs[o]!.quantity.valid);
+  const inputRanges = calc.inputNames.map((name) => calc.inputs[name]!.range);
+  // an uncorrelated draw whose reach (the bounds of a bounded shape; for a normal, the farthest a
+  // ziggurat draw can go) lies inside the input's valid range, with a margin far above rounding,
+  // cannot leave it (the range is an interval): no range pass for it
+  const withinByConstruction = plan.inputs.map((p, i) => {
+    if (p.kind !== "source" || p.group >= 0) return false;
+    const d = p.distribution;
+    if (d.kind !== "normal" && !BOUNDED_DRAWS.has(d.kind)) return false;
+    // a normal draw lies within μ ± NORMAL_DRAW_LIMIT·σ (the ziggurat's largest tail value)
+    const reach = NORMAL_DRAW_LIMIT * d.standardUncertainty;
+    const [lower, upper] = d.kind === "normal"
+      ? [d.estimate - reach, d.estimate + reach]
+      : [d.lower, d.upper];
+    const margin = 1e-9 * Math.max(Math.abs(lower), Math.abs(upper), upper - lower);
+    return inRange(lower - margin, inputRanges[i]!) && inRange(upper + margin, inputRanges[i]!);
+  });
+
   for (const b of blocks) {
     const start = b * BLOCK_TRIALS;
     const n = Math.min(size, m - start);
@@ -346,9 +368,8 @@ export function runBlocks(
     });
     if (bad) bad.set(upstream);
     plan.inputs.forEach((p, i) => {
-      if (p.kind === "exact") return;
-      const range = calc.inputs[calc.inputNames[i]!]!.range;
-      counts.inputsOutside[i]! += markOutside(cols[i]!, range, bad, upstream);
+      if (p.kind === "exact" || withinByConstruction[i]) return;
+      counts.inputsOutside[i]! += markOutside(cols[i]!, inputRanges[i]!, bad, upstream);
     });
     if (calc.constraints.length > 0) markBrokenRelations(calc, cols, n, bad);
     const outs = targets.outputs.map((o) => o.subarray(at, at + n));
@@ -456,7 +477,7 @@ function markBrokenRelations(
       continue;
     }
     throw new RangeError(
-      `${calc.title}: a Monte Carlo draw breaks the relation ${broken.description} (${
+      `${calc.title}: a Monte Carlo draw breaks the relation ${relationText(calc, broken)} (${
         broken.inputs.map((name) => `${name} = ${x[name]}`).join(", ")
       }); propagate with inconsistentTrials: "exclude" for the distribution conditional on consistent inputs, or give the inputs distributions that keep the relation`,
     );

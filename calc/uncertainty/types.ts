@@ -221,3 +221,22 @@ export interface Propagation<I extends string = string, O extends string = strin
     readonly inconsistentTrials: "exclude" | "refuse";
   } | null;
 }
+
+/** The verdict of `validateGumWithMonteCarlo` for one output. */
+export interface GumValidation {
+  /** Output name. */
+  readonly output: string;
+  /** Numerical tolerance δ from u(y) at n_dig digits. */
+  readonly tolerance: number;
+  /** |y − U − y_low| */
+  readonly lowDifference: number;
+  /** |y + U − y_high| */
+  readonly highDifference: number;
+  /** True when both differences are at most δ (JCGM 101 §8.2). */
+  readonly validated: boolean;
+  /** A plain-language verdict. */
+  readonly verdict: string;
+  /** True when the Monte Carlo interval ends were stabilised by the adaptive procedure (JCGM
+   * 101 §7.9), so that the verdict does not depend on the seed; false for a fixed-size run. */
+  readonly stable: boolean;
+}

@@ -163,6 +163,9 @@ kernelTest(
     const result = await run([`${FIXTURES}/ok.ipynb`, "--out", out, "--html", "--timeout", "60"]);
     assert.equal(result.code, 0, result.stderr);
     assert.equal((result.stderr.match(/ ok in \d/g) ?? []).length, 7); // one line per code cell
+    // stderr is a pipe here: no progress bar, no carriage return or escape code in the log
+    assert.ok(!result.stderr.includes("\r") && !result.stderr.includes("\x1b"), result.stderr);
+    assert.doesNotMatch(result.stderr, /code cells ·/);
     assert.match(await Deno.readTextFile(`${out}/ok.html`), /<rect id="fixture-rect"/);
     assert.equal(JSON.parse(await Deno.readTextFile(`${out}/ok.ipynb`)).nbformat_minor, 5);
     assert.equal(await Deno.readTextFile(`${FIXTURES}/ok.ipynb`), before);

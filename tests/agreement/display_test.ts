@@ -69,9 +69,15 @@ Deno.test("Bland–Altman results display their table with labels, units and rou
   const repeated = shown(
     blandAltmanRepeated(ids, [...WRIGHT1, ...WRIGHT2], [...MINI1, ...MINI2], { quantity: FLOW }),
   ).text;
-  // R nlme REML variances 789.1471 and 626.7353 (see bland_altman_test.ts), four digits
-  assert.match(repeated, /Between-subject variance of differences \(\(L\/min\)²\) +789\.1/);
-  assert.match(repeated, /Within-subject variance of differences \(\(L\/min\)²\) +626\.7/);
+  // R nlme REML variances 789.1471 and 626.7353 (see bland_altman_test.ts), shown to two
+  // significant digits (no interval is known: the spread's own two digits, JCGM 100:2008 §7.2.6)
+  assert.match(repeated, /Between-subject variance of differences \(\(L\/min\)²\) +790\n/);
+  assert.match(repeated, /Within-subject variance of differences \(\(L\/min\)²\) +630\n/);
+  // bias, SD and limits to the decimal place of the SD's two significant digits (SD 37.63 → 38,
+  // whole L/min): one precision in the table, no "−6.32" next to "38"
+  assert.match(repeated, /SD of a single difference \(L\/min\) +38\n/);
+  assert.match(repeated, /Bias \(mean of A − B\) \(L\/min\) +-6\n/);
+  assert.match(repeated, /Limits of agreement \(bias ∓ 1\.96 SD\) \(L\/min\) +-80 to 68\n/);
   assert.match(repeated, /Caution: No confidence intervals/);
 });
 
@@ -116,9 +122,10 @@ Deno.test("repeatability, ICC, concordance, regressions and kappa display compac
   assert.match(kappa.text, /91 +0\.\d+ +0\.\d+ +0\.24 +0\.078 /);
   assert.match(kappa.html, /<td[^>]*>never<\/td><td[^>]*>7<\/td>/);
   const fleiss = shown(fleissKappa(FLEISS_EXAMPLE)).text;
-  // Wikipedia worked example (from memory): κ = 0.210
+  // Wikipedia worked example (from memory): P̄ = 0.378, P̄e = 0.213, κ = 0.210, all three shown
+  // to three decimals (one precision in the row, trailing zero kept)
   assert.match(fleiss, /^Fleiss' kappa\n/);
-  assert.match(fleiss, / 0\.21 /);
+  assert.match(fleiss, / 0\.378 +0\.213 +0\.210 /);
 });
 
 Deno.test("both renderers escape every text that comes from the data", () => {
@@ -165,7 +172,7 @@ Deno.test("a report displays itself in a notebook without its figures", () => {
   ));
   const { text, html } = shown(report);
   assert.match(text, /^# Method validation report: demo\.csv/);
-  assert.match(text, /## Method comparison: B against A/);
+  assert.match(text, /## Method comparison: B against the reference A/);
   assert.doesNotMatch(text, /!\[/); // no figure links
   assert.match(html, /^<div><h1>Method validation report: demo\.csv<\/h1>/);
   assert.match(html, /Not a diagnosis/);

@@ -60,3 +60,49 @@ Deno.test("intraclass correlation rejects unbalanced, tiny and constant tables",
       /^Intraclass correlation: expected 'ratings\[1\]\[1\]' as a finite number, got Infinity$/,
   });
 });
+
+Deno.test("intraclass correlation names its orientation: raters as rows are refused unless stated", () => {
+  // Shrout & Fleiss 1979 Table 2 transposed: 4 judges as rows, 6 targets as columns
+  const judges = [0, 1, 2, 3].map((j) => SHROUT_FLEISS.map((row) => row[j]!));
+  assert.throws(() => intraclassCorrelations(judges), {
+    name: "TypeError",
+    message:
+      /^Intraclass correlation: expected 'ratings' as subjects × raters \(one row per subject, one column per rater\), got 4 rows × 6 columns, more raters than subjects; if each row is one rater, pass \{ orientation: "ratersBySubjects" \}/,
+  });
+  // two observers given as two long rows (the easy mistake): refused, not a silent ICC
+  const obsA = [50, 55, 60, 41, 62, 47, 58];
+  const obsB = [51, 54, 61, 43, 60, 48, 57];
+  assert.throws(() => intraclassCorrelations([obsA, obsB]), {
+    name: "TypeError",
+    message: /got 2 rows × 7 columns, more raters than subjects/,
+  });
+  // stated orientation: the same six values as the subjects × raters table
+  const stated = intraclassCorrelations(judges, { orientation: "ratersBySubjects" });
+  // Shrout & Fleiss 1979 Psychol Bull 86:420, Table 4 (two decimals as printed)
+  assert.deepEqual(stated.forms.map((f) => f.value.toFixed(2)), [
+    "0.17",
+    "0.29",
+    "0.71",
+    "0.44",
+    "0.62",
+    "0.91",
+  ]);
+  assert.equal(stated.subjects, 6);
+  assert.equal(stated.raters, 4);
+  // a real design with more raters than subjects, stated: analysed as given (Table 2 rows 1–3,
+  // 4 raters on 3 subjects), no error
+  const wide = intraclassCorrelations(SHROUT_FLEISS.slice(0, 3), {
+    orientation: "subjectsByRaters",
+  });
+  assert.equal(wide.subjects, 3);
+  assert.throws(() => intraclassCorrelations(judges, { orientation: "rows" as never }), {
+    name: "TypeError",
+    message:
+      /^Intraclass correlation: expected 'orientation' "subjectsByRaters" or "ratersBySubjects", got "rows"$/,
+  });
+  assert.throws(
+    () =>
+      intraclassCorrelations([[1, 2, 3], [4, Infinity, 6]], { orientation: "ratersBySubjects" }),
+    { name: "RangeError", message: /'ratings\[1\]\[1\]' as a finite number, got Infinity$/ },
+  );
+});

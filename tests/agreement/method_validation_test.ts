@@ -118,7 +118,21 @@ Deno.test("the report's intraclass correlations reproduce Shrout & Fleiss (1979)
   }
   // one reading per judge: no repeatability, no repeated-measures analysis, λ assumed 1
   assert.equal(r.repeatability, null);
-  assert.equal(r.comparisons.length, 3);
+  // every pair of the 4 judges: 3 against the reference j1, then the 3 pairs of the others
+  assert.deepEqual(r.comparisons.map((c) => [c.test, c.reference, c.against]), [
+    ["j2", "j1", "reference"],
+    ["j3", "j1", "reference"],
+    ["j4", "j1", "reference"],
+    ["j3", "j2", "observer"],
+    ["j4", "j2", "observer"],
+    ["j4", "j3", "observer"],
+  ]);
+  // reader against reader, by hand from Shrout & Fleiss 1979 Table 2: judge 3 − judge 2 =
+  // (3 + 2 + 2 + 1 + 1 + 2)/6 = 11/6
+  const j3j2 = computed(r.comparisons[3]!.blandAltman, "j3 − j2");
+  close(j3j2.bias, 11 / 6, 1e-12, "bias j3 − j2");
+  // judge 4 − judge 3 = (3 − 1 + 2 + 4 + 3 + 3)/6 = 14/6
+  close(computed(r.comparisons[5]!.blandAltman, "j4 − j3").bias, 14 / 6, 1e-12, "bias j4 − j3");
   for (const c of r.comparisons) {
     assert.equal(c.blandAltmanRepeated, null);
     assert.deepEqual(c.errorVarianceRatio, { value: 1, from: "assumed" });
@@ -179,7 +193,12 @@ Deno.test("which statistics appear for which design", async () => {
   // 30 patients × 3 methods × 2 rounds (the demo data's README): everything
   assert.equal(demo.data.readingsUsed, 180);
   assert.equal(demo.repeatability!.length, 3);
-  assert.deepEqual(demo.comparisons.map((c) => c.test), ["sonographer_B", "auto_trace"]);
+  // each method against the reference, then reader against reader
+  assert.deepEqual(demo.comparisons.map((c) => `${c.test} − ${c.reference}`), [
+    "sonographer_B − sonographer_A",
+    "auto_trace − sonographer_A",
+    "auto_trace − sonographer_B",
+  ]);
   for (const c of demo.comparisons) {
     const outcomes: (Outcome<unknown> | null)[] = [
       c.blandAltman,
@@ -191,7 +210,7 @@ Deno.test("which statistics appear for which design", async () => {
     for (const o of outcomes) computed(o, c.test);
   }
   assert.equal(computed(demo.icc!.outcome, "ICC").raters, 3);
-  assert.equal(demo.figures.length, 5);
+  assert.equal(demo.figures.length, 7); // 3 Bland–Altman, 3 comparison scatters, 1 observer plot
   assert.equal(demo.kappa, null);
 
   // one observer with replicates: repeatability only
@@ -399,13 +418,17 @@ Deno.test("chart file names derived from observer names are unique and safe", ()
   const files = r.figures.map((f) => f.file);
   assert.equal(new Set(files).size, files.length);
   for (const f of files) assert.match(f, /^[a-z0-9_-]+\.svg$/);
-  assert.deepEqual(files.filter((f) => f.startsWith("bland_altman_")), [
+  // against the reference first, then every pair of the others: 7·6/2 = 21 plots
+  const ba = files.filter((f) => f.startsWith("bland_altman_"));
+  assert.equal(ba.length, 21);
+  assert.deepEqual(ba.slice(0, 7), [
     "bland_altman_reader-a-2_vs_reader-a.svg",
     "bland_altman_reader-a-3_vs_reader-a.svg",
     "bland_altman_reader-a-4_vs_reader-a.svg",
     "bland_altman_observer-5_vs_reader-a.svg",
     "bland_altman_observer-6_vs_reader-a.svg",
     "bland_altman_etc_vs_reader-a.svg",
+    "bland_altman_reader-a-3_vs_reader-a-2.svg",
   ]);
 });
 
@@ -436,6 +459,9 @@ Deno.test("observer names that reduce to one file name get distinct chart files"
     "bland_altman_dr-a-b_vs_ref.svg",
     "bland_altman_dr-a-b-2_vs_ref.svg",
     "bland_altman_dr-a-b-2-2_vs_ref.svg",
+    "bland_altman_dr-a-b-2_vs_dr-a-b.svg",
+    "bland_altman_dr-a-b-2-2_vs_dr-a-b.svg",
+    "bland_altman_dr-a-b-2-2_vs_dr-a-b-2.svg",
   ]);
   for (const f of files) assert.match(f, /^[a-z0-9_-]+\.svg$/);
 });

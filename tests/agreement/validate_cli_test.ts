@@ -36,15 +36,13 @@ Deno.test("validate: demo table gives an HTML report with inline charts and a Ma
     "%",
     "--out",
     out,
-    "--seed",
-    "7",
   ]);
   assert.equal(r.code, 0, r.stderr);
   assert.match(r.stderr, /\[validate\] 180 readings, 30 subjects, 3 observers\/methods/);
   const html = await Deno.readTextFile(`${out}/report.html`);
   const md = await Deno.readTextFile(`${out}/report.md`);
-  // five charts inlined: 2 Bland–Altman, 2 comparison scatters, 1 observer plot
-  assert.equal(html.match(/<svg/g)?.length, 5);
+  // seven charts inlined: 3 Bland–Altman, 3 comparison scatters (each pair), 1 observer plot
+  assert.equal(html.match(/<svg/g)?.length, 7);
   assert.doesNotMatch(html, /<script|https?:\/\/(?!www\.w3\.org)/); // self-contained
   for (const text of [md, html]) {
     assert.match(text, /Bland–Altman analysis/);
@@ -52,8 +50,43 @@ Deno.test("validate: demo table gives an HTML report with inline charts and a Ma
     assert.match(text, /Passing–Bablok slope/);
     assert.match(text, /Repeatability coefficient/);
     assert.match(text, /states no pass or fail/);
-    assert.match(text, /Seed: 7/);
+    // nothing random is drawn, so no seed is stated
+    assert.doesNotMatch(text, /Seed/);
+    assert.match(text, /nothing random is drawn, so no seed is needed/);
+    // each reader against the reference, and reader against reader
+    assert.match(
+      text,
+      /Method comparison: sonographer\\?_B against the reference sonographer\\?_A/,
+    );
+    assert.match(text, /Method comparison: auto\\?_trace against the reference sonographer\\?_A/);
+    assert.match(text, /Observer comparison: auto\\?_trace against sonographer\\?_B/);
+    // plain wording: one replicate count when all agree, never "2–2"
+    assert.doesNotMatch(text, /\d–\d/);
+    // differences of a quantity in % are percentage points; the CV is a percentage of the mean
+    assert.match(text, /SD of differences \(percentage points\)/);
+    assert.match(text, /Within-subject CV, root mean square \(% of the subject mean\)/);
+    assert.doesNotMatch(text, /SD \(%\)|differences \(%\)/);
+    // one precision: no statistic with four or more decimals or significant digits beside
+    // rounded ones (JCGM 100:2008 §7.2.6 for values with an interval)
+    assert.doesNotMatch(
+      text.replace(/<svg[\s\S]*?<\/svg>/g, "").replace(
+        /SHA-256 [0-9a-f]+|\d{4}-\d\d-\d\dT[\d:.]+Z|@[\d.]+/g,
+        "",
+      ),
+      /\d\.\d{4,}|[1-9]\d\.\d{3,}|[1-9]\d{2}\.\d\d/,
+    );
   }
+  // the unit in every table header that holds a quantity of the study
+  assert.match(
+    md,
+    /\| Bias \(mean of sonographer\\_B − sonographer\\_A\) \(percentage points\) \|/,
+  );
+  assert.match(md, /\| Deming intercept \(%\) \|/);
+  // the CV (no interval) to two significant digits in every row, not "5.0" beside "3.19"
+  assert.match(
+    md,
+    /\| auto\\_trace \| 30 \| 1\.66 \\\[1\.32, 2\.21\\\] \| 4\.6 \\\[3\.7, 6\.1\\\] \| 3\.2 \|/,
+  );
   // provenance: the SHA-256 of the input as computed independently with WebCrypto
   const digest = await crypto.subtle.digest(
     "SHA-256",
@@ -72,11 +105,21 @@ Deno.test("validate: demo table gives an HTML report with inline charts and a Ma
   const files = [...Deno.readDirSync(out)].map((e) => e.name).filter((n) => n.endsWith(".svg"));
   assert.deepEqual(files.sort(), [
     "bland_altman_auto-trace_vs_sonographer-a.svg",
+    "bland_altman_auto-trace_vs_sonographer-b.svg",
     "bland_altman_sonographer-b_vs_sonographer-a.svg",
     "method_comparison_auto-trace_vs_sonographer-a.svg",
+    "method_comparison_auto-trace_vs_sonographer-b.svg",
     "method_comparison_sonographer-b_vs_sonographer-a.svg",
     "observers.svg",
   ]);
+  // the chart values are those of the table: bias and limits written on the lines
+  const ba = await Deno.readTextFile(`${out}/bland_altman_sonographer-b_vs_sonographer-a.svg`);
+  const bias =
+    /\| Bias \(mean of sonographer\\_B − sonographer\\_A\) \(percentage points\) \| ([^ |]+) \|/
+      .exec(md)![1]!;
+  assert.match(ba, new RegExp(`>bias ${bias.replace(".", "\\.")}<`));
+  assert.match(ba, /Bias and limits of agreement/);
+  assert.match(ba, /Not a diagnosis/);
   await Deno.remove(out, { recursive: true });
 });
 
@@ -149,7 +192,16 @@ Deno.test("validate: unknown column and missing file are reported", async () => 
   assert.equal(a.code, 1);
   assert.match(
     a.stderr,
-    /unknown input 'value' \(Value column\): expected a column of the table: patient, observer, replicate, lvef_percent, got "nope"/,
+    /got columns patient, observer, replicate, lvef_percent, with 1 problem: no column "nope" for the value \(option 'value'\); candidate columns by their contents: value: 'lvef_percent' \(numbers of a known quantity\)/,
+  );
+  // one message for every header problem
+  assert.equal(a.stderr.match(/^error:/gm)?.length, 1);
+  // a label for a quantity the package knows would rename it silently: refused
+  const labelled = await runValidate(["examples/data/validation_demo.csv", "--label", "EF"]);
+  assert.equal(labelled.code, 1);
+  assert.match(
+    labelled.stderr,
+    /error: column 'lvef_percent' holds LV ejection fraction, a quantity the package knows; expected no --label, got --label EF/,
   );
   const b = await runValidate(["examples/data/no-such-file.csv"]);
   assert.equal(b.code, 1);
@@ -168,7 +220,7 @@ Deno.test("validate: a value column the package does not know needs its unit and
   assert.equal(bare.code, 1);
   assert.match(
     bare.stderr,
-    /column 'value' holds values of no quantity the package knows: state their unit with --unit/,
+    /expected the unit of column 'value' in its header \(e\.g\. 'value \[mm\]'\) or stated \(--unit on the command line\)/,
   );
   const stated = await runValidate([
     csv,
@@ -185,6 +237,29 @@ Deno.test("validate: a value column the package does not know needs its unit and
   assert.match(md, /\| Bias \(mean of M − W\) \(L\/min\) \|/);
   const svg = await Deno.readTextFile(`${dir}/b/bland_altman_m_vs_w.svg`);
   assert.match(svg, /Peak flow: M − W \(L\/min\)/);
+
+  // the unit from the header: "value [mm]" needs no --unit; the label comes from the header
+  const mm = `${dir}/mm.csv`;
+  await Deno.writeTextFile(
+    mm,
+    "subject,method,jet_width [mm]\nS1,W,4.9\nS1,M,5.1\nS2,W,3.9\nS2,M,4.3\nS3,W,5.2\nS3,M,5.2\nS4,W,4.3\nS4,M,4.3\n",
+  );
+  const fromHeader = await runValidate([mm, "--out", `${dir}/c`]);
+  assert.equal(fromHeader.code, 0, fromHeader.stderr);
+  const mmReport = await Deno.readTextFile(`${dir}/c/report.md`);
+  assert.match(mmReport, /the reading of Jet width \(mm\), a quantity stated by the user/);
+  assert.match(mmReport, /\| SD of differences \(mm\) \|/);
+  assert.match(mmReport, /\| Deming intercept \(mm\) \|/);
+  for (const file of ["bland_altman_m_vs_w.svg", "method_comparison_m_vs_w.svg", "observers.svg"]) {
+    assert.match(await Deno.readTextFile(`${dir}/c/${file}`), /Jet width.*\(mm\)/, file);
+  }
+  // a header unit and a different --unit: refused
+  const both = await runValidate([mm, "--unit", "cm", "--out", `${dir}/d`]);
+  assert.equal(both.code, 1);
+  assert.match(
+    both.stderr,
+    /expected one unit for column 'jet_width \[mm\]': its header states mm, got also cm/,
+  );
   await Deno.remove(dir, { recursive: true });
 });
 

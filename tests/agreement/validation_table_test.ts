@@ -25,14 +25,14 @@ Deno.test("columns are found by the usual names, or as named, and refused with t
   assert.throws(() => validationColumns(t, { subject: "case" }), {
     name: "TypeError",
     message:
-      `c.csv: unknown input 'subject' (Subject column): expected a column of the table: Patient, Reader, Round, value [mm], got "case"`,
+      `c.csv: expected a subject, an observer (or method) and a value column, found by their usual names or named with the options 'subject', 'observer', 'replicate' and 'value' (--subject, --rater, --replicate, --value on the command line), got columns Patient, Reader, Round, value [mm], with 1 problem: no column "case" for the subject (option 'subject'); candidate columns by their contents: subject: none`,
   });
   const bare = readTable("col1,col2,col3,col4\n1,2,3,4\n", { source: "bare.csv" });
   assert.throws(() => validationColumns(bare), (e: unknown) => {
     assert.ok(e instanceof TypeError);
-    assert.equal(
+    assert.match(
       e.message,
-      "bare.csv: missing input 'subject' (Subject column): expected a column named subject, patient, subject_id, id (or name it with the option 'subject'), got columns col1, col2, col3, col4 (and 2 more problems)",
+      /^bare\.csv: expected a subject, .*, got columns col1, col2, col3, col4, with 3 problems: no subject column \(none named subject, patient, subject_id, id\); no observer column \(none named observer, rater, reader, method\); no value column \(none named 'value', and 4 columns left over instead of one\); candidate columns by their contents: subject: none; observer: none; value: none; replicate: none$/,
     );
     return true;
   });
@@ -41,6 +41,56 @@ Deno.test("columns are found by the usual names, or as named, and refused with t
     message:
       "c.csv: expected a different column for subject, observer, replicate and value, got Patient, Patient, Round, value [mm]",
   });
+});
+
+Deno.test("every header problem in one message, with the candidate columns named by their contents", () => {
+  // invented readings: 4 subjects × 2 readers × 2 rounds, headers the package does not know
+  const rows = ["case no,who,pass,thickness"];
+  const values = [
+    9.1,
+    9.4,
+    8.8,
+    9.0,
+    11.2,
+    11.5,
+    10.9,
+    11.3,
+    7.6,
+    7.9,
+    7.7,
+    8.1,
+    10.1,
+    9.8,
+    10.4,
+    10,
+  ];
+  let i = 0;
+  for (const s of ["C1", "C2", "C3", "C4"]) {
+    for (const r of ["R1", "R2"]) {
+      for (const k of [1, 2]) rows.push(`${s},${r},${k},${values[i++]}`);
+    }
+  }
+  const t = readTable(rows.join("\n"), { source: "odd.csv" });
+  assert.throws(() => validationColumns(t), (e: unknown) => {
+    assert.ok(e instanceof TypeError);
+    // one message: the three problems, then what each column could be
+    assert.equal((e as { issues?: unknown[] }).issues?.length, 1);
+    assert.match(
+      e.message,
+      /with 3 problems: no subject column .*; no observer column .*; no value column .*; candidate columns by their contents: subject: 'case no' \(4 distinct values\); observer: 'who' \(2 distinct values\); value: 'thickness' \(numbers\); replicate: 'pass' \(whole numbers 1 to 2\)$/,
+    );
+    return true;
+  });
+  // named as the message suggests, the same table is read
+  assert.deepEqual(
+    validationColumns(t, {
+      subject: "case no",
+      observer: "who",
+      replicate: "pass",
+      value: "thickness",
+    }),
+    { subject: "case no", observer: "who", replicate: "pass", value: "thickness" },
+  );
 });
 
 Deno.test("readings: subjects and observers trimmed, replicates checked by the validator, duplicates and blanks found", () => {

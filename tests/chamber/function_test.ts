@@ -39,7 +39,7 @@ Deno.test("ejection fraction and stroke volume from volumes", () => {
     {
       name: "RangeError",
       message:
-        "Ejection fraction: expected 'endSystolicVolumeMl' <= 'endDiastolicVolumeMl', got endSystolicVolumeMl = 60 mL, endDiastolicVolumeMl = 50 mL",
+        "Ejection fraction: expected 'endSystolicVolumeMl' (LV end-systolic volume) ≤ 'endDiastolicVolumeMl' (LV end-diastolic volume), got endSystolicVolumeMl = 60 mL, endDiastolicVolumeMl = 50 mL",
     },
   );
   assert.throws(
@@ -69,7 +69,7 @@ Deno.test("RV fractional area change", () => {
     {
       name: "RangeError",
       message:
-        "RV fractional area change: expected 'endSystolicAreaCm2' <= 'endDiastolicAreaCm2', got endSystolicAreaCm2 = 24 cm², endDiastolicAreaCm2 = 14 cm²",
+        "RV fractional area change: expected 'endSystolicAreaCm2' (RV end-systolic area) ≤ 'endDiastolicAreaCm2' (RV end-diastolic area), got endSystolicAreaCm2 = 24 cm², endDiastolicAreaCm2 = 14 cm²",
     },
   );
 });
@@ -93,7 +93,7 @@ Deno.test("TAPSE and MAPSE from M-mode annular depths", () => {
     {
       name: "RangeError",
       message:
-        "Tricuspid annular plane systolic excursion (TAPSE): expected 'annulusDepthPeakSystoleMm' <= 'annulusDepthEndDiastoleMm', got annulusDepthPeakSystoleMm = 110 mm, annulusDepthEndDiastoleMm = 100 mm",
+        "Tricuspid annular plane systolic excursion (TAPSE): expected 'annulusDepthPeakSystoleMm' (Tricuspid annulus depth at peak systole) ≤ 'annulusDepthEndDiastoleMm' (Tricuspid annulus depth at end-diastole), got annulusDepthPeakSystoleMm = 110 mm, annulusDepthEndDiastoleMm = 100 mm",
     },
   );
   // Hand-checkable (Hu 2013: mean of sites): septal 120 − 108 = 12, lateral 125 − 111 = 14 → 13 mm.
@@ -116,7 +116,7 @@ Deno.test("TAPSE and MAPSE from M-mode annular depths", () => {
     {
       name: "RangeError",
       message:
-        "Mitral annular plane systolic excursion (MAPSE): expected 'lateralDepthPeakSystoleMm' <= 'lateralDepthEndDiastoleMm', got lateralDepthPeakSystoleMm = 125 mm, lateralDepthEndDiastoleMm = 111 mm",
+        "Mitral annular plane systolic excursion (MAPSE): expected 'lateralDepthPeakSystoleMm' (Lateral mitral annulus depth at peak systole) ≤ 'lateralDepthEndDiastoleMm' (Lateral mitral annulus depth at end-diastole), got lateralDepthPeakSystoleMm = 125 mm, lateralDepthEndDiastoleMm = 111 mm",
     },
   );
   // A physically impossible excursion is an output error naming the inputs: 300 − 100 = 200 mm
@@ -169,7 +169,7 @@ Deno.test("myocardial performance index: both forms agree", () => {
     {
       name: "RangeError",
       message:
-        "Myocardial performance index from closure-to-opening time: expected 'ejectionTimeMs' <= 'closureToOpeningTimeMs', got ejectionTimeMs = 280 ms, closureToOpeningTimeMs = 250 ms",
+        "Myocardial performance index from closure-to-opening time: expected 'ejectionTimeMs' (Ejection time) ≤ 'closureToOpeningTimeMs' (Valve closure-to-opening time), got ejectionTimeMs = 280 ms, closureToOpeningTimeMs = 250 ms",
     },
   );
   assert.throws(

@@ -252,7 +252,7 @@ Deno.test("bad input: negative or missing dimensions, LVIDs above LVIDd", () => 
     {
       name: "RangeError",
       message:
-        "LV fractional shortening: expected 'lvInternalDiameterSystoleCm' <= 'lvInternalDiameterDiastoleCm', got lvInternalDiameterSystoleCm = 5 cm, lvInternalDiameterDiastoleCm = 3.2 cm",
+        "LV fractional shortening: expected 'lvInternalDiameterSystoleCm' (LV end-systolic diameter) ≤ 'lvInternalDiameterDiastoleCm' (LV end-diastolic diameter), got lvInternalDiameterSystoleCm = 5 cm, lvInternalDiameterDiastoleCm = 3.2 cm",
     },
   );
   // Previously NaN inside the formula; now a declared constraint of the chain's first step.
@@ -265,7 +265,7 @@ Deno.test("bad input: negative or missing dimensions, LVIDs above LVIDd", () => 
     {
       name: "RangeError",
       message:
-        "Teichholz LV volumes and ejection fraction: expected 'lvInternalDiameterSystoleCm' <= 'lvInternalDiameterDiastoleCm', got lvInternalDiameterSystoleCm = 4.5 cm, lvInternalDiameterDiastoleCm = 4 cm",
+        "Teichholz LV volumes and ejection fraction: expected 'lvInternalDiameterSystoleCm' (LV end-systolic diameter) ≤ 'lvInternalDiameterDiastoleCm' (LV end-diastolic diameter), got lvInternalDiameterSystoleCm = 4.5 cm, lvInternalDiameterDiastoleCm = 4 cm",
     },
   );
   assert.throws(
@@ -274,7 +274,10 @@ Deno.test("bad input: negative or missing dimensions, LVIDs above LVIDd", () => 
         lvInternalDiameterDiastoleCm: normal(4, 0.1),
         lvInternalDiameterSystoleCm: normal(4.5, 0.1),
       }),
-    { name: "RangeError", message: /expected 'lvInternalDiameterSystoleCm' <= / },
+    {
+      name: "RangeError",
+      message: /expected 'lvInternalDiameterSystoleCm' \(LV end-systolic diameter\) ≤ /,
+    },
   );
   assert.throws(
     () =>

@@ -150,7 +150,7 @@ Deno.test("ejection fraction from traced contours", () => {
     {
       name: "RangeError",
       message:
-        /^Biplane ejection fraction: expected 'endSystolicVolumeMl' <= 'endDiastolicVolumeMl', got endSystolicVolumeMl = 104\.75\d* mL, endDiastolicVolumeMl = 44\.91\d* mL$/,
+        /^Biplane ejection fraction: expected 'endSystolicVolumeMl' \(LV end-systolic volume\) ≤ 'endDiastolicVolumeMl' \(LV end-diastolic volume\), got endSystolicVolumeMl = 104\.75\d* mL, endDiastolicVolumeMl = 44\.91\d* mL$/,
     },
   );
   assert.throws(

@@ -14,6 +14,7 @@ import { CATALOG } from "../../calc/catalog.ts";
 import { catalogCalculations } from "../../calc/core/catalog.ts";
 import { defineCalculation } from "../../calc/core/calculation.ts";
 import { evaluate } from "../../calc/core/evaluate.ts";
+import { relationText } from "../../calc/core/validate.ts";
 import { defineQuantity } from "../../calc/core/quantity.ts";
 import { InputRangeError, InputTypeError } from "../../calc/core/issues.ts";
 import { typicalRange } from "../../calc/core/quantity.ts";
@@ -184,7 +185,7 @@ function assertNamed(c: Calculation, e: unknown, x: Record<string, number>): voi
     assert.ok(message.includes(`'${issue.field}'`), `${c.id}: ${message}`);
     for (const n of c.inputNames) assert.ok(message.includes(`${n} = `), `${c.id}: ${message}`);
   } else if (issue.kind === "constraint") {
-    const k = c.constraints.find((k) => k.description === issue.expected);
+    const k = c.constraints.find((k) => relationText(c, k) === issue.expected);
     assert.ok(k, `${c.id}: a constraint error for no declared constraint: ${message}`);
     for (const n of k.inputs) assert.ok(message.includes(`${n} = `), `${c.id}: ${message}`);
   } else {

@@ -212,7 +212,7 @@ Deno.test("cross-input constraints are checked in evaluation and propagation", a
     {
       name: "RangeError",
       message:
-        "Ejection fraction: expected 'endSystolicVolumeMl' <= 'endDiastolicVolumeMl', got endSystolicVolumeMl = 60 mL, endDiastolicVolumeMl = 50 mL",
+        "Ejection fraction: expected 'endSystolicVolumeMl' (LV end-systolic volume) ≤ 'endDiastolicVolumeMl' (LV end-diastolic volume), got endSystolicVolumeMl = 60 mL, endDiastolicVolumeMl = 50 mL",
     },
   );
   assert.throws(
@@ -221,7 +221,11 @@ Deno.test("cross-input constraints are checked in evaluation and propagation", a
         endDiastolicVolumeMl: normal(50, 3),
         endSystolicVolumeMl: normal(60, 3),
       }),
-    { name: "RangeError", message: /expected 'endSystolicVolumeMl' <= 'endDiastolicVolumeMl'/ },
+    {
+      name: "RangeError",
+      message:
+        /expected 'endSystolicVolumeMl' \(LV end-systolic volume\) ≤ 'endDiastolicVolumeMl' \(LV end-diastolic volume\)/,
+    },
   );
 });
 

@@ -64,6 +64,6 @@ Deno.test("modified Bernoulli refuses a proximal velocity above the jet velocity
   assert.throws(() => evaluate(modifiedBernoulli, { jetVelocity: 1.5, proximalVelocity: 4 }), {
     name: "RangeError",
     message:
-      "Modified Bernoulli gradient: expected 'proximalVelocity' <= 'jetVelocity', got proximalVelocity = 4 m/s, jetVelocity = 1.5 m/s",
+      "Modified Bernoulli gradient: expected 'proximalVelocity' (Proximal velocity) ≤ 'jetVelocity' (Jet velocity), got proximalVelocity = 4 m/s, jetVelocity = 1.5 m/s",
   });
 });

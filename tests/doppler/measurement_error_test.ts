@@ -20,7 +20,10 @@ Deno.test("angle curve reproduces 1 − cos θ and 1 − cos²θ", () => {
   // each row is labelled by the output's quantity role, for the chart's legend
   assert.deepEqual(
     [...new Set(rows.map((r) => r.label))],
-    ["Velocity underestimation", "Gradient underestimation"],
+    [
+      "Velocity underestimation relative to the true velocity",
+      "Gradient underestimation relative to the true gradient",
+    ],
   );
 });
 

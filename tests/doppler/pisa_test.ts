@@ -110,7 +110,7 @@ Deno.test("inconsistent volumes are refused, naming both", () => {
     {
       name: "RangeError",
       message:
-        "Regurgitant fraction: expected 'regurgitantVolumeMl' <= 'totalStrokeVolumeMl', got regurgitantVolumeMl = 95 mL, totalStrokeVolumeMl = 90 mL",
+        "Regurgitant fraction: expected 'regurgitantVolumeMl' (Regurgitant volume) ≤ 'totalStrokeVolumeMl' (Total stroke volume), got regurgitantVolumeMl = 95 mL, totalStrokeVolumeMl = 90 mL",
     },
   );
   // a competent-valve stroke volume above the regurgitant-valve one would give a negative volume
@@ -120,7 +120,7 @@ Deno.test("inconsistent volumes are refused, naming both", () => {
     {
       name: "RangeError",
       message:
-        "Regurgitant volume and fraction (volumetric): expected 'forwardStrokeVolumeMl' <= 'totalStrokeVolumeMl', got forwardStrokeVolumeMl = 120 mL, totalStrokeVolumeMl = 70 mL",
+        "Regurgitant volume and fraction (volumetric): expected 'forwardStrokeVolumeMl' (Forward stroke volume) ≤ 'totalStrokeVolumeMl' (Total stroke volume), got forwardStrokeVolumeMl = 120 mL, totalStrokeVolumeMl = 70 mL",
     },
   );
   // issue 13: a regurgitant volume of 150 mL with a stroke volume of 60 mL would be RF 250 %
@@ -129,7 +129,7 @@ Deno.test("inconsistent volumes are refused, naming both", () => {
     {
       name: "RangeError",
       message:
-        "Regurgitant fraction: expected 'regurgitantVolumeMl' <= 'totalStrokeVolumeMl', got regurgitantVolumeMl = 150 mL, totalStrokeVolumeMl = 60 mL",
+        "Regurgitant fraction: expected 'regurgitantVolumeMl' (Regurgitant volume) ≤ 'totalStrokeVolumeMl' (Total stroke volume), got regurgitantVolumeMl = 150 mL, totalStrokeVolumeMl = 60 mL",
     },
   );
   // issue 13: total 60 mL < forward 100 mL would be RVol −40 mL and RF −67 %
@@ -139,7 +139,7 @@ Deno.test("inconsistent volumes are refused, naming both", () => {
     {
       name: "RangeError",
       message:
-        "Regurgitant volume and fraction (volumetric): expected 'forwardStrokeVolumeMl' <= 'totalStrokeVolumeMl', got forwardStrokeVolumeMl = 100 mL, totalStrokeVolumeMl = 60 mL",
+        "Regurgitant volume and fraction (volumetric): expected 'forwardStrokeVolumeMl' (Forward stroke volume) ≤ 'totalStrokeVolumeMl' (Total stroke volume), got forwardStrokeVolumeMl = 100 mL, totalStrokeVolumeMl = 60 mL",
     },
   );
   assert.throws(
@@ -363,7 +363,7 @@ Deno.test("PISA flow rate with the aliasing-velocity correction Q·Vmax/(Vmax �
     {
       name: "RangeError",
       message:
-        "PISA flow rate corrected for the aliasing velocity: expected 'aliasingVelocityCmPerS' < 'regurgitantPeakVelocity' (compared in the same unit: the flow accelerates toward the orifice), got aliasingVelocityCmPerS = 150 cm/s, regurgitantPeakVelocity = 1.5 m/s",
+        "PISA flow rate corrected for the aliasing velocity: expected 'aliasingVelocityCmPerS' (Aliasing velocity) < 'regurgitantPeakVelocity' (Regurgitant jet peak velocity) (compared in the same unit: the flow accelerates toward the orifice), got aliasingVelocityCmPerS = 150 cm/s, regurgitantPeakVelocity = 1.5 m/s",
     },
   );
   // the source of the correction is cited from memory, and the result says so
@@ -413,7 +413,7 @@ Deno.test("mitral valve area by PISA: 2πr²·Va/Vpeak·α/180", () => {
     {
       name: "RangeError",
       message:
-        "Mitral valve area by PISA: expected 'aliasingVelocityCmPerS' < 'mitralPeakVelocity' (compared in the same unit: the flow accelerates toward the orifice), got aliasingVelocityCmPerS = 200 cm/s, mitralPeakVelocity = 1.6 m/s",
+        "Mitral valve area by PISA: expected 'aliasingVelocityCmPerS' (Aliasing velocity) < 'mitralPeakVelocity' (Peak transmitral velocity) (compared in the same unit: the flow accelerates toward the orifice), got aliasingVelocityCmPerS = 200 cm/s, mitralPeakVelocity = 1.6 m/s",
     },
   );
   assert.ok(r.cautions.some((c) => /Rodriguez 1993.*from memory/.test(c)), r.cautions.join("; "));

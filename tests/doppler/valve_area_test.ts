@@ -172,7 +172,7 @@ Deno.test("energy loss index: (EOA·AA/(AA − EOA))/BSA", () => {
     {
       name: "RangeError",
       message:
-        "Energy loss index (aortic stenosis): expected 'avaCm2' < 'aorticAreaCm2' (the valve orifice is smaller than the aorta above it), got avaCm2 = 4 cm², aorticAreaCm2 = 4 cm²",
+        "Energy loss index (aortic stenosis): expected 'avaCm2' (Effective orifice area) < 'aorticAreaCm2' (Aortic area at the sinotubular junction) (the valve orifice is smaller than the aorta above it), got avaCm2 = 4 cm², aorticAreaCm2 = 4 cm²",
     },
   );
 });

@@ -90,3 +90,18 @@ Deno.test("repeated beats: bad readings name the reading, the value and the rang
   });
   assert.throws(() => repeatedBeats(PEAK_VELOCITY, [4, NaN]), RangeError);
 });
+
+Deno.test("repeated beats: the display rounds by the GUM rule (u to two digits, the mean alike)", () => {
+  const b = repeatedBeats(PEAK_VELOCITY, [4.1, 4.3, 4.0, 4.2, 4.25]);
+  // hand arithmetic: mean 4.17, s = √(0.058/4) = 0.1204, u = s/√5 = 0.0539 m/s; GUM (JCGM
+  // 100:2008 §7.2.6): u to two significant digits, 0.054, the mean to the same place, 4.170
+  const text = shownText(b);
+  assert.match(text, /\b4\.170\s+0\.12\s+0\.054\b/, text);
+});
+
+Deno.test("repeated beats: a quantity that is not a quantity is a clear error naming it", () => {
+  assert.throws(() => repeatedBeats([4.1, 4.3] as never, [4.1, 4.3]), {
+    name: "TypeError",
+    message: /^Repeated beats: expected 'quantity' as a quantity/,
+  });
+});

@@ -112,7 +112,7 @@ Deno.test("caliper: a traced area moves by P·δ when its whole contour moves by
   assert.throws(() => caliperTracedArea(c, { areaCm2: 20, perimeterCm: 10 }), {
     name: "RangeError",
     message:
-      "Caliper traced area: expected 'perimeterCm'² >= 4π·'areaCm2' (no contour encloses more area than the circle of its perimeter), got areaCm2 = 20 cm², perimeterCm = 10 cm",
+      "Caliper traced area: expected 'perimeterCm' (Traced perimeter)² ≥ 4π·'areaCm2' (Traced area) (no contour encloses more area than the circle of its perimeter), got areaCm2 = 20 cm², perimeterCm = 10 cm",
   });
 });
 
@@ -125,7 +125,7 @@ Deno.test("caliper: bad settings are errors naming the field, the value and the 
   assert.throws(() => caliperPlacement({ ...SETTINGS, measurementDepthCm: 18 }), {
     name: "RangeError",
     message:
-      "Caliper placement: expected 'measurementDepthCm' <= 'imageDepthCm', got measurementDepthCm = 18 cm, imageDepthCm = 16 cm",
+      "Caliper placement: expected 'measurementDepthCm' (Measurement depth) ≤ 'imageDepthCm' (Image depth), got measurementDepthCm = 18 cm, imageDepthCm = 16 cm",
   });
   assert.throws(() => caliperPlacement({ ...SETTINGS, imageRows: 600.5 }), {
     name: "RangeError",

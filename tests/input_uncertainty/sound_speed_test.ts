@@ -214,7 +214,7 @@ Deno.test("atTrueSoundSpeedChain: keeps relations between inputs rescaled alike;
     {
       name: "RangeError",
       message:
-        "Ejection fraction at the true speed of sound: expected 'endSystolicVolumeMl' <= 'endDiastolicVolumeMl', got endSystolicVolumeMl = 60 mL, endDiastolicVolumeMl = 50 mL",
+        "Ejection fraction at the true speed of sound: expected 'endSystolicVolumeMl' (LV end-systolic volume as displayed) ≤ 'endDiastolicVolumeMl' (LV end-diastolic volume as displayed), got endSystolicVolumeMl = 60 mL, endDiastolicVolumeMl = 50 mL",
     },
   );
   assert.throws(() => atTrueSoundSpeedChain(bsaMosteller), {

@@ -7,11 +7,14 @@
  * the test reports itself as ignored, with the reason in its name.
  */
 import assert from "node:assert/strict";
-import { chromium } from "playwright-core";
 import { runNotebook } from "@sonorigor/notebook-runner";
+import {
+  CHROMIUM,
+  CHROMIUM_AVAILABLE as available,
+  launchChromium,
+  openPage,
+} from "../screenshots/page_check.ts";
 
-const CHROMIUM = Deno.env.get("SONORIGOR_CHROMIUM") ?? "/usr/bin/chromium";
-const available = await Deno.stat(CHROMIUM).then((s) => s.isFile).catch(() => false);
 const NOTEBOOK =
   new URL("../../notebooks/01_phantom_lab_doppler_physics.ipynb", import.meta.url).pathname;
 const ARTIFACTS = new URL("../../out/test-artifacts/", import.meta.url).pathname;
@@ -37,33 +40,12 @@ Deno.test({
       ).length;
       assert.ok(svgOutputs >= 3, `the notebook should produce charts, got ${svgOutputs}`);
 
-      const browser = await chromium.launch({
-        executablePath: CHROMIUM,
-        args: [
-          "--headless",
-          "--no-sandbox",
-          "--disable-gpu",
-          "--disable-background-networking",
-          "--no-first-run",
-          "--disable-component-update",
-          "--disable-sync",
-        ],
-      });
+      const browser = await launchChromium();
       try {
-        const page = await browser.newPage({ viewport: { width: 1000, height: 800 } });
-        const problems: string[] = [];
-        page.on("console", (m) => {
-          if (m.type() === "error") problems.push(`console error: ${m.text()}`);
-        });
-        page.on("pageerror", (e) => problems.push(`page error: ${e}`));
-        page.on("request", (r) => {
-          if (!r.url().startsWith("file:") && !r.url().startsWith("data:")) {
-            problems.push(`network request: ${r.url()}`);
-          }
-        });
-        await page.goto(
-          `file://${run.htmlPath!.startsWith("/") ? "" : `${Deno.cwd()}/`}${run.htmlPath}`,
-        );
+        const htmlPath = run.htmlPath!.startsWith("/")
+          ? run.htmlPath!
+          : `${Deno.cwd()}/${run.htmlPath}`;
+        const { tab: page, problems } = await openPage(browser, htmlPath);
         const figures = await page.evaluate(() =>
           [...document.querySelectorAll("svg")]
             .filter((svg) => !svg.parentElement?.closest("svg"))

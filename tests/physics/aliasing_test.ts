@@ -229,7 +229,7 @@ Deno.test("aliasing check: a PRF beyond what the sample depth allows is a RangeE
     {
       name: "RangeError",
       message:
-        /^Aliasing check: expected 'prfHz' <= 'soundSpeedMps' \/ \(2·'sampleDepthCm'\), the highest PRF the sample depth allows \(beyond it pulsed Doppler is high-PRF and range-ambiguous: see rangeAmbiguity\), got prfHz = 6000 Hz, sampleDepthCm = 15 cm, soundSpeedMps = 1540 m\/s$/,
+        /^Aliasing check: expected 'prfHz' \(Pulse repetition frequency\) ≤ 'soundSpeedMps' \(Speed of sound\) \/ \(2·'sampleDepthCm' \(Sample-volume depth\)\), the highest PRF the sample depth allows \(beyond it pulsed Doppler is high-PRF and range-ambiguous: see rangeAmbiguity\), got prfHz = 6000 Hz, sampleDepthCm = 15 cm, soundSpeedMps = 1540 m\/s$/,
     },
   );
   // Exactly at the limit is allowed (the maximum PRF option uses it).
@@ -268,7 +268,7 @@ Deno.test("aliasing check rejects unknown keys, non-objects and a 'lower' freque
     {
       name: "RangeError",
       message:
-        /^Aliasing check: expected 'lowerTransmitFrequencyMHz' < 'transmitFrequencyMHz', got lowerTransmitFrequencyMHz = 3 MHz, transmitFrequencyMHz = 2 MHz$/,
+        /^Aliasing check: expected 'lowerTransmitFrequencyMHz' \(Lower transmit frequency\) < 'transmitFrequencyMHz' \(Transmit frequency\), got lowerTransmitFrequencyMHz = 3 MHz, transmitFrequencyMHz = 2 MHz$/,
     },
   );
   // A lower frequency given as undefined is the same as not given.

@@ -83,8 +83,9 @@ Deno.test("an aperture smaller than 1.22 wavelengths has no far-field lobe: a cl
   // Szabo 2014 ch. 6), so there is no divergence half-angle: refused, naming the inputs whose
   // combination is impossible, instead of an asin of a number above 1.
   const message = (f: number, d: number) =>
-    `Near-field length and far-field divergence: expected 'apertureMm' > 1.22 wavelengths ` +
-    `(1.22·'soundSpeedMps'/'transmitFrequencyMHz'), the smallest disc with a far-field main ` +
+    `Near-field length and far-field divergence: expected 'apertureMm' (Aperture diameter) > ` +
+    `1.22 wavelengths (1.22·'soundSpeedMps' (Speed of sound)/'transmitFrequencyMHz' ` +
+    `(Transmit frequency)), the smallest disc with a far-field main ` +
     `lobe, got transmitFrequencyMHz = ${f} MHz, apertureMm = ${d} mm, soundSpeedMps = 1540 m/s`;
   assert.throws(
     () => evaluate(nearFieldLength, { transmitFrequencyMHz: 1, apertureMm: 1 }),

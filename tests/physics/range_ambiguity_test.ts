@@ -65,7 +65,7 @@ Deno.test("range ambiguity rejects bad arguments with the field and range", () =
   assert.throws(() => rangeAmbiguity({ sampleDepthCm: 12, prfHz: 10000, imagingDepthCm: 8 }), {
     name: "RangeError",
     message:
-      /^Range ambiguity: expected 'sampleDepthCm' <= 'imagingDepthCm', got sampleDepthCm = 12 cm, imagingDepthCm = 8 cm$/,
+      /^Range ambiguity: expected 'sampleDepthCm' \(Sample-volume depth\) ≤ 'imagingDepthCm' \(Imaging depth\), got sampleDepthCm = 12 cm, imagingDepthCm = 8 cm$/,
   });
   assert.throws(() => rangeAmbiguity({ sampleDepthCm: 12, prfHz: 10000 } as never), {
     name: "TypeError",

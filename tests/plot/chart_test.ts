@@ -7,128 +7,27 @@
 import assert from "node:assert/strict";
 import {
   AORTIC_STENOSIS_2017,
-  blandAltman,
-  bsaHaycock,
   CLINICAL_CAUTION,
-  continuityValveArea,
   defineZScoreModel,
-  demingRegression,
-  EJECTION_FRACTION,
-  evaluateTable,
   gradeSeverity,
-  methodValidation,
-  normal,
   PHN_2017_MODELS,
-  propagate,
-  readTable,
-  sensitivityCurve,
-  singlePlaneDiscVolume,
-  validationReadOptions,
 } from "../../mod.ts";
 import {
   adultLimitChart,
-  angleUnderestimationChart,
-  blandAltmanChart,
-  budgetChart,
   Chart,
-  discMethodChart,
-  histogramChart,
   INVENTED_DATA_NOTE,
-  methodComparisonChart,
-  methodValidationChart,
-  nyquistDepthChart,
-  observerChart,
-  resolutionPenetrationChart,
-  sensitivityChart,
   severityProbabilityChart,
-  tableZScoreChart,
-  valveAreaDiameterErrorChart,
   wrapText,
   zScoreChart,
 } from "../../plot/mod.ts";
 import { svgText } from "./svg_text.ts";
+import { everyChart } from "./every_chart.ts";
 
 const POINT = {
   data: { values: [{ x: 1, y: 2 }, { x: 2, y: 3 }] },
   mark: "point",
   encoding: { x: { field: "x", type: "quantitative" }, y: { field: "y", type: "quantitative" } },
 };
-
-const AVA_INPUTS = {
-  lvotDiameterCm: normal(2.0, 0.05),
-  lvotVtiCm: normal(20, 1),
-  avVtiCm: normal(80, 3),
-};
-
-/** One chart of each function of each plot module, each asked to mark invented data. */
-async function everyChart(): Promise<[string, Chart][]> {
-  const f = { inventedData: true } as const;
-  const ba = blandAltman([60, 52, 41, 66, 58], [58, 52, 44, 63, 59], {
-    quantity: EJECTION_FRACTION,
-    methodNames: ["auto", "manual"],
-  });
-  const x = [40, 52, 61, 35, 58];
-  const y = [42, 51, 63, 36, 57];
-  const { slope, intercept } = demingRegression(x, y);
-  const report = methodValidation(
-    readTable(await Deno.readFile("examples/data/validation_demo.csv"), {
-      source: "validation_demo.csv",
-      ...validationReadOptions(),
-    }),
-  );
-  const mc = propagate(continuityValveArea, AVA_INPUTS, {
-    method: "monteCarlo",
-    trials: 2000,
-    seed: 3,
-  });
-  const gum = propagate(continuityValveArea, AVA_INPUTS);
-  const table = evaluateTable(
-    readTable("id,height [cm],weight [kg],aortic root [cm]\nA,120,22,2.0\nB,150,40,2.5\n"),
-    bsaHaycock,
-  );
-  return [
-    // plot/agreement.ts
-    ["blandAltmanChart", blandAltmanChart(ba, f)],
-    [
-      "methodComparisonChart",
-      methodComparisonChart(x, y, [{ name: "Deming", slope, intercept }], f),
-    ],
-    ["observerChart", observerChart([{ subject: "P1", observer: "A", value: 50 }], f)],
-    ["methodValidationChart", methodValidationChart(report, report.figures[0]!, f)],
-    // plot/doppler.ts
-    ["angleUnderestimationChart", angleUnderestimationChart({ maxAngleDeg: 40, ...f })],
-    ["valveAreaDiameterErrorChart", valveAreaDiameterErrorChart(f)],
-    [
-      "severityProbabilityChart",
-      severityProbabilityChart(gradeSeverity(AORTIC_STENOSIS_2017.valveArea, [0.9, 1.2]), f),
-    ],
-    // plot/physics.ts
-    ["nyquistDepthChart", nyquistDepthChart({ transmitFrequenciesMHz: [2, 4], ...f })],
-    ["resolutionPenetrationChart", resolutionPenetrationChart({ steps: 8, ...f })],
-    // plot/reference.ts
-    ["zScoreChart", zScoreChart(PHN_2017_MODELS.aorticRootSinus, f)],
-    ["tableZScoreChart", tableZScoreChart(table, PHN_2017_MODELS.aorticRootSinus, f)],
-    ["adultLimitChart", adultLimitChart("lvEjectionFraction", f)],
-    // plot/uncertainty.ts
-    ["histogramChart", histogramChart(mc, { gum, ...f })],
-    ["budgetChart", budgetChart(gum, f)],
-    [
-      "sensitivityChart",
-      sensitivityChart([
-        sensitivityCurve(continuityValveArea, { lvotDiameterCm: 2, lvotVtiCm: 20, avVtiCm: 80 }, {
-          vary: "lvotDiameterCm",
-          from: 1.8,
-          to: 2.2,
-        }),
-      ], f),
-    ],
-    // plot/chamber.ts
-    [
-      "discMethodChart",
-      discMethodChart(singlePlaneDiscVolume([[-2, 0], [-2.2, 4], [0, 8], [2.2, 4], [2, 0]]), f),
-    ],
-  ];
-}
 
 Deno.test("every chart of every plot module carries the clinical caution and the invented-data mark in its SVG and spec", async () => {
   const charts = await everyChart();
@@ -230,4 +129,67 @@ Deno.test("long titles and footnotes wrap between words instead of running off t
   // greedy word wrap, a long word alone on its line (layout rule, no source needed)
   assert.deepEqual(wrapText("a bb ccc dddddddddd e", 6), ["a bb", "ccc", "dddddddddd", "e"]);
   assert.deepEqual(wrapText("  ", 6), []);
+});
+
+const CHROMIUM = Deno.env.get("SONORIGOR_CHROMIUM") ?? "/usr/bin/chromium";
+const hasChromium = await Deno.stat(CHROMIUM).then((s) => s.isFile).catch(() => false);
+
+Deno.test({
+  name: hasChromium
+    ? "a chart writes itself as PNG (the SVG drawn in headless Chromium), footnotes included"
+    : `PNG export SKIPPED: Chromium not found at ${CHROMIUM}`,
+  ignore: !hasChromium,
+  sanitizeResources: false,
+  sanitizeOps: false,
+  async fn() {
+    const chart = new Chart({ ...POINT, title: "Demo", width: 200, height: 100 });
+    const dir = await Deno.makeTempDir();
+    try {
+      await chart.writePNG(`${dir}/chart.png`, { scale: 1 });
+      const png = await Deno.readFile(`${dir}/chart.png`);
+      // the PNG signature (ISO/IEC 15948:2004 §5.2) and the IHDR width: the SVG's width, which
+      // holds the footnote view, at least the 200 px drawn width
+      assert.deepEqual([...png.slice(0, 8)], [137, 80, 78, 71, 13, 10, 26, 10]);
+      const width = new DataView(png.buffer, png.byteOffset).getUint32(16);
+      const svgWidth = Number(/<svg[^>]*\swidth="([\d.]+)"/.exec(await chart.toSVG())![1]);
+      assert.equal(width, Math.round(svgWidth));
+    } finally {
+      await Deno.remove(dir, { recursive: true });
+    }
+  },
+});
+
+Deno.test("PNG export names a missing Chromium and refuses a bad scale", async () => {
+  const chart = new Chart(POINT);
+  await assert.rejects(() => chart.toPNG({ chromium: "/nonexistent/chromium" }), {
+    name: "Error",
+    message:
+      "Chart PNG: Chromium not found at '/nonexistent/chromium'; install Chromium or set SONORIGOR_CHROMIUM (or the 'chromium' option) to its path, or write the SVG with writeSVG",
+  });
+  await assert.rejects(() => chart.toPNG({ scale: 0 }), {
+    name: "RangeError",
+    message: "Chart PNG: expected 'scale' in (0, 8], got 0",
+  });
+});
+
+Deno.test("long axis titles wrap to their axis; legends show titles and labels in full", async () => {
+  const title = "Change of True gradient relative to its value at Signed insonation angle = 0° (%)";
+  const chart = new Chart({
+    ...POINT,
+    width: 300,
+    height: 200,
+    encoding: {
+      x: { field: "x", type: "quantitative", title: "x" },
+      y: { field: "y", type: "quantitative", title },
+    },
+  });
+  const view = (chart.spec.vconcat as { encoding: { y: { title: string[] } } }[])[0]!;
+  const lines = view.encoding.y.title;
+  // 200 px at the 11 px bold axis title's average glyph width of 6.2 px: 32 characters (layout)
+  assert.ok(Array.isArray(lines) && lines.length >= 2);
+  assert.equal(lines.join(" "), title);
+  for (const line of lines) assert.ok(line.length <= 32, line);
+  assert.ok(svgText(await chart.toSVG()).includes("Signed insonation angle"));
+  const legend = (chart.spec.config as { legend: Record<string, number> }).legend;
+  assert.deepEqual([legend.titleLimit, legend.labelLimit], [640, 640]);
 });

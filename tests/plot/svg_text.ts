@@ -16,8 +16,9 @@ const ENTITIES: Readonly<Record<string, string>> = {
 
 /** Every text element of an SVG as one line of plain text. */
 export function svgTexts(svg: string): string[] {
-  return [...svg.matchAll(/<text\b[^>]*>([\s\S]*?)<\/text>/g)].map((m) =>
-    m[1]!.replace(/<tspan\b[^>]*>/g, " ").replace(/<\/tspan>/g, "")
+  // an empty text element is self-closing (`<text …/>`): no text, and not the start of the next
+  return [...svg.matchAll(/<text\b[^>]*?(?:\/>|>([\s\S]*?)<\/text>)/g)].map((m) =>
+    (m[1] ?? "").replace(/<tspan\b[^>]*>/g, " ").replace(/<\/tspan>/g, "")
       .replace(/&(amp|lt|gt|quot|#39|apos);/g, (e) => ENTITIES[e]!)
       .replace(/\s+/g, " ").trim()
   );

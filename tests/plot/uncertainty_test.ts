@@ -43,6 +43,7 @@ Deno.test("budget and sensitivity charts carry their data", async () => {
   assert.deepEqual((budget.content.data as { values: unknown[] }).values, [{
     source: "Peak velocity (m/s)",
     sharePercent: 100,
+    shareText: "100.0 %",
   }]);
   const curve = sensitivityCurve(model, { v: 4 }, { vary: "v", from: 3, to: 5, steps: 3 });
   const chart = sensitivityChart([curve], { relative: true });
@@ -53,7 +54,30 @@ Deno.test("budget and sensitivity charts carry their data", async () => {
   assert.match(svg, /<svg/);
   // axis titles: labels with units, the relative change says what it is relative to
   assert.match(svg, /Peak velocity \(m\/s\)/);
-  assert.match(svg, /Change of Peak gradient from its reference value \(%\)/);
+  assert.match(
+    svg,
+    /Change of Peak gradient relative to its value at Peak velocity = 4 m\/s \(%\)/,
+  );
+});
+
+Deno.test("sensitivity chart: relative by default, on an axis that spans the change", () => {
+  // a 3 % change must not look flat: the y axis is not zero-based unless asked
+  const curve = sensitivityCurve(model, { v: 4 }, { vary: "v", from: 4, to: 4.06, steps: 4 });
+  const chart = sensitivityChart([curve]);
+  const y = (chart.content.encoding as Record<string, { scale?: { zero?: boolean } }>).y!;
+  assert.equal(y.scale?.zero, false);
+  const values = (chart.content.data as { values: { y: number }[] }).values;
+  // (4.06/4)² − 1 = 3.0225 % (hand computation from ΔP = 4v²)
+  assert.ok(Math.abs(values.at(-1)!.y - 3.0225) < 1e-9);
+  const zero = sensitivityChart([curve], { zeroBased: true });
+  assert.equal(
+    (zero.content.encoding as Record<string, { scale?: { zero?: boolean } }>).y!.scale?.zero,
+    true,
+  );
+  // absolute values on request, titled by the output's label and unit
+  const absolute = sensitivityChart([curve], { relative: false });
+  const ya = (absolute.content.encoding as Record<string, { title?: string }>).y!;
+  assert.equal(ya.title, "Peak gradient (mmHg)");
 });
 
 Deno.test("chart errors: bad spec, unknown output, no samples", () => {

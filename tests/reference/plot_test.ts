@@ -8,6 +8,7 @@ import {
   zScoreBands,
 } from "../../mod.ts";
 import { adultLimitChart, tableZScoreChart, zScoreChart } from "../../plot/mod.ts";
+import { svgText } from "../plot/svg_text.ts";
 
 type Layer = { data?: { values: Record<string, number | string>[] }; layer?: Layer[] };
 
@@ -114,4 +115,30 @@ Deno.test("adult chart draws one set of limits when the guideline gives one rang
     ["both sexes", 41],
     ["both sexes", 48],
   ]);
+});
+
+Deno.test("pediatric chart: points outside ±2 are named with their Z, every point has a titled tooltip, the bands a legend", async () => {
+  const model = PHN_2017_MODELS.aorticRootSinus;
+  const chart = zScoreChart(model, {
+    points: [{ bsaM2: 1, value: 2.5, label: "P07" }, { bsaM2: 1, value: 2.3, label: "P08" }],
+  });
+  const svg = svgText(await chart.toSVG());
+  // Lopez 2017 form at BSA 1 m²: Z = (X − M)/S = (2.5 − 2.06)/0.18 = 2.44 (hand computation);
+  // (2.3 − 2.06)/0.18 = 1.33 lies inside ±2 and is not named
+  assert.match(svg, /P07 \(Z 2\.44\)/);
+  assert.doesNotMatch(svg, /P08/);
+  // the legend names the shaded bands and the mean
+  for (
+    const name of ["Normal range", "Z between −2 and +2", "Z between −1 and +1", "Mean (Z = 0)"]
+  ) {
+    assert.ok(svg.includes(name), name);
+  }
+  // hover: every tooltip field has a reader's title, and the Z is among them
+  const spec = JSON.stringify(chart.spec);
+  const tooltips = [...spec.matchAll(/"tooltip":\[(.*?)\]/g)].map((m) => m[1]!);
+  assert.ok(tooltips.length > 0);
+  for (const t of tooltips) {
+    for (const entry of t.split("},{")) assert.match(entry, /"title":"[^"]+"/, entry);
+  }
+  assert.match(spec, /"zText":"1\.33"/);
 });

@@ -309,7 +309,8 @@ Deno.test("a Z-score displays itself: labels, units, the caution, the coefficien
     Symbol.for("Jupyter.display")
   ]!();
   const text = bundle["text/plain"]!;
-  assert.match(text, /Measurement\s+60 g/);
+  // the measurement row is labelled by its quantity with its unit
+  assert.match(text, /LV mass \(g\)\s+60\n/);
   assert.match(text, /P\(true Z > \+2\)/);
   assert.match(text, /Not a diagnosis/);
   assert.match(text, /Coefficients not verified against the publication/);

@@ -1,5 +1,15 @@
 import assert from "node:assert/strict";
-import { bsaMosteller, csvTextCell, evaluateTable, readTable, writeTableCsv } from "../../mod.ts";
+import {
+  bsaHaycock,
+  bsaMosteller,
+  continuityValveArea,
+  csvTextCell,
+  evaluateTable,
+  PHN_2017_MODELS,
+  readTable,
+  writeTableCsv,
+  zScoreCalculation,
+} from "../../mod.ts";
 
 Deno.test("written CSV reads back: headers label [unit], values as reported, flags per row", () => {
   const t = evaluateTable(
@@ -78,4 +88,35 @@ Deno.test("every text the writer puts in a CSV is neutralised, and reads back ex
   const text = writeTableCsv({ ...evaluated, cautions: ['a, =HYPERLINK("x")'] });
   assert.equal(text.split("\n")[0], '"# a, =HYPERLINK(""x"")"');
   assert.match(text, /\n'=A,180,80,2\.00,/);
+});
+
+Deno.test("reported precision: GUM rule next to an uncertainty, resolution otherwise, no conversion noise; full on request", () => {
+  const t = readTable("id,lvot diameter [mm],lvot vti [cm],av vti [cm]\nC,19.3,18,77\nD,20,20,\n");
+  const e = evaluateTable(t, continuityValveArea, {
+    uncertainty: { lvotDiameter: { standardUncertainty: "0.8 mm" } },
+  });
+  const data = writeTableCsv(e).split("\n").filter((l) => l !== "" && !/^"?#/.test(l));
+  const cells = data[1]!.split(",");
+  // 19.3 mm is written 1.93 cm, not the binary 1.9300000000000002 of the conversion
+  assert.equal(cells[1], "1.93");
+  // AVA = π·1.93²/4·18/77 = 0.68389 cm²; u = AVA·2·0.08/1.93 = 0.05669 → 0.057, AVA to the same
+  // place: 0.684 (JCGM 100:2008 §7.2.6, hand computation)
+  assert.equal(cells[4], "0.684");
+  assert.equal(cells[5], "0.057");
+  // a missing value is an empty cell, never "NaN"
+  assert.match(data[2]!, /^D,2,20,,,,,/);
+  assert.doesNotMatch(data.join("\n"), /NaN/);
+  // full precision on request: every digit of the double
+  const full = writeTableCsv(e, { precision: "full" }).split("\n").find((l) => l.startsWith("C,"))!;
+  assert.ok(full.split(",")[4]!.length > 10, full);
+});
+
+Deno.test("a computed header keeps what is not its unit: the Z-score model's source", () => {
+  const t = evaluateTable(
+    readTable("id,height [cm],weight [kg],aortic root [cm]\nA,120,22,2.0\n"),
+    [bsaHaycock, zScoreCalculation(PHN_2017_MODELS.aorticRootSinus)],
+  );
+  const header = writeTableCsv(t).split("\n").find((l) => l.startsWith("id,"))!;
+  assert.match(header, /Aortic root at the sinuses Z-score \(Lopez 2017\)/);
+  assert.match(header, /Body surface area \[m\^2\]/);
 });
