@@ -5,7 +5,7 @@
  *
  * @module
  */
-import type { MonteCarloProgress } from "../calc/uncertainty/propagate.ts";
+import type { MonteCarloProgress } from "../calc/uncertainty/types.ts";
 import { formatCount } from "./format.ts";
 import { escapeHtml } from "./mime.ts";
 

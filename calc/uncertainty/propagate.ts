@@ -22,7 +22,8 @@ import {
   sequenceStatistics,
 } from "./adaptive.ts";
 import { blockCount, range, runBlocks } from "./sampling.ts";
-import type { Propagation } from "./types.ts";
+import type { MonteCarloProgress, Propagation } from "./types.ts";
+export type { MonteCarloProgress } from "./types.ts";
 import { displayPropagation, JUPYTER_DISPLAY } from "../../display/uncertainty.ts";
 
 /** Options of {@linkcode propagate}. */
@@ -66,15 +67,6 @@ export interface PropagateOptions {
    * with the trials done so far, e.g. {@linkcode terminalProgress}'s callback. Without it the run
    * reports nothing. @default none */
   readonly onProgress?: (progress: MonteCarloProgress) => void;
-}
-
-/** How far a Monte Carlo run has come. */
-export interface MonteCarloProgress {
-  /** Trials done so far. */
-  readonly trialsDone: number;
-  /** Trials the run will make at most (the trial limit of an adaptive run, which may stop
-   * earlier). */
-  readonly trialsPlanned: number;
 }
 
 /** Checks a coverage probability. */

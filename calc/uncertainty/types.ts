@@ -240,3 +240,12 @@ export interface GumValidation {
    * 101 §7.9), so that the verdict does not depend on the seed; false for a fixed-size run. */
   readonly stable: boolean;
 }
+
+/** How far a Monte Carlo run has come. */
+export interface MonteCarloProgress {
+  /** Trials done so far. */
+  readonly trialsDone: number;
+  /** Trials the run will make at most (the trial limit of an adaptive run, which may stop
+   * earlier). */
+  readonly trialsPlanned: number;
+}
