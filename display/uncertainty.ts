@@ -99,12 +99,14 @@ function exactText(v: UncertainValue): string {
  * import assert from "node:assert/strict";
  * assert.equal(formatDof(3.41), "3.4");
  * assert.equal(formatDof(20993.14), "20993");
+ * assert.equal(formatDof(6.5e45), "∞"); // a Type A share that vanishes against Type B ones
  * assert.equal(formatDof(null), "not defined");
  * ```
  */
 export function formatDof(dof: number | null): string {
   if (dof === null || Number.isNaN(dof)) return "not defined";
-  if (!Number.isFinite(dof)) return "∞";
+  // beyond a million degrees of freedom the t distribution is the normal one to 1e-6 in k
+  if (!Number.isFinite(dof) || dof >= 1e6) return "∞";
   return dof < 100 ? dof.toFixed(1) : String(Math.round(dof));
 }
 
@@ -140,7 +142,9 @@ export function budgetRows(v: UncertainValue): string[][] {
     roundLike(b.standardUncertainty, b.standardUncertainty),
     Number.isFinite(b.dof) ? formatNumber(b.dof, 3) : "∞",
     `${formatNumber(b.sensitivity, 3)}${sensitivityUnit(v.unit, b.unit)}`,
-    `${roundLike(b.contribution, Math.abs(b.contribution))}${unitSuffix(v.unit)}`,
+    // contributions to the decimal place of the combined u (GUM 7.2.6): a contribution that is
+    // zero but for rounding error reads 0.00, not 0.0000000000045
+    `${roundLike(b.contribution, v.standardUncertainty)}${unitSuffix(v.unit)}`,
     formatShare(b.share),
   ]);
 }
@@ -183,9 +187,9 @@ export function displayPropagation(result: Propagation): MimeBundle {
       : " — NOT ADEQUATE: first-order result, see the warnings; use Monte Carlo";
     const line = formatUncertainValue(v) + adequate;
     const extra = v.method === "gum" && v.standardUncertainty > 0
-      ? `u = ${formatNumber(v.standardUncertainty, 2)}${unitSuffix(v.unit)}, ν_eff = ${
-        formatDof(v.effectiveDof)
-      }`
+      ? `u = ${roundLike(v.standardUncertainty, v.standardUncertainty)}${
+        unitSuffix(v.unit)
+      }, ν_eff = ${formatDof(v.effectiveDof)}`
       : "";
     const rows = budgetRows(v);
     text.push(
