@@ -23,6 +23,7 @@
  * printed.
  *
  * Run: deno run -A bench/compare_numpy.ts [--runs 15] [--write] [--no-pool] [--gum-rows 1000000]
+ * [--cases a,b,c,d,e] (`--cases c,e` times only those models; `--write` needs them all)
  *
  * @module
  */
@@ -41,8 +42,31 @@ const { values: args } = parseArgs({
     pool: { type: "boolean", default: false },
     "no-pool": { type: "boolean", default: false },
     "gum-rows": { type: "string", default: "1000000" },
+    cases: { type: "string", default: "a,b,c,d,e" },
+    help: { type: "boolean", default: false },
   },
 });
+if (args.help) {
+  console.log(
+    "deno run -A bench/compare_numpy.ts [--runs 15] [--write] [--no-pool] [--gum-rows 1000000] " +
+      "[--cases a,b,c,d,e]",
+  );
+  Deno.exit(0);
+}
+const CASES = ["a", "b", "c", "d", "e"] as const;
+const cases = new Set(args.cases!.split(",").map((c) => c.trim()));
+for (const c of cases) {
+  if (!(CASES as readonly string[]).includes(c)) {
+    throw new RangeError(
+      `--cases: expected a comma-separated list of ${CASES.join(", ")}, got ${c}`,
+    );
+  }
+}
+if (args.write && cases.size < CASES.length) {
+  throw new RangeError(
+    `--write: expected every case (${CASES.join(",")}), got --cases ${args.cases}`,
+  );
+}
 const runs = Number(args.runs);
 if (!(Number.isInteger(runs) && runs >= 1)) {
   throw new RangeError(`--runs: expected an integer >= 1, got ${args.runs}`);
@@ -257,7 +281,7 @@ try {
   await Deno.remove(dataDir, { recursive: true });
 }
 
-const usePool = !args["no-pool"];
+const usePool = !args["no-pool"] && (cases.has("a") || cases.has("b"));
 const tPool = performance.now();
 const pool = usePool ? await createMonteCarloPool({ workers, modules: [modelsModule] }) : null;
 const poolStartMs = performance.now() - tPool;
@@ -296,7 +320,8 @@ async function runOurs(key: Key, seed: number): Promise<{ s: number; value: unkn
 const peerRequest = (key: Key, seed: number) =>
   key === "c" ? "c" : `${key.startsWith("a") ? "a" : "b"} ${seed}`;
 
-const keys: Key[] = usePool ? ["a", "aPool", "b", "bPool", "c"] : ["a", "b", "c"];
+const keys = (usePool ? ["a", "aPool", "b", "bPool", "c"] as const : ["a", "b", "c"] as const)
+  .filter((k) => cases.has(k[0]!)) as Key[];
 console.error(`${runs} alternated rounds of ${keys.join(", ")} …`);
 // one untimed round of each side, as numpy's imports and first calls are outside its timings
 for (const key of keys) {
@@ -323,7 +348,7 @@ for (let k = 0; k < runs; k++) {
       checkAgreement(`(${key}) seed ${seed}`, summaryOf(p), answer, m, n);
     }
   }
-  if (peer) numpySort.push((await peer.ask(`sort ${seed}`)).t as number);
+  if (peer && cases.has("a")) numpySort.push((await peer.ask(`sort ${seed}`)).t as number);
   loads.push(load());
 }
 pool?.close();
@@ -356,21 +381,28 @@ function checkCohort(t: ReturnType<typeof evaluateTable>, answer: PeerAnswer): v
   }
 }
 // (d) GUM law, one 10-input call
-const calls = 20_000;
-for (let i = 0; i < 2_000; i++) propagate(tenInputModel, tenUncertain); // warm-up
+const calls = cases.has("d") ? 20_000 : 0;
+for (let i = 0; i < calls / 10; i++) propagate(tenInputModel, tenUncertain); // warm-up
 const tGum = performance.now();
 for (let i = 0; i < calls; i++) propagate(tenInputModel, tenUncertain);
 const gumMicroseconds = ((performance.now() - tGum) / calls) * 1000;
 
 // (e) GUM law row by row over a table of 10⁶ rows with three uncertain columns
+// (one run at first; with a case filter, as many runs as rounds, for a range)
 const gumRowCount = Number(args["gum-rows"]);
-const gumTable = gumRowsTable(gumRowCount);
-evaluateTable(gumRowsTable(10_000), threeInputCalculation, { uncertainty: gumRowsUncertainty }); // warm-up
-const gumRows = await time(() =>
-  evaluateTable(gumTable, threeInputCalculation, { uncertainty: gumRowsUncertainty })
-);
-const gumRowsPerSecond = gumRowCount / gumRows.s;
-loads.push(load());
+const gumRowTimes: number[] = [];
+if (cases.has("e")) {
+  const gumTable = gumRowsTable(gumRowCount);
+  evaluateTable(gumRowsTable(10_000), threeInputCalculation, { uncertainty: gumRowsUncertainty }); // warm-up
+  for (let k = 0; k < (cases.size < CASES.length ? runs : 1); k++) {
+    const gumRows = await time(() =>
+      evaluateTable(gumTable, threeInputCalculation, { uncertainty: gumRowsUncertainty })
+    );
+    gumRowTimes.push(gumRows.s);
+    loads.push(load());
+  }
+}
+const gumRowsPerSecond = gumRowCount / median(gumRowTimes);
 await peer?.close();
 
 /** Peak resident memory (MB) of a fresh process running (a) once, single-thread or pooled. */
@@ -388,8 +420,8 @@ async function probeMemory(pooled: boolean): Promise<number> {
   }).output();
   return probe.success ? JSON.parse(new TextDecoder().decode(probe.stdout)).peakMb as number : NaN;
 }
-const peakMb = await probeMemory(false);
-const peakPoolMb = usePool ? await probeMemory(true) : NaN;
+const peakMb = cases.has("a") ? await probeMemory(false) : NaN;
+const peakPoolMb = usePool && cases.has("a") ? await probeMemory(true) : NaN;
 loads.push(load());
 
 const ms = (s: number) => (s * 1000).toFixed(1);
@@ -442,22 +474,28 @@ const report = [
   ),
   ...(usePool ? [line(`(b) the same, pool of ${workers} workers`, "—", "bPool")] : []),
   line("(c) Haycock BSA + PHN Z-score, 10⁶ cohort rows", "ratio ≤ 1.0", "c"),
-  `| (d) GUM law, 10-input model, per call | ${gumMicroseconds.toFixed(1)} µs | — | — | < 50 µs |`,
+  `| (d) GUM law, 10-input model, per call | ${
+    calls ? `${gumMicroseconds.toFixed(1)} µs` : "skipped"
+  } | — | — | < 50 µs |`,
   `| (e) GUM law per row, 3 uncertain inputs, ${gumRowCount.toLocaleString("en")} rows | ${
-    Math.round(gumRowsPerSecond).toLocaleString("en")
-  } rows/s (${ms(gumRows.s)} ms) | — | — | ≥ 200,000 rows/s |`,
+    gumRowTimes.length
+      ? `${Math.round(gumRowsPerSecond).toLocaleString("en")} rows/s (${spread(gumRowTimes)})`
+      : "skipped"
+  } | — | — | ≥ 200,000 rows/s |`,
   "",
-  peer
+  peer && numpySort.length
     ? `numpy's \`np.sort\` of the 10⁶ values of (a), timed alone: ${spread(numpySort)}, ${
       (100 * median(numpySort) / median(theirs.a)).toFixed(0)
     } % of its median (a) time.`
     : "",
   "",
-  `Peak resident memory of a fresh process running (a) once (target < 200 MB): ${
-    peakMb.toFixed(0)
-  } MB single-thread${
-    usePool ? `, ${peakPoolMb.toFixed(0)} MB with the pool of ${workers} workers` : ""
-  }.`,
+  cases.has("a")
+    ? `Peak resident memory of a fresh process running (a) once (target < 200 MB): ${
+      peakMb.toFixed(0)
+    } MB single-thread${
+      usePool ? `, ${peakPoolMb.toFixed(0)} MB with the pool of ${workers} workers` : ""
+    }.`
+    : "",
   "",
   usePool
     ? `Starting the pool took ${

@@ -2,8 +2,9 @@
  * Evaluating catalog calculations and chains over every row of a table: inputs wired to columns
  * by name or by quantity, exact evaluation through the calculation's own column loop, or
  * propagation row by row (GUM law by default, Monte Carlo on request) from per-column uncertainty
- * models. Results are new columns (value, and standard uncertainty and interval ends when
- * propagated); every row that cannot be computed keeps NaN with an issue saying why.
+ * models (the GUM law column by column where that gives each row's own numbers, see
+ * gum_columns.ts). Results are new columns (value, and standard uncertainty and interval ends
+ * when propagated); every row that cannot be computed keeps NaN with an issue saying why.
  *
  * @module
  */
@@ -24,6 +25,7 @@ import type { UncertainArgument } from "../uncertainty/prepare.ts";
 import { readAmount } from "../core/units.ts";
 import type { Column, NumericColumn, Table, UncertaintyModel } from "./types.ts";
 import { makeTable } from "./read.ts";
+import { type GumColumns, gumColumns } from "./gum_columns.ts";
 import { labelWithUnit } from "../../display/uncertainty.ts";
 
 /** Options of {@linkcode evaluateTable}. */
@@ -228,7 +230,9 @@ function outputName(table: Table, calc: Calculation, o: string): string {
  * of the same name, or else to the one column of the same quantity (or by hand); results are
  * added as columns. Exactly, through the calculation's own column loop; or with uncertainty,
  * propagating each row by the GUM law (default) or Monte Carlo from the columns' uncertainty
- * models, adding for each output its standard uncertainty and coverage interval. Several
+ * models, adding for each output its standard uncertainty and coverage interval. The GUM law
+ * runs column by column where it gives each row's own numbers bit for bit (absolute or
+ * relative uncertainty models, finite-difference sensitivities), else row by row. Several
  * calculations run in order, each seeing the columns the earlier ones added.
  *
  * @param table The table (from {@linkcode readTable} or an earlier evaluation).
@@ -439,14 +443,25 @@ function evaluateOne(
       }
     });
   } else {
-    const labels = rowLabels(table, options.rowLabels);
+    const labelColumn = rowLabelColumn(table, options.rowLabels);
+    // the GUM law column by column where it gives each row's numbers; the other rows (and Monte
+    // Carlo) one propagation per row
+    const columnWise = method === "gum" ? gumByColumns(calc, wired, inputs, skip, options) : null;
+    if (columnWise) {
+      outs.forEach((_, k) => {
+        value[k] = columnWise.value[k]!;
+        u[k] = columnWise.standardUncertainty[k]!;
+        lower[k] = columnWise.lower[k]!;
+        upper[k] = columnWise.upper[k]!;
+      });
+    }
     for (let i = 0; i < n; i++) {
-      if (skip[i]) continue;
+      if (skip[i] || (columnWise && !columnWise.perRow[i])) continue;
       try {
         const r = propagate(
           calc,
           rowArguments(calc, wired, inputs, i, options.uncertainty ?? {}),
-          rowPropagateOptions(method, labels[i]!, options, false),
+          rowPropagateOptions(method, rowLabel(labelColumn, i), options, false),
         );
         outs.forEach((o, k) => {
           const y = r.outputs[o]!;
@@ -523,9 +538,8 @@ function evaluateOne(
   });
 }
 
-/** A label per row: the row-label column's cells (or the first text column's), else the row
- * number. */
-export function rowLabels(table: Table, column?: string): string[] {
+/** The column naming the rows: `column`, else the first text column, else none. */
+function rowLabelColumn(table: Table, column?: string): Column | undefined {
   const c = column !== undefined
     ? table.columns.get(column)
     : [...table.columns.values()].find((x) => x.kind === "text");
@@ -536,10 +550,62 @@ export function rowLabels(table: Table, column?: string): string[] {
       }`,
     );
   }
-  return Array.from(
-    { length: table.rowCount },
-    (_, i) => c?.kind === "text" && c.values[i]! !== "" ? c.values[i]! : `row ${i + 1}`,
-  );
+  return c;
+}
+
+/** The label of row i: its cell in the row-label column, else the row number. */
+function rowLabel(c: Column | undefined, i: number): string {
+  return c?.kind === "text" && c.values[i]! !== "" ? c.values[i]! : `row ${i + 1}`;
+}
+
+/** A label per row: the row-label column's cells (or the first text column's), else the row
+ * number. */
+export function rowLabels(table: Table, column?: string): string[] {
+  const c = rowLabelColumn(table, column);
+  return Array.from({ length: table.rowCount }, (_, i) => rowLabel(c, i));
+}
+
+/**
+ * The GUM law over the table's columns ({@linkcode gumColumns}) when every row's propagation
+ * would be the one it computes: no exact partial derivatives, every uncertainty model absolute
+ * (one quantity for the column) or relative, a valid coverage. Null otherwise (then every row
+ * is propagated on its own).
+ */
+function gumByColumns(
+  calc: Calculation,
+  wired: readonly (NumericColumn | null)[],
+  inputs: readonly Float64Array[],
+  skip: Uint8Array,
+  options: EvaluateTableOptions,
+): GumColumns | null {
+  const coverage = options.coverage ?? 0.95;
+  if (calc.partial || !(coverage > 0 && coverage < 1)) return null;
+  const models = options.uncertainty ?? {};
+  const uncertainties: (Float64Array | null)[] = [];
+  for (let k = 0; k < inputs.length; k++) {
+    const col = wired[k];
+    const model = col ? models[col.name] ?? models[col.header] : undefined;
+    if (model === undefined) uncertainties.push(null);
+    else if (typeof model === "function") return null;
+    else if ("relative" in model) {
+      // as distributionOf: normal(value, |relative·value|)
+      const x = inputs[k]!, rel = model.relative;
+      const u = new Float64Array(x.length);
+      for (let i = 0; i < x.length; i++) u[i] = Math.abs(rel * x[i]!);
+      uncertainties.push(u);
+    } else {
+      const u = readUncertainty(model.standardUncertainty, calc.inputs[calc.inputNames[k]!]!.unit);
+      if (typeof u !== "number") return null; // each row's propagation says why
+      uncertainties.push(new Float64Array(inputs[k]!.length).fill(u));
+    }
+  }
+  try {
+    return gumColumns(calc, inputs, uncertainties, skip, coverage);
+  } catch (e) {
+    // a formula that throws on some rows: each row's propagation says which
+    if (e instanceof TypeError || e instanceof RangeError) return null;
+    throw e;
+  }
 }
 
 /** The issues of one row, as messages (for a flags cell). */
