@@ -385,11 +385,12 @@ function sharePlan(plan: TrialPlan, first: number, n: number): TrialPlan {
  * another pool), and calculations the workers cannot load (defined in a notebook cell, expression
  * models).
  *
- * Measured (bench/analysis.md): on the 2-core machine the pool of two was slower than one thread
- * for 10⁶ trials of the continuity model with an uncertain angle and used about 265 MB instead of
- * about 137 MB; it pays only with free cores beyond the main thread (4 or more, otherwise idle)
- * and runs long enough to repay starting the workers (about 0.3–0.5 s per pool). `propagate`
- * therefore stays single-thread; the pool is opt-in.
+ * Measured (bench/results.md, bench/analysis.md) for 10⁶ trials of the continuity model with an
+ * uncertain angle on a 2-core machine: when it was otherwise idle, the pool of two took 89 ms
+ * against 124 ms on one thread; with other work on its cores the pool was slower than one thread.
+ * It used about 266 MB instead of about 133 MB. It pays only with idle cores and runs long enough
+ * to repay starting the workers (about 0.25–0.5 s per pool); `propagate` therefore stays
+ * single-thread and the pool is opt-in.
  *
  * Failures: a worker that ends or fails instead of answering (a model or module calling
  * `Deno.exit()` or `close()`, an uncaught error, a reply that cannot be read) refuses every call
