@@ -81,17 +81,28 @@ export function terminalProgress(
   if (!(options.isTerminal ?? Deno.stderr.isTerminal())) return () => {};
   const encoder = new TextEncoder();
   const write = options.write ?? ((text: string) => Deno.stderr.writeSync(encoder.encode(text)));
+  return afterDelay(options, (line, progress) => {
+    const done = progress.trialsDone >= progress.trialsPlanned;
+    write(`\r${line}${done ? "\n" : ""}`);
+  });
+}
+
+/** A callback that shows the progress line (label, bar, counts, time) with `show`, from the first
+ * report made `afterMs` after it was created; `first` is true for the first line shown. */
+function afterDelay(
+  options: ProgressOptions,
+  show: (line: string, progress: MonteCarloProgress, first: boolean) => void,
+): (progress: MonteCarloProgress) => void {
   const label = options.label ?? "Monte Carlo";
   const afterMs = options.afterMs ?? 1000;
   const now = options.now ?? (() => performance.now());
   const start = now();
-  let drawn = false;
+  let shown = false;
   return (progress) => {
     const elapsed = now() - start;
-    if (!drawn && elapsed < afterMs) return;
-    drawn = true;
-    const done = progress.trialsDone >= progress.trialsPlanned;
-    write(`\r${label}: ${formatMonteCarloProgress(progress, elapsed)}${done ? "\n" : ""}`);
+    if (!shown && elapsed < afterMs) return;
+    show(`${label}: ${formatMonteCarloProgress(progress, elapsed)}`, progress, !shown);
+    shown = true;
   };
 }
 
@@ -126,26 +137,17 @@ export function notebookProgress(
 ): (progress: MonteCarloProgress) => void {
   const send = options.send ?? kernelChannel();
   if (send === undefined) return () => {};
-  const label = options.label ?? "Monte Carlo";
-  const afterMs = options.afterMs ?? 1000;
-  const now = options.now ?? (() => performance.now());
-  const start = now();
-  const id = `sonorigor-progress-${start}-${label}`;
-  let shown = false;
-  return (progress) => {
-    const elapsed = now() - start;
-    if (!shown && elapsed < afterMs) return;
-    const text = `${label}: ${formatMonteCarloProgress(progress, elapsed)}`;
+  const id = `sonorigor-progress-${options.label ?? ""}-${performance.now()}`;
+  return afterDelay(options, (text, progress, first) => {
     const html = `<progress value="${progress.trialsDone}" max="${progress.trialsPlanned}">` +
       `</progress> <span>${escapeHtml(text)}</span>`;
     // a display that cannot be sent must not stop the run
-    Promise.resolve(send(shown ? "update_display_data" : "display_data", {
+    Promise.resolve(send(first ? "display_data" : "update_display_data", {
       data: { "text/plain": text, "text/html": html },
       metadata: {},
       transient: { display_id: id },
     })).catch(() => {});
-    shown = true;
-  };
+  });
 }
 
 /** The Deno kernel's message channel, or undefined outside `deno jupyter` (where reading

@@ -467,10 +467,18 @@ function markBrokenRelations(
   n: number,
   bad: Uint8Array | null,
 ): void {
+  // once per trial: plain loops, no closures
+  const names = calc.inputNames;
   const x: Record<string, number> = {};
   for (let r = 0; r < n; r++) {
-    calc.inputNames.forEach((name, i) => (x[name] = cols[i]![r]!));
-    const broken = calc.constraints.find((c) => !c.holds(x));
+    for (let i = 0; i < names.length; i++) x[names[i]!] = cols[i]![r]!;
+    let broken: (typeof calc.constraints)[number] | undefined;
+    for (const c of calc.constraints) {
+      if (!c.holds(x)) {
+        broken = c;
+        break;
+      }
+    }
     if (broken === undefined) continue;
     if (bad) {
       bad[r] = 1;

@@ -1,5 +1,5 @@
 import assert from "node:assert/strict";
-import { close } from "./close.ts";
+import { close } from "../close.ts";
 import {
   blandAltman,
   blandAltmanRatio,

@@ -1,5 +1,5 @@
 import assert from "node:assert/strict";
-import { close } from "./close.ts";
+import { close } from "../close.ts";
 import { intraclassCorrelations } from "../../calc/agreement/mod.ts";
 import { SHROUT_FLEISS } from "./data.ts";
 

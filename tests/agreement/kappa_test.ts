@@ -1,5 +1,5 @@
 import assert from "node:assert/strict";
-import { close } from "./close.ts";
+import { close } from "../close.ts";
 import { cohenKappa, cohenKappaFromTable, fleissKappa } from "../../calc/agreement/mod.ts";
 import { FLEISS_EXAMPLE, SEXUAL_FUN } from "./data.ts";
 

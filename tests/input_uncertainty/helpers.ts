@@ -6,13 +6,7 @@
 import assert from "node:assert/strict";
 import { JUPYTER_DISPLAY } from "../../mod.ts";
 
-/** Asserts |actual − expected| ≤ tol, naming what was checked. */
-export function close(actual: number, expected: number, tol: number, what: string): void {
-  assert.ok(
-    Math.abs(actual - expected) <= tol,
-    `${what}: expected ${expected} ± ${tol}, got ${actual}`,
-  );
-}
+export { close } from "../close.ts";
 
 /** The plain-text notebook display of a result. */
 export function shownText(result: object): string {

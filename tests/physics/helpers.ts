@@ -3,12 +3,5 @@
  *
  * @module
  */
-import assert from "node:assert/strict";
 
-/** Asserts |actual − expected| ≤ tol, naming what was compared. */
-export function close(actual: number, expected: number, tol: number, what: string): void {
-  assert.ok(
-    Math.abs(actual - expected) <= tol,
-    `${what}: expected ${expected} ± ${tol}, got ${actual}`,
-  );
-}
+export { close } from "../close.ts";

@@ -3,7 +3,8 @@
  * the probabilistically symmetric one, or the shortest one when that is asked for.
  */
 import assert from "node:assert/strict";
-import { expressionModel, normal, propagate } from "../../mod.ts";
+import { normal, propagate } from "../../mod.ts";
+import { comparisonLoss } from "./jcgm101_models.ts";
 import { sequenceStatistics } from "../../calc/uncertainty/adaptive.ts";
 
 /** JCGM 101:2008 §7.7 applied literally to a fully sorted copy: the shortest interval. */
@@ -39,16 +40,7 @@ Deno.test("adaptive statistics of a sequence follow the reported interval: short
 });
 
 Deno.test("adaptive Monte Carlo with the shortest interval: JCGM 101 §9.4 comparison loss stabilises", () => {
-  const wide = { min: -1, max: 1 };
-  const loss = expressionModel({
-    expression: "x1^2 + x2^2",
-    inputs: {
-      x1: { unit: "1", description: "real part of the reflection coefficient", range: wide },
-      x2: { unit: "1", description: "imaginary part of the reflection coefficient", range: wide },
-    },
-    output: { name: "dY", unit: "1", description: "comparison loss correction" },
-  });
-  const r = propagate(loss, { x1: normal(0, 0.005), x2: normal(0, 0.005) }, {
+  const r = propagate(comparisonLoss, { x1: normal(0, 0.005), x2: normal(0, 0.005) }, {
     method: "monteCarlo",
     adaptive: { significantDigits: 1 },
     interval: "shortest",

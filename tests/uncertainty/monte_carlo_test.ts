@@ -6,6 +6,7 @@ import {
   rectangular,
   validateGumWithMonteCarlo,
 } from "../../mod.ts";
+import { comparisonLoss } from "./jcgm101_models.ts";
 
 const wide = { min: -1e6, max: 1e6 };
 const additive = expressionModel({
@@ -55,15 +56,6 @@ Deno.test("JCGM 101 §9.2.3 additive model, rectangular inputs: MC interval ±3.
   const exact = 2 * h * (2 - 0.6 ** 0.25);
   assert.ok(Math.abs(m.outputs.y.interval.upper - exact) < 0.02);
   assert.ok(Math.abs(m.outputs.y.interval.lower + exact) < 0.02);
-});
-
-const comparisonLoss = expressionModel({
-  expression: "x1^2 + x2^2",
-  inputs: {
-    x1: { unit: "1", description: "real part of the reflection coefficient", range: wide },
-    x2: { unit: "1", description: "imaginary part of the reflection coefficient", range: wide },
-  },
-  output: { name: "dY", unit: "1", description: "comparison loss correction" },
 });
 
 Deno.test("JCGM 101 §9.4 comparison loss at x = 0: first order fails, MC and second order do not", () => {

@@ -1,5 +1,5 @@
 /**
- * The tolerance assertion shared by the agreement tests.
+ * The tolerance assertion shared by the tests of every domain.
  *
  * @module
  */
@@ -9,6 +9,6 @@ import assert from "node:assert/strict";
 export function close(actual: number, expected: number, tol: number, what = ""): void {
   assert.ok(
     Math.abs(actual - expected) <= tol,
-    `${what} expected ${expected} ± ${tol}, got ${actual}`,
+    `${what ? `${what}: ` : ""}expected ${expected} ± ${tol}, got ${actual}`,
   );
 }
