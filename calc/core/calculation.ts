@@ -293,6 +293,8 @@ export function defineCalculation<I extends string, O extends string>(
   if (citations.length === 0) {
     throw new TypeError(`${spec.title}: expected at least one published source, got none`);
   }
+  widenFieldsForNumbers(spec.inputs);
+  widenFieldsForNumbers(spec.outputs);
   const inputs = {} as Record<I, InputDefinition>;
   for (const name of inputNames) inputs[name] = resolveInput(spec.id, name, spec.inputs[name]);
   const outputs = {} as Record<O, OutputDefinition>;
@@ -320,6 +322,24 @@ export function defineCalculation<I extends string, O extends string>(
       : { kind: "catalog" as const, id: spec.id },
     ...(spec.partial ? { partial: spec.partial } : {}),
   });
+}
+
+/**
+ * Keeps a formula's argument and result objects free of per-row allocations in the column loops
+ * (Monte Carlo trials, table rows). The definition's `inputs` and `outputs` records are object
+ * literals keyed by the same names, in the same order, as the objects a formula receives and
+ * returns, so the JavaScript engine (V8) gives them the same hidden class; the records hold objects,
+ * which fixes those fields to "heap object", and every number later stored in such a field is then
+ * boxed (a heap allocation per row that the optimiser cannot remove). A throwaway copy of each
+ * record (the same hidden class) given a small integer widens the fields to "any value", where the
+ * optimiser keeps numbers unboxed. The caller's records are not changed. Measured: a one-line
+ * formula over 10⁶ rows 2.7 ns per row with 416 young-generation collections before, 1.5 ns with
+ * 16 after (bench/analysis.md); without this the same happens only after the engine's first full
+ * garbage collection, which drops the definitions' hidden classes.
+ */
+function widenFieldsForNumbers(record: object): void {
+  const copy: Record<string, unknown> = { ...record };
+  for (const key of Object.keys(copy)) copy[key] = 0;
 }
 
 /**

@@ -32,7 +32,7 @@ export {
   type QuantitySpec,
   typicalRange,
 } from "./quantity.ts";
-export { formatRange, inRange, rangeWithin } from "./range.ts";
+export { closedBounds, countOutside, formatRange, inRange, rangeWithin } from "./range.ts";
 export { describeValue, formatCitation, formatUnit, withUnit } from "./text.ts";
 export {
   type CalculationSpec,

@@ -24,6 +24,91 @@ export function inRange(value: number, range: ValueRange): boolean {
   return aboveMin && belowMax;
 }
 
+/** The adjacent double toward +∞ (`up`) or −∞ of a finite x. */
+function adjacent(x: number, up: boolean): number {
+  if (x === 0) return up ? Number.MIN_VALUE : -Number.MIN_VALUE;
+  const view = new DataView(new ArrayBuffer(8));
+  view.setFloat64(0, x);
+  view.setBigInt64(0, view.getBigInt64(0) + ((x > 0) === up ? 1n : -1n));
+  return view.getFloat64(0);
+}
+
+/**
+ * The closed interval [lower, upper] of doubles equal to `range`: an exclusive bound moves to the
+ * adjacent double inside (v > a ⇔ v ≥ the next double after a). Column loops then test
+ * `v >= lower && v <= upper`, which is false for NaN like {@linkcode inRange}, with no test of the
+ * bounds' kinds per value.
+ *
+ * @param range The range.
+ * @returns The bounds, inclusive.
+ *
+ * @example
+ * ```ts
+ * import { closedBounds, inRange } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * const r = { min: 0, max: 1, maxExclusive: true };
+ * const { lower, upper } = closedBounds(r);
+ * // 1 − 2⁻⁵³ is the largest double below 1 (IEEE 754 binary64)
+ * assert.deepEqual([lower, upper], [0, 1 - 2 ** -53]);
+ * assert.equal(inRange(upper, r), true);
+ * assert.equal(inRange(1, r), false);
+ * ```
+ */
+export function closedBounds(range: ValueRange): { lower: number; upper: number } {
+  const lower = range.minExclusive && Number.isFinite(range.min)
+    ? adjacent(range.min, true)
+    : range.min;
+  const upper = range.maxExclusive && Number.isFinite(range.max)
+    ? adjacent(range.max, false)
+    : range.max;
+  return { lower, upper };
+}
+
+/**
+ * The number of values of a column outside `range` (NaN included). Skipped rows (`skip[i]`
+ * non-zero) are not counted. Without rows to skip, one pass of running minimum and maximum (which
+ * NaN poisons) first answers the usual case, nothing outside; only then are values counted.
+ *
+ * Formula: #{ i : not (lower ≤ vᵢ ≤ upper) } with the closed bounds of {@linkcode closedBounds}.
+ *
+ * @param values The column.
+ * @param range The range.
+ * @param skip Rows to leave out, or null.
+ * @returns How many values lie outside.
+ *
+ * @example
+ * ```ts
+ * import { countOutside } from "@sonorigor/sonorigor";
+ * import assert from "node:assert/strict";
+ * // 0 is excluded by "(0, 5]", NaN belongs to no range, 6 > 5
+ * const col = Float64Array.of(0, 2.5, NaN, 5, 6);
+ * assert.equal(countOutside(col, { min: 0, max: 5, minExclusive: true }), 3);
+ * ```
+ */
+export function countOutside(
+  values: Float64Array,
+  range: ValueRange,
+  skip: Uint8Array | null = null,
+): number {
+  const { lower, upper } = closedBounds(range);
+  if (!skip) {
+    // Math.min and Math.max return NaN once a NaN is met, and NaN fails both comparisons
+    let min = Infinity, max = -Infinity;
+    for (let i = 0; i < values.length; i++) {
+      const v = values[i]!;
+      min = Math.min(min, v);
+      max = Math.max(max, v);
+    }
+    if (values.length === 0 || (min >= lower && max <= upper)) return 0;
+  }
+  let n = 0;
+  for (let i = 0; i < values.length; i++) {
+    const v = values[i]!;
+    if (!(v >= lower && v <= upper) && !(skip && skip[i] !== 0)) n++;
+  }
+  return n;
+}
+
 /**
  * Formats a range in interval notation with its unit, e.g. "(0, 5] cm".
  *

@@ -12,7 +12,7 @@ import type { Calculation, ValidationIssue, ValueRange } from "../core/types.ts"
 import type { Population } from "../core/types.ts";
 import { cautionsOf } from "../core/calculation.ts";
 import { evaluateColumns } from "../core/columns.ts";
-import { formatRange, inRange } from "../core/range.ts";
+import { closedBounds, formatRange, inRange } from "../core/range.ts";
 import { typicalRange } from "../core/quantity.ts";
 import { checkValue } from "../core/validate.ts";
 import { withUnit } from "../core/text.ts";
@@ -263,33 +263,45 @@ export function evaluateTable(
   const list = Array.isArray(calculations) ? calculations : [calculations as Calculation];
   const method = options.method ?? (options.uncertainty ? "gum" : "exact");
   let current = table;
-  for (const calc of list) current = evaluateOne(current, calc, method, options);
+  const spans: Spans = new WeakMap();
+  for (const calc of list) current = evaluateOne(current, calc, method, options, spans);
   return current;
 }
 
+/** The smallest and largest value of each column met in one evaluation (NaN when a value is
+ * NaN: Math.min and Math.max propagate it), found once per column: a column is checked against
+ * its valid and its typical range, and a result column again as the next calculation's input. */
+type Spans = WeakMap<Float64Array, { readonly min: number; readonly max: number }>;
+
 /** True when every value of `col` (outside the rows marked in `skip`) is finite and in `range`:
- * one min/max pass. */
-function columnWithin(col: Float64Array, range: ValueRange, skip?: Uint8Array): boolean {
-  let min = Infinity, max = -Infinity, nan = false;
-  if (skip) {
-    for (let i = 0; i < col.length; i++) {
-      if (skip[i]) continue;
-      const v = col[i]!;
-      if (v < min) min = v;
-      if (v > max) max = v;
-      if (v !== v) nan = true;
+ * from the column's span when no row is skipped, else one pass. */
+function columnWithin(
+  col: Float64Array,
+  range: ValueRange,
+  spans: Spans,
+  skip?: Uint8Array,
+): boolean {
+  const bounds = closedBounds(range);
+  const lower = Math.max(bounds.lower, -Number.MAX_VALUE);
+  const upper = Math.min(bounds.upper, Number.MAX_VALUE);
+  if (!skip) {
+    let span = spans.get(col);
+    if (span === undefined) {
+      let min = Infinity, max = -Infinity;
+      for (let i = 0; i < col.length; i++) {
+        const v = col[i]!;
+        min = Math.min(min, v);
+        max = Math.max(max, v);
+      }
+      spans.set(col, span = { min, max });
     }
-  } else {
-    for (let i = 0; i < col.length; i++) {
-      const v = col[i]!;
-      if (v < min) min = v;
-      if (v > max) max = v;
-      if (v !== v) nan = true;
-    }
+    return col.length === 0 || (span.min >= lower && span.max <= upper);
   }
-  if (nan) return false;
-  if (min > max) return true; // nothing to check
-  return Number.isFinite(min) && Number.isFinite(max) && inRange(min, range) && inRange(max, range);
+  for (let i = 0; i < col.length; i++) {
+    const v = col[i]!;
+    if (!(v >= lower && v <= upper) && skip[i] === 0) return false;
+  }
+  return true;
 }
 
 function evaluateOne(
@@ -297,6 +309,7 @@ function evaluateOne(
   calc: Calculation,
   method: "exact" | "gum" | "monteCarlo",
   options: EvaluateTableOptions,
+  spans: Spans = new WeakMap(),
 ): Table {
   const wired = wire(table, calc, options.inputs ?? {});
   const n = table.rowCount;
@@ -316,7 +329,7 @@ function evaluateOne(
   const skip = new Uint8Array(n);
   const population = options.population ?? "adult";
   const defs = calc.inputNames.map((name) => calc.inputs[name]!);
-  const doubtful = inputs.map((col, k) => !columnWithin(col, defs[k]!.range));
+  const doubtful = inputs.map((col, k) => !columnWithin(col, defs[k]!.range, spans));
   if (doubtful.some(Boolean)) {
     for (let i = 0; i < n; i++) {
       for (let k = 0; k < inputs.length; k++) {
@@ -358,6 +371,8 @@ function evaluateOne(
       }
     }
   }
+  // no row skipped so far (the usual case): the columns are checked whole, in the faster pass
+  const skipped = skip.includes(1) ? skip : undefined;
   for (let k = 0; k < inputs.length; k++) {
     const name = calc.inputNames[k]!;
     const def = defs[k]!;
@@ -365,7 +380,7 @@ function evaluateOne(
     // the table checked each column against its quantity; a calculation may narrow the range
     if (!typical || !wired[k] || typical === wired[k]!.quantity.typical) continue;
     const col = inputs[k]!;
-    if (columnWithin(col, typical, skip)) continue;
+    if (columnWithin(col, typical, spans, skipped)) continue;
     for (let i = 0; i < n; i++) {
       if (skip[i] || inRange(col[i]!, typical)) continue;
       const flagged = checkValue(name, def, col[i]!, { where, population, ...at(i) });
@@ -413,13 +428,13 @@ function evaluateOne(
     outs.forEach((o, k) => {
       const col = results[o]!;
       const range = calc.outputs[o]!.quantity.valid;
-      if (!anySkipped && columnWithin(col, range)) {
+      if (!anySkipped && columnWithin(col, range, spans)) {
         value[k] = col; // every row computed, every value finite and valid: the column itself
         return;
       }
       if (value[k]!.length !== n) value[k] = new Float64Array(n).fill(NaN);
       const out = value[k]!;
-      if (columnWithin(col, range, skip)) {
+      if (columnWithin(col, range, spans, skip)) {
         // every computed value finite and valid: copy, leaving NaN in the skipped rows
         for (let i = 0; i < n; i++) if (!skip[i]) out[i] = col[i]!;
         return;

@@ -9,17 +9,28 @@
 import { sortFloat64 } from "./sort.ts";
 import type { Interval } from "./types.ts";
 
+/** What one pass over model values finds: how many are kept (not NaN), their smallest and
+ * largest. */
+export interface ValueSpan {
+  readonly count: number;
+  readonly min: number;
+  readonly max: number;
+}
+
 /** Mean and standard deviation (two-pass, JCGM 101 eq. (16)–(17)) of the values that are not
- * NaN (NaN marks a trial excluded as physically inconsistent), and how many those are. */
+ * NaN (NaN marks a trial excluded as physically inconsistent), how many those are, and (from the
+ * first pass) their minimum and maximum, which the coverage intervals need too. */
 export function meanAndStandardDeviation(
   values: Float64Array,
-): { mean: number; sd: number; count: number } {
-  let s = 0, m = 0;
+): { mean: number; sd: number } & ValueSpan {
+  let s = 0, m = 0, min = Infinity, max = -Infinity;
   for (let r = 0; r < values.length; r++) {
     const v = values[r]!;
     if (v === v) {
       s += v;
       m++;
+      if (v < min) min = v;
+      if (v > max) max = v;
     }
   }
   const mean = s / m;
@@ -30,7 +41,8 @@ export function meanAndStandardDeviation(
     ss += d * d;
     comp += d;
   }
-  return { mean, sd: Math.sqrt(Math.max((ss - (comp * comp) / m) / (m - 1), 0)), count: m };
+  const sd = Math.sqrt(Math.max((ss - (comp * comp) / m) / (m - 1), 0));
+  return { mean, sd, count: m, min, max };
 }
 
 /** The values that are not NaN (the trials kept), in order; the array itself when all are. */
@@ -59,23 +71,27 @@ export function sortedTails(
   all: Float64Array,
   count: number,
 ): { low: Float64Array; high: Float64Array } {
-  return tailsOf(all, () => count);
+  return tailsOf(all, () => count, null);
 }
 
 /** {@linkcode sortedTails} with the tail size a function of the number of values kept (known
- * after the first pass). */
+ * after the first pass, which is skipped when the caller knows its span). */
 function tailsOf(
   all: Float64Array,
   tailSize: (kept: number) => number,
+  span: ValueSpan | null,
 ): { low: Float64Array; high: Float64Array } {
   // one pass: the values kept (not NaN), their minimum and maximum (NaN compares false)
   let min = Infinity, max = -Infinity, kept = 0;
-  for (let r = 0; r < all.length; r++) {
-    const v = all[r]!;
-    if (v !== v) continue;
-    kept++;
-    if (v < min) min = v;
-    if (v > max) max = v;
+  if (span) ({ min, max, count: kept } = span);
+  else {
+    for (let r = 0; r < all.length; r++) {
+      const v = all[r]!;
+      if (v !== v) continue;
+      kept++;
+      if (v < min) min = v;
+      if (v > max) max = v;
+    }
   }
   const count = tailSize(kept);
   const values = kept === all.length ? all : keptValues(all);
@@ -94,8 +110,13 @@ function tailsOf(
     const all = sortFloat64(values.slice());
     return { low: all.subarray(0, count), high: all.subarray(Math.max(0, m - count)) };
   }
+  // the bin of v is ⌊(v − min)·scale⌋, at most bins − 1: the argument is ≥ 0 and below 2³¹, where
+  // a truncation to a 32-bit integer (| 0) is the floor
   const counts = new Uint32Array(bins);
-  for (let r = 0; r < m; r++) counts[Math.min(bins - 1, Math.floor((values[r]! - min) * scale))]!++;
+  for (let r = 0; r < m; r++) {
+    const b = ((values[r]! - min) * scale) | 0;
+    counts[b < bins ? b : bins - 1]!++;
+  }
   let lowCut = 0, lowTotal = 0;
   for (; lowCut < bins; lowCut++) if ((lowTotal += counts[lowCut]!) >= count) break;
   let highCut = bins - 1, highTotal = 0;
@@ -104,7 +125,7 @@ function tailsOf(
   let nl = 0, nh = 0;
   for (let r = 0; r < m; r++) {
     const v = values[r]!;
-    const b = Math.min(bins - 1, Math.floor((v - min) * scale));
+    const t = ((v - min) * scale) | 0, b = t < bins ? t : bins - 1;
     if (b <= lowCut) low[nl++] = v;
     if (b >= highCut) high[nh++] = v;
   }
@@ -133,8 +154,18 @@ export function coverageIntervals(
   values: Float64Array,
   coverage: number,
 ): { symmetric: Interval; shortest: Interval } {
+  return intervalsOfValues(values, coverage, null);
+}
+
+/** {@linkcode coverageIntervals}, skipping the first pass when the values' span is known (from
+ * {@linkcode meanAndStandardDeviation}). */
+export function intervalsOfValues(
+  values: Float64Array,
+  coverage: number,
+  span: ValueSpan | null,
+): { symmetric: Interval; shortest: Interval } {
   let m = 0;
-  const tails = tailsOf(values, (kept) => coverageTailSize(m = kept, coverage));
+  const tails = tailsOf(values, (kept) => coverageTailSize(m = kept, coverage), span);
   return intervalsFromTails(tails.low, tails.high, m, coverage);
 }
 

@@ -13,7 +13,7 @@ import { formatRange } from "../core/range.ts";
 import { relationText } from "../core/validate.ts";
 import { checkSeed } from "./random.ts";
 import { type KnownTails, sampleCovariance } from "./intervals.ts";
-import { coverageIntervals, intervalsFromTails, meanAndStandardDeviation } from "./intervals.ts";
+import { intervalsFromTails, intervalsOfValues, meanAndStandardDeviation } from "./intervals.ts";
 import { outsideDrawsWarning, outsideOutputsWarning, warningMessages } from "./prepare.ts";
 import type { PreparedInputs } from "./prepare.ts";
 import { keyWords, NO_SOURCES, sourceCorrelation } from "./sources.ts";
@@ -25,9 +25,11 @@ import {
   planGroups,
   type PlanInput,
   range,
+  redrawSource,
   runBlocks,
   type RunCounts,
   type RunTargets,
+  storesDraws,
   type TrialPlan,
 } from "./sampling.ts";
 import { correlationFromCovariance } from "./gum.ts";
@@ -199,12 +201,13 @@ export function monteCarloRun<I extends string>(
   };
 }
 
-/** The arrays a run writes: one per output, one per drawn source when samples are kept. */
+/** The arrays a run writes: one per output, and when samples are kept one per source whose draws
+ * cannot be recomputed alone (see {@linkcode storesDraws}). */
 export function runTargets(run: MonteCarloRun, outputs: number): RunTargets {
   return {
     outputs: range(outputs).map(() => new Float64Array(run.trials)),
-    draws: run.plan.inputs.map((p) =>
-      p.kind === "source" && run.keepSamples ? new Float64Array(run.trials) : null
+    draws: run.plan.inputs.map((_, i) =>
+      run.keepSamples && storesDraws(run.plan, i) ? new Float64Array(run.trials) : null
     ),
     firstTrial: 0,
   };
@@ -228,12 +231,13 @@ export function sampledValue(parts: {
   readonly tails?: { readonly low: Float64Array; readonly high: Float64Array };
 }): UncertainValue {
   const { samples, coverage } = parts;
-  const { mean, sd, count } = meanAndStandardDeviation(samples);
+  const { mean, sd, ...span } = meanAndStandardDeviation(samples);
+  const count = span.count;
   let intervals: { symmetric: Interval; shortest: Interval } | undefined;
   const get = () =>
     intervals ??= parts.tails
       ? intervalsFromTails(parts.tails.low, parts.tails.high, count, coverage)
-      : coverageIntervals(samples, coverage);
+      : intervalsOfValues(samples, coverage, span);
   const value = {
     kind: "sonorigor.uncertainValue" as const,
     name: parts.name,
@@ -274,10 +278,13 @@ export function distributionValue(parts: {
   readonly distribution: ResolvedDistribution;
   readonly coverage: number;
   readonly sources: SourceSet;
-  readonly samples: Float64Array | null;
+  /** The draws, or a function giving them on first use. */
+  readonly samples: Float64Array | null | (() => Float64Array | null);
   readonly layout: TrialLayout;
 }): UncertainValue {
   const d = parts.distribution;
+  const given = parts.samples;
+  let drawn: Float64Array | null | undefined = typeof given === "function" ? undefined : given;
   const interval = distributionInterval(d, parts.coverage);
   return withValueDisplay({
     kind: "sonorigor.uncertainValue" as const,
@@ -299,7 +306,9 @@ export function distributionValue(parts: {
     firstOrderAdequate: true,
     sensitivities: new Map<string, number>(),
     sources: parts.sources,
-    samples: parts.samples,
+    get samples(): Float64Array | null {
+      return drawn !== undefined ? drawn : (drawn = (given as () => Float64Array | null)());
+    },
     // the shortest interval of an asymmetric triangle or a cone is not the symmetric one: not
     // computed
     shortestInterval: (d.kind === "triangular" && d.mode !== d.estimate) || d.kind === "cone"
@@ -320,15 +329,30 @@ export function finishMonteCarlo<I extends string, O extends string>(
   const { prepared, coverage, trials, seed, keepSamples } = run;
   const chainable = keepSamples && extra.adaptive == null;
   const layout: TrialLayout = { seed, trials, chainable };
-  const drawn = new Map<string, Float64Array>();
-  prepared.inputs.forEach((p, i) => {
-    const d = targets.draws[i];
-    if (p.fresh && d) drawn.set(p.fresh.key, d);
-  });
+  // the draws of each source input: stored, or (independent sources of a chainable run)
+  // recomputed from their streams on first use and then shared by the source set and the input's
+  // value, so that both hold the same array
+  const memo: (Float64Array | null | undefined)[] = [];
+  const drawsOf = (i: number): Float64Array | null =>
+    memo[i] !== undefined ? memo[i]! : (memo[i] = targets.draws[i] ??
+      (chainable && run.plan.inputs[i]!.kind === "source"
+        ? redrawSource(run.plan, i, [seed], trials)
+        : null));
+  const drawnInputs = prepared.inputs.flatMap((p, i) =>
+    p.fresh && (targets.draws[i] || (chainable && run.plan.inputs[i]!.kind === "source"))
+      ? [[p.fresh.key, i] as const]
+      : []
+  );
+  let samples: Map<string, Float64Array> | undefined;
   const sources: SourceSet = prepared.sources.sources.size === 0 ? NO_SOURCES : Object.freeze({
     sources: prepared.sources.sources,
     correlations: prepared.sources.correlations,
-    samples: new Map([...prepared.sources.samples, ...drawn]),
+    get samples(): Map<string, Float64Array> {
+      return samples ??= new Map([
+        ...prepared.sources.samples,
+        ...drawnInputs.map(([key, i]) => [key, drawsOf(i)!] as const),
+      ]);
+    },
   });
   const warnings = warningMessages(prepared.warnings);
   for (const p of prepared.inputs) {
@@ -401,14 +425,13 @@ export function finishMonteCarlo<I extends string, O extends string>(
       });
       return;
     }
-    const samples = plan.kind === "samples" ? plan.samples : targets.draws[i] ?? null;
     inputs[p.name as I] = distributionValue({
       name: p.name,
       def,
       distribution: p.fresh?.distribution ?? exactDistribution(p.estimate),
       coverage,
       sources: p.fresh ? sources : NO_SOURCES,
-      samples: keepSamples ? samples : null,
+      samples: !keepSamples ? null : plan.kind === "samples" ? plan.samples : () => drawsOf(i),
       layout,
     });
   });

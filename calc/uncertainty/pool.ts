@@ -32,7 +32,14 @@ import { excludedTrials, finishMonteCarlo, type MonteCarloRun } from "./monte_ca
 import type { UncertainInputs } from "./prepare.ts";
 import { displayable, planPropagation, type PropagateOptions } from "./propagate.ts";
 import { propagateGum } from "./gum.ts";
-import { BLOCK_TRIALS, blockCount, type PlanInput, range, type TrialPlan } from "./sampling.ts";
+import {
+  BLOCK_TRIALS,
+  blockCount,
+  type PlanInput,
+  range,
+  storesDraws,
+  type TrialPlan,
+} from "./sampling.ts";
 import type { Propagation } from "./types.ts";
 import type { PlainError, WorkerReply, WorkerRequest, WorkerTask } from "./worker.ts";
 
@@ -577,8 +584,8 @@ export async function createMonteCarloPool(
       replies.forEach((r, w) => all.set(r.results[0]![k]!, at(w)));
       return all;
     });
-    const draws = run.plan.inputs.map((p, i) => {
-      if (p.kind !== "source" || !run.keepSamples) return null;
+    const draws = run.plan.inputs.map((_, i) => {
+      if (!run.keepSamples || !storesDraws(run.plan, i)) return null;
       const all = new Float64Array(m);
       replies.forEach((r, w) => all.set(r.draws[0]![i]!, at(w)));
       return all;

@@ -48,8 +48,10 @@ export interface PropagateOptions {
   /** Monte Carlo: seed, an integer in [1, 2³² − 1]. @default 20080101, or that of the inputs'
    * run */
   readonly seed?: number;
-  /** Monte Carlo: keep the samples of every input and output (needed to chain or grade).
-   * @default true */
+  /** Monte Carlo: keep the samples of every input and output (needed to chain or grade). The
+   * model values are stored; the draws of an independent input are recomputed from its random
+   * streams, the same numbers, the first time they are asked for, so a run holds one array per
+   * output. @default true */
   readonly keepSamples?: boolean;
   /** Monte Carlo: the reported interval, probabilistically symmetric or shortest.
    * @default "symmetric" */

@@ -178,27 +178,41 @@ function slowNormal(mt: Generator32, u: number, i: number): number {
   return f1 + uniformOpen(mt) * (f0 - f1) < 1 ? x : normal(mt);
 }
 
-/** One standard normal draw: improved ziggurat (Doornik 2005), 128 layers. */
+/** One standard normal draw: the same as a fill of length one (see {@linkcode fillNormal}),
+ * whose slow path, if taken, follows the row's two words at once. */
 function normal(mt: Generator32): number {
   const a = mt.next();
   const b = mt.next();
-  // 53-bit uniform on (−1, 1) from the high bits; the layer from the low bits of both draws
   const u = 2 * (((a >>> 5) * TWO_POW_26 + (b >>> 6) + 0.5) / TWO_POW_53) - 1;
   const i = (b & 63) | ((a & 1) << 6);
   return Math.abs(u) < ZIG_RATIO[i]! ? u * ZIG_X[i]! : slowNormal(mt, u, i);
 }
 
 /**
- * Fills `out` with mean + sd·Z: the fast path of {@linkcode normal} (the same words) and the
- * generator written inline (the same steps as `Generator32.next`, two per draw), with its state in
- * local variables across the whole column, stored back around the ziggurat's rare slow path.
- * Normals and uniforms have a function each, and the two steps are written out: one function for
- * both, or a two-pass loop, measured 5–35 % slower for the whole fill.
+ * Fills `out` with mean + sd·Z, Z by the improved ziggurat (Doornik 2005, 128 layers), in two
+ * passes over the stream:
+ *
+ * 1. for row r, in order, the next two words a, b give u = 2·((a ≫ 5)·2²⁶ + (b ≫ 6) + ½)/2⁵³ − 1
+ *    (53 bits, strictly inside (−1, 1)) and the layer i = (b & 63) | ((a & 1) ≪ 6); if
+ *    |u| < xᵢ₊₁/xᵢ the row is u·xᵢ (the ziggurat's fast path, about 99 % of rows);
+ * 2. the other rows, in row order, then take the ziggurat's slow path (the tail beyond R, or the
+ *    wedge test with a fresh uniform, and on rejection a whole fresh draw) from the words that
+ *    follow.
+ *
+ * Each row's accept-or-reject depends on its own two words only, and every slow path draws fresh
+ * words, so the values are independent standard normals exactly as with one pass; the order of
+ * the words is what the two passes change. With the slow path inside the loop the fill took 1.6–2
+ * times as long (the rare branch costs the hot loop its registers; bench/analysis.md). The
+ * generator is written inline (the same steps as `Generator32.next`, two per row), its state in
+ * local variables across the whole column.
  */
 function fillNormal(g: Generator32, out: Float64Array, mean: number, sd: number): void {
   const st = g.s;
   let s0 = st[0]!, s1 = st[1]!, s2 = st[2]!, s3 = st[3]!;
-  for (let r = 0; r < out.length; r++) {
+  const n = out.length;
+  // rows for the slow path and their layers (u waits in `out`)
+  let rows = new Int32Array(64), layers = new Uint8Array(64), rejected = 0;
+  for (let r = 0; r < n; r++) {
     let x = Math.imul(s1, 5), t = s1 << 9;
     const a = Math.imul((x << 7) | (x >>> 25), 9);
     s2 ^= s0, s3 ^= s1, s1 ^= s2, s0 ^= s3, s2 ^= t, s3 = (s3 << 11) | (s3 >>> 21);
@@ -207,16 +221,24 @@ function fillNormal(g: Generator32, out: Float64Array, mean: number, sd: number)
     s2 ^= s0, s3 ^= s1, s1 ^= s2, s0 ^= s3, s2 ^= t, s3 = (s3 << 11) | (s3 >>> 21);
     const u = 2 * (((a >>> 5) * TWO_POW_26 + (b >>> 6) + 0.5) / TWO_POW_53) - 1;
     const i = (b & 63) | ((a & 1) << 6);
-    // two stores rather than one merged value: merging the fast path's unboxed number with the
-    // slow path's call result would box every draw (a heap allocation per normal)
-    if (Math.abs(u) < ZIG_RATIO[i]!) out[r] = mean + sd * (u * ZIG_X[i]!);
-    else {
-      st[0] = s0, st[1] = s1, st[2] = s2, st[3] = s3;
-      out[r] = mean + sd * slowNormal(g, u, i);
-      s0 = st[0]!, s1 = st[1]!, s2 = st[2]!, s3 = st[3]!;
+    const ratio = ZIG_RATIO[i]!;
+    out[r] = mean + sd * (u * ZIG_X[i]!);
+    if (!(u < ratio && u > -ratio)) {
+      if (rejected === rows.length) {
+        const moreRows = new Int32Array(2 * rejected), moreLayers = new Uint8Array(2 * rejected);
+        moreRows.set(rows);
+        moreLayers.set(layers);
+        rows = moreRows, layers = moreLayers;
+      }
+      rows[rejected] = r, layers[rejected++] = i;
+      out[r] = u;
     }
   }
   st[0] = s0, st[1] = s1, st[2] = s2, st[3] = s3;
+  for (let k = 0; k < rejected; k++) {
+    const r = rows[k]!;
+    out[r] = mean + sd * slowNormal(g, out[r]!, layers[k]!);
+  }
 }
 
 /** Fills `out` with uniforms on (0, 1) ({@linkcode uniformFromWords} of two words each), the

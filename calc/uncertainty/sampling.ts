@@ -21,7 +21,7 @@
  * @module
  */
 import type { Calculation, InputValues, ValueRange } from "../core/types.ts";
-import { inRange } from "../core/range.ts";
+import { closedBounds, countOutside, inRange } from "../core/range.ts";
 import { columnLoop } from "../core/columns.ts";
 import { relationText } from "../core/validate.ts";
 import { choleskySemidefinite } from "./correlation.ts";
@@ -236,27 +236,20 @@ function sampleColumn(d: ResolvedDistribution, out: Float64Array, rng: RandomStr
 /** Distributions whose draws (sampleColumn) lie between their lower and upper bounds. */
 const BOUNDED_DRAWS: ReadonlySet<string> = new Set(["rectangular", "triangular", "arcsine"]);
 
-/** Number of values outside a range or not finite (a min/max pass first: usually nothing to
- * count); marks their trials in `bad` when given. */
+/** Number of values outside a range or not finite (one counting pass first: usually nothing
+ * to mark); marks their trials in `bad` when given. */
 function markOutside(
   col: Float64Array,
   r: ValueRange,
   bad: Uint8Array | null,
   skip: Uint8Array | null = null,
 ): number {
-  let min = Infinity, max = -Infinity, nan = false;
+  const n = countOutside(col, r, skip);
+  if (n === 0 || !bad) return n;
+  const { lower, upper } = closedBounds(r);
   for (let i = 0; i < col.length; i++) {
     const v = col[i]!;
-    if (v < min) min = v;
-    if (v > max) max = v;
-    if (v !== v) nan = true;
-  }
-  if (!nan && inRange(min, r) && inRange(max, r)) return 0;
-  let n = 0;
-  for (let i = 0; i < col.length; i++) {
-    if (skip?.[i] || inRange(col[i]!, r)) continue;
-    n++;
-    if (bad) bad[i] = 1;
+    if (!(v >= lower && v <= upper) && !skip?.[i]) bad[i] = 1;
   }
   return n;
 }
@@ -291,6 +284,47 @@ export interface RunTargets {
   readonly firstTrial: number;
 }
 
+/**
+ * Whether a run stores the draws of plan input i as it goes: only members of a correlated group
+ * (their columns mix several streams). An independent source's draws are a function of the run's
+ * key, the source's key and the block alone, so they are recomputed when asked for
+ * ({@linkcode redrawSource}) rather than kept: a run of 10⁶ trials then writes and holds one array
+ * per output, not one more per input (about half the memory and a sixth of the time for four
+ * inputs, bench/analysis.md).
+ */
+export function storesDraws(plan: TrialPlan, i: number): boolean {
+  const p = plan.inputs[i]!;
+  return p.kind === "source" && p.group >= 0;
+}
+
+/**
+ * The draws of an independent source input (see {@linkcode storesDraws}) over a whole run of m
+ * trials keyed `runKey`: block by block from the same streams as {@linkcode runBlocks}, so the
+ * same numbers, bit for bit.
+ *
+ * @throws {TypeError} For an input that is not an independent source.
+ */
+export function redrawSource(
+  plan: TrialPlan,
+  i: number,
+  runKey: readonly number[],
+  m: number,
+): Float64Array {
+  const p = plan.inputs[i]!;
+  if (p.kind !== "source" || p.group >= 0) {
+    throw new TypeError(`redrawSource: input ${i} is not an independent source`);
+  }
+  const out = new Float64Array(m);
+  const size = Math.min(BLOCK_TRIALS, m);
+  for (let b = 0; b < blockCount(m); b++) {
+    const start = b * BLOCK_TRIALS;
+    const n = Math.min(size, m - start);
+    const rng = randomStream([...runKey, p.words[0], p.words[1], b]);
+    sampleColumn(p.distribution, out.subarray(start, start + n), rng);
+  }
+  return out;
+}
+
 /** Counts of a run: draws outside each input's valid range, model values outside each output's
  * valid range. */
 export interface RunCounts {
@@ -315,6 +349,11 @@ export function runBlocks(
 ): void {
   const size = Math.min(BLOCK_TRIALS, m);
   const scratch = plan.inputs.map(() => new Float64Array(size));
+  // per-trial marks, reused by every block
+  const exclude = (plan.inconsistent ?? "exclude") === "exclude";
+  const badTrials = exclude ? new Uint8Array(size) : null;
+  const beforeOutputs = exclude ? new Uint8Array(size) : null;
+  const upstreamTrials = new Uint8Array(size);
   const normals = plan.groups.length > 0 ? plan.inputs.map(() => new Float64Array(size)) : [];
   const strict = columnLoop(calc, "strict");
   const lenient = columnLoop(calc, "lenient");
@@ -356,11 +395,10 @@ export function runBlocks(
       }
     });
     for (const g of plan.groups) drawGroup(g, plan, cols, normals, runKey, b, n);
-    const exclude = (plan.inconsistent ?? "exclude") === "exclude";
-    const bad = exclude ? new Uint8Array(n) : null;
+    const bad = badTrials ? badTrials.subarray(0, n).fill(0) : null;
     // trials an earlier step already excluded (NaN samples) stay excluded, and are not counted
     // again here
-    const upstream = new Uint8Array(n);
+    const upstream = upstreamTrials.subarray(0, n).fill(0);
     plan.inputs.forEach((p, i) => {
       if (p.kind !== "samples") return;
       const col = cols[i]!;
@@ -376,7 +414,8 @@ export function runBlocks(
     const first = (exclude ? lenient : strict)(calc.formula, cols, outs, n);
     if (first >= 0) nonFiniteError(calc, cols, first, start + first);
     // outputs are counted on the trials still consistent after the inputs' checks
-    const before = bad ? bad.slice() : null;
+    const before = bad ? beforeOutputs!.subarray(0, n) : null;
+    if (before) before.set(bad!);
     outs.forEach((o, k) =>
       counts.outputsOutside[k]! += markOutside(o, outputRanges[k]!, bad, before)
     );

@@ -172,6 +172,16 @@ export function linearCovariance(
   b: ReadonlyMap<string, number>,
 ): number {
   let s = 0;
+  if (set.correlations.size === 0) {
+    // independent sources: only the terms i = j, in the same order (no pair keys to build)
+    for (const [ka, ca] of a) {
+      const ua = uOf(set, ka);
+      const cb = b.get(ka);
+      if (ca === 0 || ua === 0 || cb === undefined || cb === 0) continue;
+      s += ca * cb * ua * ua;
+    }
+    return s;
+  }
   for (const [ka, ca] of a) {
     const ua = uOf(set, ka);
     if (ca === 0 || ua === 0) continue;
@@ -250,7 +260,7 @@ export function welchSatterthwaite(
       finite.push(key);
     }
   }
-  for (const key of finite) {
+  for (const key of set.correlations.size === 0 ? [] : finite) {
     for (const other of linear.keys()) {
       if (other !== key && sourceCorrelation(set, key, other) !== 0) {
         return {

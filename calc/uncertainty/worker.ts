@@ -91,7 +91,7 @@ const port = parentPort;
 // FORMULA_ONLY_WORKER of calc/core/units.ts, set before any module of the package is loaded
 // (importing units.ts to read it would load mathjs)
 (globalThis as Record<symbol, unknown>)[Symbol.for("sonorigor.formulaOnlyWorker")] = true;
-const { BLOCK_TRIALS, runBlocks } = await import("./sampling.ts");
+const { BLOCK_TRIALS, runBlocks, storesDraws } = await import("./sampling.ts");
 const { sequenceStatistics } = await import("./adaptive.ts");
 const { sortedTails } = await import("./intervals.ts");
 const { combineCatalogs, defineCatalog, fingerprint, rebuild } = await import(
@@ -182,8 +182,8 @@ function run(request: Extract<WorkerRequest, { type: "run" }>): WorkerReply {
     const n = Math.min(task.m, (task.blocks.at(-1)! + 1) * BLOCK_TRIALS) - firstTrial;
     const targets = {
       outputs: calc.outputNames.map(() => new Float64Array(n)),
-      draws: task.plan.inputs.map((p) =>
-        p.kind === "source" && request.keepDraws ? new Float64Array(n) : null
+      draws: task.plan.inputs.map((_, i) =>
+        request.keepDraws && storesDraws(task.plan, i) ? new Float64Array(n) : null
       ),
       firstTrial,
     };

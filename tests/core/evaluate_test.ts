@@ -138,6 +138,28 @@ Deno.test("evaluate does not mutate its arguments", () => {
   assert.deepEqual(args, { lvotDiameterCm: "2 cm", lvotVtiCm: 20, valveVtiCm: 80 });
 });
 
+Deno.test("defineCalculation leaves the spec's records as they were, frozen or not", () => {
+  const role = { unit: "1", description: "a", range: { min: 0, max: 1 } };
+  const inputs = { a: role };
+  const outputs = Object.freeze({ b: { unit: "1", description: "b" } });
+  const c = defineCalculation({
+    id: "specUntouched",
+    title: "Spec untouched",
+    description: "",
+    inputs,
+    outputs,
+    formula: ({ a }) => ({ b: 2 * a }),
+    formulaText: "b = 2a",
+    citations: [{ authors: "test", year: 2026, title: "t", publication: "t" }],
+    cautions: [],
+  });
+  assert.equal(inputs.a, role);
+  assert.deepEqual(Object.keys(inputs), ["a"]);
+  assert.deepEqual(outputs, { b: { unit: "1", description: "b" } });
+  // the formula's own objects still carry numbers (2 · 0.25 = 0.5, exact in binary)
+  assert.equal(evaluate(c, { a: 0.25 }).outputs.b, 0.5);
+});
+
 Deno.test("defineCalculation rejects a spec without citations or with an empty range", () => {
   const base = {
     id: "x",

@@ -1,9 +1,12 @@
 import assert from "node:assert/strict";
 import {
+  arcsine,
   expressionModel,
   normal,
   propagate,
   rectangular,
+  studentT,
+  triangular,
   validateGumWithMonteCarlo,
 } from "../../mod.ts";
 import { comparisonLoss } from "./jcgm101_models.ts";
@@ -215,4 +218,31 @@ Deno.test("Monte Carlo: M ≥ 1/(1 − p) holds at the boundary despite the roun
       message: /expected at least 1\/\(1 − p\) = 10000 trials for coverage 0\.9999, got 9999/,
     },
   );
+});
+
+Deno.test("Monte Carlo: an input's draws, recomputed on first use, are the draws the run used, bit for bit", () => {
+  const copy = expressionModel({
+    expression: "x",
+    inputs: { x: { unit: "1", description: "x", range: wide } },
+    output: { name: "y", unit: "1", description: "y" },
+  });
+  // every kind of independent draw, over three whole blocks and a shorter last one
+  for (
+    const x of [
+      normal(2, 0.5),
+      rectangular(-1, 3),
+      triangular(0, 4, 1),
+      arcsine(0.9, 1.1),
+      studentT(1, 0.05, 4),
+    ]
+  ) {
+    const r = propagate(copy, { x }, { method: "monteCarlo", trials: 3 * 65_536 + 777, seed: 9 });
+    const drawn = r.inputs.x.samples!;
+    // y = x on every trial: the model values are the draws as the run made them
+    assert.deepEqual(drawn, r.outputs.y.samples);
+    // the source set of the result holds the same array (one array per source and run)
+    const [key] = [...r.inputs.x.sources.sources.keys()];
+    assert.equal(r.inputs.x.sources.samples.get(key!), drawn);
+    assert.equal(r.outputs.y.sources.samples.get(key!), drawn);
+  }
 });

@@ -235,14 +235,61 @@ Deno.test("seeded reproducibility: the same seed or key gives the same draws, bi
     assert.deepEqual(x, y);
     for (let i = 0; i < 100; i++) assert.equal(a.studentT(4), b.studentT(4));
   }
-  // bulk fills give the same numbers as one draw at a time from the same stream
+  // a fill of length one is one draw
+  const one = new Float64Array(1);
+  for (let seed = 1; seed <= 2000; seed++) {
+    randomStream(seed).fillNormal(one);
+    assert.equal(one[0], randomStream(seed).normal());
+  }
   const bulk = randomStream(77), single = randomStream(77);
-  const z = new Float64Array(20_000);
-  bulk.fillNormal(z);
-  for (let i = 0; i < z.length; i++) assert.equal(z[i], single.normal());
   const u = new Float64Array(20_000);
   bulk.fillUniform(u);
   for (let i = 0; i < u.length; i++) assert.equal(u[i], single.uniform());
+});
+
+// The ziggurat of Doornik (2005), "An improved ziggurat method to generate normal random
+// samples", Nuffield College: 128 layers of area V, x₁ = R, xᵢ₊₁ = √(−2 ln(V/xᵢ + f(xᵢ))), with
+// R = 3.442619855899 and V = 9.91256303526217e-3 (Marsaglia & Tsang 2000, J Stat Softw 5(8)).
+function doornikLayers(): { x: Float64Array; ratio: Float64Array } {
+  const R = 3.442619855899, V = 9.91256303526217e-3;
+  const x = new Float64Array(129), ratio = new Float64Array(128);
+  let f = Math.exp(-0.5 * R * R);
+  x[0] = V / f, x[1] = R, x[128] = 0;
+  for (let i = 2; i < 128; i++) {
+    x[i] = Math.sqrt(-2 * Math.log(V / x[i - 1]! + f));
+    f = Math.exp(-0.5 * x[i]! * x[i]!);
+  }
+  for (let i = 0; i < 128; i++) ratio[i] = x[i + 1]! / x[i]!;
+  return { x, ratio };
+}
+
+Deno.test("normal fills: row r from words 2r and 2r + 1 on the ziggurat's fast path, the rest after", () => {
+  const { x, ratio } = doornikLayers();
+  for (const key of [[77], [5, 0, 9], [2 ** 32 - 1, 1, 2]]) {
+    const n = 20_000;
+    const z = new Float64Array(n);
+    randomStream(key).fillNormal(z, 3, 2);
+    const next = xoshiro128StarStar(streamState(key));
+    let fast = 0;
+    for (let r = 0; r < n; r++) {
+      const a = next(), b = next();
+      // u on (−1, 1) from 53 bits, the layer from 7 other bits (the documented layout)
+      const u = 2 * (((a >>> 5) * 2 ** 26 + (b >>> 6) + 0.5) / 2 ** 53) - 1;
+      const i = (b & 63) | ((a & 1) << 6);
+      if (Math.abs(u) < ratio[i]!) {
+        fast++;
+        assert.equal(z[r], 3 + 2 * (u * x[i]!), `row ${r}`);
+      } else assert.ok(Number.isFinite(z[r]!), `row ${r}`);
+    }
+    // u is uniform on (−1, 1), so a layer's fast path takes the share xᵢ₊₁/xᵢ of its draws and the
+    // whole fast path the mean of those ratios (about 0.971 here); ±4 binomial standard errors
+    const share = ratio.reduce((t, v) => t + v, 0) / 128;
+    const se = Math.sqrt((share * (1 - share)) / n);
+    assert.ok(
+      Math.abs(fast / n - share) < 4 * se,
+      `fast path share ${fast / n}, expected ${share}`,
+    );
+  }
 });
 
 Deno.test("random stream keys: bad keys are refused with the key shown", () => {
