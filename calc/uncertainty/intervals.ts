@@ -110,12 +110,13 @@ function tailsOf(
     const all = sortFloat64(values.slice());
     return { low: all.subarray(0, count), high: all.subarray(Math.max(0, m - count)) };
   }
-  // the bin of v is ⌊(v − min)·scale⌋, at most bins − 1: the argument is ≥ 0 and below 2³¹, where
-  // a truncation to a 32-bit integer (| 0) is the floor
+  // the bin of v is ⌊(v − min)·scale⌋ kept within 0 … bins − 1: for v in [min, max] the argument is
+  // ≥ 0 and below 2³¹, where a truncation to a 32-bit integer (| 0) is the floor; the clamp keeps
+  // the binning monotone (so the tails exact) even for values outside a span given by the caller
   const counts = new Uint32Array(bins);
   for (let r = 0; r < m; r++) {
-    const b = ((values[r]! - min) * scale) | 0;
-    counts[b < bins ? b : bins - 1]!++;
+    const t = ((values[r]! - min) * scale) | 0;
+    counts[t < 0 ? 0 : t < bins ? t : bins - 1]!++;
   }
   let lowCut = 0, lowTotal = 0;
   for (; lowCut < bins; lowCut++) if ((lowTotal += counts[lowCut]!) >= count) break;
@@ -125,7 +126,7 @@ function tailsOf(
   let nl = 0, nh = 0;
   for (let r = 0; r < m; r++) {
     const v = values[r]!;
-    const t = ((v - min) * scale) | 0, b = t < bins ? t : bins - 1;
+    const t = ((v - min) * scale) | 0, b = t < 0 ? 0 : t < bins ? t : bins - 1;
     if (b <= lowCut) low[nl++] = v;
     if (b >= highCut) high[nh++] = v;
   }
