@@ -65,6 +65,32 @@ export function closedBounds(range: ValueRange): { lower: number; upper: number 
 }
 
 /**
+ * The smallest and largest value of a column in one pass, both NaN when any value is NaN
+ * (`Math.min` and `Math.max` propagate it, and NaN then fails every comparison with a bound);
+ * ±Infinity for an empty column.
+ *
+ * @param values The column.
+ * @returns Its minimum and maximum.
+ *
+ * @example
+ * ```ts
+ * import { columnSpan } from "./range.ts";
+ * import assert from "node:assert/strict";
+ * assert.deepEqual(columnSpan(Float64Array.of(3, -1, 2)), { min: -1, max: 3 });
+ * assert.ok(Number.isNaN(columnSpan(Float64Array.of(3, NaN, 2)).min));
+ * ```
+ */
+export function columnSpan(values: Float64Array): { min: number; max: number } {
+  let min = Infinity, max = -Infinity;
+  for (let i = 0; i < values.length; i++) {
+    const v = values[i]!;
+    min = Math.min(min, v);
+    max = Math.max(max, v);
+  }
+  return { min, max };
+}
+
+/**
  * The number of values of a column outside `range` (NaN included). Skipped rows (`skip[i]`
  * non-zero) are not counted. Without rows to skip, one pass of running minimum and maximum (which
  * NaN poisons) first answers the usual case, nothing outside; only then are values counted.
@@ -92,13 +118,7 @@ export function countOutside(
 ): number {
   const { lower, upper } = closedBounds(range);
   if (!skip) {
-    // Math.min and Math.max return NaN once a NaN is met, and NaN fails both comparisons
-    let min = Infinity, max = -Infinity;
-    for (let i = 0; i < values.length; i++) {
-      const v = values[i]!;
-      min = Math.min(min, v);
-      max = Math.max(max, v);
-    }
+    const { min, max } = columnSpan(values);
     if (values.length === 0 || (min >= lower && max <= upper)) return 0;
   }
   let n = 0;

@@ -12,7 +12,7 @@ import type { Calculation, ValidationIssue, ValueRange } from "../core/types.ts"
 import type { Population } from "../core/types.ts";
 import { cautionsOf } from "../core/calculation.ts";
 import { evaluateColumns } from "../core/columns.ts";
-import { closedBounds, formatRange, inRange } from "../core/range.ts";
+import { closedBounds, columnSpan, formatRange, inRange } from "../core/range.ts";
 import { typicalRange } from "../core/quantity.ts";
 import { checkValue } from "../core/validate.ts";
 import { withUnit } from "../core/text.ts";
@@ -105,10 +105,15 @@ function readUncertainty(value: number | string, unit: string): ReturnType<typeo
   return read;
 }
 
+/** The standard uncertainty of a value under a relative model: |relative · value|. */
+function relativeUncertainty(relative: number, value: number): number {
+  return Math.abs(relative * value);
+}
+
 /** The distribution of one cell under a column's uncertainty model. */
 function distributionOf(model: UncertaintyModel, value: number, unit: string): UncertainInput {
   if (typeof model === "function") return model(value);
-  if ("relative" in model) return normal(value, Math.abs(model.relative * value));
+  if ("relative" in model) return normal(value, relativeUncertainty(model.relative, value));
   const u = readUncertainty(model.standardUncertainty, unit);
   if (typeof u !== "number") {
     throw new TypeError(
@@ -286,15 +291,7 @@ function columnWithin(
   const upper = Math.min(bounds.upper, Number.MAX_VALUE);
   if (!skip) {
     let span = spans.get(col);
-    if (span === undefined) {
-      let min = Infinity, max = -Infinity;
-      for (let i = 0; i < col.length; i++) {
-        const v = col[i]!;
-        min = Math.min(min, v);
-        max = Math.max(max, v);
-      }
-      spans.set(col, span = { min, max });
-    }
+    if (span === undefined) spans.set(col, span = columnSpan(col));
     return col.length === 0 || (span.min >= lower && span.max <= upper);
   }
   for (let i = 0; i < col.length; i++) {
@@ -603,10 +600,9 @@ function gumByColumns(
     if (model === undefined) uncertainties.push(null);
     else if (typeof model === "function") return null;
     else if ("relative" in model) {
-      // as distributionOf: normal(value, |relative·value|)
       const x = inputs[k]!, rel = model.relative;
       const u = new Float64Array(x.length);
-      for (let i = 0; i < x.length; i++) u[i] = Math.abs(rel * x[i]!);
+      for (let i = 0; i < x.length; i++) u[i] = relativeUncertainty(rel, x[i]!);
       uncertainties.push(u);
     } else {
       const u = readUncertainty(model.standardUncertainty, calc.inputs[calc.inputNames[k]!]!.unit);

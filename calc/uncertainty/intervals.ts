@@ -17,6 +17,19 @@ export interface ValueSpan {
   readonly max: number;
 }
 
+/** How many values are kept (not NaN), their minimum and maximum: one pass (NaN compares false). */
+function valueSpan(values: Float64Array): ValueSpan {
+  let min = Infinity, max = -Infinity, count = 0;
+  for (let r = 0; r < values.length; r++) {
+    const v = values[r]!;
+    if (v !== v) continue;
+    count++;
+    if (v < min) min = v;
+    if (v > max) max = v;
+  }
+  return { count, min, max };
+}
+
 /** Mean and standard deviation (two-pass, JCGM 101 eq. (16)–(17)) of the values that are not
  * NaN (NaN marks a trial excluded as physically inconsistent), how many those are, and (from the
  * first pass) their minimum and maximum, which the coverage intervals need too. */
@@ -81,18 +94,7 @@ function tailsOf(
   tailSize: (kept: number) => number,
   span: ValueSpan | null,
 ): { low: Float64Array; high: Float64Array } {
-  // one pass: the values kept (not NaN), their minimum and maximum (NaN compares false)
-  let min = Infinity, max = -Infinity, kept = 0;
-  if (span) ({ min, max, count: kept } = span);
-  else {
-    for (let r = 0; r < all.length; r++) {
-      const v = all[r]!;
-      if (v !== v) continue;
-      kept++;
-      if (v < min) min = v;
-      if (v > max) max = v;
-    }
-  }
+  const { min, max, count: kept } = span ?? valueSpan(all);
   const count = tailSize(kept);
   const values = kept === all.length ? all : keptValues(all);
   const m = values.length;

@@ -332,16 +332,17 @@ export function finishMonteCarlo<I extends string, O extends string>(
   // the draws of each source input: stored, or (independent sources of a chainable run)
   // recomputed from their streams on first use and then shared by the source set and the input's
   // value, so that both hold the same array
+  const hasDraws = (i: number) =>
+    targets.draws[i] !== null || (chainable && run.plan.inputs[i]!.kind === "source");
   const memo: (Float64Array | null | undefined)[] = [];
   const drawsOf = (i: number): Float64Array | null =>
-    memo[i] !== undefined ? memo[i]! : (memo[i] = targets.draws[i] ??
-      (chainable && run.plan.inputs[i]!.kind === "source"
-        ? redrawSource(run.plan, i, [seed], trials)
-        : null));
+    memo[i] !== undefined
+      ? memo[i]!
+      : (memo[i] = !hasDraws(i)
+        ? null
+        : targets.draws[i] ?? redrawSource(run.plan, i, [seed], trials));
   const drawnInputs = prepared.inputs.flatMap((p, i) =>
-    p.fresh && (targets.draws[i] || (chainable && run.plan.inputs[i]!.kind === "source"))
-      ? [[p.fresh.key, i] as const]
-      : []
+    p.fresh && hasDraws(i) ? [[p.fresh.key, i] as const] : []
   );
   let samples: Map<string, Float64Array> | undefined;
   const sources: SourceSet = prepared.sources.sources.size === 0 ? NO_SOURCES : Object.freeze({

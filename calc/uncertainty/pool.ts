@@ -393,11 +393,11 @@ function sharePlan(plan: TrialPlan, first: number, n: number): TrialPlan {
  * models).
  *
  * Measured (bench/results.md, bench/analysis.md) for 10⁶ trials of the continuity model with an
- * uncertain angle on a 2-core machine: when it was otherwise idle, the pool of two took 89 ms
- * against 124 ms on one thread; with other work on its cores the pool was slower than one thread.
- * It used about 266 MB instead of about 133 MB. It pays only with idle cores and runs long enough
- * to repay starting the workers (about 0.25–0.5 s per pool); `propagate` therefore stays
- * single-thread and the pool is opt-in.
+ * uncertain angle on a 2-core machine: the pool of two took 54 ms against 101 ms on one thread in
+ * one run of 41 rounds, but was slower than one thread in another run and whenever other work
+ * shared its cores. It used about 206–210 MB instead of about 103–107 MB. It pays only with idle
+ * cores and runs long enough to repay starting the workers (about 0.2–0.5 s per pool);
+ * `propagate` therefore stays single-thread and the pool is opt-in.
  *
  * Failures: a worker that ends or fails instead of answering (a model or module calling
  * `Deno.exit()` or `close()`, an uncaught error, a reply that cannot be read) refuses every call
