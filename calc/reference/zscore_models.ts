@@ -9,8 +9,8 @@
  *
  * @module
  */
-import * as z from "zod";
 import type { Citation, ValueRange } from "../core/types.ts";
+import { FORMULA_ONLY_WORKER } from "../core/units.ts";
 import type { BsaMethod } from "../body/bsa.ts";
 
 /** Fields shared by every Z-score model. */
@@ -210,62 +210,74 @@ export function measurementFormula(model: ZScoreModel, zScore: number, bsaM2: nu
 // ---------------------------------------------------------------------------------------------
 // Model definition (validated data)
 
-const rangeSchema = z.object({
-  min: z.number(),
-  max: z.number(),
-  minExclusive: z.boolean().optional(),
-  maxExclusive: z.boolean().optional(),
-}).refine((r) => r.min <= r.max, "expected min <= max");
+/** The data shape of a model, by form (zod). */
+function modelSchemaOf(z: typeof import("zod")) {
+  const rangeSchema = z.object({
+    min: z.number(),
+    max: z.number(),
+    minExclusive: z.boolean().optional(),
+    maxExclusive: z.boolean().optional(),
+  }).refine((r) => r.min <= r.max, "expected min <= max");
 
-const baseShape = {
-  id: z.string().min(1),
-  quantity: z.string().min(1).optional(),
-  measurement: z.string().min(1),
-  unit: z.string().min(1),
-  bsaMethod: z.enum(["mosteller", "duBois", "haycock", "gehanGeorge", "boyd"]),
-  bsaRange: rangeSchema,
-  bsaRangeNote: z.string(),
-  measurementRange: rangeSchema,
-  source: z.object({
-    authors: z.string(),
-    year: z.number(),
-    title: z.string(),
-    publication: z.string(),
-    locator: z.string().optional(),
-    doi: z.string().optional(),
-  }),
-  provenance: z.string().min(1),
-  synthetic: z.boolean().optional(),
-};
-const finite = z.number().refine(Number.isFinite, "expected a finite number");
-const positive = z.number().refine(
-  (v) => v > 0 && Number.isFinite(v),
-  "expected a finite number > 0",
-);
+  const baseShape = {
+    id: z.string().min(1),
+    quantity: z.string().min(1).optional(),
+    measurement: z.string().min(1),
+    unit: z.string().min(1),
+    bsaMethod: z.enum(["mosteller", "duBois", "haycock", "gehanGeorge", "boyd"]),
+    bsaRange: rangeSchema,
+    bsaRangeNote: z.string(),
+    measurementRange: rangeSchema,
+    source: z.object({
+      authors: z.string(),
+      year: z.number(),
+      title: z.string(),
+      publication: z.string(),
+      locator: z.string().optional(),
+      doi: z.string().optional(),
+    }),
+    provenance: z.string().min(1),
+    synthetic: z.boolean().optional(),
+  };
+  const finite = z.number().refine(Number.isFinite, "expected a finite number");
+  const positive = z.number().refine(
+    (v) => v > 0 && Number.isFinite(v),
+    "expected a finite number > 0",
+  );
 
-const modelSchema = z.discriminatedUnion("form", [
-  z.object({
-    ...baseShape,
-    form: z.literal("allometricConstantSd"),
-    alpha: finite,
-    mean: finite,
-    sd: positive,
-  }),
-  z.object({
-    ...baseShape,
-    form: z.literal("logPolynomialBsa"),
-    meanCoefficients: z.array(finite).min(1),
-    sdCoefficients: z.array(finite).min(1),
-  }),
-  z.object({
-    ...baseShape,
-    form: z.literal("allometricModelledSd"),
-    meanScale: positive,
-    meanExponent: finite,
-    sdScale: positive,
-    sdExponent: finite,
-  }),
-]);
+  return z.discriminatedUnion("form", [
+    z.object({
+      ...baseShape,
+      form: z.literal("allometricConstantSd"),
+      alpha: finite,
+      mean: finite,
+      sd: positive,
+    }),
+    z.object({
+      ...baseShape,
+      form: z.literal("logPolynomialBsa"),
+      meanCoefficients: z.array(finite).min(1),
+      sdCoefficients: z.array(finite).min(1),
+    }),
+    z.object({
+      ...baseShape,
+      form: z.literal("allometricModelledSd"),
+      meanScale: positive,
+      meanExponent: finite,
+      sdScale: positive,
+      sdExponent: finite,
+    }),
+  ]);
+}
+
+/**
+ * The schema that checks model data; null in a Monte Carlo worker, which does not load zod (about
+ * 7 MB per worker): a model reaches a worker's run only through a calculation whose fingerprint
+ * equals the caller's, and the caller's copy of that model passed this check on the main thread.
+ */
+const modelSchema = (globalThis as Record<symbol, unknown>)[FORMULA_ONLY_WORKER] === true
+  ? null
+  : modelSchemaOf(await import("zod"));
 
 /**
  * Validates and freezes a Z-score model given as data. Use it to add a published model (or a
@@ -295,8 +307,8 @@ const modelSchema = z.discriminatedUnion("form", [
  * ```
  */
 export function defineZScoreModel<M extends ZScoreModel>(model: M): M {
-  const parsed = modelSchema.safeParse(model);
-  if (!parsed.success) {
+  const parsed = modelSchema?.safeParse(model);
+  if (parsed && !parsed.success) {
     const issue = parsed.error.issues[0]!;
     const path = issue.path.join(".");
     let value: unknown = model;

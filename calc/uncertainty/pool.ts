@@ -379,10 +379,10 @@ function sharePlan(plan: TrialPlan, first: number, n: number): TrialPlan {
 
 /**
  * Starts a pool of Monte Carlo workers. Each worker loads the package's catalog and the given
- * modules once (mathjs is not loaded in workers); the pool then runs {@linkcode propagate} by
- * Monte Carlo across them with results identical to one thread, bit for bit, whatever the number
- * of workers. Inputs are prepared (units converted, distributions checked) on the calling thread;
- * workers only draw and evaluate.
+ * modules once (mathjs and zod are not loaded in workers); the pool then runs
+ * {@linkcode propagate} by Monte Carlo across them with results identical to one thread, bit for
+ * bit, whatever the number of workers. Inputs are prepared (units converted, distributions
+ * checked) on the calling thread; workers only draw and evaluate.
  *
  * When it helps: Monte Carlo runs of about 10⁵ trials and more (or the adaptive procedure) on a
  * machine with free cores; the time falls with the number of workers up to the number of cores
@@ -395,7 +395,7 @@ function sharePlan(plan: TrialPlan, first: number, n: number): TrialPlan {
  * Measured (bench/results.md, bench/analysis.md) for 10⁶ trials of the continuity model with an
  * uncertain angle on a 2-core machine: the pool of two took 46 ms against 68 ms on one thread in
  * one run of 25 rounds, but was slower than one thread in another run and whenever other work
- * shared its cores. It used about 198–203 MB instead of about 105–109 MB. It pays only with idle
+ * shared its cores. It used about 175–180 MB instead of about 105–109 MB. It pays only with idle
  * cores and runs long enough to repay starting the workers (about 0.2–0.5 s per pool);
  * `propagate` therefore stays single-thread and the pool is opt-in.
  *

@@ -6,7 +6,8 @@
  * (sampling.ts) as the main thread, so a block's values do not depend on where it runs.
  *
  * The worker never handles units: it marks itself formula-only before loading any module of the
- * package, which then skips loading mathjs (calc/core/units.ts).
+ * package, which then skips loading mathjs (calc/core/units.ts) and zod (the check of Z-score
+ * model data, calc/reference/zscore_models.ts).
  *
  * It runs on `node:worker_threads` (see pool.ts for why), says "ready" once it listens, and
  * handles its messages strictly one after the other, in the order sent, a load included: the pool

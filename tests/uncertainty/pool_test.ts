@@ -8,12 +8,14 @@ import {
   expressionModel,
   type MonteCarloPool,
   normal,
+  PHN_2017_MODELS,
   propagate,
   type PropagateOptions,
   type Propagation,
   rectangular,
   studentT,
   triangular,
+  zScoreCalculation,
 } from "../../mod.ts";
 import { planPropagation } from "../../calc/uncertainty/propagate.ts";
 import { mergeTails, sortedTails } from "../../calc/uncertainty/intervals.ts";
@@ -668,4 +670,19 @@ Deno.test("pool: a model that spins forever: a time limit leaves the pool usable
   // the process ends promptly after close(), although both workers still spin
   const afterClose = endedAt - lines[2].closedAt;
   assert.ok(afterClose < 10_000, `the process took ${afterClose} ms to end after close()`);
+});
+
+// A Z-score calculation is a catalog family member made again in the worker from its model's
+// data, where zod (the check of model data) is not loaded: the worker's copy must still be the
+// caller's, bit for bit (reference: the single-thread run, as above)
+Deno.test("pool: a Z-score calculation (model data not re-checked in workers) gives the single-thread result", async () => {
+  const z = zScoreCalculation(PHN_2017_MODELS.lvEndDiastolicDimension);
+  const measurement = z.inputNames.find((n) => n !== "bsaM2")!;
+  const inputs = { [measurement]: normal(3.6, 0.1), bsaM2: normal(0.9, 0.03) };
+  const options: PropagateOptions = { method: "monteCarlo", trials: 100_000, seed: 7 };
+  using pool = await createMonteCarloPool({ workers: 2 });
+  assertSameResult(
+    await pool.propagate(z, inputs as never, options),
+    propagate(z, inputs as never, options),
+  );
 });
