@@ -11,7 +11,7 @@
  * @module
  */
 import type { Calculation, InputValues } from "../core/types.ts";
-import { columnLoop } from "../core/columns.ts";
+import { columnLoop, runColumnLoop } from "../core/columns.ts";
 import { inRange } from "../core/range.ts";
 import { coverageFactor } from "../uncertainty/gum.ts";
 
@@ -81,7 +81,7 @@ export function gumColumns(
   const formula = calc.formula as (x: InputValues<string>) => never;
   const columns = () => outs.map(() => new Float64Array(n));
   const value = columns();
-  loop(formula, inputs, value, n);
+  runColumnLoop(loop, formula, inputs, value, n);
   const variance = columns();
   const perRow = new Uint8Array(n);
   // the four shifted evaluations of one input: x ± h and x ± h/2
@@ -95,7 +95,7 @@ export function gumColumns(
     const evaluateShifted = (sign: number, fraction: number, into: Float64Array[]) => {
       // x + (−s) is x − s exactly, as the propagation's shift by −s
       for (let i = 0; i < n; i++) shifted[i] = x[i]! + sign * ((u[i]! * 1e-3) / fraction);
-      loop(formula, args, into, n);
+      runColumnLoop(loop, formula, args, into, n);
     };
     evaluateShifted(1, 1, plus);
     evaluateShifted(-1, 1, minus);

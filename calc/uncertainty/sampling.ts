@@ -22,7 +22,7 @@
  */
 import type { Calculation, InputValues, ValueRange } from "../core/types.ts";
 import { closedBounds, countOutside, inRange } from "../core/range.ts";
-import { columnLoop } from "../core/columns.ts";
+import { columnLoop, runColumnLoop } from "../core/columns.ts";
 import { relationText } from "../core/validate.ts";
 import { choleskySemidefinite } from "./correlation.ts";
 import { NORMAL_DRAW_LIMIT, type RandomStream, randomStream } from "./random.ts";
@@ -411,7 +411,7 @@ export function runBlocks(
     });
     if (calc.constraints.length > 0) markBrokenRelations(calc, cols, n, bad);
     const outs = targets.outputs.map((o) => o.subarray(at, at + n));
-    const first = (exclude ? lenient : strict)(calc.formula, cols, outs, n);
+    const first = runColumnLoop(exclude ? lenient : strict, calc.formula, cols, outs, n);
     if (first >= 0) nonFiniteError(calc, cols, first, start + first);
     // outputs are counted on the trials still consistent after the inputs' checks
     const before = bad ? beforeOutputs!.subarray(0, n) : null;
