@@ -393,9 +393,9 @@ function sharePlan(plan: TrialPlan, first: number, n: number): TrialPlan {
  * models).
  *
  * Measured (bench/results.md, bench/analysis.md) for 10⁶ trials of the continuity model with an
- * uncertain angle on a 2-core machine: the pool of two took 46 ms against 68 ms on one thread in
- * one run of 25 rounds, but was slower than one thread in another run and whenever other work
- * shared its cores. It used about 175–180 MB instead of about 105–109 MB. It pays only with idle
+ * uncertain angle on a 2-core machine: the pool of two took 39 ms against 54 ms on one thread in
+ * one run of 41 rounds, but was slower than one thread in another run and whenever other work
+ * shared its cores. It used about 174–180 MB instead of about 105–109 MB. It pays only with idle
  * cores and runs long enough to repay starting the workers (about 0.2–0.5 s per pool);
  * `propagate` therefore stays single-thread and the pool is opt-in.
  *
