@@ -20,6 +20,23 @@ export interface MathJsUnit {
  * loading mathjs (about 80 MB and 0.3 s per worker). */
 export const FORMULA_ONLY_WORKER: unique symbol = Symbol.for("sonorigor.formulaOnlyWorker");
 
+/**
+ * Whether this thread is a formula-only Monte Carlo worker (see {@linkcode FORMULA_ONLY_WORKER}):
+ * modules then skip loading what only the calling thread needs (mathjs here, zod for Z-score model
+ * data).
+ *
+ * @example
+ * ```ts
+ * import { isFormulaOnlyWorker } from "./units.ts";
+ * import assert from "node:assert/strict";
+ * // a test or notebook thread is not a worker: units and expressions are loaded
+ * assert.equal(isFormulaOnlyWorker(), false);
+ * ```
+ */
+export function isFormulaOnlyWorker(): boolean {
+  return (globalThis as Record<symbol, unknown>)[FORMULA_ONLY_WORKER] === true;
+}
+
 /** A stand-in for mathjs inside a formula-only worker: any use is a clear error. */
 function mathUnavailable(): MathJsInstance {
   return new Proxy({} as MathJsInstance, {
@@ -34,12 +51,11 @@ function mathUnavailable(): MathJsInstance {
 }
 
 /** The project's one mathjs instance (units, expressions, symbolic derivatives). */
-export const math: MathJsInstance =
-  (globalThis as Record<symbol, unknown>)[FORMULA_ONLY_WORKER] === true
-    ? mathUnavailable()
-    // mathjs bundled into one file (vendor/build.ts): a few hundred ms less to import than its
-    // ≈ 1,000 modules
-    : await import("../../vendor/mathjs.js").then(({ all, create }) => create(all!, {}));
+export const math: MathJsInstance = isFormulaOnlyWorker()
+  ? mathUnavailable()
+  // mathjs bundled into one file (vendor/build.ts): a few hundred ms less to import than its
+  // ≈ 1,000 modules
+  : await import("../../vendor/mathjs.js").then(({ all, create }) => create(all!, {}));
 
 const knownUnits = new Map<string, Unit | null>();
 

@@ -10,7 +10,7 @@
  * @module
  */
 import type { Citation, ValueRange } from "../core/types.ts";
-import { FORMULA_ONLY_WORKER } from "../core/units.ts";
+import { isFormulaOnlyWorker } from "../core/units.ts";
 import type { BsaMethod } from "../body/bsa.ts";
 
 /** Fields shared by every Z-score model. */
@@ -275,9 +275,7 @@ function modelSchemaOf(z: typeof import("zod")) {
  * 7 MB per worker): a model reaches a worker's run only through a calculation whose fingerprint
  * equals the caller's, and the caller's copy of that model passed this check on the main thread.
  */
-const modelSchema = (globalThis as Record<symbol, unknown>)[FORMULA_ONLY_WORKER] === true
-  ? null
-  : modelSchemaOf(await import("zod"));
+const modelSchema = isFormulaOnlyWorker() ? null : modelSchemaOf(await import("zod"));
 
 /**
  * Validates and freezes a Z-score model given as data. Use it to add a published model (or a

@@ -10,7 +10,7 @@
  *
  * @module
  */
-import type { Calculation, InputValues } from "../core/types.ts";
+import type { Calculation } from "../core/types.ts";
 import { columnLoop, runColumnLoop } from "../core/columns.ts";
 import { inRange } from "../core/range.ts";
 import { coverageFactor } from "../uncertainty/gum.ts";
@@ -78,7 +78,7 @@ export function gumColumns(
   const n = skip.length;
   const outs = calc.outputNames;
   const loop = columnLoop(calc, "lenient");
-  const formula = calc.formula as (x: InputValues<string>) => never;
+  const formula = calc.formula;
   const columns = () => outs.map(() => new Float64Array(n));
   const value = columns();
   runColumnLoop(loop, formula, inputs, value, n);

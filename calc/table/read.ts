@@ -41,6 +41,7 @@ const EMPTY_MATCH = /(?:)/;
 function forgetLastMatch(): void {
   EMPTY_MATCH.test("");
 }
+
 /** The longest record accepted (characters): a quoted field left open would otherwise swallow
  * the rest of the file. */
 export const MAX_RECORD_CHARS = 1 << 24;
